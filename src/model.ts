@@ -1,0 +1,174 @@
+/**
+ * The normalised species model: what the validator produces from a YAML document and what the physics
+ * consumes. Every quantity is already in internal units (cm⁻¹ for levels and spectroscopic constants, K
+ * for temperatures, J/mol for formation enthalpies) and every default is filled in, so the physics never
+ * looks at units or optional input.
+ *
+ * The input shape (with units and defaults) is defined by `schemas/species.schema.json`; this file is the
+ * shape after normalisation.
+ */
+
+export type Structure = 'atom' | 'diatomic' | 'linear' | 'nonlinear';
+
+/** An electronic level of an atom or polyatomic: term energy above the ground level and degeneracy g. */
+export interface ElectronicLevel {
+  /** cm⁻¹ above the lowest level. */
+  energy: number;
+  degeneracy: number;
+  term?: string;
+}
+
+/** One (possibly degenerate) harmonic vibration. */
+export interface Vibration {
+  /** Fundamental wavenumber, cm⁻¹. */
+  wavenumber: number;
+  degeneracy: number;
+}
+
+/**
+ * One electronic state of a diatomic molecule with its Dunham-type constants (Huber & Herzberg notation).
+ * All in cm⁻¹.
+ */
+export interface DiatomicState {
+  term: string;
+  /** Te: electronic term energy of the potential minimum above the ground-state minimum. */
+  energy: number;
+  /** Electronic degeneracy (spin multiplicity × Λ-doubling factor). */
+  degeneracy: number;
+  we: number;
+  wexe: number;
+  weye: number;
+  Be: number;
+  alphae: number;
+  /** Centrifugal distortion constant; D_v = De for all v. */
+  De: number;
+  /**
+   * Dissociation energy D0 of this state measured from its own lowest level (v=0, J=0), cm⁻¹. When absent
+   * the state shares the molecule's dissociation limit.
+   */
+  dissociationEnergy?: number;
+}
+
+/** Statistical weights of even-J and odd-J rotational levels of a homonuclear diatomic (nuclear spin). */
+export interface NuclearSpinWeights {
+  even: number;
+  odd: number;
+}
+
+interface SpeciesBase {
+  /** Record name, 1–16 chars of [A-Za-z0-9()+*,._-]. */
+  name: string;
+  /** Element symbol → atom count. */
+  composition: Record<string, number>;
+  charge: number;
+  /** g/mol, electrons removed for cations. */
+  molarMass: number;
+  enthalpyOfFormation: {
+    /** J/mol */
+    value: number;
+    /** 298.15 or 0 */
+    temperature: number;
+  };
+  sources: string[];
+  structure: Structure;
+  /** Optional per-species temperature ranges for the fit; pipeline settings supply the default. */
+  temperatureRanges?: { low?: number; mid?: number; high?: number };
+}
+
+export interface AtomSpecies extends SpeciesBase {
+  structure: 'atom';
+  electronicLevels: ElectronicLevel[];
+}
+
+export interface LinearSpecies extends SpeciesBase {
+  structure: 'linear';
+  symmetryNumber: number;
+  electronicLevels: ElectronicLevel[];
+  /** [B] in cm⁻¹. */
+  rotationalConstants: [number];
+  vibrations: Vibration[];
+}
+
+export interface NonlinearSpecies extends SpeciesBase {
+  structure: 'nonlinear';
+  symmetryNumber: number;
+  electronicLevels: ElectronicLevel[];
+  /** [A, B, C] in cm⁻¹. */
+  rotationalConstants: [number, number, number];
+  vibrations: Vibration[];
+}
+
+export interface DiatomicSpecies extends SpeciesBase {
+  structure: 'diatomic';
+  symmetryNumber: number;
+  /** D0 of the ground state from its lowest level, cm⁻¹; defines the dissociation limit. */
+  dissociationEnergy: number;
+  nuclearSpinWeights?: NuclearSpinWeights;
+  /** Ground state first. */
+  electronicStates: DiatomicState[];
+}
+
+export type Species = AtomSpecies | LinearSpecies | NonlinearSpecies | DiatomicSpecies;
+
+/**
+ * Thermodynamic functions at one temperature, dimensionless, all relative to the lowest level (H0):
+ * cp = Cp°/R, hmh0 = (H° − H°(0))/(R T), s = S°/R.
+ */
+export interface ThermoPoint {
+  T: number;
+  cp: number;
+  hmh0: number;
+  s: number;
+}
+
+/** Options of the physics that change the numbers (and hence the cache key). */
+export interface PhysicsOptions {
+  /** Standard-state pressure, Pa. Default 1e5 (1 bar). */
+  standardPressure: number;
+}
+
+/** What a partition-function model contributed, for the database's model summary. */
+export interface ModelSummary {
+  structure: Structure;
+  contributions: string[];
+  options: Record<string, string | number | boolean>;
+  notes: string[];
+}
+
+/**
+ * The computed thermochemistry of one species: a pure function of its model and the physics options.
+ */
+export interface ThermoEvaluator {
+  readonly species: Species;
+  /** Dimensionless functions relative to H°(0) at T (K). */
+  at(T: number): ThermoPoint;
+  /** H°(298.15) − H°(0), J/mol. */
+  readonly h298MinusH0: number;
+  /** ΔfH°(298.15), J/mol (converted from 0 K when the input gave it there). */
+  readonly enthalpyOfFormation298: number;
+  readonly summary: ModelSummary;
+}
+
+/**
+ * Standard properties in the units of thermochemical tables at one temperature, plus the absolute
+ * dimensionless enthalpy the NASA fit uses: hRT = H°(T)/(R T) with H°(T) = ΔfH°(298.15) + [H°(T) − H°(298.15)].
+ */
+export interface StandardProperties {
+  T: number;
+  /** J/(mol K) */
+  Cp: number;
+  /** J/(mol K) */
+  S: number;
+  /** kJ/mol */
+  HminusH298: number;
+  /** kJ/mol */
+  H: number;
+  /** kJ/mol, G = H − T S */
+  G: number;
+  /** Cp/R */
+  cpR: number;
+  /** H°(T)/(R T), absolute (formation-enthalpy anchored) */
+  hRT: number;
+  /** S/R */
+  sR: number;
+}

@@ -1,0 +1,60 @@
+/**
+ * Diagnostics: the one shape for every input problem, from YAML syntax to physics checks. Stages collect
+ * them and return them all at once; only the CLI prints them and decides the exit code.
+ */
+
+export type Severity = 'error' | 'warning';
+
+export interface Diagnostic {
+  severity: Severity;
+  /** File path as the user gave it (relative to the database folder where possible). */
+  file: string;
+  /** 1-based line and column of the offending node, when known. */
+  line?: number;
+  column?: number;
+  /** Species record name, when known. */
+  species?: string;
+  /** Field path in the document, e.g. `vibrations[1].wavenumber` ('' for the whole document). */
+  path: string;
+  /** What is wrong, in words. */
+  message: string;
+  /** The offending value, when there is one. */
+  value?: unknown;
+  /** What was expected instead. */
+  expected?: string;
+}
+
+function showValue(v: unknown): string {
+  if (v === undefined) return '';
+  let s: string;
+  try {
+    s = typeof v === 'string' ? JSON.stringify(v) : JSON.stringify(v) ?? String(v);
+  } catch {
+    s = String(v);
+  }
+  return s.length > 60 ? `${s.slice(0, 57)}...` : s;
+}
+
+/** `file:line:col: error: [species] path: message (got V; expected E)` — one line per diagnostic. */
+export function formatDiagnostic(d: Diagnostic): string {
+  const where = [d.file, d.line, d.column].filter((x) => x !== undefined).join(':');
+  const who = d.species ? `[${d.species}] ` : '';
+  const field = d.path ? `${d.path}: ` : '';
+  const extras: string[] = [];
+  if (d.value !== undefined) extras.push(`got ${showValue(d.value)}`);
+  if (d.expected) extras.push(`expected ${d.expected}`);
+  const tail = extras.length ? ` (${extras.join('; ')})` : '';
+  return `${where}: ${d.severity}: ${who}${field}${d.message}${tail}`;
+}
+
+/** Stable order: file, line, column, then message; so reports do not depend on completion order. */
+export function compareDiagnostics(a: Diagnostic, b: Diagnostic): number {
+  return (
+    a.file.localeCompare(b.file) ||
+    (a.line ?? 0) - (b.line ?? 0) ||
+    (a.column ?? 0) - (b.column ?? 0) ||
+    a.message.localeCompare(b.message)
+  );
+}
+
+export const hasErrors = (ds: readonly Diagnostic[]): boolean => ds.some((d) => d.severity === 'error');

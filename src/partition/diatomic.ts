@@ -1,0 +1,163 @@
+/**
+ * Full rovibronic partition function of a diatomic molecule: an explicit sum over every bound
+ * (v, J) level of every listed electronic state.
+ */
+import { C2_CM_K } from '../constants.js';
+import type { DiatomicState, NuclearSpinWeights } from '../model.js';
+import { createLevelList, levelSumMoments, type LevelList } from './level-sum.js';
+import { LevelSumError, type PartitionMoments } from './moments.js';
+
+/** No real diatomic has more bound vibrational levels than this; more means the constants are unusable. */
+export const MAX_VIBRATIONAL_LEVELS = 2000;
+/** No real diatomic has a bound rotational ladder longer than this. */
+export const MAX_ROTATIONAL_LEVELS = 20000;
+/** Upper bound on the whole level list (keeps memory and evaluation time sane). */
+export const MAX_TOTAL_LEVELS = 5_000_000;
+
+/** What the level sum needs from a diatomic species (a subset of `DiatomicSpecies`). */
+export interface DiatomicModelInput {
+  name?: string;
+  symmetryNumber: number;
+  /** D0 of the ground state from its lowest level, cm⁻¹. */
+  dissociationEnergy: number;
+  nuclearSpinWeights?: NuclearSpinWeights;
+  /** Ground state first. */
+  electronicStates: readonly DiatomicState[];
+}
+
+/** Per-state bookkeeping of the level enumeration, for the model summary and the tests. */
+export interface DiatomicStateLevels {
+  term: string;
+  /** Dissociation limit used for this state, cm⁻¹ above the molecule's lowest level. */
+  limit: number;
+  vibrationalLevels: number;
+  levels: number;
+  /** Largest J included in any v ladder. */
+  maxJ: number;
+  /** Why the v ladder ended: 'limit', 'turnover' (G(v) stopped rising) or 'B_v<=0'. */
+  vEnd: 'limit' | 'turnover' | 'B_v<=0' | 'unbound';
+}
+
+export interface DiatomicLevels {
+  levels: LevelList;
+  states: DiatomicStateLevels[];
+}
+
+/**
+ * Term value of level (v, J) of a state, cm⁻¹ above the ground-state potential minimum.
+ *
+ * Formula: E(v,J) = Te + G(v) + B_v·J(J+1) − D_v·J²(J+1)², with
+ *   G(v) = ωe(v+½) − ωexe(v+½)² + ωeye(v+½)³,  B_v = Be − αe(v+½),  D_v = De.
+ * Units: cm⁻¹. Valid within the range of v, J where the Dunham-type expansion represents the levels.
+ * Source: Huber & Herzberg, Constants of Diatomic Molecules (1979), introduction (notation);
+ * Herzberg, Spectra of Diatomic Molecules (1950), eqs. III,75 and III,112.
+ */
+export function diatomicTermValue(state: DiatomicState, v: number, J: number): number {
+  const h = v + 0.5;
+  const x = J * (J + 1);
+  const G = state.we * h - state.wexe * h * h + state.weye * h * h * h;
+  const Bv = state.Be - state.alphae * h;
+  return state.energy + G + Bv * x - state.De * x * x;
+}
+
+function vibrationalTerm(state: DiatomicState, v: number): number {
+  const h = v + 0.5;
+  return state.we * h - state.wexe * h * h + state.weye * h * h * h;
+}
+
+/**
+ * Enumerate all bound levels and their weights g_el·(2J+1)·f(J), where f(J) is 1/σ without nuclear spin
+ * weights, and even/(even+odd) or odd/(even+odd) for even or odd J with them (the normalisation that makes
+ * the conventional entropy exclude nuclear spin; at high T it equals 1/σ with σ = 2).
+ *
+ * The dissociation limit is the ground state's lowest level plus D0; a state with its own
+ * `dissociationEnergy` uses its lowest level plus that value. A v ladder ends where G(v) turns over,
+ * where B_v ≤ 0, or where E(v,0) reaches the limit; a J ladder ends where E(v,J) stops rising
+ * (dE/dJ ≤ 0) or reaches the limit. Quasi-bound levels above the limit are excluded.
+ * Energies are measured from the lowest level found (the ground state's v = 0, J = 0).
+ * Throws LevelSumError if a ladder does not terminate within the bounds above.
+ */
+export function diatomicLevels(input: DiatomicModelInput): DiatomicLevels {
+  const states = input.electronicStates;
+  const ground = states[0];
+  if (!ground) throw new LevelSumError(`${input.name ?? 'diatomic'}: no electronic states`);
+  const groundLowest = diatomicTermValue(ground, 0, 0);
+  const commonLimit = groundLowest + input.dissociationEnergy;
+  const spin = input.nuclearSpinWeights;
+  const spinTotal = spin ? spin.even + spin.odd : 0;
+  const evenFactor = spin ? spin.even / spinTotal : 1 / input.symmetryNumber;
+  const oddFactor = spin ? spin.odd / spinTotal : 1 / input.symmetryNumber;
+
+  const energies: number[] = [];
+  const weights: number[] = [];
+  const summary: DiatomicStateLevels[] = [];
+  const where = (s: DiatomicState) => `${input.name ?? 'diatomic'} state ${s.term}`;
+
+  for (const state of states) {
+    const ownLowest = diatomicTermValue(state, 0, 0);
+    const limit = state.dissociationEnergy !== undefined ? ownLowest + state.dissociationEnergy : commonLimit;
+    const info: DiatomicStateLevels = {
+      term: state.term,
+      limit: limit - groundLowest,
+      vibrationalLevels: 0,
+      levels: 0,
+      maxJ: 0,
+      vEnd: 'unbound',
+    };
+    summary.push(info);
+    let previousG = -Infinity;
+    for (let v = 0; ; v++) {
+      if (v >= MAX_VIBRATIONAL_LEVELS) {
+        throw new LevelSumError(`${where(state)}: vibrational ladder not terminated below v = ${MAX_VIBRATIONAL_LEVELS}`);
+      }
+      const G = vibrationalTerm(state, v);
+      const Bv = state.Be - state.alphae * (v + 0.5);
+      const base = state.energy + G;
+      if (v > 0 && G <= previousG) {
+        info.vEnd = 'turnover';
+        break;
+      }
+      if (Bv <= 0) {
+        info.vEnd = 'B_v<=0';
+        break;
+      }
+      if (base >= limit) {
+        if (v > 0) info.vEnd = 'limit';
+        break;
+      }
+      previousG = G;
+      const g = state.degeneracy;
+      let previousE = -Infinity;
+      let J = 0;
+      for (; ; J++) {
+        if (J >= MAX_ROTATIONAL_LEVELS) {
+          throw new LevelSumError(`${where(state)}: rotational ladder of v = ${v} not terminated below J = ${MAX_ROTATIONAL_LEVELS}`);
+        }
+        const x = J * (J + 1);
+        const E = base + Bv * x - state.De * x * x;
+        if (E >= limit || E <= previousE) break;
+        previousE = E;
+        energies.push(E);
+        weights.push(g * (2 * J + 1) * (J % 2 === 0 ? evenFactor : oddFactor));
+      }
+      info.levels += J;
+      if (J - 1 > info.maxJ) info.maxJ = J - 1;
+      info.vibrationalLevels++;
+      if (energies.length > MAX_TOTAL_LEVELS) {
+        throw new LevelSumError(`${input.name ?? 'diatomic'}: more than ${MAX_TOTAL_LEVELS} bound levels`);
+      }
+    }
+  }
+  if (energies.length === 0) throw new LevelSumError(`${input.name ?? 'diatomic'}: no bound levels below the dissociation limit`);
+  return { levels: createLevelList(energies, weights, C2_CM_K), states: summary };
+}
+
+/**
+ * Moments of the rovibronic level sum at T (K); see level-sum.ts. Build the level list once with
+ * `diatomicLevels` and evaluate it at many temperatures.
+ * Valid 0 < T; the accuracy at high T is limited by the constants (Dunham truncation, missing
+ * electronic states), not by the sum.
+ */
+export function diatomicMoments(levels: DiatomicLevels, T: number): PartitionMoments {
+  return levelSumMoments(levels.levels, T);
+}

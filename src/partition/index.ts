@@ -1,0 +1,18 @@
+export { addMoments, assertTemperature, LevelSumError, TemperatureError, type PartitionMoments } from './moments.js';
+export { createLevelList, levelSumMoments, type LevelList } from './level-sum.js';
+export { translationalMoments } from './translational.js';
+export { electronicLevelList, electronicMoments } from './electronic.js';
+export { linearRotorMoments, linearRotorClassicalLimit, linearRotorMulholland } from './rigid-rotor-linear.js';
+export { nonlinearRotorMoments } from './rigid-rotor-nonlinear.js';
+export { harmonicMoments } from './harmonic.js';
+export {
+  diatomicLevels,
+  diatomicMoments,
+  diatomicTermValue,
+  MAX_ROTATIONAL_LEVELS,
+  MAX_TOTAL_LEVELS,
+  MAX_VIBRATIONAL_LEVELS,
+  type DiatomicLevels,
+  type DiatomicModelInput,
+  type DiatomicStateLevels,
+} from './diatomic.js';

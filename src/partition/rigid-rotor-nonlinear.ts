@@ -1,0 +1,23 @@
+/**
+ * Classical rigid-rotor partition function of a nonlinear molecule.
+ */
+import { C2_CM_K } from '../constants.js';
+import type { PartitionMoments } from './moments.js';
+
+/**
+ * Formula: q_rot = (√π/σ)·(T³/(θA θB θC))^{1/2}, θX = c2·X for rotational constants A, B, C (cm⁻¹);
+ *   meanU = 3/2, varU = 3/2 exactly.
+ * Units: cm⁻¹, K. Valid when T ≫ θA, θB, θC (the classical limit; for H2O θA ≈ 40 K, so at 200 K the
+ * quantum correction to S is a few 0.01 J/(mol K)).
+ * Source: McQuarrie, Statistical Mechanics (1976), eq. 8-38.
+ */
+export function nonlinearRotorMoments(
+  rotationalConstants: readonly [number, number, number],
+  symmetryNumber: number,
+  T: number,
+): PartitionMoments {
+  const [a, b, c] = rotationalConstants;
+  const thetaProduct = C2_CM_K * a * C2_CM_K * b * C2_CM_K * c;
+  const lnQ = 0.5 * Math.log(Math.PI) - Math.log(symmetryNumber) + 0.5 * (3 * Math.log(T) - Math.log(thetaProduct));
+  return { lnQ, meanU: 1.5, varU: 1.5 };
+}

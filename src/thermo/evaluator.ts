@@ -1,0 +1,151 @@
+/**
+ * Combine the partition-function factors of a species into its thermodynamic functions.
+ */
+import { CONSTANTS_EDITION, GAS_CONSTANT, STANDARD_PRESSURE_BAR, T_REF } from '../constants.js';
+import type { ModelSummary, PhysicsOptions, Species, ThermoEvaluator, ThermoPoint } from '../model.js';
+import { diatomicLevels, type DiatomicLevels } from '../partition/diatomic.js';
+import { electronicLevelList } from '../partition/electronic.js';
+import { harmonicMoments } from '../partition/harmonic.js';
+import { levelSumMoments, type LevelList } from '../partition/level-sum.js';
+import { addMoments, assertTemperature, type PartitionMoments } from '../partition/moments.js';
+import { linearRotorMoments } from '../partition/rigid-rotor-linear.js';
+import { nonlinearRotorMoments } from '../partition/rigid-rotor-nonlinear.js';
+import { translationalMoments } from '../partition/translational.js';
+import { ELECTRON_CONVENTION, formationEnthalpyAt298 } from './reference-states.js';
+
+export class PhysicsOptionsError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = 'PhysicsOptionsError';
+  }
+}
+
+export const DEFAULT_PHYSICS_OPTIONS: Readonly<PhysicsOptions> = Object.freeze({
+  standardPressure: STANDARD_PRESSURE_BAR,
+});
+
+/** Fill defaults and check options once, so the physics never sees a partial or bad option set. */
+export function normalisePhysicsOptions(options: Partial<PhysicsOptions> = {}): PhysicsOptions {
+  const standardPressure = options.standardPressure ?? DEFAULT_PHYSICS_OPTIONS.standardPressure;
+  if (!(Number.isFinite(standardPressure) && standardPressure > 0)) {
+    throw new PhysicsOptionsError(`standardPressure must be a finite pressure > 0 Pa, got ${standardPressure}`);
+  }
+  return { standardPressure };
+}
+
+/**
+ * Build the thermodynamic model of a species. Level lists are built here, once; `at(T)` only sums them.
+ *
+ * Factorisation by structure (each factor documented in src/partition/):
+ *   atom       q = q_trans · q_el
+ *   linear     q = q_trans · q_rot(direct J sum) · q_vib(harmonic) · q_el
+ *   nonlinear  q = q_trans · q_rot(classical)    · q_vib(harmonic) · q_el
+ *   diatomic   q = q_trans · q_rovibronic (explicit sum over all bound levels of all states)
+ * Then Cp/R = Σ varU, (H − H0)/RT = Σ meanU, S/R = Σ (lnQ + meanU), exactly from the moments.
+ * H0 is the lowest level of the species (the zero-point level for vibrations).
+ */
+export function createThermoEvaluator(species: Species, options?: Partial<PhysicsOptions>): ThermoEvaluator {
+  const opts = normalisePhysicsOptions(options);
+  const p = opts.standardPressure;
+  const mass = species.molarMass;
+  const contributions: string[] = [`translational (Sackur-Tetrode), M = ${mass} g/mol`];
+  const notes: string[] = [];
+  let internal: (T: number) => PartitionMoments;
+
+  switch (species.structure) {
+    case 'atom': {
+      const el = electronicLevelList(species.electronicLevels);
+      contributions.push(`electronic level sum (${species.electronicLevels.length} levels)`);
+      internal = (T) => levelSumMoments(el, T);
+      break;
+    }
+    case 'linear': {
+      const el = electronicLevelList(species.electronicLevels);
+      const [B] = species.rotationalConstants;
+      const sigma = species.symmetryNumber;
+      const vib = species.vibrations;
+      contributions.push(
+        `rigid rotor, linear, direct sum over J (B = ${B} cm-1, sigma = ${sigma})`,
+        `harmonic oscillators (${vib.reduce((n, v) => n + v.degeneracy, 0)} modes)`,
+        `electronic level sum (${species.electronicLevels.length} levels)`,
+      );
+      internal = (T) =>
+        addMoments([linearRotorMoments(B, sigma, T), harmonicMoments(vib, T), levelSumMoments(el, T)]);
+      break;
+    }
+    case 'nonlinear': {
+      const el = electronicLevelList(species.electronicLevels);
+      const abc = species.rotationalConstants;
+      const sigma = species.symmetryNumber;
+      const vib = species.vibrations;
+      contributions.push(
+        `rigid rotor, nonlinear, classical (A, B, C = ${abc.join(', ')} cm-1, sigma = ${sigma})`,
+        `harmonic oscillators (${vib.reduce((n, v) => n + v.degeneracy, 0)} modes)`,
+        `electronic level sum (${species.electronicLevels.length} levels)`,
+      );
+      internal = (T) =>
+        addMoments([nonlinearRotorMoments(abc, sigma, T), harmonicMoments(vib, T), levelSumMoments(el, T)]);
+      break;
+    }
+    case 'diatomic': {
+      const levels: DiatomicLevels = diatomicLevels(species);
+      const spin = species.nuclearSpinWeights;
+      contributions.push(
+        `rovibronic level sum over all bound levels (${levels.levels.theta.length} levels, ${levels.states.length} electronic states)`,
+      );
+      for (const s of levels.states) {
+        notes.push(
+          `state ${s.term}: ${s.vibrationalLevels} vibrational levels (ladder end: ${s.vEnd}), ${s.levels} levels, J <= ${s.maxJ}, limit ${s.limit.toFixed(3)} cm-1 above the lowest level`,
+        );
+      }
+      notes.push(
+        spin
+          ? `nuclear spin weights even:odd = ${spin.even}:${spin.odd}, normalised by their sum (conventional entropy, nuclear spin excluded); equilibrium between even and odd J`
+          : `symmetry number ${species.symmetryNumber} divides every level`,
+      );
+      internal = (T) => levelSumMoments(levels.levels, T);
+      break;
+    }
+    default: {
+      const never: never = species;
+      throw new Error(`unknown structure ${(never as { structure: string }).structure}`);
+    }
+  }
+
+  const at = (T: number): ThermoPoint => {
+    assertTemperature(T);
+    const m = addMoments([translationalMoments(mass, T, p), internal(T)]);
+    return { T, cp: m.varU, hmh0: m.meanU, s: m.lnQ + m.meanU };
+  };
+
+  // Same operand order as standardProperties, so H − H298 is exactly 0 at 298.15 K.
+  const h298MinusH0 = GAS_CONSTANT * T_REF * at(T_REF).hmh0;
+  const formation = species.enthalpyOfFormation;
+  let enthalpyOfFormation298: number;
+  if (formation.temperature === T_REF) {
+    enthalpyOfFormation298 = formation.value;
+  } else if (formation.temperature === 0) {
+    enthalpyOfFormation298 = formationEnthalpyAt298(formation.value, h298MinusH0, species.composition, species.charge);
+    notes.push(
+      `enthalpy of formation converted from 0 K with CODATA (1989) reference-state H298-H0 of the elements${species.charge !== 0 ? `; electron: ${ELECTRON_CONVENTION}` : ''}`,
+    );
+  } else {
+    throw new PhysicsOptionsError(
+      `enthalpy of formation must be given at 298.15 K or 0 K, got ${formation.temperature} K`,
+    );
+  }
+
+  const summary: ModelSummary = {
+    structure: species.structure,
+    contributions,
+    options: {
+      standardPressurePa: p,
+      constants: CONSTANTS_EDITION,
+      electronConvention: ELECTRON_CONVENTION,
+      enthalpyZero: 'lowest level (H0 at 0 K)',
+    },
+    notes,
+  };
+
+  return { species, at, h298MinusH0, enthalpyOfFormation298, summary };
+}

@@ -75,9 +75,20 @@ export interface FitMetrics {
   anchor: { h: number; s: number };
 }
 
+/** How the solve went (added by the fit; optional so hand-made results stay valid). */
+export interface FitSolverInfo {
+  /** 2-norm condition number of the reduced, column-equilibrated least-squares problem. */
+  conditionNumber: number;
+  /** ‖A x − y‖₂ of the weighted problem (dimensionless). */
+  residualNorm: number;
+  /** Number of tMid candidates fitted (1 unless optimiseMid was set). */
+  midCandidates: number;
+}
+
 export interface FitResult {
   polynomial: Nasa7Polynomial;
   metrics: FitMetrics;
+  solver?: FitSolverInfo;
 }
 
 /** A record of the 80-column file: everything the layout carries. */

@@ -1,0 +1,285 @@
+/**
+ * Checks of a finished fit. Every breach becomes a FitViolation whose message names the quantity, where
+ * (range and temperature) and by how much. Checks:
+ *  1. max |fit − sample| of Cp/R, H/RT, S/R per range ≤ tolerances.cp / .h / .s (samples outside
+ *     [tLow, tHigh] are ignored; a sample at tMid is checked against both sets);
+ *  2. continuity at tMid of Cp/R, H/RT, S/R and of the dimensionless derivatives tMid·dCp/dT (and
+ *     tMid²·d²Cp/dT² when tolerances.continuityOrder = 2) ≤ tolerances.continuity;
+ *     anchor residuals of H/RT and S/R ≤ tolerances.continuity;
+ *  3. Cp/R > 0, and Cp/R ≥ 5/2 − tolerances.cp (an ideal gas has Cv ≥ 3R/2 from translation and every other
+ *     contribution is an energy variance ≥ 0, so Cp/R ≥ 5/2; McQuarrie, Statistical Mechanics, 1976,
+ *     ch. 3) on a grid of step ≤ 5 K over [tLow − 100 K, tHigh + 100 K];
+ *  4. smoothness: the number of direction reversals of the fitted Cp/R, counted with a hysteresis
+ *     (zigzag) filter — a reversal counts only once Cp/R has moved back by more than the amplitude — must
+ *     not exceed the number of reversals the samples show under the same filter. Done twice: inside
+ *     [tLow, tHigh] with amplitude tolerances.smoothness, and over [tLow − 100 K, tHigh + 100 K] with the
+ *     looser tolerances.extrapolationSmoothness (a seven-term polynomial bends away from the data just
+ *     beyond its range; NASA-7 fits are not meant for extrapolation, but a turn-over of more than this
+ *     within 100 K is a defect). The extra reversals farthest from any reversal of the data are reported.
+ *     The hysteresis makes the rule blind to ripples smaller than the amplitude (the error check already
+ *     bounds those at the samples) and to real structure in the data (e.g. the Cp maximum of an atom with
+ *     low-lying levels), while a polynomial that turns over between samples or beyond an end is caught.
+ *     Measured on closed-form RRHO data (test/src/nasa7): careful fits of N2, CH4, H2O turn over by
+ *     ≈ 0.006–0.05 in Cp/R near the ends, which is the form's floor, not a defect.
+ */
+import { cpDerivative, cpSecondDerivative, evaluateNasa7, evaluateRange } from './evaluate.js';
+import type { FitResult, FitSample, Nasa7Polynomial } from './types.js';
+
+export interface FitTolerances {
+  /** Max |ΔCp/R| per range. */
+  cp: number;
+  /** Max |Δ(H/RT)| per range. */
+  h: number;
+  /** Max |ΔS/R| per range. */
+  s: number;
+  /** Max continuity / anchor residual (dimensionless). */
+  continuity: number;
+  /** Hysteresis amplitude (in Cp/R) of the reversal count inside [tLow, tHigh]. */
+  smoothness: number;
+  /** Hysteresis amplitude (in Cp/R) of the reversal count over the range extended by `extrapolation`. */
+  extrapolationSmoothness: number;
+  /** 2 → also check d²Cp/dT² continuity (when the fit was made with continuityOrder 2). */
+  continuityOrder: 1 | 2;
+  /** How far beyond each end Cp is checked, K. */
+  extrapolation: number;
+}
+
+/**
+ * Defaults (project choices, above the form's floor of ≈ 0.012 (N2) to ≈ 0.08 (harmonic CH4) in Cp/R).
+ */
+export const DEFAULT_FIT_TOLERANCES: Readonly<FitTolerances> = Object.freeze({
+  cp: 0.1,
+  h: 0.02,
+  s: 0.02,
+  continuity: 1e-8,
+  smoothness: 0.05,
+  extrapolationSmoothness: 0.1,
+  continuityOrder: 1,
+  extrapolation: 100,
+});
+
+export type FitViolationQuantity =
+  | 'cp'
+  | 'h'
+  | 's'
+  | 'continuity-cp'
+  | 'continuity-dcp'
+  | 'continuity-d2cp'
+  | 'continuity-h'
+  | 'continuity-s'
+  | 'anchor-h'
+  | 'anchor-s'
+  | 'cp-positive'
+  | 'cp-wiggle';
+
+export interface FitViolation {
+  quantity: FitViolationQuantity;
+  /** 'mid' for continuity at tMid (and the anchor residuals, which belong to the low set: 'low'). */
+  range: 'low' | 'high' | 'extrapolation' | 'mid';
+  /** K */
+  T: number;
+  /** The offending value (an error, residual, Cp/R or a reversal count). */
+  value: number;
+  limit: number;
+  message: string;
+}
+
+const QUANTITY_LABEL = { cp: 'Cp/R', h: 'H/RT', s: 'S/R' } as const;
+
+const fmt = (x: number): string => (x !== 0 && (Math.abs(x) < 1e-3 || Math.abs(x) >= 1e5) ? x.toExponential(3) : String(Number(x.toPrecision(4))));
+
+function normaliseTolerances(t: Partial<FitTolerances> | undefined): FitTolerances {
+  const out: FitTolerances = { ...DEFAULT_FIT_TOLERANCES };
+  for (const [k, v] of Object.entries(t ?? {})) if (v !== undefined) (out as unknown as Record<string, unknown>)[k] = v;
+  return out;
+}
+
+function errorChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
+  for (const range of ['low', 'high'] as const) {
+    const [from, to] = range === 'low' ? [poly.tLow, poly.tMid] : [poly.tMid, poly.tHigh];
+    const coeffs = range === 'low' ? poly.low : poly.high;
+    const worst = { cp: { err: 0, T: NaN }, h: { err: 0, T: NaN }, s: { err: 0, T: NaN } };
+    for (const smp of samples) {
+      if (!(smp.T >= from && smp.T <= to)) continue;
+      const v = evaluateRange(coeffs, smp.T);
+      const errs = { cp: Math.abs(v.cpR - smp.cpR), h: Math.abs(v.hRT - smp.hRT), s: Math.abs(v.sR - smp.sR) };
+      for (const q of ['cp', 'h', 's'] as const) {
+        const e = Number.isFinite(errs[q]) ? errs[q] : Infinity;
+        if (e > worst[q].err || Number.isNaN(worst[q].T)) worst[q] = { err: e, T: smp.T };
+      }
+    }
+    for (const q of ['cp', 'h', 's'] as const) {
+      const { err, T } = worst[q];
+      if (err > tol[q]) {
+        out.push({
+          quantity: q,
+          range,
+          T,
+          value: err,
+          limit: tol[q],
+          message: `${QUANTITY_LABEL[q]} fit error ${fmt(err)} at ${T} K (${range} range ${from}–${to} K) exceeds the tolerance ${fmt(tol[q])} by ${fmt(err - tol[q])}`,
+        });
+      }
+    }
+  }
+}
+
+function continuityChecks(result: FitResult, tol: FitTolerances, out: FitViolation[]): void {
+  const poly = result.polynomial;
+  const t = poly.tMid;
+  const lo = evaluateRange(poly.low, t);
+  const hi = evaluateRange(poly.high, t);
+  const items: Array<[FitViolationQuantity, string, number]> = [
+    ['continuity-cp', 'Cp/R', Math.abs(lo.cpR - hi.cpR)],
+    ['continuity-dcp', 'T·d(Cp/R)/dT', t * Math.abs(cpDerivative(poly.low, t) - cpDerivative(poly.high, t))],
+    ['continuity-h', 'H/RT', Math.abs(lo.hRT - hi.hRT)],
+    ['continuity-s', 'S/R', Math.abs(lo.sR - hi.sR)],
+  ];
+  if (tol.continuityOrder === 2) {
+    items.splice(2, 0, ['continuity-d2cp', 'T²·d²(Cp/R)/dT²', t * t * Math.abs(cpSecondDerivative(poly.low, t) - cpSecondDerivative(poly.high, t))]);
+  }
+  for (const [quantity, label, jump] of items) {
+    if (!(jump <= tol.continuity)) {
+      out.push({
+        quantity,
+        range: 'mid',
+        T: t,
+        value: jump,
+        limit: tol.continuity,
+        message: `${label} jumps by ${fmt(jump)} between the low and high sets at tMid = ${t} K; tolerance ${fmt(tol.continuity)}`,
+      });
+    }
+  }
+  for (const [quantity, label, r] of [
+    ['anchor-h', 'H/RT', result.metrics.anchor.h],
+    ['anchor-s', 'S/R', result.metrics.anchor.s],
+  ] as const) {
+    if (!(r <= tol.continuity)) {
+      out.push({
+        quantity,
+        range: 'low',
+        T: NaN,
+        value: r,
+        limit: tol.continuity,
+        message: `${label} at the anchor temperature misses the computed value by ${fmt(r)}; tolerance ${fmt(tol.continuity)}`,
+      });
+    }
+  }
+}
+
+/** Temperatures of the reversals of v(T) under a hysteresis of amplitude delta (zigzag filter). */
+export function hysteresisReversals(ts: readonly number[], vs: readonly number[], delta: number): number[] {
+  const reversals: number[] = [];
+  let dir = 0;
+  let hiV = -Infinity;
+  let hiT = NaN;
+  let loV = Infinity;
+  let loT = NaN;
+  for (let i = 0; i < vs.length; i++) {
+    const v = vs[i]!;
+    const T = ts[i]!;
+    if (v > hiV) {
+      hiV = v;
+      hiT = T;
+    }
+    if (v < loV) {
+      loV = v;
+      loT = T;
+    }
+    if (dir >= 0 && hiV - v > delta) {
+      if (dir > 0) reversals.push(hiT);
+      dir = -1;
+      loV = v;
+      loT = T;
+      hiV = v;
+      hiT = T;
+    } else if (dir <= 0 && v - loV > delta) {
+      if (dir < 0) reversals.push(loT);
+      dir = 1;
+      hiV = v;
+      hiT = T;
+      loV = v;
+      loT = T;
+    }
+  }
+  return reversals;
+}
+
+function where(poly: Nasa7Polynomial, T: number): 'low' | 'high' | 'extrapolation' {
+  if (T < poly.tLow || T > poly.tHigh) return 'extrapolation';
+  return T <= poly.tMid ? 'low' : 'high';
+}
+
+function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
+  const from = Math.max(poly.tLow - tol.extrapolation, 1);
+  const to = poly.tHigh + tol.extrapolation;
+  const n = Math.max(2, Math.ceil((to - from) / 5));
+  const ts: number[] = [];
+  for (let i = 0; i <= n; i++) ts.push(from + ((to - from) * i) / n);
+  for (const T of [poly.tLow, poly.tMid, poly.tHigh]) if (!ts.includes(T)) ts.push(T);
+  ts.sort((a, b) => a - b);
+  const cps = ts.map((T) => evaluateNasa7(poly, T).cpR);
+
+  let positive: FitViolation | undefined;
+  let floor: FitViolation | undefined;
+  const floorLimit = 2.5 - tol.cp;
+  cps.forEach((cp, i) => {
+    const T = ts[i]!;
+    if (!(cp > 0) && !positive) {
+      positive = { quantity: 'cp-positive', range: where(poly, T), T, value: cp, limit: 0, message: `Cp/R of the fit is ${fmt(cp)} ≤ 0 at ${fmt(T)} K (${where(poly, T)}); Cp must stay positive` };
+    } else if (cp > 0 && cp < floorLimit && (!floor || cp < floor.value)) {
+      floor = {
+        quantity: 'cp-positive',
+        range: where(poly, T),
+        T,
+        value: cp,
+        limit: floorLimit,
+        message: `Cp/R of the fit falls to ${fmt(cp)} at ${fmt(T)} K (${where(poly, T)}), ${fmt(floorLimit - cp)} below the ideal-gas minimum 5/2 less the tolerance ${fmt(tol.cp)}`,
+      };
+    }
+  });
+  if (positive) out.push(positive);
+  else if (floor) out.push(floor);
+
+  const data = samples.filter((s) => s.T >= poly.tLow && s.T <= poly.tHigh).sort((a, b) => a.T - b.T);
+  const inside = ts.map((T, i) => [T, i] as const).filter(([T]) => T >= poly.tLow && T <= poly.tHigh);
+  const passes: Array<{ ts: number[]; cps: number[]; delta: number; span: string }> = [
+    { ts: inside.map(([T]) => T), cps: inside.map(([, i]) => cps[i]!), delta: tol.smoothness, span: `${fmt(poly.tLow)}–${fmt(poly.tHigh)} K` },
+    { ts, cps, delta: tol.extrapolationSmoothness, span: `${fmt(from)}–${fmt(to)} K (${tol.extrapolation} K beyond the range)` },
+  ];
+  const reported = new Set<number>();
+  for (const pass of passes) {
+    const dataRev = hysteresisReversals(data.map((s) => s.T), data.map((s) => s.cpR), pass.delta);
+    const fitRev = hysteresisReversals(pass.ts, pass.cps, pass.delta);
+    if (fitRev.length <= dataRev.length) continue;
+    const distance = (T: number) => (dataRev.length ? Math.min(...dataRev.map((d) => Math.abs(d - T))) : Infinity);
+    const extra = [...fitRev].sort((a, b) => distance(b) - distance(a) || a - b).slice(0, fitRev.length - dataRev.length).sort((a, b) => a - b);
+    for (const T of extra) {
+      if (reported.has(T)) continue;
+      reported.add(T);
+      const range = where(poly, T);
+      out.push({
+        quantity: 'cp-wiggle',
+        range,
+        T,
+        value: fitRev.length,
+        limit: dataRev.length,
+        message: `Cp/R of the fit turns over at ${fmt(T)} K (${range}) where the data does not: over ${pass.span} the fit reverses direction by more than ${fmt(pass.delta)} in Cp/R ${fitRev.length} time(s), the samples ${dataRev.length}`,
+      });
+    }
+  }
+}
+
+/**
+ * All violations of the tolerances (defaults from DEFAULT_FIT_TOLERANCES for missing fields), in a fixed
+ * order: errors (low, high; Cp, H, S), continuity, anchor, positivity, smoothness. Empty when the fit
+ * passes.
+ */
+export function assessFit(result: FitResult, samples: readonly FitSample[], tolerances: Partial<FitTolerances> = {}): FitViolation[] {
+  const tol = normaliseTolerances(tolerances);
+  const out: FitViolation[] = [];
+  errorChecks(result.polynomial, samples, tol, out);
+  continuityChecks(result, tol, out);
+  shapeChecks(result.polynomial, samples, tol, out);
+  return out;
+}

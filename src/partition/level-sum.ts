@@ -3,19 +3,24 @@
  */
 import { LevelSumError, type PartitionMoments } from './moments.js';
 
+/** Past this point the remaining levels change q, ⟨u⟩ and var u by less than this relative amount. */
+const TAIL_CUTOFF = 1e-17;
+
 /**
- * A list of levels with their statistical weights. `theta` holds c2·(E − E_lowest) in K, so every entry is
- * ≥ 0 and the lowest level contributes exp(0): this is the log-sum-exp shift done once at construction,
- * and no term can overflow at any temperature.
+ * A list of levels with their statistical weights, sorted by energy. `theta` holds c2·(E − E_lowest) in K,
+ * so every entry is ≥ 0 and the lowest level contributes exp(0): this is the log-sum-exp shift done once at
+ * construction, and no term can overflow at any temperature. `tailWeight[i]` = Σ_{k≥i} g_k bounds what
+ * the levels from i on can still add, so the sum can stop early at low T.
  */
 export interface LevelList {
   readonly theta: Float64Array;
   readonly weight: Float64Array;
+  readonly tailWeight: Float64Array;
 }
 
 /**
  * Build a level list from energies (any common origin, any unit) and weights; energies are shifted so the
- * lowest is zero and scaled by `toKelvin`.
+ * lowest is zero, scaled by `toKelvin` and sorted (ties keep input order, so the result is deterministic).
  */
 export function createLevelList(
   energies: ArrayLike<number>,
@@ -33,13 +38,21 @@ export function createLevelList(
     if (!(Number.isFinite(w) && w > 0)) throw new LevelSumError(`level ${i} has weight ${w}; expected > 0`);
     if (e < lowest) lowest = e;
   }
+  const order = Array.from({ length: n }, (_, i) => i).sort((a, b) => energies[a]! - energies[b]! || a - b);
   const theta = new Float64Array(n);
   const weight = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    theta[i] = (energies[i]! - lowest) * toKelvin;
-    weight[i] = weights[i]!;
+    const k = order[i]!;
+    theta[i] = (energies[k]! - lowest) * toKelvin;
+    weight[i] = weights[k]!;
   }
-  return { theta, weight };
+  const tailWeight = new Float64Array(n);
+  let tail = 0;
+  for (let i = n - 1; i >= 0; i--) {
+    tail += weight[i]!;
+    tailWeight[i] = tail;
+  }
+  return { theta, weight, tailWeight };
 }
 
 /**
@@ -48,11 +61,13 @@ export function createLevelList(
  * Formula, with u_i = θ_i/T and p_i = g_i e^{−u_i}/q:
  *   ln q,  ⟨u⟩ = Σ p_i u_i,  var u = Σ p_i (u_i − ⟨u⟩)²
  * giving (H − H0)/RT = ⟨u⟩, Cp/R = var u, S/R = ln q + ⟨u⟩ (energies from the lowest level).
+ * Levels are visited in rising energy; the sum stops once the remaining weight times e^{−u}(1 + u²)
+ * (a bound on what the rest can add to q, Σ w u and Σ w u², valid for u > 2) is below 1e-17 of q.
  * Valid for any T > 0 (u_i ≥ 0, the lowest term is exactly g_0).
  * Source: McQuarrie, Statistical Mechanics (1976), eqs. 2-30 to 2-34 (canonical fluctuations).
  */
 export function levelSumMoments(levels: LevelList, T: number): PartitionMoments {
-  const { theta, weight } = levels;
+  const { theta, weight, tailWeight } = levels;
   const n = theta.length;
   const invT = 1 / T;
   // Weighted Welford update: one pass, centred, so the variance keeps full precision when ⟨u⟩ is large.
@@ -61,8 +76,10 @@ export function levelSumMoments(levels: LevelList, T: number): PartitionMoments 
   let m2 = 0;
   for (let i = 0; i < n; i++) {
     const u = theta[i]! * invT;
-    const w = weight[i]! * Math.exp(-u);
-    if (w === 0) continue;
+    const e = Math.exp(-u);
+    if (u > 20 && tailWeight[i]! * e * (1 + u * u) < TAIL_CUTOFF * q) break;
+    const w = weight[i]! * e;
+    if (w === 0) break; // sorted: every later term underflows too
     q += w;
     const d = u - mean;
     mean += (w / q) * d;

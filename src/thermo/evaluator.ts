@@ -20,6 +20,9 @@ export class PhysicsOptionsError extends Error {
   }
 }
 
+/** Points remembered per evaluator (a fit grid of ~600 T plus check points fits comfortably). */
+const MEMO_LIMIT = 8192;
+
 export const DEFAULT_PHYSICS_OPTIONS: Readonly<PhysicsOptions> = Object.freeze({
   standardPressure: STANDARD_PRESSURE_BAR,
 });
@@ -112,10 +115,18 @@ export function createThermoEvaluator(species: Species, options?: Partial<Physic
     }
   }
 
+  // The fit and the checks ask for the same temperatures; remembering recent points is safe because
+  // `at` is a pure function of T. Bounded so a long-running process cannot grow it without limit.
+  const memo = new Map<number, ThermoPoint>();
   const at = (T: number): ThermoPoint => {
+    const known = memo.get(T);
+    if (known) return { ...known };
     assertTemperature(T);
     const m = addMoments([translationalMoments(mass, T, p), internal(T)]);
-    return { T, cp: m.varU, hmh0: m.meanU, s: m.lnQ + m.meanU };
+    const point: ThermoPoint = { T, cp: m.varU, hmh0: m.meanU, s: m.lnQ + m.meanU };
+    if (memo.size >= MEMO_LIMIT) memo.clear();
+    memo.set(T, point);
+    return { ...point };
   };
 
   // Same operand order as standardProperties, so H − H298 is exactly 0 at 298.15 K.

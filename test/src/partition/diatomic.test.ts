@@ -70,6 +70,29 @@ describe('diatomic level enumeration', () => {
     expect(states[0]!.levels).toBe(levels.theta.length);
   });
 
+  it('stops the level sum early only where the rest is negligible (brute-force two-pass sum agrees)', () => {
+    const { levels } = diatomicLevels(NITROGEN);
+    for (const T of [200, 1000, 6000]) {
+      let q = 0;
+      let s1 = 0;
+      for (let i = 0; i < levels.theta.length; i++) {
+        const w = levels.weight[i]! * Math.exp(-levels.theta[i]! / T);
+        q += w;
+        s1 += w * (levels.theta[i]! / T);
+      }
+      const mean = s1 / q;
+      let s2 = 0;
+      for (let i = 0; i < levels.theta.length; i++) {
+        const u = levels.theta[i]! / T;
+        s2 += levels.weight[i]! * Math.exp(-u) * (u - mean) ** 2;
+      }
+      const m = diatomicMoments({ levels, states: [] }, T);
+      expect(rel(m.lnQ, Math.log(q))).toBeLessThan(1e-13);
+      expect(rel(m.meanU, mean)).toBeLessThan(1e-12);
+      expect(rel(m.varU, s2 / q)).toBeLessThan(1e-11);
+    }
+  });
+
   it('stops a v ladder where G(v) turns over', () => {
     // G(v) = 1000(v+½) − 50(v+½)² peaks at v+½ = 10; the limit is far above
     const state: DiatomicState = { ...separable, we: 1000, wexe: 50, Be: 1 };

@@ -1,0 +1,415 @@
+/**
+ * Load stage: the only place on the input side that touches the disk. Finds the species files of a database
+ * folder and parses YAML text into documents that remember where every node came from, so later stages can
+ * point at file:line:column.
+ *
+ * Hostile input is expected (a database folder may come from anywhere):
+ * - files larger than `maxBytes` (default 1 MiB) are refused before they are read;
+ * - YAML aliases are expanded at most `maxAliasCount` times (default 100), which stops "billion laughs"
+ *   alias bombs with a clear message instead of exhausting memory;
+ * - only the YAML 1.2 core schema is used: no tag constructs objects or runs code, and an unknown tag
+ *   (`!!js/function`, `!!python/object`, `!custom`, even YAML 1.1 `!!binary`/`!!set`) is an error, never
+ *   silently turned into a string;
+ * - duplicate keys in a mapping are errors (the second value would otherwise silently win).
+ *
+ * Symlink policy of `discoverSpeciesFiles`: a symlinked file or folder whose real path lies inside the
+ * database folder is followed (each real file is read once); one that resolves OUTSIDE the database folder is
+ * refused with an error diagnostic, as is a broken link. Entries whose name starts with '.' are skipped.
+ */
+import { readdir, readFile, realpath, stat } from 'node:fs/promises';
+import path from 'node:path';
+import {
+  LineCounter,
+  isAlias,
+  isMap,
+  isPair,
+  isScalar,
+  isSeq,
+  parseAllDocuments,
+  type Document,
+  type Node as YamlNode,
+} from 'yaml';
+import type { Diagnostic } from './diagnostics.js';
+
+/** Default size limit of one YAML file: 1 MiB (a large species file is a few kB). */
+export const DEFAULT_MAX_BYTES = 1024 * 1024;
+/** Default cap on alias expansions per document (yaml's own default; legitimate files use a handful). */
+export const DEFAULT_MAX_ALIAS_COUNT = 100;
+/** The settings file at the root of a database folder, never read as a species file. */
+export const SETTINGS_FILE_NAME = 'qforge.yaml';
+
+export interface SourcePosition {
+  /** 1-based. */
+  line: number;
+  /** 1-based. */
+  column: number;
+}
+
+/** One species document (a YAML document, or one item of a top-level list). */
+export interface LoadedDocument {
+  /** Display path of the file. */
+  file: string;
+  /** 0-based position of this species within its file (counting list items and `---` documents). */
+  index: number;
+  /** Plain JavaScript value of the species (mappings are plain objects). */
+  value: unknown;
+  /**
+   * Source position of the node at `path` (relative to this species). When the path does not exist, the
+   * position of its deepest existing ancestor. With `{ key: true }` the position of the mapping key of the
+   * last segment instead of its value (where an unknown key is written).
+   */
+  locate(path: ReadonlyArray<string | number>, opts?: { key?: boolean }): SourcePosition | undefined;
+}
+
+export interface LoadResult {
+  file: string;
+  documents: LoadedDocument[];
+  diagnostics: Diagnostic[];
+  text: string;
+}
+
+export interface ParseOptions {
+  /** Refuse text larger than this many bytes (UTF-8). Default 1 MiB. */
+  maxBytes?: number;
+  /** Cap on alias expansions per YAML document. Default 100. */
+  maxAliasCount?: number;
+  /**
+   * How a YAML document maps to species: 'species' (default) splits a top-level list into one document per
+   * item; 'single' keeps each YAML document whole (e.g. for a settings file).
+   */
+  split?: 'species' | 'single';
+}
+
+function err(file: string, message: string, extra: Partial<Diagnostic> = {}): Diagnostic {
+  return { severity: 'error', file, path: '', message, ...extra };
+}
+
+function formatBytes(n: number): string {
+  if (n >= 1024 * 1024) return `${(n / (1024 * 1024)).toFixed(n % (1024 * 1024) === 0 ? 0 : 1)} MiB`;
+  if (n >= 1024) return `${(n / 1024).toFixed(n % 1024 === 0 ? 0 : 1)} KiB`;
+  return `${n} bytes`;
+}
+
+function sizeDiagnostic(file: string, size: number, maxBytes: number): Diagnostic {
+  return err(file, `file is too large: ${formatBytes(size)} (${size} bytes); the limit is ${formatBytes(maxBytes)}`, {
+    expected: `a species file of at most ${maxBytes} bytes (split large databases into several files)`,
+  });
+}
+
+/** yaml's messages end with " at line L, column C" when pretty; we report the position separately. */
+function plainYamlMessage(message: string): string {
+  return message.replace(/ at line \d+, column \d+:[\s\S]*$/, '').trim();
+}
+
+const YAML_MESSAGES: Readonly<Record<string, (m: string) => string>> = {
+  DUPLICATE_KEY: () => 'duplicate key in a mapping (each key may appear only once)',
+  TAG_RESOLVE_FAILED: (m) =>
+    `${m}; only plain YAML values are accepted (no tags that construct objects or run code)`,
+};
+
+function positionOf(lc: LineCounter, offset: number): SourcePosition {
+  const p = lc.linePos(offset);
+  return { line: p.line, column: p.col };
+}
+
+function nodeStart(node: unknown): number | undefined {
+  const range = (node as { range?: [number, number, number] } | null)?.range;
+  return range ? range[0] : undefined;
+}
+
+/** Walks the YAML AST; returns the position of the node at `segments`, or the deepest ancestor's. */
+function locateIn(
+  doc: Document,
+  root: unknown,
+  segments: ReadonlyArray<string | number>,
+  lc: LineCounter,
+  wantKey: boolean,
+): SourcePosition | undefined {
+  let node: unknown = root;
+  let best = nodeStart(root);
+  for (let i = 0; i < segments.length; i++) {
+    const seg = segments[i]!;
+    const last = i === segments.length - 1;
+    if (isAlias(node)) node = node.resolve(doc);
+    if (isMap(node)) {
+      const pair = node.items.find((p) => isPair(p) && isScalar(p.key) && String(p.key.value) === String(seg));
+      if (!pair) break;
+      const keyStart = nodeStart(pair.key);
+      const valueStart = nodeStart(pair.value);
+      if (last && wantKey) {
+        best = keyStart ?? best;
+        break;
+      }
+      // An empty value (`vibrations:`) has no node of its own: point at its key.
+      best = valueStart ?? keyStart ?? best;
+      node = pair.value;
+      if (valueStart === undefined) break;
+    } else if (isSeq(node)) {
+      const idx = typeof seg === 'number' ? seg : Number(seg);
+      const item = Number.isInteger(idx) ? node.items[idx] : undefined;
+      if (item === undefined) break;
+      best = nodeStart(item) ?? best;
+      node = item;
+    } else {
+      break;
+    }
+  }
+  return best === undefined ? undefined : positionOf(lc, best);
+}
+
+function isExcessiveAliasError(e: unknown): boolean {
+  return e instanceof Error && /alias count|resource exhaustion/i.test(e.message);
+}
+
+/**
+ * Parses YAML text (one or more `---` documents) into species documents. Pure: no disk access. Syntax
+ * errors, duplicate keys, unknown tags, alias bombs and oversized text become error diagnostics with line
+ * and column; the documents without errors are still returned, so one bad document does not hide the others.
+ */
+export function parseYamlText(text: string, displayPath: string, opts: ParseOptions = {}): LoadResult {
+  const maxBytes = opts.maxBytes ?? DEFAULT_MAX_BYTES;
+  const maxAliasCount = opts.maxAliasCount ?? DEFAULT_MAX_ALIAS_COUNT;
+  const split = opts.split ?? 'species';
+  const result: LoadResult = { file: displayPath, documents: [], diagnostics: [], text };
+  const size = Buffer.byteLength(text, 'utf8');
+  if (size > maxBytes) {
+    result.diagnostics.push(sizeDiagnostic(displayPath, size, maxBytes));
+    result.text = '';
+    return result;
+  }
+
+  const lc = new LineCounter();
+  let docs: Document.Parsed[];
+  try {
+    docs = parseAllDocuments(text, {
+      lineCounter: lc,
+      schema: 'core',
+      uniqueKeys: true,
+      prettyErrors: false,
+      merge: false,
+      strict: true,
+    }) as Document.Parsed[];
+  } catch (e) {
+    result.diagnostics.push(err(displayPath, `could not parse YAML: ${e instanceof Error ? e.message : String(e)}`));
+    return result;
+  }
+  // parseAllDocuments returns an EmptyStream (array-like, empty) for text without documents.
+  docs = Array.from(docs);
+
+  let index = 0;
+  for (const doc of docs) {
+    const problems = [...doc.errors, ...doc.warnings.filter((w) => w.code === 'TAG_RESOLVE_FAILED')];
+    for (const e of problems) {
+      const pos = positionOf(lc, e.pos[0]);
+      const plain = plainYamlMessage(e.message);
+      const message = YAML_MESSAGES[e.code]?.(plain) ?? `YAML syntax error: ${plain}`;
+      result.diagnostics.push(err(displayPath, message, { line: pos.line, column: pos.column }));
+    }
+    for (const w of doc.warnings) {
+      if (w.code === 'TAG_RESOLVE_FAILED') continue;
+      const pos = positionOf(lc, w.pos[0]);
+      result.diagnostics.push({
+        severity: 'warning',
+        file: displayPath,
+        path: '',
+        line: pos.line,
+        column: pos.column,
+        message: `YAML: ${plainYamlMessage(w.message)}`,
+      });
+    }
+    if (problems.length > 0) continue;
+
+    let value: unknown;
+    try {
+      value = doc.toJS({ maxAliasCount });
+    } catch (e) {
+      const start = nodeStart(doc.contents);
+      const where = start === undefined ? {} : positionOf(lc, start);
+      if (isExcessiveAliasError(e)) {
+        result.diagnostics.push(
+          err(displayPath, `too many YAML alias expansions (more than ${maxAliasCount}); refusing a possible alias bomb`, {
+            ...where,
+            expected: `at most ${maxAliasCount} alias (*name) expansions per document`,
+          }),
+        );
+      } else if (e instanceof RangeError) {
+        result.diagnostics.push(err(displayPath, 'YAML nesting is too deep to read', where));
+      } else {
+        result.diagnostics.push(
+          err(displayPath, `could not read YAML document: ${e instanceof Error ? e.message : String(e)}`, where),
+        );
+      }
+      continue;
+    }
+    // An empty document (e.g. after a trailing `---`, or comments only) holds no species.
+    if (value === null || value === undefined) continue;
+
+    const contents = doc.contents;
+    if (split === 'species' && Array.isArray(value) && isSeq(contents)) {
+      value.forEach((item, i) => {
+        const itemNode = contents.items[i];
+        result.documents.push({
+          file: displayPath,
+          index: index++,
+          value: item,
+          locate: (p, o) => locateIn(doc, itemNode, p, lc, o?.key ?? false),
+        });
+      });
+    } else {
+      result.documents.push({
+        file: displayPath,
+        index: index++,
+        value,
+        locate: (p, o) => locateIn(doc, contents, p, lc, o?.key ?? false),
+      });
+    }
+  }
+  return result;
+}
+
+/**
+ * Reads and parses one YAML file. The size is checked before reading, so a huge file is never loaded into
+ * memory. Read failures become diagnostics, never exceptions.
+ */
+export async function loadYamlFile(
+  filePath: string,
+  displayPath: string,
+  opts: ParseOptions = {},
+): Promise<LoadResult> {
+  const maxBytes = opts.maxBytes ?? DEFAULT_MAX_BYTES;
+  const empty: LoadResult = { file: displayPath, documents: [], diagnostics: [], text: '' };
+  try {
+    const info = await stat(filePath);
+    if (!info.isFile()) {
+      empty.diagnostics.push(err(displayPath, 'not a regular file', { expected: 'a YAML file' }));
+      return empty;
+    }
+    if (info.size > maxBytes) {
+      empty.diagnostics.push(sizeDiagnostic(displayPath, info.size, maxBytes));
+      return empty;
+    }
+    const text = await readFile(filePath, 'utf8');
+    return parseYamlText(text, displayPath, opts);
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    const reason = code === 'ENOENT' ? 'file not found' : `cannot read file (${code ?? String(e)})`;
+    empty.diagnostics.push(err(displayPath, reason));
+    return empty;
+  }
+}
+
+export interface DiscoverOptions {
+  /** Name of the settings file at the root, excluded from the species files. Default `qforge.yaml`. */
+  settingsFileName?: string;
+}
+
+function isYamlName(name: string): boolean {
+  return /\.ya?ml$/i.test(name);
+}
+
+function isInside(root: string, candidate: string): boolean {
+  const rel = path.relative(root, candidate);
+  return rel === '' || (!rel.startsWith('..') && !path.isAbsolute(rel));
+}
+
+/**
+ * Lists the species files of a database folder: every *.yaml / *.yml below `dir`, recursively, except the
+ * settings file at the root and entries whose name starts with '.'. Returned paths are `dir` joined with the
+ * path relative to it (so they are readable and read well in messages), sorted by that relative path
+ * (code-point order, '/' separators), so the order never depends on the file system.
+ *
+ * Symlinks: followed when their real path is inside the database folder (a real file reached twice is read
+ * once, with a warning); refused with an error diagnostic when they resolve outside it or are broken.
+ */
+export async function discoverSpeciesFiles(
+  dir: string,
+  opts: DiscoverOptions = {},
+): Promise<{ files: string[]; diagnostics: Diagnostic[] }> {
+  const settingsName = opts.settingsFileName ?? SETTINGS_FILE_NAME;
+  const diagnostics: Diagnostic[] = [];
+  const found: { rel: string; real: string }[] = [];
+
+  let rootReal: string;
+  try {
+    rootReal = await realpath(dir);
+    if (!(await stat(rootReal)).isDirectory()) {
+      diagnostics.push(err(dir, 'not a folder', { expected: 'a database folder of species YAML files' }));
+      return { files: [], diagnostics };
+    }
+  } catch {
+    diagnostics.push(err(dir, 'database folder not found', { expected: 'an existing folder of species YAML files' }));
+    return { files: [], diagnostics };
+  }
+
+  const visitedDirs = new Set<string>([rootReal]);
+
+  async function walk(absDir: string, relDir: string): Promise<void> {
+    let entries;
+    try {
+      entries = await readdir(absDir, { withFileTypes: true });
+    } catch (e) {
+      diagnostics.push(err(relDir === '' ? dir : path.join(dir, relDir), `cannot read folder (${(e as NodeJS.ErrnoException).code ?? e})`));
+      return;
+    }
+    entries.sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));
+    for (const entry of entries) {
+      if (entry.name.startsWith('.')) continue;
+      const rel = relDir === '' ? entry.name : `${relDir}/${entry.name}`;
+      const abs = path.join(absDir, entry.name);
+      const display = path.join(dir, rel);
+      let isDir = entry.isDirectory();
+      let isFile = entry.isFile();
+      let real = abs;
+      if (entry.isSymbolicLink()) {
+        try {
+          real = await realpath(abs);
+        } catch {
+          diagnostics.push(err(display, 'broken symbolic link; refused', { expected: 'a link to a file inside the database folder' }));
+          continue;
+        }
+        if (!isInside(rootReal, real)) {
+          if (isYamlName(entry.name) || (await stat(real).then((s) => s.isDirectory(), () => false))) {
+            diagnostics.push(
+              err(display, `symbolic link resolves outside the database folder (to ${real}); refused`, {
+                expected: 'species files and folders that live inside the database folder',
+              }),
+            );
+          }
+          continue;
+        }
+        const info = await stat(real);
+        isDir = info.isDirectory();
+        isFile = info.isFile();
+      }
+      if (isDir) {
+        if (visitedDirs.has(real)) continue;
+        visitedDirs.add(real);
+        await walk(real, rel);
+      } else if (isFile && isYamlName(entry.name)) {
+        if (relDir === '' && entry.name === settingsName) continue;
+        found.push({ rel, real });
+      }
+    }
+  }
+
+  await walk(rootReal, '');
+  found.sort((a, b) => (a.rel < b.rel ? -1 : a.rel > b.rel ? 1 : 0));
+  const seen = new Map<string, string>();
+  const files: string[] = [];
+  for (const f of found) {
+    const display = path.join(dir, f.rel);
+    const first = seen.get(f.real);
+    if (first !== undefined) {
+      diagnostics.push({
+        severity: 'warning',
+        file: display,
+        path: '',
+        message: `same file as ${first} (reached through a symbolic link); read once`,
+      });
+      continue;
+    }
+    seen.set(f.real, display);
+    files.push(display);
+  }
+  return { files, diagnostics };
+}

@@ -1,0 +1,765 @@
+/**
+ * Validate stage: one loaded YAML document → the normalised `Species` of src/model.ts, or every problem of
+ * the document at once.
+ *
+ * Three passes over the same document, all always run so the user sees everything in one go:
+ * 1. the JSON Schema (schemas/species.schema.json): shape, types, unknown keys, units, simple ranges;
+ * 2. physics checks the schema cannot express (unknown elements, atom counts per structure, rotational
+ *    constant counts, dissociation limits, converging level ladders, ...) — written defensively so that a
+ *    field the schema already rejected is skipped, not reported twice;
+ * 3. normalisation (only when there is no error): units converted once (src/units.ts), defaults filled,
+ *    molar mass from src/elements.ts, plus a canonical key-sorted JSON form for the cache hash.
+ * Warnings flag legal but suspicious input and never stop a species.
+ */
+import { elementsObject } from 'chemical-elements';
+import schema from '../schemas/species.schema.json' with { type: 'json' };
+import { isKnownElement, molarMass } from '../src/elements.js';
+import type {
+  DiatomicState,
+  ElectronicLevel,
+  NuclearSpinWeights,
+  Species,
+  Structure,
+  Vibration,
+} from '../src/model.js';
+import {
+  ENERGY_UNITS_TO_CM1,
+  ENTHALPY_UNITS_TO_J_PER_MOL,
+  INERTIA_UNITS_TO_KG_M2,
+  ROTATIONAL_UNITS_TO_CM1,
+  rotationalConstantFromInertia,
+} from '../src/units.js';
+import { compareDiagnostics, type Diagnostic } from './diagnostics.js';
+import type { LoadedDocument } from './load.js';
+import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from './schema-check.js';
+
+type Segment = string | number;
+type Obj = Record<string, unknown>;
+
+export interface SpeciesValidation {
+  /** Present only when the document has no error. */
+  species?: Species;
+  /** Errors and warnings, in source order. */
+  diagnostics: Diagnostic[];
+  /**
+   * Canonical JSON-able form of the species (units converted, defaults filled, keys sorted at every level),
+   * for content hashing; present together with `species`.
+   */
+  normalisedInput?: unknown;
+}
+
+const validateAgainstSpeciesSchema = createSchemaValidator(schema);
+
+/** More bound vibrational levels than any real diatomic has (I2 has about 110): a units mistake. */
+const MAX_VIBRATIONAL_LEVELS = 1000;
+/** Rough cap on rovibrational levels the full level sum would visit; beyond it the ladder is effectively endless. */
+const MAX_ROVIBRATIONAL_LEVELS = 5e7;
+
+const SAYS_NOTHING = /^(todo|tbd|tba|fixme|unknown|none|n\/?a|nil|null|-+|\?+|x+|\.+|source|sources|ref|refs|reference|references|see above|various|misc|internet|web|google|wikipedia)$/i;
+
+const isObj = (v: unknown): v is Obj => v !== null && typeof v === 'object' && !Array.isArray(v);
+const isFiniteNumber = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
+const isPositiveInteger = (v: unknown): v is number => Number.isInteger(v) && (v as number) >= 1;
+
+/** A quantity in its internal unit, or undefined when malformed (the schema reports that). */
+function quantity(raw: unknown, table: Readonly<Record<string, number>>, defaultUnit: string): number | undefined {
+  if (isFiniteNumber(raw)) return raw * table[defaultUnit]!;
+  if (isObj(raw) && isFiniteNumber(raw.value) && typeof raw.unit === 'string' && Object.hasOwn(table, raw.unit)) {
+    return raw.value * table[raw.unit]!;
+  }
+  return undefined;
+}
+const energy = (raw: unknown) => quantity(raw, ENERGY_UNITS_TO_CM1, 'cm-1');
+const rotational = (raw: unknown) => quantity(raw, ROTATIONAL_UNITS_TO_CM1, 'cm-1');
+
+/** Number formatting for messages: enough digits to recognise the value, no float noise. */
+function fmt(x: number): string {
+  return Number.isInteger(x) ? String(x) : String(Number(x.toPrecision(6)));
+}
+
+function atomicNumber(symbol: string): number | undefined {
+  if (symbol === 'D' || symbol === 'T') return 1;
+  return (elementsObject as Record<string, { number?: number }>)[symbol]?.number;
+}
+
+const ALL_SYMBOLS: readonly string[] = [...Object.keys(elementsObject as object), 'D', 'T'].filter(isKnownElement);
+
+class Findings {
+  readonly diagnostics: Diagnostic[] = [];
+  constructor(
+    private readonly doc: LoadedDocument,
+    private readonly species: string | undefined,
+  ) {}
+
+  add(
+    severity: Diagnostic['severity'],
+    at: Segment[],
+    message: string,
+    extra: { value?: unknown; expected?: string; key?: boolean } = {},
+  ): void {
+    const where = this.doc.locate(at, { key: extra.key ?? false });
+    const d: Diagnostic = { severity, file: this.doc.file, path: formatFieldPath(at), message };
+    if (where) {
+      d.line = where.line;
+      d.column = where.column;
+    }
+    if (this.species !== undefined) d.species = this.species;
+    if (extra.value !== undefined) d.value = extra.value;
+    if (extra.expected !== undefined) d.expected = extra.expected;
+    this.diagnostics.push(d);
+  }
+  error(at: Segment[], message: string, extra?: { value?: unknown; expected?: string; key?: boolean }): void {
+    this.add('error', at, message, extra);
+  }
+  warn(at: Segment[], message: string, extra?: { value?: unknown; expected?: string; key?: boolean }): void {
+    this.add('warning', at, message, extra);
+  }
+}
+
+/** Term value G(v) = ωe(v+½) − ωexe(v+½)² + ωeye(v+½)³, cm⁻¹ (Herzberg, Spectra of Diatomic Molecules, eq. III,79). */
+function termValue(s: Pick<DiatomicState, 'we' | 'wexe' | 'weye'>, v: number): number {
+  const x = v + 0.5;
+  return s.we * x - s.wexe * x * x + s.weye * x * x * x;
+}
+
+interface CompositionView {
+  symbols: string[];
+  counts: Record<string, number>;
+  atoms: number;
+  known: boolean;
+}
+
+function readComposition(raw: unknown, f: Findings): CompositionView | undefined {
+  if (!isObj(raw)) return undefined;
+  const counts: Record<string, number> = {};
+  let known = true;
+  let atoms = 0;
+  for (const [symbol, n] of Object.entries(raw)) {
+    if (!isKnownElement(symbol)) {
+      known = false;
+      const caseFix = ALL_SYMBOLS.find((s) => s.toLowerCase() === symbol.toLowerCase());
+      const suggestion = caseFix ?? nearestKey(symbol, ALL_SYMBOLS);
+      f.error(['composition', symbol], `unknown element symbol '${symbol}'${suggestion ? ` (did you mean '${suggestion}'?)` : ''}`, {
+        key: true,
+        expected: 'an IUPAC element symbol with a standard atomic weight (or D, T for 2H, 3H)',
+      });
+    }
+    if (isPositiveInteger(n)) {
+      counts[symbol] = n;
+      atoms += n;
+    } else {
+      known = false;
+    }
+  }
+  return { symbols: Object.keys(counts).sort(), counts, atoms, known };
+}
+
+function sortKeysDeep(v: unknown): unknown {
+  if (Array.isArray(v)) return v.map(sortKeysDeep);
+  if (isObj(v)) {
+    const out: Obj = {};
+    for (const k of Object.keys(v).sort()) if (v[k] !== undefined) out[k] = sortKeysDeep(v[k]);
+    return out;
+  }
+  return v;
+}
+
+interface Ctx {
+  f: Findings;
+  input: Obj;
+  structure: Structure | undefined;
+  composition: CompositionView | undefined;
+}
+
+function checkName(ctx: Ctx): void {
+  const name = ctx.input.name;
+  if (typeof name === 'string' && /^\.+$/.test(name)) {
+    ctx.f.error(['name'], 'a name made only of dots cannot name a record or an output file', {
+      value: name,
+      expected: 'a name with at least one letter, digit or symbol other than "."',
+    });
+  }
+}
+
+function checkComposition(ctx: Ctx): void {
+  const { f, structure, composition: c } = ctx;
+  if (!c || !c.known) return;
+  if (structure === 'atom' && c.atoms !== 1) {
+    f.error(['composition'], `an atom must consist of exactly 1 atom, this composition has ${c.atoms}`, {
+      value: ctx.input.composition,
+      expected: "one element with count 1, or structure 'diatomic', 'linear' or 'nonlinear'",
+    });
+  }
+  if (structure === 'diatomic' && c.atoms !== 2) {
+    f.error(['composition'], `a diatomic must consist of exactly 2 atoms, this composition has ${c.atoms}`, {
+      value: ctx.input.composition,
+      expected: c.atoms === 1 ? "2 atoms, or structure 'atom'" : "2 atoms, or structure 'linear' or 'nonlinear'",
+    });
+  }
+  if (structure === 'linear' && c.atoms < 2) {
+    f.error(['composition'], `a linear molecule needs at least 2 atoms, this composition has ${c.atoms}`, {
+      value: ctx.input.composition,
+      expected: "2 or more atoms, or structure 'atom'",
+    });
+  }
+  if (structure === 'nonlinear' && c.atoms < 3) {
+    f.error(['composition'], `a nonlinear molecule needs at least 3 atoms, this composition has ${c.atoms}`, {
+      value: ctx.input.composition,
+      expected: "3 or more atoms, or structure 'linear' / 'diatomic'",
+    });
+  }
+  const charge = ctx.input.charge ?? 0;
+  if (Number.isInteger(charge)) {
+    let electrons = 0;
+    for (const s of c.symbols) electrons += (atomicNumber(s) ?? 0) * c.counts[s]!;
+    electrons -= charge as number;
+    if (electrons < 0) {
+      f.error(['charge'], `charge ${charge as number} would leave ${electrons} electrons`, {
+        value: charge,
+        expected: `a charge of at most +${electrons + (charge as number)} for this composition`,
+      });
+    }
+  }
+}
+
+function checkSources(ctx: Ctx): void {
+  const sources = ctx.input.sources;
+  if (!Array.isArray(sources)) return;
+  sources.forEach((s, i) => {
+    if (typeof s === 'string' && s.trim() !== '' && (SAYS_NOTHING.test(s.trim()) || s.trim().length < 3)) {
+      ctx.f.warn(['sources', i], 'this source entry does not say where the numbers come from', {
+        value: s,
+        expected: 'a citation, e.g. "Huber & Herzberg (1979)", or "from memory" / "invented (demo)"',
+      });
+    }
+  });
+}
+
+function readEnthalpy(ctx: Ctx): { value: number; temperature: number } | undefined {
+  const raw = ctx.input.enthalpy_of_formation;
+  if (isFiniteNumber(raw)) return { value: raw * ENTHALPY_UNITS_TO_J_PER_MOL['kJ/mol']!, temperature: 298.15 };
+  if (!isObj(raw) || !isFiniteNumber(raw.value)) return undefined;
+  const unit = raw.unit ?? 'kJ/mol';
+  const temperature = raw.temperature ?? 298.15;
+  if (typeof unit !== 'string' || !Object.hasOwn(ENTHALPY_UNITS_TO_J_PER_MOL, unit)) return undefined;
+  if (temperature !== 298.15 && temperature !== 0) return undefined;
+  if (temperature === 0) {
+    ctx.f.warn(['enthalpy_of_formation', 'temperature'], 'enthalpy of formation given at 0 K', {
+      value: 0,
+      expected:
+        "a value at 298.15 K where available; a 0 K value is converted with the elements' reference-state enthalpy increments, so check they cover every element",
+    });
+  }
+  return { value: raw.value * ENTHALPY_UNITS_TO_J_PER_MOL[unit]!, temperature };
+}
+
+function readTemperatureRanges(ctx: Ctx): { low?: number; mid?: number; high?: number } | undefined {
+  const raw = ctx.input.temperature_ranges;
+  if (!isObj(raw)) return undefined;
+  const out: { low?: number; mid?: number; high?: number } = {};
+  for (const k of ['low', 'mid', 'high'] as const) if (isFiniteNumber(raw[k]) && raw[k] > 0) out[k] = raw[k];
+  const order = (['low', 'mid', 'high'] as const).filter((k) => out[k] !== undefined);
+  for (let i = 1; i < order.length; i++) {
+    const a = order[i - 1]!;
+    const b = order[i]!;
+    if (!(out[a]! < out[b]!)) {
+      ctx.f.error(['temperature_ranges', b], `${b} (${fmt(out[b]!)} K) must be above ${a} (${fmt(out[a]!)} K)`, {
+        value: out[b],
+        expected: 'low < mid < high',
+      });
+    }
+  }
+  return out;
+}
+
+function readElectronicLevels(ctx: Ctx): ElectronicLevel[] | undefined {
+  const raw = ctx.input.electronic_levels;
+  if (raw === undefined) return [{ energy: 0, degeneracy: 1 }];
+  if (!Array.isArray(raw) || raw.length === 0) return undefined;
+  const levels: ElectronicLevel[] = [];
+  let ok = true;
+  raw.forEach((item) => {
+    const e = isObj(item) ? energy(item.energy) : undefined;
+    if (!isObj(item) || e === undefined || e < 0 || !isPositiveInteger(item.degeneracy)) {
+      ok = false;
+      return;
+    }
+    const level: ElectronicLevel = { energy: e, degeneracy: item.degeneracy };
+    if (typeof item.term === 'string') level.term = item.term;
+    levels.push(level);
+  });
+  if (!ok) return undefined;
+  const lowest = Math.min(...levels.map((l) => l.energy));
+  if (lowest !== 0) {
+    const i = levels.findIndex((l) => l.energy === lowest);
+    ctx.f.error(['electronic_levels', i, 'energy'], `the lowest electronic level is at ${fmt(lowest)} cm-1, not at 0`, {
+      value: (raw[i] as Obj).energy,
+      expected: 'energies measured from the ground level, which is at energy 0',
+    });
+  }
+  const seen = new Map<string, number>();
+  levels.forEach((l, i) => {
+    const key = `${l.energy}|${l.term ?? ''}`;
+    const first = seen.get(key);
+    if (first !== undefined) {
+      ctx.f.warn(['electronic_levels', i], `same energy${l.term ? ' and term' : ''} as electronic_levels[${first}]; is a level listed twice?`, {
+        value: raw[i],
+        expected: 'each level once, with its total degeneracy',
+      });
+    } else seen.set(key, i);
+  });
+  // Stable sort: the physics does not care, but the canonical form should not depend on listing order.
+  return levels.map((l, i) => ({ l, i })).sort((a, b) => a.l.energy - b.l.energy || a.i - b.i).map((x) => x.l);
+}
+
+function checkSymmetryNumber(ctx: Ctx, sigma: number, hasSpinWeights: boolean): void {
+  const { f, structure, composition: c } = ctx;
+  if ((structure === 'diatomic' || structure === 'linear') && sigma > 2) {
+    f.error(['symmetry_number'], `a linear molecule has symmetry number 1 or 2, not ${sigma}`, {
+      value: sigma,
+      expected: '1 (no centre of symmetry) or 2 (centrosymmetric)',
+    });
+    return;
+  }
+  if (!c || !c.known) return;
+  const homonuclear = c.symbols.length === 1;
+  if (structure === 'diatomic') {
+    if (hasSpinWeights && homonuclear && sigma !== 2) {
+      f.warn(['symmetry_number'], `symmetry number ${sigma} is ignored: nuclear_spin_weights replace it`, {
+        value: sigma,
+        expected: '2 for a homonuclear diatomic',
+      });
+    } else if (homonuclear && sigma !== 2) {
+      f.warn(['symmetry_number'], 'a homonuclear diatomic usually has symmetry number 2', { value: sigma, expected: '2' });
+    } else if (!homonuclear && sigma !== 1) {
+      f.warn(['symmetry_number'], 'a heteronuclear diatomic usually has symmetry number 1', { value: sigma, expected: '1' });
+    }
+  } else if (structure === 'linear' && sigma === 2) {
+    // A centre of symmetry pairs atoms of each element; at most one element can have an odd count (the centre).
+    const odd = c.symbols.filter((s) => c.counts[s]! % 2 === 1).length;
+    if (odd > 1) {
+      f.warn(['symmetry_number'], 'symmetry number 2 needs a centre of symmetry, which this composition cannot have', {
+        value: sigma,
+        expected: '1',
+      });
+    }
+  } else if (structure === 'nonlinear' && sigma > 1 && c.symbols.every((s) => c.counts[s] === 1)) {
+    f.warn(['symmetry_number'], 'with no two atoms of the same element no rotation can be a symmetry operation', {
+      value: sigma,
+      expected: '1',
+    });
+  }
+}
+
+function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?: Vibration[] } {
+  const { f, input, structure, composition: c } = ctx;
+  const want = structure === 'linear' ? 1 : 3;
+  const rc = input.rotational_constants;
+  const moi = input.moments_of_inertia;
+  let rotationalConstants: number[] | undefined;
+  if (rc !== undefined && moi !== undefined) {
+    f.error(['moments_of_inertia'], 'give either rotational_constants or moments_of_inertia, not both', {
+      key: true,
+      expected: 'exactly one of rotational_constants, moments_of_inertia',
+    });
+  } else if (rc === undefined && moi === undefined) {
+    f.error(['rotational_constants'], `missing required field 'rotational_constants' (or 'moments_of_inertia') for structure '${structure}'`, {
+      expected: structure === 'linear' ? '[B] in cm-1' : '[A, B, C] in cm-1',
+    });
+  } else {
+    const field = rc !== undefined ? 'rotational_constants' : 'moments_of_inertia';
+    const list = rc ?? moi;
+    if (Array.isArray(list)) {
+      if (list.length > 3) {
+        // The schema already reports more than 3 items.
+      } else if (list.length !== want) {
+        f.error([field], `a ${structure} molecule takes ${want} ${field === 'rotational_constants' ? 'rotational constant' : 'moment of inertia'}${want === 1 ? '' : 's'}, got ${list.length}`, {
+          value: list,
+          expected: structure === 'linear' ? (field === 'rotational_constants' ? '[B]' : '[I]') : field === 'rotational_constants' ? '[A, B, C]' : '[IA, IB, IC]',
+        });
+      } else {
+        const values = list.map((x) =>
+          field === 'rotational_constants'
+            ? rotational(x)
+            : (() => {
+                const kgm2 = quantity(x, INERTIA_UNITS_TO_KG_M2, 'amu*angstrom^2');
+                return kgm2 === undefined ? undefined : rotationalConstantFromInertia(kgm2);
+              })(),
+        );
+        if (values.every((v): v is number => v !== undefined && v > 0)) {
+          rotationalConstants = values;
+          if (structure === 'nonlinear' && !(values[0]! >= values[1]! && values[1]! >= values[2]!)) {
+            f.warn([field], field === 'rotational_constants' ? 'rotational constants are not in the order A >= B >= C' : 'moments of inertia are not in the order IA <= IB <= IC', {
+              value: list,
+              expected: 'the conventional order (the product, and so the thermochemistry, is unaffected)',
+            });
+          }
+          values.forEach((b, i) => {
+            if (b > 100) {
+              f.warn([field, i], `rotational constant of ${fmt(b)} cm-1 is larger than that of any molecule (H2: about 60 cm-1); check the unit`, {
+                value: list[i],
+                expected: 'a value in cm-1 (or {value, unit})',
+              });
+            }
+          });
+        }
+      }
+    }
+  }
+
+  let vibrations: Vibration[] | undefined;
+  const raw = input.vibrations;
+  if (Array.isArray(raw)) {
+    const vs: Vibration[] = [];
+    raw.forEach((item, i) => {
+      const wn = isObj(item) ? energy(item.wavenumber) : energy(item);
+      const g = isObj(item) ? (item.degeneracy ?? 1) : 1;
+      if (wn === undefined || !(wn > 0) || !isPositiveInteger(g)) return;
+      if (wn > 5000) {
+        f.warn(['vibrations', i], `wavenumber ${fmt(wn)} cm-1 is above any fundamental (H2: about 4160 cm-1); check the unit`, {
+          value: item,
+          expected: 'a wavenumber in cm-1 (or {value, unit})',
+        });
+      }
+      vs.push({ wavenumber: wn, degeneracy: g });
+    });
+    if (vs.length === raw.length) {
+      vibrations = vs;
+      if (c && c.known && (structure === 'linear' || structure === 'nonlinear')) {
+        const expected = 3 * c.atoms - (structure === 'linear' ? 5 : 6);
+        const modes = vs.reduce((n, v) => n + v.degeneracy, 0);
+        if (expected > 0 && modes !== expected) {
+          f.warn(['vibrations'], `${modes} vibrational mode${modes === 1 ? '' : 's'} (counting degeneracy), but a ${structure} molecule of ${c.atoms} atoms has ${expected} (3N-${structure === 'linear' ? 5 : 6})`, {
+            expected: `${expected} modes counting degeneracy`,
+          });
+        }
+      }
+    }
+  }
+  return { rotationalConstants, vibrations };
+}
+
+function readDiatomicState(raw: unknown): DiatomicState | undefined {
+  if (!isObj(raw) || typeof raw.term !== 'string' || !isPositiveInteger(raw.degeneracy)) return undefined;
+  const te = energy(raw.energy);
+  const we = energy(raw.we);
+  const wexe = raw.wexe === undefined ? 0 : energy(raw.wexe);
+  const weye = raw.weye === undefined ? 0 : energy(raw.weye);
+  const Be = rotational(raw.Be);
+  const alphae = raw.alphae === undefined ? 0 : rotational(raw.alphae);
+  const De = raw.De === undefined ? 0 : rotational(raw.De);
+  const d0 = raw.dissociation_energy === undefined ? undefined : energy(raw.dissociation_energy);
+  if ([te, we, wexe, weye, Be, alphae, De].some((x) => x === undefined)) return undefined;
+  if (raw.dissociation_energy !== undefined && d0 === undefined) return undefined;
+  if (te! < 0 || !(we! > 0) || !(Be! > 0) || De! < 0 || (d0 !== undefined && !(d0 > 0))) return undefined;
+  const s: DiatomicState = {
+    term: raw.term,
+    energy: te!,
+    degeneracy: raw.degeneracy,
+    we: we!,
+    wexe: wexe!,
+    weye: weye!,
+    Be: Be!,
+    alphae: alphae!,
+    De: De!,
+  };
+  if (d0 !== undefined) s.dissociationEnergy = d0;
+  return s;
+}
+
+function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d0: number | undefined): void {
+  const { f } = ctx;
+  const ground = states[0];
+  const rawStates = ctx.input.electronic_states as unknown[];
+  if (ground && ground.energy !== 0) {
+    f.error(['electronic_states', 0, 'energy'], `the first electronic state must be the ground state at energy 0, got ${fmt(ground.energy)} cm-1`, {
+      value: (rawStates[0] as Obj).energy,
+      expected: 'the ground state first, with energy 0',
+    });
+  }
+  states.forEach((s, i) => {
+    if (s && i > 0 && s.energy === 0) {
+      f.warn(['electronic_states', i, 'energy'], 'a second electronic state at Te = 0; is a state listed twice?', {
+        value: 0,
+        expected: 'Te > 0 for excited states (a degenerate state is listed once with its total degeneracy)',
+      });
+    }
+  });
+  if (ground && ground.dissociationEnergy !== undefined && d0 !== undefined && Math.abs(ground.dissociationEnergy - d0) > 1e-9 * d0) {
+    f.error(['electronic_states', 0, 'dissociation_energy'], `the ground state's dissociation_energy (${fmt(ground.dissociationEnergy)} cm-1) differs from the molecule's (${fmt(d0)} cm-1)`, {
+      value: (rawStates[0] as Obj).dissociation_energy,
+      expected: "the same value, or leave it out (the ground state uses the molecule's dissociation_energy)",
+    });
+  }
+  if (ground && d0 !== undefined) {
+    const g0 = termValue(ground, 0);
+    if (d0 <= g0) {
+      f.error(['dissociation_energy'], `dissociation energy D0 = ${fmt(d0)} cm-1 is below the zero-point energy G(0) = ${fmt(g0)} cm-1 of the ground state`, {
+        value: ctx.input.dissociation_energy,
+        expected: 'D0 measured from the lowest level, well above G(0) = we/2 - wexe/4 + weye/8 (check the unit)',
+      });
+      return;
+    }
+  }
+  let totalLevels = 0;
+  states.forEach((s, i) => {
+    if (!s) return;
+    if (s.wexe < 0) {
+      f.warn(['electronic_states', i, 'wexe'], 'negative anharmonicity wexe: vibrational spacings grow with v', {
+        value: (rawStates[i] as Obj).wexe,
+        expected: 'wexe > 0 for almost every state (check the sign convention: G(v) = we(v+1/2) - wexe(v+1/2)^2 + ...)',
+      });
+    }
+    if (s.De > 0.01 * s.Be) {
+      f.warn(['electronic_states', i, 'De'], `centrifugal distortion De = ${fmt(s.De)} cm-1 is more than 1% of Be; check the unit (De is usually ~1e-6 of Be)`, {
+        value: (rawStates[i] as Obj).De,
+        expected: 'De << Be',
+      });
+    }
+    // Height of this state's dissociation limit above its own lowest level.
+    let limit: number | undefined;
+    if (s.dissociationEnergy !== undefined) limit = s.dissociationEnergy;
+    else if (ground && d0 !== undefined) limit = d0 - (s.energy + termValue(s, 0) - termValue(ground, 0));
+    if (limit === undefined) return;
+    if (limit <= 0) {
+      f.error(['electronic_states', i, 'energy'], `state '${s.term}' lies entirely above the dissociation limit (its lowest level is ${fmt(-limit)} cm-1 above it)`, {
+        value: (rawStates[i] as Obj).energy,
+        expected: `a bound state below the limit at ${fmt(d0 ?? 0)} cm-1, or its own dissociation_energy`,
+      });
+      return;
+    }
+    const g0 = termValue(s, 0);
+    if (termValue(s, 1) <= g0) {
+      f.error(['electronic_states', i, 'wexe'], `the vibrational levels of state '${s.term}' turn over before v = 1 (G(1) <= G(0)); the ladder has no excited levels`, {
+        value: (rawStates[i] as Obj).wexe,
+        expected: 'we - 2 wexe + ... > 0 (check the units and signs of we, wexe, weye)',
+      });
+      return;
+    }
+    for (let v = 0; ; v++) {
+      const gv = termValue(s, v);
+      if (v > 0 && (gv <= termValue(s, v - 1) || gv - g0 >= limit)) break;
+      if (v >= MAX_VIBRATIONAL_LEVELS) {
+        f.error(['electronic_states', i, 'we'], `the vibrational levels of state '${s.term}' never reach the dissociation limit: more than ${MAX_VIBRATIONAL_LEVELS} bound levels`, {
+          value: (rawStates[i] as Obj).we,
+          expected: 'constants and dissociation energy in consistent units (cm-1 when bare numbers)',
+        });
+        return;
+      }
+      const bv = s.Be - s.alphae * (v + 0.5);
+      if (bv <= 0) {
+        f.error(['electronic_states', i, 'alphae'], `B_v = Be - alphae(v+1/2) is ${fmt(bv)} cm-1 at v = ${v}, below the dissociation limit: the rotational ladder of that level would not rise`, {
+          value: (rawStates[i] as Obj).alphae,
+          expected: `alphae < ${fmt(s.Be / (v + 0.5))} cm-1 so that B_v stays positive for every bound level`,
+        });
+        return;
+      }
+      const room = limit - (gv - g0);
+      // Rotational levels of one v: up to J(J+1) ~ room/B_v, or to the turnover J(J+1) = B_v/(2 De).
+      const jj = s.De > 0 ? Math.min(room / bv, bv / (2 * s.De)) : room / bv;
+      totalLevels += Math.sqrt(Math.max(jj, 0)) + 1;
+    }
+  });
+  if (totalLevels > MAX_ROVIBRATIONAL_LEVELS) {
+    f.error(['electronic_states'], `the level sum would visit about ${fmt(totalLevels)} rovibrational levels; levels this dense are effectively a never-ending ladder`, {
+      expected: `at most ${fmt(MAX_ROVIBRATIONAL_LEVELS)} levels: check the units of Be and dissociation_energy`,
+    });
+  }
+}
+
+function readDiatomic(ctx: Ctx): { states?: DiatomicState[]; d0?: number; spin?: NuclearSpinWeights } {
+  const { f, input, composition: c } = ctx;
+  const d0 = energy(input.dissociation_energy);
+  let spin: NuclearSpinWeights | undefined;
+  const rawSpin = input.nuclear_spin_weights;
+  if (isObj(rawSpin)) {
+    if (c && c.known && !(c.symbols.length === 1 && c.atoms === 2)) {
+      f.error(['nuclear_spin_weights'], 'nuclear spin weights apply only to a homonuclear diatomic (two atoms of one element)', {
+        key: true,
+        value: input.composition,
+        expected: 'no nuclear_spin_weights for a heteronuclear molecule (its symmetry number is 1)',
+      });
+    }
+    if (Number.isInteger(rawSpin.even) && Number.isInteger(rawSpin.odd) && (rawSpin.even as number) >= 0 && (rawSpin.odd as number) >= 0) {
+      if (rawSpin.even === 0 && rawSpin.odd === 0) {
+        f.error(['nuclear_spin_weights'], 'nuclear spin weights are both 0: no rotational level would exist', {
+          value: rawSpin,
+          expected: 'at least one positive weight, e.g. {even: 1, odd: 3} for H2',
+        });
+      } else spin = { even: rawSpin.even as number, odd: rawSpin.odd as number };
+    }
+  }
+  const rawStates = input.electronic_states;
+  if (!Array.isArray(rawStates) || rawStates.length === 0) return { d0, spin };
+  const states = rawStates.map(readDiatomicState);
+  checkDiatomicLadders(ctx, states, d0);
+  if (states.every((s): s is DiatomicState => s !== undefined)) return { states, d0, spin };
+  return { d0, spin };
+}
+
+/**
+ * Validates and normalises one species document. Returns every error and warning of the document; `species`
+ * and `normalisedInput` only when there is no error.
+ */
+export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
+  const input = doc.value;
+  const name = isObj(input) && typeof input.name === 'string' ? input.name : undefined;
+  const schemaDiagnostics = checkAgainstSchema(validateAgainstSpeciesSchema, doc, name === undefined ? {} : { species: name });
+  if (!isObj(input)) return { diagnostics: schemaDiagnostics };
+
+  const f = new Findings(doc, name);
+  const structure = (['atom', 'diatomic', 'linear', 'nonlinear'] as const).find((s) => s === input.structure);
+  const ctx: Ctx = { f, input, structure, composition: undefined };
+  ctx.composition = readComposition(input.composition, f);
+  checkName(ctx);
+  checkComposition(ctx);
+  checkSources(ctx);
+  const enthalpy = readEnthalpy(ctx);
+  const temperatureRanges = readTemperatureRanges(ctx);
+  const sigma = isPositiveInteger(input.symmetry_number) ? input.symmetry_number : undefined;
+
+  let species: Species | undefined;
+  const canBuild = ctx.composition?.known === true && enthalpy !== undefined && name !== undefined && Array.isArray(input.sources);
+  const common = () => {
+    const comp = ctx.composition!;
+    const composition: Record<string, number> = {};
+    for (const s of comp.symbols) composition[s] = comp.counts[s]!;
+    const charge = (input.charge as number | undefined) ?? 0;
+    const base = {
+      name: name!,
+      composition,
+      charge,
+      molarMass: molarMass(composition, charge),
+      enthalpyOfFormation: enthalpy!,
+      sources: (input.sources as string[]).slice(),
+    };
+    return temperatureRanges ? { ...base, temperatureRanges } : base;
+  };
+
+  if (structure === 'atom') {
+    const electronicLevels = readElectronicLevels(ctx);
+    if (canBuild && electronicLevels) species = { ...common(), structure, electronicLevels } as Species;
+  } else if (structure === 'linear' || structure === 'nonlinear') {
+    if (sigma !== undefined) checkSymmetryNumber(ctx, sigma, false);
+    const electronicLevels = readElectronicLevels(ctx);
+    const { rotationalConstants, vibrations } = readPolyatomic(ctx);
+    if (canBuild && electronicLevels && rotationalConstants && vibrations && sigma !== undefined) {
+      const rc = structure === 'nonlinear' ? rotationalConstants.slice().sort((a, b) => b - a) : rotationalConstants;
+      species = { ...common(), structure, symmetryNumber: sigma, electronicLevels, rotationalConstants: rc, vibrations } as Species;
+    }
+  } else if (structure === 'diatomic') {
+    const { states, d0, spin } = readDiatomic(ctx);
+    if (sigma !== undefined) checkSymmetryNumber(ctx, sigma, spin !== undefined);
+    if (canBuild && states && d0 !== undefined && sigma !== undefined) {
+      const s: Species = { ...common(), structure, symmetryNumber: sigma, dissociationEnergy: d0, electronicStates: states };
+      if (spin) s.nuclearSpinWeights = spin;
+      species = s;
+    }
+  }
+
+  const diagnostics = [...schemaDiagnostics, ...f.diagnostics].sort(compareDiagnostics);
+  const failed = diagnostics.some((d) => d.severity === 'error');
+  if (failed || !species) {
+    if (!failed) {
+      // Defensive: normalisation could not complete although no check failed; never pass on a half species.
+      diagnostics.push({ severity: 'error', file: doc.file, path: '', message: 'species could not be normalised', species: name });
+    }
+    return { diagnostics };
+  }
+  return { species, diagnostics, normalisedInput: sortKeysDeep(species) };
+}
+
+export interface SpeciesSetEntry extends SpeciesValidation {
+  doc: LoadedDocument;
+}
+
+/**
+ * Record names must be unique in a database: reports every document whose name was already used (naming
+ * the first use's file and line), and warns about names that differ only in letter case, which readers of
+ * the 80-column format may not distinguish. Order-independent: documents are considered sorted by file and
+ * position.
+ */
+export function checkUniqueNames(docs: readonly LoadedDocument[]): Diagnostic[] {
+  return nameFindings(docs, true);
+}
+
+/** Only the errors of `checkUniqueNames`: one per document reusing a name (each names the first use). */
+export function findDuplicateNames(docs: readonly LoadedDocument[]): Diagnostic[] {
+  return nameFindings(docs, false);
+}
+
+function nameFindings(docs: readonly LoadedDocument[], withCaseWarnings: boolean): Diagnostic[] {
+  const out: Diagnostic[] = [];
+  const sorted = docs.slice().sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : a.index - b.index));
+  const exact = new Map<string, { doc: LoadedDocument; line?: number }>();
+  const folded = new Map<string, { doc: LoadedDocument; line?: number; name: string }>();
+  for (const doc of sorted) {
+    const name = isObj(doc.value) && typeof doc.value.name === 'string' ? doc.value.name : undefined;
+    if (name === undefined) continue;
+    const where = doc.locate(['name']);
+    const here = (d: Diagnostic): Diagnostic => {
+      if (where) {
+        d.line = where.line;
+        d.column = where.column;
+      }
+      return d;
+    };
+    const first = exact.get(name);
+    if (first) {
+      const at = `${first.doc.file}${first.line !== undefined ? `:${first.line}` : ''}`;
+      out.push(
+        here({
+          severity: 'error',
+          file: doc.file,
+          path: 'name',
+          species: name,
+          message: `duplicate species name '${name}', already defined at ${at}`,
+          value: name,
+          expected: 'a name unique in the database',
+        }),
+      );
+      continue;
+    }
+    exact.set(name, { doc, line: where?.line });
+    const lower = name.toLowerCase();
+    const twin = folded.get(lower);
+    if (twin && withCaseWarnings) {
+      const at = `${twin.doc.file}${twin.line !== undefined ? `:${twin.line}` : ''}`;
+      out.push(
+        here({
+          severity: 'warning',
+          file: doc.file,
+          path: 'name',
+          species: name,
+          message: `species name '${name}' differs only in letter case from '${twin.name}' at ${at}`,
+          value: name,
+          expected: 'names that differ in more than case (some readers ignore case)',
+        }),
+      );
+    } else folded.set(lower, { doc, line: where?.line, name });
+  }
+  return out;
+}
+
+/**
+ * Validates every document of a database and checks names across it. `results` are in the order of `docs`;
+ * `diagnostics` holds only the cross-document findings (duplicate names). A species whose name is a
+ * duplicate loses its `species` (the database would otherwise hold two records of one name).
+ */
+export function validateSpeciesSet(docs: readonly LoadedDocument[]): {
+  results: SpeciesSetEntry[];
+  diagnostics: Diagnostic[];
+} {
+  const results = docs.map((doc) => ({ doc, ...validateSpecies(doc) }));
+  const diagnostics = checkUniqueNames(docs);
+  for (const d of diagnostics) {
+    if (d.severity !== 'error') continue;
+    for (const r of results) {
+      if (r.doc.file === d.file && r.doc.locate(['name'])?.line === d.line && r.species?.name === d.species) {
+        delete r.species;
+        delete r.normalisedInput;
+      }
+    }
+  }
+  return { results, diagnostics };
+}

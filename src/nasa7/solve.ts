@@ -53,10 +53,8 @@ export function solveConstrainedLeastSquares(p: ConstrainedProblem): Constrained
 
   const colNorm = new Array<number>(n).fill(0);
   for (const row of p.rows) for (let j = 0; j < n; j++) colNorm[j] = Math.hypot(colNorm[j]!, row[j]!);
-  const emptyColumns = colNorm.flatMap((v, j) => (v === 0 ? [j] : []));
-  if (emptyColumns.length) {
-    throw new FitError(`design matrix has all-zero column(s) ${emptyColumns.join(', ')}: those coefficients are not determined by any sample (rank deficient)`);
-  }
+  // A column no sample touches (e.g. a6, a7 when the H and S weights are zero) can still be fixed by the
+  // constraints; whether the whole problem is determined shows in the reduced condition number.
   const scale = colNorm.map(powerOfTwoNear);
 
   const a = p.rows.map((row) => row.map((v, j) => v / scale[j]!));

@@ -1,0 +1,296 @@
+/**
+ * The command line. `main` parses the arguments with commander, runs one command and returns its exit
+ * code; it never calls process.exit (bin/qforge.js sets process.exitCode).
+ *
+ * Exit codes: 0 success; 1 input, species or check failures (the build, check, diff gate or compare
+ * found a problem); 2 usage errors (unknown option, bad option value, missing folder, an output folder
+ * qforge may not replace). Heavy modules are imported per command so start-up stays fast.
+ */
+import path from 'node:path';
+import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
+import type { Diagnostic } from './diagnostics.js';
+import type { TextSink } from './progress.js';
+
+export interface CliIo {
+  stdout: TextSink;
+  stderr: TextSink;
+  /** Folder relative paths are resolved against. */
+  cwd: string;
+  /** Whether stderr is a terminal (progress bar vs plain lines). */
+  isTTY: boolean;
+  env: Record<string, string | undefined>;
+}
+
+/** A usage problem found after parsing (e.g. a folder that does not exist): exit 2. */
+export class UsageError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = 'UsageError';
+  }
+}
+
+const EXAMPLES = {
+  build: `
+Examples:
+  qforge build                         build species/ into build/
+  qforge build mydb --out mydb-build   build another database folder
+  qforge build --keep-going --json     write the good species, print the summary as JSON
+  qforge build --no-cache --jobs 1     recompute everything, one species at a time
+
+Outputs (in OUT): thermo.json, nasa7.txt, tables/<name>.csv, summary.json (summary.json holds timings;
+the other files are byte-identical for identical inputs). OUT is replaced as a whole, atomically; the
+cache lives in .qforge-cache/ next to OUT.`,
+  check: `
+Examples:
+  qforge check                 check species/ (settings and every species file)
+  qforge check mydb --json     the diagnostics as JSON`,
+  table: `
+Examples:
+  qforge table species/n2.yaml
+  qforge table species/air.yaml --name O2 --at 298.15,1000,2000
+  qforge table species/h2o.yaml --range 200:6000:100 --format csv > h2o.csv`,
+  diff: `
+Examples:
+  qforge diff build-yesterday build
+  qforge diff old/nasa7.txt build --fail-above cp=0.05,h=0.1,s=0.05
+  qforge diff build-main build --json
+
+A species counts as "properties changed" when any of |dCp|, |dS| exceeds 0.001 J/(mol K) or |dH|
+exceeds 0.001 kJ/mol somewhere on the common range (10 K grid); otherwise only its coefficients moved.`,
+  compare: `
+Examples:
+  qforge compare build --reference janaf/n2.csv janaf/o2.csv
+  qforge compare build --reference tables.csv --tolerance cp=0.1,s=0.05,h=0.02
+  qforge compare build --database species      use references.files of species/qforge.yaml
+
+Reference CSV: one row per temperature; header names with units, e.g.
+  species,T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol]
+The species column is optional: without it the file name (without .csv) is the species name. Lines
+starting with '#' are comments. Units: J/(mol K), cal/(mol K) for Cp and S; kJ/mol, J/mol, kcal/mol for
+H-H298. An 80-column NASA file can also serve as the reference.`,
+};
+
+function positiveInt(value: string): number {
+  const n = Number(value);
+  if (!Number.isInteger(n) || n < 1 || n > 1024) throw new InvalidArgumentError('expected a whole number from 1 to 1024');
+  return n;
+}
+
+/** Parses `cp=0.1,h=0.2,s=0.3` (any subset). */
+export function parseTriple(value: string): { cp?: number; h?: number; s?: number } {
+  const out: { cp?: number; h?: number; s?: number } = {};
+  for (const part of value.split(',')) {
+    const m = /^\s*(cp|h|s)\s*=\s*([0-9.eE+-]+)\s*$/.exec(part);
+    const n = m ? Number(m[2]) : NaN;
+    if (!m || !Number.isFinite(n) || n <= 0) {
+      throw new InvalidArgumentError(`'${part}': expected cp=N, h=N or s=N with N > 0, comma separated`);
+    }
+    out[m[1] as 'cp' | 'h' | 's'] = n;
+  }
+  return out;
+}
+
+function printDiagnostics(io: CliIo, ds: readonly Diagnostic[], format: (d: Diagnostic) => string): void {
+  for (const d of ds) io.stderr.write(`${format(d)}\n`);
+}
+
+async function waitForTestPause(io: CliIo, where: string): Promise<void> {
+  if (io.env.QFORGE_TEST_PAUSE !== where) return;
+  io.stderr.write(`qforge: test pause ${where}\n`);
+  // Test hook only: hold still so a test can kill the process at this exact point.
+  await new Promise((r) => setTimeout(r, 60_000));
+}
+
+export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<number> {
+  const io: CliIo = {
+    stdout: ioIn?.stdout ?? process.stdout,
+    stderr: ioIn?.stderr ?? process.stderr,
+    cwd: ioIn?.cwd ?? process.cwd(),
+    isTTY: ioIn?.isTTY ?? Boolean(process.stderr.isTTY),
+    env: ioIn?.env ?? process.env,
+  };
+  const abs = (p: string) => path.resolve(io.cwd, p);
+  let exitCode = 0;
+
+  const program = new Command();
+  const { TOOL_VERSION } = await import('./version.js');
+  program
+    .name('qforge')
+    .description('Build checked ideal-gas thermochemistry databases (NASA 7-coefficient polynomials) from partition functions.')
+    .version(TOOL_VERSION)
+    .exitOverride()
+    .showHelpAfterError('(run with --help for usage)')
+    .configureOutput({ writeOut: (s) => io.stdout.write(s), writeErr: (s) => io.stderr.write(s) });
+
+  program
+    .command('build')
+    .description('load, validate, compute, fit, verify and emit a database folder')
+    .argument('[dir]', 'database folder (species files and qforge.yaml)', 'species')
+    .option('-o, --out <dir>', 'output folder', 'build')
+    .option('--no-cache', 'recompute and refit every species')
+    .option('--cache-dir <dir>', 'cache folder (default: .qforge-cache next to the output folder)')
+    .option('-k, --keep-going', 'write the species that succeeded even when others failed (exit code stays 1)')
+    .option('-j, --jobs <n>', 'species processed concurrently', positiveInt, 4)
+    .option('-q, --quiet', 'no progress output')
+    .option('--json', 'print the build summary as JSON on stdout')
+    .addHelpText('after', EXAMPLES.build)
+    .action(async (dir: string, o: { out: string; cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean }) => {
+      exitCode = await buildCommand(io, abs(dir), dir, abs(o.out), o.out, o);
+    });
+
+  program
+    .command('check')
+    .description('load and validate only: report every problem of every file at once')
+    .argument('[dir]', 'database folder', 'species')
+    .option('--json', 'print the diagnostics as JSON on stdout')
+    .addHelpText('after', EXAMPLES.check)
+    .action(async (dir: string, o: { json?: boolean }) => {
+      exitCode = await checkCommand(io, abs(dir), o);
+    });
+
+  program
+    .command('table')
+    .description("print one species' properties computed from its partition functions")
+    .argument('<file>', 'species YAML file')
+    .option('-n, --name <name>', 'species to print when the file holds several')
+    .option('--at <list>', 'comma-separated temperatures in K, e.g. 200,298.15,1000')
+    .option('--range <from:to:step>', 'temperature grid in K, e.g. 200:6000:100')
+    .addOption(new Option('--format <format>', 'output format').choices(['text', 'csv']).default('text'))
+    .addOption(new Option('--pressure <p>', 'standard pressure').choices(['bar', 'atm']).default('bar'))
+    .addHelpText('after', EXAMPLES.table)
+    .action(async (file: string, o: { name?: string; at?: string; range?: string; format: 'text' | 'csv'; pressure: 'bar' | 'atm' }) => {
+      const { tableCommand } = await import('./table.js');
+      exitCode = await tableCommand(io, abs(file), file, o);
+    });
+
+  program
+    .command('diff')
+    .description('what changed between two builds (or 80-column files): added, removed, changed species')
+    .argument('<old>', 'old build folder or 80-column file')
+    .argument('<new>', 'new build folder or 80-column file')
+    .option('--fail-above <limits>', 'exit 1 when a change exceeds these: cp=J/(mol K),h=kJ/mol,s=J/(mol K)', parseTriple)
+    .option('--fail-on-removed', 'exit 1 when a species was removed')
+    .option('--json', 'print the report as JSON on stdout')
+    .addHelpText('after', EXAMPLES.diff)
+    .action(async (oldPath: string, newPath: string, o: { failAbove?: { cp?: number; h?: number; s?: number }; failOnRemoved?: boolean; json?: boolean }) => {
+      const { diffCommand } = await import('./diff.js');
+      exitCode = await diffCommand(io, { old: abs(oldPath), new: abs(newPath), oldLabel: oldPath, newLabel: newPath }, o);
+    });
+
+  program
+    .command('compare')
+    .description('compare a build with reference tables (CSV) or 80-column files; exit 1 on a breach')
+    .argument('<build>', 'build folder (or an 80-column file)')
+    .option('-r, --reference <files...>', 'reference CSV tables or 80-column files')
+    .option('-d, --database <dir>', 'database folder whose qforge.yaml names references and tolerances')
+    .option('-t, --tolerance <limits>', 'largest accepted |deviation|: cp=J/(mol K),s=J/(mol K),h=kJ/mol', parseTriple)
+    .option('--json', 'print the report as JSON on stdout')
+    .addHelpText('after', EXAMPLES.compare)
+    .action(async (build: string, o: { reference?: string[]; database?: string; tolerance?: { cp?: number; h?: number; s?: number }; json?: boolean }) => {
+      const { compareCommand } = await import('./compare.js');
+      exitCode = await compareCommand(io, abs(build), build, {
+        ...o,
+        reference: o.reference?.map((r) => ({ path: abs(r), label: r })),
+        database: o.database ? abs(o.database) : undefined,
+      });
+    });
+
+  try {
+    await program.parseAsync(argv, { from: 'user' });
+    return exitCode;
+  } catch (e) {
+    if (e instanceof CommanderError) {
+      if (e.code === 'commander.helpDisplayed' || e.code === 'commander.version' || e.code === 'commander.help') return 0;
+      return 2;
+    }
+    if (e instanceof UsageError || (e as Error)?.name === 'OutputFolderError') {
+      io.stderr.write(`qforge: error: ${(e as Error).message}\n`);
+      return 2;
+    }
+    throw e;
+  }
+}
+
+async function assertFolder(p: string, label: string): Promise<void> {
+  const { stat } = await import('node:fs/promises');
+  try {
+    if (!(await stat(p)).isDirectory()) throw new UsageError(`${label} is not a folder`);
+  } catch (e) {
+    if (e instanceof UsageError) throw e;
+    throw new UsageError(`${label}: no such folder`);
+  }
+}
+
+async function buildCommand(
+  io: CliIo,
+  dir: string,
+  dirLabel: string,
+  out: string,
+  outLabel: string,
+  o: { cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean },
+): Promise<number> {
+  await assertFolder(dir, `database folder ${dirLabel}`);
+  const [{ runBuild }, { formatDiagnostic }, { createProgressReporter }, { assertReplaceable }] = await Promise.all([
+    import('./runner.js'),
+    import('./diagnostics.js'),
+    import('./progress.js'),
+    import('./atomic-write.js'),
+  ]);
+  await assertReplaceable(out);
+  const reporter = await createProgressReporter(io.stderr, { quiet: !!o.quiet, tty: io.isTTY });
+  let report;
+  try {
+    report = await runBuild({
+      dir,
+      out,
+      displayBase: io.cwd,
+      jobs: o.jobs,
+      keepGoing: !!o.keepGoing,
+      cacheDir: o.cache === false ? null : o.cacheDir ? path.resolve(io.cwd, o.cacheDir) : undefined,
+      onProgress: (e) => reporter.onProgress(e),
+      hooks: {
+        beforeSwap: () => waitForTestPause(io, 'before-swap'),
+        midSwap: () => waitForTestPause(io, 'mid-swap'),
+      },
+    });
+  } finally {
+    reporter.stop();
+  }
+  printDiagnostics(io, report.diagnostics, formatDiagnostic);
+  const s = report.summary as unknown as { counts: { species: number; ok: number; failed: number; cache_hits: number; files_failed: number } };
+  if (!o.quiet || report.exitCode !== 0) {
+    if (report.exitCode === 0) {
+      io.stderr.write(`qforge: built ${s.counts.ok} species into ${outLabel} (${s.counts.cache_hits} from the cache)\n`);
+    } else if (report.written) {
+      io.stderr.write(
+        `qforge: wrote ${s.counts.ok} species into ${outLabel}; FAILED: ${report.summary.species.filter((x) => x.status === 'failed').map((x) => x.name).join(', ') || '(none)'}` +
+          `${s.counts.files_failed ? `; ${s.counts.files_failed} file(s) with errors` : ''}\n`,
+      );
+    } else {
+      io.stderr.write(
+        `qforge: build failed (${s.counts.failed} species failed, ${s.counts.files_failed} file(s) with errors); ${outLabel} left unchanged\n`,
+      );
+    }
+  }
+  if (o.json) io.stdout.write(`${JSON.stringify(report.summary, null, 2)}\n`);
+  return report.exitCode;
+}
+
+async function checkCommand(io: CliIo, dir: string, o: { json?: boolean }): Promise<number> {
+  await assertFolder(dir, `database folder ${path.relative(io.cwd, dir) || '.'}`);
+  const [{ checkDatabase }, { formatDiagnostic, hasErrors }] = await Promise.all([import('./runner.js'), import('./diagnostics.js')]);
+  const report = await checkDatabase({ dir, displayBase: io.cwd });
+  printDiagnostics(io, report.diagnostics, formatDiagnostic);
+  const errors = report.diagnostics.filter((d) => d.severity === 'error').length;
+  const warnings = report.diagnostics.length - errors;
+  io.stderr.write(
+    `qforge: checked ${report.species.length} species in ${report.files.length} file(s): ` +
+      (errors ? `${errors} error(s), ${warnings} warning(s)\n` : `no errors${warnings ? `, ${warnings} warning(s)` : ''}\n`),
+  );
+  if (o.json) {
+    io.stdout.write(
+      `${JSON.stringify({ species: report.species.map((s) => ({ name: s.name, file: s.file })), diagnostics: report.diagnostics }, null, 2)}\n`,
+    );
+  }
+  return hasErrors(report.diagnostics) ? 1 : 0;
+}

@@ -1,0 +1,272 @@
+/**
+ * Stage "emit": renders the database files from the built species and writes them atomically (see
+ * atomic-write.ts). Rendering is pure and deterministic: species sorted by name (code-point order), numbers
+ * printed by JavaScript's shortest round-trip form in JSON and by fixed decimals in CSV, no dates.
+ *
+ *   thermo.json        the database (schemas/database.schema.json), validated before it is written
+ *   nasa7.txt          the four-line 80-column records, caution comment lines ('!') on top
+ *   tables/<name>.csv  computed and fitted values and their difference on the table grid
+ *   summary.json       the build report (schemas/summary.schema.json); holds timings, so it is the one
+ *                      output that differs from run to run
+ */
+import { Ajv2020 } from 'ajv/dist/2020.js';
+import { writeToString } from 'fast-csv';
+import databaseSchema from '../schemas/database.schema.json' with { type: 'json' };
+import settingsSchema from '../schemas/settings.schema.json' with { type: 'json' };
+import summarySchema from '../schemas/summary.schema.json' with { type: 'json' };
+import { GAS_CONSTANT, T_REF } from '../src/constants.js';
+import type { Species, StandardProperties } from '../src/model.js';
+import { evaluateNasa7 } from '../src/nasa7/evaluate.js';
+import { formatNasa7File } from '../src/nasa7/format.js';
+import type { FitMetrics, FitResult, Nasa7Polynomial, Nasa7Record, RangeMetrics } from '../src/nasa7/types.js';
+import type { ComputedSpecies } from './compute.js';
+import type { DatabaseSettings } from './settings.js';
+import { standardPressurePa } from './settings.js';
+import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './version.js';
+
+export const CAUTION =
+  'CAUTION: these polynomials are valid only inside the temperature range they were fitted on; outside it ' +
+  'they are extrapolations and may be badly wrong. The data come from statistical-mechanics models and the ' +
+  'input constants named in each species\' sources; verify them against reference data (e.g. NIST-JANAF) ' +
+  'before use, and defer to qualified review and the applicable codes and standards for any ' +
+  'safety-relevant design decision.';
+
+/** Everything emit needs about one successfully built species. */
+export interface BuiltSpecies {
+  name: string;
+  /** Species file relative to the database folder (display form). */
+  file: string;
+  species: Species;
+  /** 'sha256:<hex>' of the species' normalised input. */
+  inputHash: string;
+  computed: ComputedSpecies;
+  fit: FitResult;
+  /** Computed properties on the table grid (empty when tables are not written). */
+  table: StandardProperties[];
+}
+
+/** Code-point order (not locale order), so that the output never depends on the machine's locale. */
+export const byName = (a: { name: string }, b: { name: string }): number => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0);
+
+// ---------------------------------------------------------------------------------------------------------
+// File names
+
+const SAFE_CHAR = /[A-Za-z0-9._+(),-]/;
+
+/**
+ * Maps a species name to a file name that can only name a file directly inside the tables folder:
+ * characters outside [A-Za-z0-9._+(),-] and leading dots are percent-encoded (so `..`, `../x` or `a/b`
+ * cannot climb out), and the mapping is one-to-one because '%' itself is encoded.
+ */
+export function speciesFileStem(name: string): string {
+  let out = '';
+  let leading = true;
+  for (const ch of name) {
+    const encode = !SAFE_CHAR.test(ch) || (leading && ch === '.');
+    if (ch !== '.') leading = false;
+    out += encode ? [...Buffer.from(ch, 'utf8')].map((b) => `%${b.toString(16).toUpperCase().padStart(2, '0')}`).join('') : ch;
+  }
+  return out || '%00';
+}
+
+/**
+ * Table file names of all species: the stem plus `.csv`; names that would collide on a case-insensitive
+ * file system (e.g. CO and Co) get a short hash of the exact name appended, the first in name order keeps
+ * the plain form.
+ */
+export function tableFileNames(names: readonly string[], hash: (s: string) => string): Map<string, string> {
+  const taken = new Set<string>();
+  const out = new Map<string, string>();
+  for (const name of [...names].sort()) {
+    let stem = speciesFileStem(name);
+    if (taken.has(stem.toLowerCase())) stem = `${stem}_${hash(name).slice(0, 8)}`;
+    taken.add(stem.toLowerCase());
+    out.set(name, `tables/${stem}.csv`);
+  }
+  return out;
+}
+
+// ---------------------------------------------------------------------------------------------------------
+// thermo.json
+
+function rangeMetricsJson(m: RangeMetrics) {
+  return { points: m.points, max_abs: { ...m.maxAbs }, rms: { ...m.rms }, t_at_max: { ...m.tAtMax } };
+}
+
+export function fitMetricsJson(m: FitMetrics) {
+  return {
+    low: rangeMetricsJson(m.low),
+    high: rangeMetricsJson(m.high),
+    continuity: { ...m.continuity },
+    anchor: { ...m.anchor },
+  };
+}
+
+function speciesJson(b: BuiltSpecies) {
+  const p = b.fit.polynomial;
+  return {
+    name: b.name,
+    file: b.file,
+    composition: { ...b.species.composition },
+    charge: b.species.charge,
+    phase: 'G',
+    molar_mass_g_per_mol: b.species.molarMass,
+    temperature_ranges: { low: p.tLow, mid: p.tMid, high: p.tHigh },
+    coefficients: { low: [...p.low], high: [...p.high] },
+    at_298_15: {
+      enthalpy_of_formation_kJ_per_mol: b.computed.enthalpyOfFormation298 / 1000,
+      entropy_J_per_mol_K: b.computed.at298.S,
+      heat_capacity_J_per_mol_K: b.computed.at298.Cp,
+      h298_minus_h0_kJ_per_mol: b.computed.h298MinusH0 / 1000,
+    },
+    fit_metrics: fitMetricsJson(b.fit.metrics),
+    model: {
+      structure: b.computed.summary.structure,
+      contributions: [...b.computed.summary.contributions],
+      options: { ...b.computed.summary.options },
+      notes: [...b.computed.summary.notes],
+    },
+    input_hash: b.inputHash,
+    sources: [...b.species.sources],
+  };
+}
+
+export function databaseJson(species: readonly BuiltSpecies[], settings: DatabaseSettings) {
+  return {
+    format: 'qforge-database/1',
+    tool: { name: TOOL_NAME, version: TOOL_VERSION },
+    constants_edition: CONSTANTS_EDITION,
+    standard_pressure: { label: settings.standard_pressure, pascal: standardPressurePa(settings.standard_pressure) },
+    title: settings.title,
+    caution: CAUTION,
+    build_settings: settings,
+    species: [...species].sort(byName).map(speciesJson),
+  };
+}
+
+let validators: { database: ReturnType<Ajv2020['compile']>; summary: ReturnType<Ajv2020['compile']> } | undefined;
+function outputValidators() {
+  if (!validators) {
+    const ajv = new Ajv2020({ allErrors: true, strict: false });
+    ajv.addSchema(settingsSchema);
+    validators = { database: ajv.compile(databaseSchema), summary: ajv.compile(summarySchema) };
+  }
+  return validators;
+}
+
+/** Thrown when a rendered output does not match its own schema: a bug, never written to disk. */
+export class OutputSchemaError extends Error {
+  constructor(file: string, errors: unknown) {
+    super(`${file} does not match its schema (not written): ${JSON.stringify(errors).slice(0, 2000)}`);
+    this.name = 'OutputSchemaError';
+  }
+}
+
+export function validateDatabaseJson(value: unknown): void {
+  const v = outputValidators().database;
+  if (!v(value)) throw new OutputSchemaError('thermo.json', v.errors);
+}
+
+export function validateSummaryJson(value: unknown): void {
+  const v = outputValidators().summary;
+  if (!v(value)) throw new OutputSchemaError('summary.json', v.errors);
+}
+
+export const jsonText = (value: unknown): string => `${JSON.stringify(value, null, 2)}\n`;
+
+// ---------------------------------------------------------------------------------------------------------
+// nasa7.txt
+
+/** Element/count pairs of the 80-column record: the composition, plus the electron for ions. */
+export function recordElements(species: Species): Array<[string, number]> {
+  const pairs: Array<[string, number]> = Object.entries(species.composition);
+  if (species.charge !== 0) pairs.push(['E', -species.charge]);
+  return pairs;
+}
+
+export function nasa7Record(b: BuiltSpecies, identifier: string): Nasa7Record {
+  return { name: b.name, identifier, elements: recordElements(b.species), phase: 'G', polynomial: b.fit.polynomial };
+}
+
+/** '!' comment lines written above the records. */
+export function nasa7CautionLines(settings: DatabaseSettings): string[] {
+  const words = `${settings.title} -- written by ${TOOL_NAME} ${TOOL_VERSION} (${CONSTANTS_EDITION}, standard pressure ${settings.standard_pressure}). ${CAUTION}`.split(/\s+/);
+  const lines: string[] = [];
+  let line = '!';
+  for (const w of words) {
+    if (line.length + 1 + w.length > 79 && line !== '!') {
+      lines.push(line);
+      line = '!';
+    }
+    line += ` ${w}`;
+  }
+  if (line !== '!') lines.push(line);
+  return lines;
+}
+
+/** The whole nasa7.txt: caution lines, then the formatter's header, records and terminator. */
+export function renderNasa7(species: readonly BuiltSpecies[], settings: DatabaseSettings): string {
+  const records = [...species].sort(byName).map((b) => nasa7Record(b, settings.record_identifier));
+  const { low, mid, high } = settings.temperature_ranges;
+  const body = formatNasa7File(records, { tLow: low, tMid: mid, tHigh: high });
+  return `${nasa7CautionLines(settings).join('\n')}\n${body}${body.endsWith('\n') ? '' : '\n'}`;
+}
+
+// ---------------------------------------------------------------------------------------------------------
+// tables/<name>.csv
+
+export const TABLE_HEADERS = [
+  'T [K]',
+  'Cp computed [J/(mol K)]',
+  'Cp fitted [J/(mol K)]',
+  'Cp fitted-computed [J/(mol K)]',
+  'S computed [J/(mol K)]',
+  'S fitted [J/(mol K)]',
+  'S fitted-computed [J/(mol K)]',
+  'H-H298 computed [kJ/mol]',
+  'H-H298 fitted [kJ/mol]',
+  'H-H298 fitted-computed [kJ/mol]',
+  'H computed [kJ/mol]',
+  'H fitted [kJ/mol]',
+  'H fitted-computed [kJ/mol]',
+  'G computed [kJ/mol]',
+  'G fitted [kJ/mol]',
+  'G fitted-computed [kJ/mol]',
+] as const;
+
+/** Fixed decimals, never "-0.000". */
+export function fixed(x: number, decimals: number): string {
+  const s = x.toFixed(decimals);
+  return /^-0\.?0*$/.test(s) ? s.slice(1) : s;
+}
+
+/** Fitted properties in table units at T (K). */
+export function fittedProperties(poly: Nasa7Polynomial, T: number): { Cp: number; S: number; H: number; HminusH298: number; G: number } {
+  const R = GAS_CONSTANT;
+  const v = evaluateNasa7(poly, T);
+  const ref = evaluateNasa7(poly, T_REF);
+  const H = (v.hRT * R * T) / 1000;
+  const H298 = (ref.hRT * R * T_REF) / 1000;
+  const S = v.sR * R;
+  return { Cp: v.cpR * R, S, H, HminusH298: H - H298, G: H - (T * S) / 1000 };
+}
+
+export function tableRows(b: BuiltSpecies): string[][] {
+  return b.table.map((c) => {
+    const f = fittedProperties(b.fit.polynomial, c.T);
+    const triple = (computed: number, fitted: number, d: number) => [fixed(computed, d), fixed(fitted, d), fixed(fitted - computed, d)];
+    return [
+      String(c.T),
+      ...triple(c.Cp, f.Cp, 4),
+      ...triple(c.S, f.S, 4),
+      ...triple(c.HminusH298, f.HminusH298, 5),
+      ...triple(c.H, f.H, 5),
+      ...triple(c.G, f.G, 5),
+    ];
+  });
+}
+
+export async function renderTable(b: BuiltSpecies): Promise<string> {
+  const text = await writeToString([[...TABLE_HEADERS], ...tableRows(b)], { headers: false, rowDelimiter: '\n' });
+  return `${text}\n`;
+}

@@ -1,0 +1,37 @@
+/**
+ * Content hashing for the cache and for the per-species input hash in thermo.json.
+ *
+ * Canonical JSON: object keys sorted, `undefined` members dropped, numbers as JavaScript prints them
+ * (shortest round-trip form, so equal doubles always give equal text). Two inputs that differ only in key
+ * order or YAML layout therefore hash the same.
+ */
+import { createHash } from 'node:crypto';
+
+/** Deterministic JSON text of a JSON-like value (sorted keys; arrays keep their order). */
+export function canonicalJson(value: unknown): string {
+  return JSON.stringify(sortKeys(value));
+}
+
+function sortKeys(value: unknown): unknown {
+  if (Array.isArray(value)) return value.map((v) => (v === undefined ? null : sortKeys(v)));
+  if (value !== null && typeof value === 'object') {
+    const out: Record<string, unknown> = {};
+    for (const k of Object.keys(value as Record<string, unknown>).sort()) {
+      const v = (value as Record<string, unknown>)[k];
+      if (v !== undefined) out[k] = sortKeys(v);
+    }
+    return out;
+  }
+  if (typeof value === 'number' && Object.is(value, -0)) return 0;
+  return value;
+}
+
+/** sha256 of a string or bytes, lower-case hex. */
+export function sha256Hex(data: string | Uint8Array): string {
+  return createHash('sha256').update(data).digest('hex');
+}
+
+/** sha256 of the canonical JSON of `parts` (an array so that the order of the parts matters). */
+export function hashParts(...parts: unknown[]): string {
+  return sha256Hex(canonicalJson(parts));
+}

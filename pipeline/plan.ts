@@ -1,0 +1,63 @@
+/**
+ * The per-species plan: everything a species' compute, fit, verify and table stages depend on, derived
+ * once from the database settings and the species' own overrides. Each stage's cache key is a hash of
+ * exactly the part of the plan it reads, so a changed setting invalidates only what it affects:
+ *   compute ← input, physics options, sampling grid
+ *   fit     ← compute key, fit options
+ *   table   ← input, physics options, table grid
+ *   verify  ← tolerances (cheap; never cached)
+ */
+import { T_REF } from '../src/constants.js';
+import type { PhysicsOptions, Species } from '../src/model.js';
+import type { PartialFitOptions } from '../src/nasa7/options.js';
+import type { DatabaseSettings, QuantityTriple } from './settings.js';
+import { standardPressurePa } from './settings.js';
+
+export interface SpeciesPlan {
+  ranges: { low: number; mid: number; high: number };
+  physics: PhysicsOptions;
+  /** Temperatures (K) of the computed points the fit uses, ascending, 298.15 and the midpoint included. */
+  sampleTemperatures: number[];
+  fitOptions: PartialFitOptions;
+  tolerances: QuantityTriple;
+  /** Temperatures (K) of tables/<name>.csv, inside the species' range, ascending. */
+  tableTemperatures: number[];
+}
+
+/** Rounded to 1e-6 K so that low + k·step does not carry binary noise into keys or tables. */
+const tidy = (t: number): number => Math.round(t * 1e6) / 1e6;
+
+/** low, low+step, …, high, plus the extras, inside [low, high], ascending, distinct. */
+export function temperatureGrid(low: number, high: number, step: number, extra: readonly number[] = []): number[] {
+  const set = new Set<number>();
+  const n = Math.floor((high - low) / step + 1e-9);
+  for (let k = 0; k <= n; k++) set.add(tidy(low + k * step));
+  set.add(tidy(high));
+  for (const t of extra) if (t >= low && t <= high) set.add(tidy(t));
+  return [...set].filter((t) => t >= low && t <= high).sort((a, b) => a - b);
+}
+
+export function planSpecies(species: Species, settings: DatabaseSettings): SpeciesPlan {
+  const o = species.temperatureRanges ?? {};
+  const ranges = {
+    low: o.low ?? settings.temperature_ranges.low,
+    mid: o.mid ?? settings.temperature_ranges.mid,
+    high: o.high ?? settings.temperature_ranges.high,
+  };
+  const physics: PhysicsOptions = { standardPressure: standardPressurePa(settings.standard_pressure) };
+  const sampleTemperatures = temperatureGrid(ranges.low, ranges.high, settings.fit.sampling_step, [ranges.mid, T_REF]);
+  const fitOptions: PartialFitOptions = {
+    tLow: ranges.low,
+    tMid: ranges.mid,
+    tHigh: ranges.high,
+    weights: { ...settings.fit.weights },
+    continuityOrder: settings.fit.continuity_order,
+    anchorT: T_REF,
+  };
+  if (settings.fit.optimise_mid !== false) fitOptions.optimiseMid = { ...settings.fit.optimise_mid };
+  const t = settings.tables;
+  const tableTemperatures = [...new Set([...temperatureGrid(t.from, t.to, t.step), ...t.extra.map(tidy)])]
+    .filter((x) => x >= ranges.low && x <= ranges.high)
+    .sort((a, b) => a - b);
+  return { ranges, physics, sampleTemperatures, fitOptions, tolerances: { ...settings.tolerances }, tableTemperatures };
+}

@@ -1,0 +1,501 @@
+/**
+ * The build runner: composes the stages load → validate → compute → fit → verify → emit for a database
+ * folder and returns a report; it never prints and never exits (the CLI does both).
+ *
+ * Concurrency: file loading and the per-species stages run under p-limit(jobs). The per-species work is a
+ * pure function of the species and its plan (no shared mutable state); results are collected into a map
+ * and emitted in name order, so the outputs do not depend on `jobs` or on the order of completion.
+ */
+import path from 'node:path';
+import pLimit from 'p-limit';
+import type { Species, StandardProperties } from '../src/model.js';
+import { Nasa7FormatError } from '../src/nasa7/errors.js';
+import type { FitOptions, FitResult } from '../src/nasa7/types.js';
+import { recoverOutputDir, publishDirectory, type PublishHooks } from './atomic-write.js';
+import { cached, StageCache, type CacheKind, type CacheOutcome } from './cache.js';
+import { computeSamples, computeTable, type ComputedSpecies } from './compute.js';
+import { compareDiagnostics, formatDiagnostic, hasErrors, type Diagnostic } from './diagnostics.js';
+import {
+  byName,
+  databaseJson,
+  jsonText,
+  renderNasa7,
+  renderTable,
+  tableFileNames,
+  validateDatabaseJson,
+  validateSummaryJson,
+  type BuiltSpecies,
+} from './emit.js';
+import { fitOptionsFor, fitSpecies } from './fit.js';
+import { canonicalJson, hashParts, sha256Hex } from './hash.js';
+import { discoverSpeciesFiles, loadYamlFile, type LoadedDocument } from './load.js';
+import { planSpecies, type SpeciesPlan } from './plan.js';
+import { loadSettings, type DatabaseSettings } from './settings.js';
+import { checkUniqueNames, validateSpecies } from './validate.js';
+import { verifySpecies } from './verify.js';
+import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './version.js';
+
+export type StageName = 'load' | 'validate' | 'compute' | 'fit' | 'verify' | 'emit';
+
+export type ProgressEvent =
+  | { kind: 'stage'; stage: StageName; detail?: string }
+  | { kind: 'species-start'; total: number }
+  | { kind: 'species-done'; name: string; ok: boolean; cacheHit: boolean; done: number; total: number }
+  | { kind: 'note'; message: string };
+
+export interface CheckOptions {
+  /** Database folder. */
+  dir: string;
+  /** Diagnostics name files relative to this folder (the user's working folder). Default: as found. */
+  displayBase?: string;
+  /** Concurrency of file loading (default 8). */
+  jobs?: number;
+}
+
+export interface BuildOptions extends CheckOptions {
+  out: string;
+  /** Cache folder; null disables the cache. Default: `.qforge-cache` next to `out`. */
+  cacheDir?: string | null;
+  keepGoing?: boolean;
+  onProgress?: (e: ProgressEvent) => void;
+  hooks?: PublishHooks;
+}
+
+/** One species document that passed validation. */
+export interface ValidSpecies {
+  name: string;
+  /** Species file relative to the database folder (written into thermo.json). */
+  file: string;
+  /** Species file as shown in messages. */
+  displayFile: string;
+  species: Species;
+  normalisedInput: unknown;
+  loadMs: number;
+  validateMs: number;
+}
+
+export interface CheckReport {
+  settings: DatabaseSettings;
+  settingsOk: boolean;
+  files: string[];
+  species: ValidSpecies[];
+  /** All diagnostics (settings, files, species), sorted. */
+  diagnostics: Diagnostic[];
+  /** Diagnostics per file, for the summary. */
+  fileDiagnostics: Map<string, Diagnostic[]>;
+  /** Files in which at least one species document failed validation or the file itself failed. */
+  failedFiles: Set<string>;
+  timings: { load: number; validate: number };
+}
+
+/** Load and validate a database folder: every problem of every file at once. */
+export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
+  const dir = opts.dir;
+  const limit = pLimit(Math.max(1, opts.jobs ?? 8));
+  const t0 = performance.now();
+  const settingsResult = await loadSettings(dir, dir);
+  const discovered = await discoverSpeciesFiles(dir);
+  const diagnostics: Diagnostic[] = [...settingsResult.diagnostics, ...discovered.diagnostics];
+  const fileDiagnostics = new Map<string, Diagnostic[]>();
+  const failedFiles = new Set<string>();
+  const addFileDiag = (d: Diagnostic) => {
+    const list = fileDiagnostics.get(d.file) ?? [];
+    list.push(d);
+    fileDiagnostics.set(d.file, list);
+    if (d.severity === 'error') failedFiles.add(d.file);
+  };
+  discovered.diagnostics.forEach(addFileDiag);
+
+  const displayOf = (f: string) => (path.relative(dir, f) || f).split(path.sep).join('/');
+  const show = (f: string) => (opts.displayBase && path.isAbsolute(f) ? path.relative(opts.displayBase, f) || f : f);
+  let validateTotal = 0;
+  const perFile = await Promise.all(
+    discovered.files.map((f) =>
+      limit(async () => {
+        const tl = performance.now();
+        const loaded = await loadYamlFile(f, f);
+        const loadMs = performance.now() - tl;
+        const results = loaded.documents.map((doc: LoadedDocument) => {
+          const tv = performance.now();
+          const r = validateSpecies(doc);
+          const ms = performance.now() - tv;
+          validateTotal += ms;
+          return { doc, r, ms };
+        });
+        return { file: f, loaded, results, loadMs };
+      }),
+    ),
+  );
+  const tLoad = performance.now() - t0 - validateTotal;
+
+  const valid: Array<{ doc: LoadedDocument; v: ValidSpecies }> = [];
+  for (const { file, loaded, results, loadMs } of perFile) {
+    loaded.diagnostics.forEach(addFileDiag);
+    diagnostics.push(...loaded.diagnostics);
+    if (loaded.documents.length === 0 && !hasErrors(loaded.diagnostics)) {
+      const d: Diagnostic = { severity: 'warning', file, path: '', message: 'file holds no species' };
+      diagnostics.push(d);
+      addFileDiag(d);
+    }
+    const n = Math.max(1, results.length);
+    for (const { doc, r, ms: vms } of results) {
+      diagnostics.push(...r.diagnostics);
+      r.diagnostics.forEach(addFileDiag);
+      if (r.species && !hasErrors(r.diagnostics)) {
+        valid.push({
+          doc,
+          v: {
+            name: r.species.name,
+            file: displayOf(file),
+            displayFile: show(file),
+            species: r.species,
+            normalisedInput: r.normalisedInput ?? r.species,
+            loadMs: loadMs / n,
+            validateMs: vms,
+          },
+        });
+      }
+    }
+  }
+  // Names must be unique across the database: the later duplicates fail (validate.ts names the first use).
+  const dup = checkUniqueNames(perFile.flatMap((p) => p.results.map((x) => x.doc)));
+  diagnostics.push(...dup);
+  dup.forEach(addFileDiag);
+  const species: ValidSpecies[] = valid
+    .filter(
+      ({ doc, v }) =>
+        !dup.some((d) => d.severity === 'error' && d.file === doc.file && d.species === v.name && doc.locate(['name'])?.line === d.line),
+    )
+    .map(({ v }) => v);
+  if (discovered.files.length === 0 && !hasErrors(discovered.diagnostics)) {
+    diagnostics.push({
+      severity: 'error',
+      file: dir,
+      path: '',
+      message: 'no species files (*.yaml, *.yml) in the database folder',
+      expected: 'at least one species file',
+    });
+  }
+  species.sort(byName);
+  for (const d of diagnostics) d.file = show(d.file);
+  diagnostics.sort(compareDiagnostics);
+  return {
+    settings: settingsResult.settings,
+    settingsOk: !hasErrors(settingsResult.diagnostics),
+    files: discovered.files,
+    species,
+    diagnostics,
+    fileDiagnostics,
+    failedFiles,
+    timings: { load: tLoad, validate: validateTotal },
+  };
+}
+
+// ---------------------------------------------------------------------------------------------------------
+
+export interface SpeciesOutcome {
+  valid: ValidSpecies;
+  built?: BuiltSpecies;
+  diagnostics: Diagnostic[];
+  cache: Partial<Record<CacheKind, CacheOutcome>>;
+  cacheNotes: string[];
+  timings: Record<string, number>;
+}
+
+/** Cache keys of one species' stages; see plan.ts for what each depends on. */
+export function stageKeys(inputHash: string, species: Species, plan: SpeciesPlan, fitOptions: FitOptions) {
+  const base = [TOOL_NAME, TOOL_VERSION, CONSTANTS_EDITION, inputHash, species, plan.physics];
+  const samples = hashParts('samples', ...base, plan.sampleTemperatures);
+  return {
+    samples,
+    fit: hashParts('fit', TOOL_NAME, TOOL_VERSION, samples, fitOptions),
+    table: hashParts('table', ...base, plan.tableTemperatures),
+  };
+}
+
+const errorText = (e: unknown): string => (e instanceof Error ? e.message : String(e));
+
+/** compute → fit → verify (and the table points) of one species, through the cache. */
+export async function buildOneSpecies(
+  v: ValidSpecies,
+  settings: DatabaseSettings,
+  cache: StageCache,
+): Promise<SpeciesOutcome> {
+  const out: SpeciesOutcome = {
+    valid: v,
+    diagnostics: [],
+    cache: {},
+    cacheNotes: [],
+    timings: { load: v.loadMs, validate: v.validateMs },
+  };
+  const where = { file: v.displayFile, species: v.name };
+  const fail = (pathText: string, message: string) =>
+    out.diagnostics.push({ severity: 'error', ...where, path: pathText, message });
+  const note = (kind: CacheKind, r: { outcome: CacheOutcome; reason?: string }) => {
+    out.cache[kind] = r.outcome;
+    if (r.outcome === 'corrupt') out.cacheNotes.push(`cache entry for ${kind} rejected (${r.reason}); recomputed`);
+  };
+
+  const plan = planSpecies(v.species, settings);
+  let fitOptions: FitOptions;
+  try {
+    fitOptions = fitOptionsFor(plan.fitOptions);
+  } catch (e) {
+    fail('temperature_ranges', `fit options: ${errorText(e)}`);
+    return out;
+  }
+  const inputHash = `sha256:${sha256Hex(canonicalJson(v.normalisedInput))}`;
+  const keys = stageKeys(inputHash, v.species, plan, fitOptions);
+
+  let computed: ComputedSpecies;
+  try {
+    const r = await cached(cache, 'samples', keys.samples, () => computeSamples(v.species, plan.physics, plan.sampleTemperatures));
+    note('samples', r);
+    out.timings.compute = r.ms;
+    computed = r.value;
+  } catch (e) {
+    fail('', `computing the properties failed: ${errorText(e)}`);
+    return out;
+  }
+
+  let fit: FitResult;
+  try {
+    const r = await cached(cache, 'fit', keys.fit, () => fitSpecies(computed, fitOptions));
+    note('fit', r);
+    out.timings.fit = r.ms;
+    fit = r.value;
+  } catch (e) {
+    fail('fit', `the fit failed: ${errorText(e)}`);
+    return out;
+  }
+
+  const tv = performance.now();
+  const violations = verifySpecies(fit, computed.samples, plan.tolerances, fitOptions.continuityOrder, where);
+  out.timings.verify = performance.now() - tv;
+  if (violations.length) {
+    out.diagnostics.push(...violations);
+    return out;
+  }
+
+  let table: StandardProperties[] = [];
+  if (settings.outputs.tables) {
+    try {
+      const r = await cached(cache, 'table', keys.table, () => computeTable(v.species, plan.physics, plan.tableTemperatures));
+      note('table', r);
+      out.timings.table = r.ms;
+      table = r.value;
+    } catch (e) {
+      fail('', `computing the table failed: ${errorText(e)}`);
+      return out;
+    }
+  }
+  out.built = { name: v.name, file: v.file, species: v.species, inputHash, computed, fit, table };
+  return out;
+}
+
+// ---------------------------------------------------------------------------------------------------------
+
+export interface BuildReport {
+  exitCode: 0 | 1;
+  written: boolean;
+  summary: Summary;
+  diagnostics: Diagnostic[];
+  notes: string[];
+}
+
+export type Summary = Record<string, unknown> & {
+  status: 'ok' | 'failed' | 'partial';
+  written: boolean;
+  species: SummarySpecies[];
+};
+
+interface SummarySpecies {
+  name: string;
+  file: string;
+  status: 'ok' | 'failed';
+  warnings: string[];
+  errors: string[];
+  cache: Partial<Record<CacheKind, CacheOutcome>>;
+  cache_hit: boolean;
+  fit_metrics?: { max_abs_cp: number; max_abs_h: number; max_abs_s: number; t_mid: number };
+  timings_ms: Record<string, number>;
+}
+
+const ms = (x: number) => Math.round(x * 1000) / 1000;
+
+/** Runs a whole build. Writes OUT only when the build may be published (see the module comment of cli). */
+export async function runBuild(opts: BuildOptions): Promise<BuildReport> {
+  const t0 = performance.now();
+  const progress = opts.onProgress ?? (() => {});
+  const notes = await recoverOutputDir(opts.out);
+  for (const n of notes) progress({ kind: 'note', message: n });
+
+  progress({ kind: 'stage', stage: 'load' });
+  const check = await checkDatabase(opts);
+  progress({ kind: 'stage', stage: 'validate', detail: `${check.species.length} species in ${check.files.length} files` });
+  const settings = check.settings;
+  const cacheDir =
+    opts.cacheDir === null ? undefined : (opts.cacheDir ?? path.join(path.dirname(path.resolve(opts.out)), '.qforge-cache'));
+  const cache = new StageCache(cacheDir);
+
+  const limit = pLimit(Math.max(1, opts.jobs ?? 8));
+  const total = check.species.length;
+  let done = 0;
+  const outcomes = new Map<string, SpeciesOutcome>();
+  const tStages = performance.now();
+  if (check.settingsOk) {
+    progress({ kind: 'stage', stage: 'compute', detail: 'compute, fit and verify per species' });
+    progress({ kind: 'species-start', total });
+    await Promise.all(
+      check.species.map((v) =>
+        limit(async () => {
+          // Yield between species so progress output and signals are handled during long builds.
+          await new Promise((r) => setImmediate(r));
+          const o = await buildOneSpecies(v, settings, cache);
+          outcomes.set(v.name, o);
+          done++;
+          const hit = isCacheHit(o);
+          progress({ kind: 'species-done', name: v.name, ok: !!o.built, cacheHit: hit, done, total });
+        }),
+      ),
+    );
+  }
+  const stagesMs = performance.now() - tStages;
+
+  // Emit: render everything in name order. A record the 80-column layout cannot hold fails its species.
+  progress({ kind: 'stage', stage: 'emit' });
+  const tEmit = performance.now();
+  const ordered = [...outcomes.values()].sort((a, b) => byName(a.valid, b.valid));
+  let good = ordered.filter((o) => o.built).map((o) => o.built as BuiltSpecies);
+  let nasa7Text = '';
+  if (settings.outputs.nasa7) {
+    for (;;) {
+      try {
+        nasa7Text = renderNasa7(good, settings);
+        break;
+      } catch (e) {
+        if (!(e instanceof Nasa7FormatError) || !e.record || !good.some((g) => g.name === e.record)) throw e;
+        const o = outcomes.get(e.record)!;
+        o.diagnostics.push({
+          severity: 'error',
+          file: o.valid.displayFile,
+          species: o.valid.name,
+          path: e.field,
+          message: `cannot be written as an 80-column record: ${e.message}`,
+        });
+        delete o.built;
+        good = good.filter((g) => g.name !== e.record);
+      }
+    }
+  }
+
+  const speciesDiagnostics = ordered.flatMap((o) => o.diagnostics);
+  const allDiagnostics = [...check.diagnostics, ...speciesDiagnostics].sort(compareDiagnostics);
+  const failedSpecies = ordered.filter((o) => !o.built);
+  const anyError = !check.settingsOk || hasErrors(allDiagnostics);
+  const mayWrite = check.settingsOk && (!anyError || opts.keepGoing === true) && check.files.length > 0;
+  const status: Summary['status'] = !anyError ? 'ok' : mayWrite ? 'partial' : 'failed';
+
+  const files = new Map<string, string>();
+  const outputs: string[] = [];
+  const emitTimes = new Map<string, number>();
+  if (mayWrite) {
+    if (settings.outputs.thermo_json) {
+      const db = databaseJson(good, settings);
+      validateDatabaseJson(db);
+      files.set('thermo.json', jsonText(db));
+    }
+    if (settings.outputs.nasa7) files.set('nasa7.txt', nasa7Text);
+    if (settings.outputs.tables) {
+      const names = tableFileNames(good.map((g) => g.name), (s) => sha256Hex(s));
+      for (const g of good) {
+        const te = performance.now();
+        files.set(names.get(g.name)!, await renderTable(g));
+        emitTimes.set(g.name, performance.now() - te);
+      }
+    }
+    outputs.push(...[...files.keys()].sort(), 'summary.json');
+  }
+  const emitMs = performance.now() - tEmit;
+
+  const summarySpecies: SummarySpecies[] = [];
+  const validNames = new Set(ordered.map((o) => o.valid.name));
+  for (const o of ordered) {
+    const fm = o.built?.fit.metrics;
+    const own = [...check.fileDiagnostics.values()].flat().filter((d) => d.species === o.valid.name);
+    const s: SummarySpecies = {
+      name: o.valid.name,
+      file: o.valid.file,
+      status: o.built ? 'ok' : 'failed',
+      warnings: [...own, ...o.diagnostics].filter((d) => d.severity === 'warning').map(formatDiagnostic).concat(o.cacheNotes),
+      errors: o.diagnostics.filter((d) => d.severity === 'error').map(formatDiagnostic),
+      cache: o.cache,
+      cache_hit: isCacheHit(o),
+      timings_ms: Object.fromEntries(
+        Object.entries({ ...o.timings, emit: emitTimes.get(o.valid.name) ?? 0 }).map(([k, v]) => [k, ms(v)]),
+      ),
+    };
+    if (fm && o.built) {
+      s.fit_metrics = {
+        max_abs_cp: Math.max(fm.low.maxAbs.cp, fm.high.maxAbs.cp),
+        max_abs_h: Math.max(fm.low.maxAbs.h, fm.high.maxAbs.h),
+        max_abs_s: Math.max(fm.low.maxAbs.s, fm.high.maxAbs.s),
+        t_mid: o.built.fit.polynomial.tMid,
+      };
+    }
+    summarySpecies.push(s);
+  }
+  // Files whose problems are not tied to a species that validated (syntax errors, invalid documents, …).
+  const summaryFiles = [...check.fileDiagnostics.entries()]
+    .map(([file, ds]) => ({ file: ds[0]?.file ?? file, ds: ds.filter((d) => !(d.species && validNames.has(d.species))) }))
+    .filter(({ ds }) => ds.length > 0)
+    .sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : 0))
+    .map(({ file, ds }) => ({
+      file,
+      errors: ds.filter((d) => d.severity === 'error').map(formatDiagnostic),
+      warnings: ds.filter((d) => d.severity === 'warning').map(formatDiagnostic),
+    }));
+
+  const summary: Summary = {
+    format: 'qforge-summary/1',
+    tool: { name: TOOL_NAME, version: TOOL_VERSION },
+    database: opts.dir,
+    status,
+    written: mayWrite,
+    outputs,
+    counts: {
+      species: ordered.length,
+      ok: ordered.length - failedSpecies.length,
+      failed: failedSpecies.length,
+      cache_hits: summarySpecies.filter((s) => s.cache_hit).length,
+      files: check.files.length,
+      files_failed: check.failedFiles.size,
+    },
+    settings_diagnostics: check.diagnostics.filter((d) => path.basename(d.file) === 'qforge.yaml').map(formatDiagnostic),
+    species: summarySpecies,
+    files: summaryFiles,
+    timings_ms: {
+      load: ms(check.timings.load),
+      validate: ms(check.timings.validate),
+      compute_fit_verify: ms(stagesMs),
+      emit: ms(emitMs),
+      total: 0,
+    },
+  };
+
+  if (mayWrite) {
+    (summary.timings_ms as Record<string, number>).total = ms(performance.now() - t0);
+    validateSummaryJson(summary);
+    files.set('summary.json', jsonText(summary));
+    await publishDirectory(opts.out, files, opts.hooks);
+  } else {
+    (summary.timings_ms as Record<string, number>).total = ms(performance.now() - t0);
+  }
+  return { exitCode: anyError ? 1 : 0, written: mayWrite, summary, diagnostics: allDiagnostics, notes };
+}
+
+function isCacheHit(o: SpeciesOutcome): boolean {
+  const v = Object.values(o.cache);
+  return v.length > 0 && v.every((x) => x === 'hit');
+}
+

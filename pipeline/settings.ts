@@ -1,0 +1,187 @@
+/**
+ * Database settings: `qforge.yaml` at the root of a database folder. The shape (and every default) is
+ * defined by `schemas/settings.schema.json`; this module reads the file, checks it against the schema and a
+ * few cross-field rules, and fills the defaults once so later stages never look at optional input.
+ *
+ * Unknown keys are errors; a missing file means "all defaults".
+ */
+import { access } from 'node:fs/promises';
+import path from 'node:path';
+import schema from '../schemas/settings.schema.json' with { type: 'json' };
+import { STANDARD_PRESSURE_ATM, STANDARD_PRESSURE_BAR, T_REF } from '../src/constants.js';
+import type { Diagnostic } from './diagnostics.js';
+import { SETTINGS_FILE_NAME, loadYamlFile, type LoadedDocument } from './load.js';
+import { checkAgainstSchema, createSchemaValidator, formatFieldPath } from './schema-check.js';
+
+export { SETTINGS_FILE_NAME };
+
+export type StandardPressureLabel = '1 bar' | '1 atm';
+
+export interface QuantityTriple {
+  cp: number;
+  h: number;
+  s: number;
+}
+
+/** Settings with every default filled in (same key names as the file). */
+export interface DatabaseSettings {
+  title: string;
+  record_identifier: string;
+  temperature_ranges: { low: number; mid: number; high: number };
+  standard_pressure: StandardPressureLabel;
+  fit: {
+    weights: QuantityTriple;
+    continuity_order: 1 | 2;
+    optimise_mid: false | { min: number; max: number; step: number };
+    sampling_step: number;
+  };
+  /** Dimensionless: |ΔCp/R|, |ΔH/RT|, |ΔS/R|. */
+  tolerances: QuantityTriple;
+  outputs: { thermo_json: boolean; nasa7: boolean; tables: boolean };
+  tables: { from: number; to: number; step: number; extra: number[] };
+  references: {
+    files: string[];
+    /** cp, s in J/(mol K); h (H−H298) in kJ/mol. */
+    tolerances: QuantityTriple;
+  };
+}
+
+export const DEFAULT_SETTINGS: Readonly<DatabaseSettings> = Object.freeze({
+  title: 'qforge database',
+  record_identifier: 'QFORGE',
+  temperature_ranges: { low: 200, mid: 1000, high: 6000 },
+  standard_pressure: '1 bar',
+  fit: {
+    weights: { cp: 1, h: 1, s: 1 },
+    continuity_order: 1,
+    optimise_mid: false,
+    sampling_step: 10,
+  },
+  tolerances: { cp: 0.1, h: 0.02, s: 0.02 },
+  outputs: { thermo_json: true, nasa7: true, tables: true },
+  tables: { from: 200, to: 6000, step: 100, extra: [298.15] },
+  references: { files: [], tolerances: { cp: 0.5, h: 0.5, s: 0.5 } },
+} satisfies DatabaseSettings);
+
+/** Standard pressure in Pa for a settings label. */
+export function standardPressurePa(label: StandardPressureLabel): number {
+  return label === '1 atm' ? STANDARD_PRESSURE_ATM : STANDARD_PRESSURE_BAR;
+}
+
+type Json = Record<string, unknown>;
+const isObject = (v: unknown): v is Json => v !== null && typeof v === 'object' && !Array.isArray(v);
+
+/** Deep-merge a schema-valid settings object over the defaults (arrays replace, objects merge). */
+export function withDefaults(input: unknown): DatabaseSettings {
+  const merge = (base: unknown, over: unknown): unknown => {
+    if (over === undefined) return structuredClone(base);
+    if (isObject(base) && isObject(over)) {
+      const out: Json = {};
+      for (const k of new Set([...Object.keys(base), ...Object.keys(over)])) out[k] = merge(base[k], over[k]);
+      return out;
+    }
+    return structuredClone(over);
+  };
+  const merged = merge(DEFAULT_SETTINGS, isObject(input) ? input : {}) as DatabaseSettings;
+  const om = merged.fit.optimise_mid;
+  if (om !== false && isObject(om) && om.step === undefined) om.step = 50;
+  return merged;
+}
+
+let validator: ReturnType<typeof createSchemaValidator> | undefined;
+function settingsValidator(): ReturnType<typeof createSchemaValidator> {
+  validator ??= createSchemaValidator(schema);
+  return validator;
+}
+
+export interface SettingsResult {
+  settings: DatabaseSettings;
+  /** Path of the settings file as displayed in messages (or undefined when the file is absent). */
+  file?: string;
+  diagnostics: Diagnostic[];
+}
+
+/** Cross-field rules the schema cannot express; all problems at once. */
+export function checkSettingsRules(s: DatabaseSettings, file: string, doc?: LoadedDocument): Diagnostic[] {
+  const out: Diagnostic[] = [];
+  const at = (segments: Array<string | number>) => locate(doc, segments);
+  const push = (segments: Array<string | number>, message: string, value: unknown, expected: string) =>
+    out.push({ severity: 'error', file, ...at(segments), path: formatFieldPath(segments), message, value, expected });
+
+  const { low, mid, high } = s.temperature_ranges;
+  if (!(low < mid && mid < high)) {
+    push(['temperature_ranges'], 'temperature ranges out of order', { low, mid, high }, 'low < mid < high');
+  }
+  if (!(low <= T_REF && T_REF <= mid)) {
+    push(['temperature_ranges', 'low'], `the low range must contain ${T_REF} K (H and S are anchored there)`, low, `low ≤ ${T_REF} ≤ mid`);
+  }
+  const om = s.fit.optimise_mid;
+  if (om !== false) {
+    if (!(om.min < om.max)) push(['fit', 'optimise_mid'], 'midpoint search interval is empty', om, 'min < max');
+    if (!(om.min > low && om.max < high)) {
+      push(['fit', 'optimise_mid'], 'midpoint search interval must lie inside the temperature ranges', om, `${low} < min < max < ${high}`);
+    }
+    if (om.min < T_REF) push(['fit', 'optimise_mid', 'min'], `midpoint may not fall below ${T_REF} K`, om.min, `min ≥ ${T_REF}`);
+  }
+  if (!(s.tables.from < s.tables.to)) push(['tables'], 'table grid is empty', { from: s.tables.from, to: s.tables.to }, 'from < to');
+  else if ((s.tables.to - s.tables.from) / s.tables.step > 100_000) {
+    push(['tables', 'step'], 'table grid has too many rows', s.tables.step, 'at most 100000 rows');
+  }
+  if ((high - low) / s.fit.sampling_step > 100_000) {
+    push(['fit', 'sampling_step'], 'sampling grid has too many points', s.fit.sampling_step, 'at most 100000 points');
+  }
+  const ref = s.references.files;
+  if (new Set(ref).size !== ref.length) push(['references', 'files'], 'a reference file is listed twice', ref, 'distinct files');
+  return out;
+}
+
+function locate(doc: LoadedDocument | undefined, segments: Array<string | number>): { line?: number; column?: number } {
+  if (!doc) return {};
+  for (let n = segments.length; n >= 0; n--) {
+    const loc = doc.locate(segments.slice(0, n));
+    if (loc) return { line: loc.line, column: loc.column };
+  }
+  return {};
+}
+
+/**
+ * Reads `<dir>/qforge.yaml` (absent → defaults). Returns defaults merged with the file and every problem
+ * found; when there are errors the returned settings are the defaults and must not be used for a build.
+ */
+export async function loadSettings(dir: string, displayDir = dir): Promise<SettingsResult> {
+  const filePath = path.join(dir, SETTINGS_FILE_NAME);
+  const display = path.join(displayDir, SETTINGS_FILE_NAME);
+  try {
+    await access(filePath);
+  } catch {
+    return { settings: withDefaults({}), diagnostics: [] };
+  }
+  const loaded = await loadYamlFile(filePath, display, { split: 'single' });
+  const diagnostics: Diagnostic[] = [...loaded.diagnostics];
+  if (loaded.documents.length > 1) {
+    diagnostics.push({
+      severity: 'error',
+      file: display,
+      path: '',
+      message: `${SETTINGS_FILE_NAME} holds ${loaded.documents.length} YAML documents`,
+      expected: 'exactly one mapping of settings',
+    });
+  }
+  const doc = loaded.documents[0];
+  if (!doc || diagnostics.some((d) => d.severity === 'error')) {
+    return { settings: withDefaults({}), file: display, diagnostics };
+  }
+  if (doc.value === null || doc.value === undefined) {
+    return { settings: withDefaults({}), file: display, diagnostics };
+  }
+  const schemaDiagnostics = checkAgainstSchema(settingsValidator(), doc, { species: '' });
+  diagnostics.push(...schemaDiagnostics);
+  if (schemaDiagnostics.some((d) => d.severity === 'error')) {
+    return { settings: withDefaults({}), file: display, diagnostics };
+  }
+  const settings = withDefaults(doc.value);
+  const rules = checkSettingsRules(settings, display, doc);
+  diagnostics.push(...rules);
+  if (rules.length) return { settings: withDefaults({}), file: display, diagnostics };
+  return { settings, file: display, diagnostics };
+}

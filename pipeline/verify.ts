@@ -1,0 +1,26 @@
+/**
+ * Stage "verify": checks a fit against the tolerances of the database (src/nasa7/quality) and turns every
+ * violation into a diagnostic that says which quantity, where and by how much.
+ */
+import { assessFit } from '../src/nasa7/quality.js';
+import type { FitResult, FitSample } from '../src/nasa7/types.js';
+import type { Diagnostic } from './diagnostics.js';
+import type { QuantityTriple } from './settings.js';
+
+export function verifySpecies(
+  fit: FitResult,
+  samples: readonly FitSample[],
+  tolerances: QuantityTriple,
+  continuityOrder: 1 | 2,
+  where: { file: string; species: string },
+): Diagnostic[] {
+  const violations = assessFit(fit, samples, { ...tolerances, continuityOrder });
+  return violations.map((v) => ({
+    severity: 'error' as const,
+    file: where.file,
+    species: where.species,
+    path: `fit.${v.quantity}`,
+    message: v.message,
+  }));
+}
+

@@ -8,3 +8,4 @@ export { computeMetrics, continuityResiduals } from './metrics.js';
 export { assessFit, DEFAULT_FIT_TOLERANCES, type FitTolerances, type FitViolation, type FitViolationQuantity } from './quality.js';
 export { formatNasa7File, formatNasa7Record, formatE15 } from './format.js';
 export { parseNasa7File, parseFortranNumber, type Nasa7ParseError, type Nasa7ParseResult } from './parse.js';
+export { roundForRecord, roundToE15 } from './round.js';

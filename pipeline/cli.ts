@@ -203,7 +203,7 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
       if (e.code === 'commander.helpDisplayed' || e.code === 'commander.version' || e.code === 'commander.help') return 0;
       return 2;
     }
-    if (e instanceof UsageError || (e as Error)?.name === 'OutputFolderError') {
+    if (e instanceof UsageError || ['UsageError', 'OutputFolderError'].includes((e as Error)?.name)) {
       io.stderr.write(`qforge: error: ${(e as Error).message}\n`);
       return 2;
     }

@@ -1,0 +1,194 @@
+/**
+ * `qforge diff OLD NEW`: which species were added, removed or changed between two builds (or 80-column
+ * files), and for each changed one how much its properties moved.
+ *
+ * A species is "changed" when its coefficients or ranges differ at all. It then counts as
+ * "properties changed" when any of |ΔCp|, |ΔS| exceeds 0.001 J/(mol K) or |ΔH| exceeds 0.001 kJ/mol at
+ * some point of the common range (10 K grid plus 298.15 K, 1000 K and the ends); otherwise "only the
+ * coefficients moved" (e.g. a refit that lands on an equivalent polynomial, or the E15.8 rounding of an
+ * 80-column file against full-precision JSON). The thresholds sit far below any tolerance a thermo table
+ * is quoted to (NIST-JANAF prints 0.001) and far above the rounding of the 80-column layout (8 digits).
+ */
+import { T_REF } from '../src/constants.js';
+import type { Nasa7Polynomial } from '../src/nasa7/types.js';
+import type { CliIo } from './cli.js';
+import { polynomialProperties, readPolynomialSet, ReadBuildError, type PolynomialSet, type Properties } from './read-build.js';
+
+export const PROPERTY_CHANGE_THRESHOLDS = Object.freeze({ cp: 1e-3, h: 1e-3, s: 1e-3 });
+export const DIFF_GRID_STEP = 10;
+
+type Q = 'cp' | 'h' | 's';
+const QS: readonly Q[] = ['cp', 'h', 's'];
+const UNITS: Record<Q, string> = { cp: 'J/(mol K)', h: 'kJ/mol', s: 'J/(mol K)' };
+const LABELS: Record<Q, string> = { cp: 'Cp', h: 'H', s: 'S' };
+
+export interface SpeciesChange {
+  name: string;
+  /** 'properties' when a property moved beyond the thresholds, else 'coefficients'. */
+  kind: 'properties' | 'coefficients';
+  /** True/false when both sides carry an input hash, otherwise undefined. */
+  inputChanged?: boolean;
+  rangesChanged: boolean;
+  old: { low: number; mid: number; high: number };
+  new: { low: number; mid: number; high: number };
+  /** Common range compared, undefined when the ranges do not overlap. */
+  common?: { low: number; high: number };
+  /** Largest |new − old| and where, on the common range. Cp, S in J/(mol K); H (absolute) in kJ/mol. */
+  max: Record<Q, { value: number; T: number }>;
+  /** Values at 298.15 and 1000 K when inside the common range. */
+  at: Array<{ T: number; old: Properties; new: Properties }>;
+}
+
+export interface DiffReport {
+  old: string;
+  new: string;
+  added: string[];
+  removed: string[];
+  unchanged: string[];
+  changed: SpeciesChange[];
+}
+
+const sameNumbers = (a: readonly number[], b: readonly number[]) => a.length === b.length && a.every((x, i) => Object.is(x, b[i]) || x === b[i]);
+
+function samePolynomial(a: Nasa7Polynomial, b: Nasa7Polynomial): boolean {
+  return a.tLow === b.tLow && a.tMid === b.tMid && a.tHigh === b.tHigh && sameNumbers(a.low, b.low) && sameNumbers(a.high, b.high);
+}
+
+/** Comparison grid of [low, high]: every DIFF_GRID_STEP K, the ends, 298.15 K and 1000 K when inside. */
+export function diffGrid(low: number, high: number): number[] {
+  const set = new Set<number>([low, high]);
+  for (let T = Math.ceil(low / DIFF_GRID_STEP) * DIFF_GRID_STEP; T <= high; T += DIFF_GRID_STEP) set.add(T);
+  for (const T of [T_REF, 1000]) if (T >= low && T <= high) set.add(T);
+  return [...set].sort((a, b) => a - b);
+}
+
+export function compareSpecies(name: string, a: Nasa7Polynomial, b: Nasa7Polynomial, hashes: [string?, string?]): SpeciesChange {
+  const low = Math.max(a.tLow, b.tLow);
+  const high = Math.min(a.tHigh, b.tHigh);
+  const max: SpeciesChange['max'] = { cp: { value: 0, T: NaN }, h: { value: 0, T: NaN }, s: { value: 0, T: NaN } };
+  const change: SpeciesChange = {
+    name,
+    kind: 'coefficients',
+    rangesChanged: a.tLow !== b.tLow || a.tMid !== b.tMid || a.tHigh !== b.tHigh,
+    old: { low: a.tLow, mid: a.tMid, high: a.tHigh },
+    new: { low: b.tLow, mid: b.tMid, high: b.tHigh },
+    max,
+    at: [],
+  };
+  if (hashes[0] && hashes[1]) change.inputChanged = hashes[0] !== hashes[1];
+  if (!(low < high)) {
+    change.kind = 'properties';
+    return change;
+  }
+  change.common = { low, high };
+  for (const T of diffGrid(low, high)) {
+    const pa = polynomialProperties(a, T);
+    const pb = polynomialProperties(b, T);
+    for (const q of QS) {
+      const d = Math.abs(pb[q] - pa[q]);
+      if (d > max[q].value || Number.isNaN(max[q].T)) max[q] = { value: d, T };
+    }
+    if (T === T_REF || T === 1000) change.at.push({ T, old: pa, new: pb });
+  }
+  if (change.rangesChanged || QS.some((q) => max[q].value > PROPERTY_CHANGE_THRESHOLDS[q])) change.kind = 'properties';
+  return change;
+}
+
+export function diffSets(a: PolynomialSet, b: PolynomialSet): DiffReport {
+  const names = (s: PolynomialSet) => [...s.species.keys()];
+  const sort = (xs: string[]) => xs.sort((x, y) => (x < y ? -1 : x > y ? 1 : 0));
+  const report: DiffReport = {
+    old: a.label,
+    new: b.label,
+    added: sort(names(b).filter((n) => !a.species.has(n))),
+    removed: sort(names(a).filter((n) => !b.species.has(n))),
+    unchanged: [],
+    changed: [],
+  };
+  for (const name of sort(names(a).filter((n) => b.species.has(n)))) {
+    const x = a.species.get(name)!;
+    const y = b.species.get(name)!;
+    if (samePolynomial(x.polynomial, y.polynomial)) report.unchanged.push(name);
+    else report.changed.push(compareSpecies(name, x.polynomial, y.polynomial, [x.inputHash, y.inputHash]));
+  }
+  return report;
+}
+
+const num = (x: number, d = 4) => (Number.isFinite(x) ? x.toFixed(d) : String(x));
+const sci = (x: number) => (x === 0 ? '0' : x < 1e-3 ? x.toExponential(2) : x.toFixed(4));
+
+export function renderDiffText(r: DiffReport): string {
+  const lines: string[] = [
+    `qforge diff ${r.old} -> ${r.new}: ${r.added.length} added, ${r.removed.length} removed, ${r.changed.length} changed, ${r.unchanged.length} unchanged`,
+  ];
+  for (const n of r.added) lines.push(`+ ${n}  (added)`);
+  for (const n of r.removed) lines.push(`- ${n}  (removed)`);
+  for (const c of r.changed) {
+    const why = [
+      c.kind === 'properties' ? 'properties changed' : 'only the coefficients moved (properties within thresholds)',
+      c.inputChanged === true ? 'input changed' : c.inputChanged === false ? 'same input' : undefined,
+      c.rangesChanged ? `ranges ${c.old.low}/${c.old.mid}/${c.old.high} -> ${c.new.low}/${c.new.mid}/${c.new.high} K` : undefined,
+    ].filter(Boolean);
+    lines.push(`~ ${c.name}: ${why.join('; ')}`);
+    if (!c.common) {
+      lines.push('    the temperature ranges do not overlap; nothing to compare');
+      continue;
+    }
+    lines.push(
+      `    over ${c.common.low}-${c.common.high} K: ` +
+        QS.map((q) => `max |d${LABELS[q]}| ${sci(c.max[q].value)} ${UNITS[q]} at ${c.max[q].T} K`).join(', '),
+    );
+    for (const p of c.at) {
+      lines.push(
+        `    at ${p.T} K: ` +
+          QS.map((q) => `${LABELS[q]} ${num(p.old[q])} -> ${num(p.new[q])}`).join(', ') +
+          ' (Cp, S in J/(mol K); H in kJ/mol)',
+      );
+    }
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+/** Breaches of the --fail-above limits, as messages. */
+export function gateBreaches(r: DiffReport, limits: { cp?: number; h?: number; s?: number }, failOnRemoved: boolean): string[] {
+  const out: string[] = [];
+  for (const c of r.changed) {
+    for (const q of QS) {
+      const lim = limits[q];
+      if (lim === undefined) continue;
+      if (!c.common) out.push(`${c.name}: temperature ranges no longer overlap`);
+      else if (c.max[q].value > lim) {
+        out.push(`${c.name}: |d${LABELS[q]}| ${sci(c.max[q].value)} ${UNITS[q]} at ${c.max[q].T} K exceeds ${lim} ${UNITS[q]}`);
+      }
+    }
+  }
+  if (failOnRemoved) for (const n of r.removed) out.push(`${n}: removed`);
+  return [...new Set(out)];
+}
+
+export async function diffCommand(
+  io: CliIo,
+  paths: { old: string; new: string; oldLabel: string; newLabel: string },
+  o: { failAbove?: { cp?: number; h?: number; s?: number }; failOnRemoved?: boolean; json?: boolean },
+): Promise<number> {
+  let a: PolynomialSet;
+  let b: PolynomialSet;
+  try {
+    [a, b] = await Promise.all([readPolynomialSet(paths.old, paths.oldLabel), readPolynomialSet(paths.new, paths.newLabel)]);
+  } catch (e) {
+    if (e instanceof ReadBuildError) {
+      io.stderr.write(`qforge: error: ${e.message}\n`);
+      return 1;
+    }
+    throw e;
+  }
+  const report = diffSets(a, b);
+  const breaches = gateBreaches(report, o.failAbove ?? {}, !!o.failOnRemoved);
+  if (o.json) io.stdout.write(`${JSON.stringify({ ...report, gate: { limits: o.failAbove ?? {}, breaches } }, null, 2)}\n`);
+  else io.stdout.write(renderDiffText(report));
+  if (breaches.length) {
+    io.stderr.write(`qforge: diff gate FAILED (${breaches.length}):\n${breaches.map((x) => `  ${x}`).join('\n')}\n`);
+    return 1;
+  }
+  return 0;
+}

@@ -140,10 +140,15 @@ function locateIn(
         best = keyStart ?? best;
         break;
       }
-      // An empty value (`vibrations:`) has no node of its own: point at its key.
+      // An empty value (`vibrations:`) has no text of its own: point at its key.
+      const v = pair.value;
+      const empty = v === null || v === undefined || (isScalar(v) && v.value === null && v.range !== undefined && v.range[0] === v.range[1]);
+      if (empty) {
+        best = keyStart ?? best;
+        break;
+      }
       best = valueStart ?? keyStart ?? best;
-      node = pair.value;
-      if (valueStart === undefined) break;
+      node = v;
     } else if (isSeq(node)) {
       const idx = typeof seg === 'number' ? seg : Number(seg);
       const item = Number.isInteger(idx) ? node.items[idx] : undefined;

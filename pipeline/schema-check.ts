@@ -150,7 +150,7 @@ function conditionTitle(root: unknown, schemaPath: string): string | undefined {
 function propertySchema(root: unknown, schemaPath: string, key: string): unknown {
   const segs = decodePointer(schemaPath);
   for (let i = segs.length; i >= 0; i--) {
-    const s = resolveSchema(root, `#/${segs.slice(0, i).join('/')}`) as JsonObject | undefined;
+    const s = resolveSchema(root, i === 0 ? '#' : `#/${segs.slice(0, i).join('/')}`) as JsonObject | undefined;
     const props = s && typeof s === 'object' ? (s.properties as JsonObject | undefined) : undefined;
     if (props && typeof props === 'object' && key in props) return deref(root, props[key]);
   }
@@ -355,7 +355,8 @@ export function checkAgainstSchema(
         emit(at, doc.locate(at), {
           message: `wrong type: ${jsonTypeName(e.data)}`,
           value: e.data,
-          expected: title ?? typeWords(params.type),
+          // At the root the title names the whole document rather than phrasing an expectation.
+          expected: at.length === 0 ? `${typeWords(params.type)}${title ? ` (${title})` : ''}` : title ?? typeWords(params.type),
         });
         break;
       case 'enum': {

@@ -7,8 +7,8 @@
  * Usage: node scripts/generate-types.mjs
  *
  * Before compiling, the schema is simplified for the type generator only:
- * - `title` is dropped below the root (ours are human "expected ..." phrases, not type names; $defs keys name
- *   the types instead);
+ * - `title` is dropped (ours are human "expected ..." phrases, not type names; $defs keys and the name
+ *   'SpeciesInput' name the types instead);
  * - siblings of `$ref` are dropped (otherwise every described use of a $def becomes its own type alias);
  * - the structure-dependent `allOf` of if/then rules is dropped: TypeScript cannot express them, so the fields
  *   they require stay optional in the type and the validator enforces them.
@@ -33,7 +33,7 @@ function simplify(node, isRoot = false) {
   if (typeof node.$ref === 'string') return { $ref: node.$ref };
   const out = {};
   for (const [key, value] of Object.entries(node)) {
-    if (key === 'title' && !isRoot) continue;
+    if (key === 'title') continue;
     if (key === 'allOf' && isRoot) continue;
     if ((key === 'properties' || key === '$defs') && value && typeof value === 'object') {
       out[key] = Object.fromEntries(Object.entries(value).map(([k, v]) => [k, simplify(v)]));

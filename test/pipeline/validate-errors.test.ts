@@ -1,0 +1,325 @@
+/**
+ * Table-driven bad input: each case is one kind of mistake, and each asserts the file, line, column, field
+ * path and the content of the message (bad value and expectation).
+ *
+ * The valid bases use published constants: N2 X1Sigma_g+ from Huber & Herzberg (1979); O atom levels from
+ * the NIST Atomic Spectra Database; H2O constants from memory (NIST CCCBDB). The mistakes are invented.
+ */
+import { describe, expect, it } from 'vitest';
+import { formatDiagnostic, type Diagnostic } from '../../pipeline/diagnostics.js';
+import { parseYamlText } from '../../pipeline/load.js';
+import { validateSpecies } from '../../pipeline/validate.js';
+
+type Edit = Record<number, string | null>;
+
+function edit(base: readonly string[], changes: Edit = {}, extra: readonly string[] = []): string {
+  const out = base.map((l, i) => (Object.hasOwn(changes, i + 1) ? changes[i + 1] : l)).filter((l): l is string => l !== null);
+  return [...out, ...extra].join('\n') + '\n';
+}
+
+// Line numbers below refer to these bases (line 1 = first element).
+const DIATOMIC = [
+  'name: N2',
+  'composition: {N: 2}',
+  'enthalpy_of_formation: 0',
+  'sources: ["Huber & Herzberg (1979)"]',
+  'structure: diatomic',
+  'symmetry_number: 2',
+  'dissociation_energy: 78714',
+  'electronic_states:',
+  '  - {term: X, energy: 0, degeneracy: 1, we: 2358.57, wexe: 14.324, Be: 1.99824, alphae: 0.017318}',
+];
+const NONLINEAR = [
+  'name: H2O',
+  'composition: {H: 2, O: 1}',
+  'enthalpy_of_formation: -241.826',
+  'sources: ["CODATA key values; constants from memory (NIST CCCBDB)"]',
+  'structure: nonlinear',
+  'symmetry_number: 2',
+  'rotational_constants: [27.88, 14.51, 9.28]',
+  'vibrations: [3657, 1595, 3756]',
+];
+const ATOM = [
+  'name: O',
+  'composition: {O: 1}',
+  'enthalpy_of_formation: 249.18',
+  'sources: ["NIST Atomic Spectra Database"]',
+  'structure: atom',
+  'electronic_levels: [{energy: 0, degeneracy: 5}, {energy: 158.265, degeneracy: 3}]',
+];
+
+interface Case {
+  kind: string;
+  yaml: string;
+  line: number;
+  /** The column is where this text starts on that line (omit to skip the column check). */
+  at?: string;
+  path: string;
+  contains: string[];
+  severity?: 'error' | 'warning';
+}
+
+const FILE = 'species/bad.yaml';
+
+function diagnosticsOf(yaml: string): Diagnostic[] {
+  const loaded = parseYamlText(yaml, FILE);
+  return [...loaded.diagnostics, ...loaded.documents.flatMap((d) => validateSpecies(d).diagnostics)];
+}
+
+function columnOf(yaml: string, line: number, text: string): number {
+  const l = yaml.split('\n')[line - 1]!;
+  const i = l.indexOf(text);
+  if (i < 0) throw new Error(`test setup: '${text}' not on line ${line}: ${l}`);
+  return i + 1;
+}
+
+const ERRORS: Case[] = [
+  { kind: 'YAML syntax error', yaml: edit(NONLINEAR, { 6: 'symmetry_number: 2: 3' }), line: 6, path: '', contains: ['YAML syntax error'] },
+  { kind: 'duplicate key', yaml: edit(NONLINEAR, {}, ['symmetry_number: 2']), line: 9, at: 'symmetry_number', path: '', contains: ['duplicate key'] },
+  {
+    kind: 'unknown (misspelt) key', yaml: edit(NONLINEAR, { 8: 'vibration: [3657, 1595, 3756]' }), line: 8, at: 'vibration', path: 'vibration',
+    contains: ["unknown key 'vibration'", "did you mean 'vibrations'", 'expected one of name, composition'],
+  },
+  {
+    kind: 'wrong type', yaml: edit(NONLINEAR, { 8: 'vibrations: [3657, abc, 3756]' }), line: 8, at: 'abc', path: 'vibrations[1]',
+    contains: ['wrong type: a text', 'got "abc"', 'expected a wavenumber > 0 in cm-1'],
+  },
+  {
+    kind: 'non-positive wavenumber', yaml: edit(NONLINEAR, { 8: 'vibrations: [3657, {wavenumber: -1595}, 3756]' }), line: 8, at: '-1595',
+    path: 'vibrations[1].wavenumber', contains: ['must be positive', 'got -1595', 'expected a value > 0'],
+  },
+  {
+    kind: 'non-positive rotational constant', yaml: edit(NONLINEAR, { 7: 'rotational_constants: [27.88, 0, 9.28]' }), line: 7, at: '0,',
+    path: 'rotational_constants[1]', contains: ['must be positive', 'got 0'],
+  },
+  {
+    kind: 'unknown unit', yaml: edit(NONLINEAR, { 7: 'rotational_constants: [27.88, {value: 14.51, unit: cm^-1}, 9.28]' }), line: 7, at: 'cm^-1',
+    path: 'rotational_constants[1].unit', contains: ['unknown unit', "did you mean 'cm-1'", 'got "cm^-1"', 'GHz'],
+  },
+  {
+    kind: 'missing required field', yaml: edit(NONLINEAR, { 4: null }), line: 1, at: 'name', path: 'sources',
+    contains: ["missing required field 'sources'", 'expected a non-empty list of texts'],
+  },
+  {
+    kind: 'missing symmetry number', yaml: edit(NONLINEAR, { 6: null }), line: 1, path: 'symmetry_number',
+    contains: ["missing required field 'symmetry_number'", "required for structure 'nonlinear'"],
+  },
+  {
+    kind: 'unknown element', yaml: edit(NONLINEAR, { 2: 'composition: {H: 2, Q: 1}' }), line: 2, at: 'Q', path: 'composition.Q',
+    contains: ["unknown element symbol 'Q'", 'IUPAC'],
+  },
+  {
+    kind: 'element symbol in wrong case', yaml: edit(ATOM, { 1: 'name: Cl', 2: 'composition: {CL: 1}' }), line: 2, at: 'CL', path: 'composition.CL',
+    contains: ["unknown element symbol 'CL'", "did you mean 'Cl'"],
+  },
+  {
+    kind: 'wrong count of rotational constants', yaml: edit(NONLINEAR, { 7: 'rotational_constants: [27.88, 14.51]' }), line: 7, at: '[',
+    path: 'rotational_constants', contains: ['takes 3 rotational constants, got 2', 'expected [A, B, C]'],
+  },
+  {
+    kind: 'field of another structure', yaml: edit(DIATOMIC, {}, ['vibrations: [2358]']), line: 10, at: 'vibrations', path: 'vibrations',
+    contains: ["field 'vibrations' does not apply to structure 'diatomic'"],
+  },
+  {
+    kind: 'spin weights on a heteronuclear molecule',
+    yaml: edit(DIATOMIC, { 1: 'name: CO', 2: 'composition: {C: 1, O: 1}', 6: 'symmetry_number: 1' }, ['nuclear_spin_weights: {even: 1, odd: 3}']),
+    line: 10, at: 'nuclear_spin_weights', path: 'nuclear_spin_weights', contains: ['only to a homonuclear diatomic', 'got {"C":1,"O":1}'],
+  },
+  {
+    kind: 'nuclear spin weights both zero', yaml: edit(DIATOMIC, {}, ['nuclear_spin_weights: {even: 0, odd: 0}']), line: 10, at: '{even',
+    path: 'nuclear_spin_weights', contains: ['both 0'],
+  },
+  {
+    // G(0) = 2358.57/2 - 14.324/4 = 1175.70 cm-1.
+    kind: 'dissociation energy below the zero-point level', yaml: edit(DIATOMIC, { 7: 'dissociation_energy: 500' }), line: 7, at: '500',
+    path: 'dissociation_energy', contains: ['D0 = 500 cm-1 is below the zero-point energy G(0) = 1175.7 cm-1', 'got 500', 'check the unit'],
+  },
+  {
+    // B_v = 1.99824 - 0.5 (v + 1/2) is negative from v = 4 on, well below the dissociation limit.
+    kind: 'rotational ladder that never rises (B_v <= 0)',
+    yaml: edit(DIATOMIC, { 9: '  - {term: X, energy: 0, degeneracy: 1, we: 2358.57, wexe: 14.324, Be: 1.99824, alphae: 0.5}' }),
+    line: 9, at: '0.5}', path: 'electronic_states[0].alphae', contains: ['at v = 4', 'would not rise', 'got 0.5'],
+  },
+  {
+    kind: 'vibrational ladder that never reaches the limit',
+    yaml: edit(DIATOMIC, { 9: '  - {term: X, energy: 0, degeneracy: 1, we: 2.35857, wexe: 0, Be: 1.99824}' }),
+    line: 9, at: '2.35857', path: 'electronic_states[0].we', contains: ['never reach the dissociation limit', 'more than 1000 bound levels'],
+  },
+  {
+    kind: 'vibrational ladder turning over at once',
+    yaml: edit(DIATOMIC, { 9: '  - {term: X, energy: 0, degeneracy: 1, we: 2358.57, wexe: 1200, Be: 1.99824}' }),
+    line: 9, at: '1200', path: 'electronic_states[0].wexe', contains: ['turn over before v = 1'],
+  },
+  {
+    kind: 'excited state above the dissociation limit',
+    yaml: edit(DIATOMIC, {}, ['  - {term: A, energy: 90000, degeneracy: 2, we: 1460, Be: 1.6}']),
+    line: 10, at: '90000', path: 'electronic_states[1].energy', contains: ["state 'A' lies entirely above the dissociation limit", 'got 90000'],
+  },
+  {
+    kind: 'ground state not first',
+    yaml: edit(DIATOMIC, { 9: '  - {term: A, energy: 50000, degeneracy: 2, we: 1460, Be: 1.6}' }),
+    line: 9, at: '50000', path: 'electronic_states[0].energy', contains: ['first electronic state must be the ground state at energy 0'],
+  },
+  {
+    kind: 'ground electronic level not at 0', yaml: edit(ATOM, { 6: 'electronic_levels: [{energy: 10, degeneracy: 5}, {energy: 158.265, degeneracy: 3}]' }),
+    line: 6, at: '10,', path: 'electronic_levels[0].energy', contains: ['lowest electronic level is at 10 cm-1, not at 0'],
+  },
+  {
+    kind: 'diatomic with 3 atoms', yaml: edit(DIATOMIC, { 2: 'composition: {N: 3}' }), line: 2, at: '{N', path: 'composition',
+    contains: ['exactly 2 atoms', 'has 3', 'got {"N":3}'],
+  },
+  { kind: 'atom with 2 atoms', yaml: edit(ATOM, { 2: 'composition: {O: 2}' }), line: 2, at: '{O', path: 'composition', contains: ['exactly 1 atom'] },
+  {
+    kind: 'nonlinear with 2 atoms', yaml: edit(NONLINEAR, { 2: 'composition: {H: 1, O: 1}' }), line: 2, at: '{H', path: 'composition',
+    contains: ['at least 3 atoms'],
+  },
+  {
+    kind: 'charge leaving a negative electron count',
+    yaml: edit(ATOM, { 1: 'name: H', 2: 'composition: {H: 1}', 6: 'electronic_levels: [{energy: 0, degeneracy: 2}]' }, ['charge: 2']),
+    line: 7, at: '2', path: 'charge', contains: ['would leave -1 electrons', 'at most +1'],
+  },
+  {
+    kind: 'invalid record name', yaml: edit(ATOM, { 1: 'name: O atom!' }), line: 1, at: 'O atom!', path: 'name',
+    contains: ['wrong form', 'got "O atom!"', '1-16 characters'],
+  },
+  { kind: 'name of dots only', yaml: edit(ATOM, { 1: 'name: ".."' }), line: 1, at: '".."', path: 'name', contains: ['only of dots'] },
+  {
+    kind: 'misspelt structure', yaml: edit(ATOM, { 5: 'structure: atomic' }), line: 5, at: 'atomic', path: 'structure',
+    contains: ["did you mean 'atom'", 'one of atom, diatomic, linear, nonlinear'],
+  },
+  {
+    kind: 'enthalpy at an unsupported temperature', yaml: edit(ATOM, { 3: 'enthalpy_of_formation: {value: 249.18, temperature: 300}' }), line: 3,
+    at: '300', path: 'enthalpy_of_formation.temperature', contains: ['got 300', 'one of 298.15, 0'],
+  },
+  { kind: 'empty sources', yaml: edit(ATOM, { 4: 'sources: []' }), line: 4, at: '[]', path: 'sources', contains: ['too few items (0)', 'at least 1 item'] },
+  {
+    kind: 'temperature ranges out of order', yaml: edit(ATOM, {}, ['temperature_ranges: {low: 1000, mid: 500}']), line: 7, at: '500',
+    path: 'temperature_ranges.mid', contains: ['mid (500 K) must be above low (1000 K)'],
+  },
+  {
+    kind: 'rotational constants and moments of inertia together', yaml: edit(NONLINEAR, {}, ['moments_of_inertia: [0.6, 1.2, 1.8]']), line: 9,
+    at: 'moments_of_inertia', path: 'moments_of_inertia', contains: ['either rotational_constants or moments_of_inertia, not both'],
+  },
+  {
+    kind: 'linear molecule with symmetry number 3',
+    yaml: edit(NONLINEAR, { 1: 'name: CO2', 2: 'composition: {C: 1, O: 2}', 5: 'structure: linear', 6: 'symmetry_number: 3', 7: 'rotational_constants: [0.39021]', 8: 'vibrations: [1333, {wavenumber: 667, degeneracy: 2}, 2349]' }),
+    line: 6, at: '3', path: 'symmetry_number', contains: ['symmetry number 1 or 2, not 3'],
+  },
+  {
+    kind: 'empty value', yaml: edit(NONLINEAR, { 8: 'vibrations:' }), line: 8, at: 'vibrations', path: 'vibrations',
+    contains: ['wrong type: null (empty value)', 'a non-empty list of vibrations'],
+  },
+  {
+    kind: 'infinite number', yaml: edit(NONLINEAR, { 7: 'rotational_constants: [.inf, 14.51, 9.28]' }), line: 7, at: '.inf',
+    path: 'rotational_constants[0]', contains: ['got null'],
+  },
+  {
+    kind: 'tag that would construct code', yaml: edit(ATOM, { 3: 'enthalpy_of_formation: !!js/function "function () { return 1 }"' }), line: 3,
+    at: '!!js/function', path: '', contains: ['Unresolved tag', 'js/function', 'no tags that construct objects or run code'],
+  },
+  {
+    kind: 'document that is not a mapping', yaml: 'just a string\n', line: 1, at: 'just', path: '', contains: ['wrong type: a text', 'expected a mapping'],
+  },
+];
+
+const WARNINGS: Case[] = [
+  {
+    kind: 'rotational constants not A >= B >= C', yaml: edit(NONLINEAR, { 7: 'rotational_constants: [9.28, 14.51, 27.88]' }), line: 7, at: '[',
+    path: 'rotational_constants', contains: ['not in the order A >= B >= C'],
+  },
+  {
+    kind: 'vibration count not 3N-6', yaml: edit(NONLINEAR, { 8: 'vibrations: [3657, 1595]' }), line: 8, at: '[', path: 'vibrations',
+    contains: ['2 vibrational modes', 'has 3 (3N-6)'],
+  },
+  {
+    kind: 'linear vibration count not 3N-5',
+    yaml: edit(NONLINEAR, { 1: 'name: CO2', 2: 'composition: {C: 1, O: 2}', 5: 'structure: linear', 7: 'rotational_constants: [0.39021]', 8: 'vibrations: [1333, 667, 2349]' }),
+    line: 8, at: '[', path: 'vibrations', contains: ['3 vibrational modes', 'has 4 (3N-5)'],
+  },
+  {
+    kind: 'negative anharmonicity',
+    yaml: edit(DIATOMIC, { 9: '  - {term: X, energy: 0, degeneracy: 1, we: 2358.57, wexe: -14.324, Be: 1.99824}' }),
+    line: 9, at: '-14.324', path: 'electronic_states[0].wexe', contains: ['negative anharmonicity'],
+  },
+  { kind: 'unusual symmetry number', yaml: edit(DIATOMIC, { 6: 'symmetry_number: 1' }), line: 6, at: '1', path: 'symmetry_number', contains: ['usually has symmetry number 2'] },
+  {
+    kind: 'symmetry number without equivalent atoms', yaml: edit(NONLINEAR, { 1: 'name: HOCl', 2: 'composition: {H: 1, O: 1, Cl: 1}' }), line: 6, at: '2',
+    path: 'symmetry_number', contains: ['no two atoms of the same element'],
+  },
+  { kind: 'source that says nothing', yaml: edit(ATOM, { 4: 'sources: [TODO]' }), line: 4, at: 'TODO', path: 'sources[0]', contains: ['does not say where'] },
+  {
+    kind: 'enthalpy given at 0 K', yaml: edit(ATOM, { 3: 'enthalpy_of_formation: {value: 246.79, temperature: 0}' }), line: 3, at: '0}',
+    path: 'enthalpy_of_formation.temperature', contains: ['given at 0 K'],
+  },
+  {
+    kind: 'implausibly large centrifugal distortion',
+    yaml: edit(DIATOMIC, { 9: '  - {term: X, energy: 0, degeneracy: 1, we: 2358.57, wexe: 14.324, Be: 1.99824, De: 0.5}' }),
+    line: 9, at: '0.5', path: 'electronic_states[0].De', contains: ['more than 1% of Be'],
+  },
+  {
+    kind: 'wavenumber in the wrong unit', yaml: edit(NONLINEAR, { 8: 'vibrations: [365700, 1595, 3756]' }), line: 8, at: '365700',
+    path: 'vibrations[0]', contains: ['check the unit'],
+  },
+];
+
+function assertCase(c: Case, severity: 'error' | 'warning'): void {
+  const ds = diagnosticsOf(c.yaml);
+  const match = ds.find((d) => d.severity === severity && d.path === c.path && c.contains.every((s) => formatDiagnostic(d).includes(s)));
+  if (!match) throw new Error(`no ${severity} at '${c.path}' containing ${JSON.stringify(c.contains)}; got:\n${ds.map(formatDiagnostic).join('\n')}`);
+  expect(match.file).toBe(FILE);
+  expect(match.line).toBe(c.line);
+  if (c.at !== undefined) expect(match.column).toBe(columnOf(c.yaml, c.line, c.at));
+  // The formatted line starts with file:line(:col) so editors can jump to it.
+  expect(formatDiagnostic(match).startsWith(`${FILE}:${c.line}`)).toBe(true);
+}
+
+describe('bad species input: errors', () => {
+  it('covers at least 14 kinds', () => expect(ERRORS.length).toBeGreaterThanOrEqual(14));
+  it.each(ERRORS.map((c) => [c.kind, c] as const))('%s', (_kind, c) => {
+    assertCase(c, 'error');
+    const loaded = parseYamlText(c.yaml, FILE);
+    for (const doc of loaded.documents) expect(validateSpecies(doc).species).toBeUndefined();
+  });
+});
+
+describe('suspicious but legal input: warnings', () => {
+  it.each(WARNINGS.map((c) => [c.kind, c] as const))('%s', (_kind, c) => {
+    assertCase(c, 'warning');
+    const loaded = parseYamlText(c.yaml, FILE);
+    const r = validateSpecies(loaded.documents[0]!);
+    expect(r.diagnostics.filter((d) => d.severity === 'error')).toEqual([]);
+    expect(r.species).toBeDefined();
+  });
+});
+
+describe('all errors at once', () => {
+  it('reports every mistake of one document, schema and physics together', () => {
+    const yaml = edit(NONLINEAR, {
+      2: 'composition: {H: 2, Qq: 1}',
+      4: 'source: [x]',
+      7: 'rotational_constants: [27.88, -14.51]',
+      8: 'vibrations: [3657, {wavenumber: 1595, degeneracy: 0}, 3756]',
+    });
+    const ds = diagnosticsOf(yaml).filter((d) => d.severity === 'error');
+    const paths = ds.map((d) => d.path).sort();
+    expect(paths).toEqual(
+      ['composition.Qq', 'rotational_constants', 'rotational_constants[1]', 'source', 'sources', 'vibrations[1].degeneracy'].sort(),
+    );
+  });
+
+  it('reports the errors of every document of a file, not only the first', () => {
+    const yaml = `${edit(ATOM, { 2: 'composition: {O: 2}' })}---\n${edit(ATOM, { 1: 'name: O2x', 5: 'structure: atomic' })}`;
+    const loaded = parseYamlText(yaml, FILE);
+    expect(loaded.documents).toHaveLength(2);
+    const [a, b] = loaded.documents.map((d) => validateSpecies(d).diagnostics);
+    expect(a!.some((d) => d.path === 'composition' && d.line === 2)).toBe(true);
+    expect(b!.some((d) => d.path === 'structure' && d.line === 12)).toBe(true);
+  });
+
+  it('keeps reading the other documents of a file when one has a syntax error', () => {
+    const yaml = `${edit(ATOM, { 6: 'electronic_levels: [{energy: 0, degeneracy: 5}' })}---\n${edit(ATOM, { 1: 'name: O2x' })}`;
+    const loaded = parseYamlText(yaml, FILE);
+    expect(loaded.diagnostics.some((d) => d.severity === 'error' && (d.line ?? 0) <= 7)).toBe(true);
+    expect(loaded.documents.map((d) => (d.value as { name: string }).name)).toEqual(['O2x']);
+  });
+});

@@ -1,0 +1,91 @@
+/**
+ * Fit checks. Data: closed-form RRHO models (synthetic.ts; constants from Huber & Herzberg 1979 and from
+ * memory as marked there) and the invented known polynomial (known-polynomial.ts). The ideal-gas bound
+ * Cp/R ≥ 5/2 is textbook statistical mechanics (McQuarrie, Statistical Mechanics, 1976).
+ */
+import { describe, expect, it } from 'vitest';
+import { T_REF } from '../../../src/constants.js';
+import { fitNasa7 } from '../../../src/nasa7/fit.js';
+import { assessFit, hysteresisReversals } from '../../../src/nasa7/quality.js';
+import type { Coefficients7, FitResult } from '../../../src/nasa7/types.js';
+import { evaluateNasa7 } from '../../../src/nasa7/evaluate.js';
+import { CH4_RRHO, grid, H2O_RRHO, N2_RRHO, rrhoSample } from './synthetic.js';
+
+const samplesN2 = grid(200, 6000, 10).map((T) => rrhoSample(N2_RRHO, T));
+const fitN2 = fitNasa7(samplesN2, rrhoSample(N2_RRHO, T_REF));
+
+function withHigh(fit: FitResult, change: (c: Coefficients7) => Coefficients7): FitResult {
+  return { ...fit, polynomial: { ...fit.polynomial, high: change([...fit.polynomial.high]) } };
+}
+
+describe('hysteresisReversals', () => {
+  it('counts only reversals larger than the amplitude', () => {
+    const ts = grid(0, 100, 1);
+    const small = ts.map((t) => 0.001 * Math.sin(t / 5));
+    const big = ts.map((t) => Math.sin(t / 10)); // extrema at t = 5π·(2k+1): 15.7, 47.1, 78.5
+    expect(hysteresisReversals(ts, small, 0.01)).toEqual([]);
+    expect(hysteresisReversals(ts, big, 0.1)).toEqual([16, 47, 79]);
+    expect(hysteresisReversals(ts, ts, 0.1)).toEqual([]);
+  });
+});
+
+describe('assessFit', () => {
+  it('careful fits of RRHO N2, CH4, H2O pass the default tolerances', () => {
+    for (const model of [N2_RRHO, CH4_RRHO, H2O_RRHO]) {
+      const samples = grid(200, 6000, 10).map((T) => rrhoSample(model, T));
+      expect(assessFit(fitNasa7(samples, rrhoSample(model, T_REF)), samples)).toEqual([]);
+    }
+  });
+
+  it('a tolerance below the error names quantity, range, temperature and excess', () => {
+    const v = assessFit(fitN2, samplesN2, { cp: 0.01 });
+    expect(v.map((x) => [x.quantity, x.range])).toEqual([
+      ['cp', 'low'],
+      ['cp', 'high'],
+    ]);
+    expect(v[0]!.T).toBe(fitN2.metrics.low.tAtMax.cp);
+    expect(v[0]!.value).toBeCloseTo(fitN2.metrics.low.maxAbs.cp, 15);
+    expect(v[0]!.message).toMatch(/^Cp\/R fit error 0\.012\d* at 950 K \(low range 200–1000 K\) exceeds the tolerance 0\.01 by 0\.002/);
+  });
+
+  it('a broken midpoint is reported as a continuity jump at tMid', () => {
+    const bad = withHigh(fitN2, (c) => [c[0] + 1e-6, c[1], c[2], c[3], c[4], c[5], c[6]]);
+    const v = assessFit(bad, samplesN2);
+    const q = v.map((x) => x.quantity);
+    expect(q).toContain('continuity-cp');
+    expect(q).toContain('continuity-h');
+    expect(q).toContain('continuity-s');
+    const cp = v.find((x) => x.quantity === 'continuity-cp')!;
+    expect(cp.range).toBe('mid');
+    expect(cp.T).toBe(1000);
+    expect(cp.message).toMatch(/^Cp\/R jumps by 1\.000e-6 between the low and high sets at tMid = 1000 K; tolerance 1\.000e-8/);
+  });
+
+  it('a polynomial whose Cp turns over beyond the range is caught, even when it matches the data exactly', () => {
+    // INVENTED single polynomial (same set both sides, so continuous): Cp/R = 3.5 + 1e-4 (T − 150)², a
+    // minimum at 150 K, i.e. 50 K below tLow = 200 K; monotone over the data 200–2000 K.
+    const k = 1e-4;
+    const c: Coefficients7 = [3.5 + k * 150 * 150, -2 * k * 150, k, 0, 0, 0, 0];
+    const poly = { tLow: 200, tMid: 1000, tHigh: 2000, low: c, high: [...c] as Coefficients7 };
+    const samples = grid(200, 2000, 10).map((T) => ({ T, ...evaluateNasa7(poly, T) }));
+    const fit: FitResult = { ...fitN2, polynomial: poly, metrics: { ...fitN2.metrics, anchor: { h: 0, s: 0 } } };
+    const v = assessFit(fit, samples);
+    expect(v.map((x) => [x.quantity, x.range, x.T])).toEqual([['cp-wiggle', 'extrapolation', 150]]);
+    expect(v[0]!.message).toMatch(/^Cp\/R of the fit turns over at 150 K \(extrapolation\) where the data does not: over 100–2100 K \(100 K beyond the range\)/);
+    // Checked only 40 K beyond the ends, the turn-over is out of sight.
+    expect(assessFit(fit, samples, { extrapolation: 40 })).toEqual([]);
+  });
+
+  it('Cp ≤ 0 anywhere in the checked span is reported', () => {
+    const negative = withHigh(fitN2, (c) => [c[0], c[1], c[2], c[3], c[4] - 1e-14, c[5], c[6]]);
+    const nv = assessFit(negative, samplesN2, { cp: 1e9, h: 1e9, s: 1e9, continuity: 1e9 });
+    const pos = nv.find((x) => x.quantity === 'cp-positive')!;
+    expect(pos.message).toMatch(/^Cp\/R of the fit is -?[0-9.e-]+ ≤ 0 at [0-9.]+ K \(high\); Cp must stay positive/);
+  });
+
+  it('Cp/R below the ideal-gas minimum 5/2 is reported', () => {
+    const low = withHigh(fitN2, (c) => [c[0] - 2, c[1], c[2], c[3], c[4], c[5], c[6]]);
+    const v = assessFit(low, samplesN2, { cp: 0.1, h: 1e9, s: 1e9, continuity: 1e9 });
+    expect(v.find((x) => x.quantity === 'cp-positive')?.message).toMatch(/below the ideal-gas minimum 5\/2/);
+  });
+});

@@ -142,7 +142,7 @@ function locateIn(
       }
       // An empty value (`vibrations:`) has no text of its own: point at its key.
       const v = pair.value;
-      const empty = v === null || v === undefined || (isScalar(v) && v.value === null && v.range !== undefined && v.range[0] === v.range[1]);
+      const empty = v === null || v === undefined || (isScalar(v) && v.value === null && !!v.range && v.range[0] === v.range[1]);
       if (empty) {
         best = keyStart ?? best;
         break;
@@ -192,6 +192,9 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
       uniqueKeys: true,
       prettyErrors: false,
       merge: false,
+      // Without this, yaml resolves the YAML 1.1 tags !!binary, !!set, !!omap, !!pairs, !!timestamp even
+      // under the core schema; we accept plain values only.
+      resolveKnownTags: false,
       strict: true,
     }) as Document.Parsed[];
   } catch (e) {
@@ -332,7 +335,6 @@ export async function discoverSpeciesFiles(
 ): Promise<{ files: string[]; diagnostics: Diagnostic[] }> {
   const settingsName = opts.settingsFileName ?? SETTINGS_FILE_NAME;
   const diagnostics: Diagnostic[] = [];
-  const found: { rel: string; real: string }[] = [];
 
   let rootReal: string;
   try {
@@ -347,8 +349,11 @@ export async function discoverSpeciesFiles(
   }
 
   const visitedDirs = new Set<string>([rootReal]);
+  const found: { rel: string; real: string; viaLink: boolean }[] = [];
+  // Links are resolved after the real tree is walked, so a file is listed under its real path when it has one.
+  const links: { abs: string; rel: string; name: string; atRoot: boolean }[] = [];
 
-  async function walk(absDir: string, relDir: string): Promise<void> {
+  async function walk(absDir: string, relDir: string, viaLink: boolean): Promise<void> {
     let entries;
     try {
       entries = await readdir(absDir, { withFileTypes: true });
@@ -361,60 +366,70 @@ export async function discoverSpeciesFiles(
       if (entry.name.startsWith('.')) continue;
       const rel = relDir === '' ? entry.name : `${relDir}/${entry.name}`;
       const abs = path.join(absDir, entry.name);
-      const display = path.join(dir, rel);
-      let isDir = entry.isDirectory();
-      let isFile = entry.isFile();
-      let real = abs;
       if (entry.isSymbolicLink()) {
-        try {
-          real = await realpath(abs);
-        } catch {
-          diagnostics.push(err(display, 'broken symbolic link; refused', { expected: 'a link to a file inside the database folder' }));
-          continue;
-        }
-        if (!isInside(rootReal, real)) {
-          if (isYamlName(entry.name) || (await stat(real).then((s) => s.isDirectory(), () => false))) {
-            diagnostics.push(
-              err(display, `symbolic link resolves outside the database folder (to ${real}); refused`, {
-                expected: 'species files and folders that live inside the database folder',
-              }),
-            );
-          }
-          continue;
-        }
-        const info = await stat(real);
-        isDir = info.isDirectory();
-        isFile = info.isFile();
-      }
-      if (isDir) {
-        if (visitedDirs.has(real)) continue;
-        visitedDirs.add(real);
-        await walk(real, rel);
-      } else if (isFile && isYamlName(entry.name)) {
+        links.push({ abs, rel, name: entry.name, atRoot: relDir === '' });
+      } else if (entry.isDirectory()) {
+        if (visitedDirs.has(abs)) continue;
+        visitedDirs.add(abs);
+        await walk(abs, rel, viaLink);
+      } else if (entry.isFile() && isYamlName(entry.name)) {
         if (relDir === '' && entry.name === settingsName) continue;
-        found.push({ rel, real });
+        found.push({ rel, real: abs, viaLink });
       }
     }
   }
 
-  await walk(rootReal, '');
-  found.sort((a, b) => (a.rel < b.rel ? -1 : a.rel > b.rel ? 1 : 0));
-  const seen = new Map<string, string>();
-  const files: string[] = [];
-  for (const f of found) {
-    const display = path.join(dir, f.rel);
-    const first = seen.get(f.real);
-    if (first !== undefined) {
-      diagnostics.push({
-        severity: 'warning',
-        file: display,
-        path: '',
-        message: `same file as ${first} (reached through a symbolic link); read once`,
-      });
-      continue;
+  async function followLink(link: (typeof links)[number]): Promise<void> {
+    const display = path.join(dir, link.rel);
+    let real: string;
+    try {
+      real = await realpath(link.abs);
+    } catch {
+      diagnostics.push(err(display, 'broken symbolic link; refused', { expected: 'a link to a file or folder inside the database folder' }));
+      return;
     }
-    seen.set(f.real, display);
-    files.push(display);
+    const info = await stat(real);
+    if (!info.isDirectory() && !(info.isFile() && isYamlName(link.name))) return;
+    if (!isInside(rootReal, real)) {
+      diagnostics.push(
+        err(display, `symbolic link resolves outside the database folder (to ${real}); refused`, {
+          expected: 'species files and folders that live inside the database folder',
+        }),
+      );
+      return;
+    }
+    if (info.isDirectory()) {
+      if (visitedDirs.has(real)) return;
+      visitedDirs.add(real);
+      await walk(real, link.rel, true);
+    } else if (!(link.atRoot && link.name === settingsName)) {
+      found.push({ rel: link.rel, real, viaLink: true });
+    }
   }
+
+  await walk(rootReal, '', false);
+  while (links.length > 0) {
+    links.sort((a, b) => (a.rel < b.rel ? -1 : a.rel > b.rel ? 1 : 0));
+    await followLink(links.shift()!);
+  }
+
+  // One entry per real file: the one reached without links, else the first by path.
+  const byPreference = found.slice().sort((a, b) => Number(a.viaLink) - Number(b.viaLink) || (a.rel < b.rel ? -1 : a.rel > b.rel ? 1 : 0));
+  const kept = new Map<string, string>();
+  const skipped: { rel: string; first: string }[] = [];
+  for (const f of byPreference) {
+    const first = kept.get(f.real);
+    if (first === undefined) kept.set(f.real, f.rel);
+    else skipped.push({ rel: f.rel, first });
+  }
+  for (const s of skipped) {
+    diagnostics.push({
+      severity: 'warning',
+      file: path.join(dir, s.rel),
+      path: '',
+      message: `same file as ${path.join(dir, s.first)} (reached through a symbolic link); read once`,
+    });
+  }
+  const files = [...kept.values()].sort().map((rel) => path.join(dir, rel));
   return { files, diagnostics };
 }

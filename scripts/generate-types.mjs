@@ -46,7 +46,8 @@ function simplify(node, isRoot = false) {
 
 /** The generated TypeScript source for the given schema object. */
 export async function generateSpeciesInputTypes(schema) {
-  return compile(simplify(schema, true), 'SpeciesInput', {
+  // Without a title the generator would name the root type after its $id.
+  return compile({ ...simplify(schema, true), title: 'SpeciesInput' }, 'SpeciesInput', {
     bannerComment: BANNER,
     additionalProperties: false,
     declareExternallyReferenced: true,

@@ -126,7 +126,7 @@ export type NonNegativeRotationalTerm =
 /**
  * One species of a qforge database, as written in a YAML document. Unknown keys are errors. Quantities with a unit are a bare number in the default unit or {value, unit}.
  */
-export interface HttpsQforgeInvalidSchemasSpeciesSchemaJson {
+export interface SpeciesInput {
   /**
    * Record name of the species, 1-16 characters of [A-Za-z0-9()+*,._-]; unique in a database.
    */

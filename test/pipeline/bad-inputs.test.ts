@@ -1,0 +1,267 @@
+/**
+ * Table-driven bad inputs across species files, settings and the command line. Each case asserts the exit
+ * code, that the message names the file, line and field, and that the previous outputs are untouched
+ * (hash of the output folder before and after). Species data in the cases are invented for the tests
+ * unless a source is named.
+ */
+import { readFile, symlink, writeFile } from 'node:fs/promises';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { hashFolder, runCli, tempWorkspace } from './helpers.js';
+
+type Ws = Awaited<ReturnType<typeof tempWorkspace>>;
+
+interface BadCase {
+  name: string;
+  /** Prepares the broken state inside the workspace. */
+  setup: (ws: Ws) => Promise<void>;
+  /** Arguments (default: build db --out out). */
+  argv?: string[];
+  code: 1 | 2;
+  /** Each must appear in stderr. */
+  expect: Array<string | RegExp>;
+}
+
+const atom = (name: string, extra = '') =>
+  `name: ${name}\ncomposition: {He: 1}\nenthalpy_of_formation: 0\nsources: ["invented for a test"]\nstructure: atom\n${extra}`;
+
+const write = (rel: string, text: string) => async (ws: Ws) => writeFile(path.join(ws.db, rel), text);
+const editSettings = (from: string | RegExp, to: string) => async (ws: Ws) => {
+  const p = path.join(ws.db, 'qforge.yaml');
+  await writeFile(p, (await readFile(p, 'utf8')).replace(from, to));
+};
+
+const CASES: BadCase[] = [
+  {
+    name: 'YAML syntax error',
+    setup: write('bad.yaml', 'name: He\ncomposition: {He: 1\nstructure: atom\n'),
+    code: 1,
+    expect: [/bad\.yaml:\d+:\d+: error/, /YAML/],
+  },
+  {
+    name: 'misspelt (unknown) key',
+    setup: write('bad.yaml', atom('He', 'electronic_level: [{energy: 0, degeneracy: 1}]\n')),
+    code: 1,
+    expect: [/bad\.yaml:6:1: error/, /electronic_level/, /unknown key/],
+  },
+  {
+    name: 'unknown element',
+    setup: write('bad.yaml', atom('He').replace('{He: 1}', '{Xx: 1}')),
+    code: 1,
+    expect: [/bad\.yaml:2:\d+: error/, /composition/, /Xx/],
+  },
+  {
+    name: 'non-positive vibrational wavenumber',
+    setup: write(
+      'bad.yaml',
+      'name: XY2\ncomposition: {H: 2, O: 1}\nenthalpy_of_formation: 0\nsources: ["invented for a test"]\nstructure: nonlinear\nsymmetry_number: 2\nrotational_constants: [27.9, 14.5, 9.3]\nvibrations: [3657, -1595, 3756]\n',
+    ),
+    code: 1,
+    expect: [/bad\.yaml:8:\d+: error/, /vibrations\[1\]/],
+  },
+  {
+    name: 'wrong number of rotational constants for a nonlinear molecule',
+    setup: write(
+      'bad.yaml',
+      'name: XY2\ncomposition: {H: 2, O: 1}\nenthalpy_of_formation: 0\nsources: ["invented for a test"]\nstructure: nonlinear\nsymmetry_number: 2\nrotational_constants: [27.9]\nvibrations: [3657, 1595, 3756]\n',
+    ),
+    code: 1,
+    expect: [/bad\.yaml:7:\d+: error/, /rotational_constants/],
+  },
+  {
+    name: 'diatomic without symmetry number',
+    setup: async (ws) => {
+      const src = await readFile(path.join(ws.db, 'N2.yaml'), 'utf8');
+      await writeFile(path.join(ws.db, 'bad.yaml'), src.replace('name: N2', 'name: N2x').replace(/^symmetry_number: 2\n/m, ''));
+    },
+    code: 1,
+    expect: [/bad\.yaml:\d+:\d+: error/, /symmetry_number/],
+  },
+  {
+    name: 'missing sources',
+    setup: write('bad.yaml', 'name: He\ncomposition: {He: 1}\nenthalpy_of_formation: 0\nstructure: atom\n'),
+    code: 1,
+    expect: [/bad\.yaml:1:\d+: error/, /sources/],
+  },
+  {
+    name: 'duplicate species name across files',
+    setup: async (ws) => writeFile(path.join(ws.db, 'zz-dup.yaml'), await readFile(path.join(ws.db, 'Ar.yaml'), 'utf8')),
+    code: 1,
+    expect: [/zz-dup\.yaml:\d+:\d+: error/, /duplicate species name 'Ar'/, /Ar\.yaml/],
+  },
+  {
+    name: 'unknown unit',
+    setup: write('bad.yaml', atom('He').replace('enthalpy_of_formation: 0', 'enthalpy_of_formation: {value: 0, unit: kJ/kg}')),
+    code: 1,
+    expect: [/bad\.yaml:3:\d+: error/, /enthalpy_of_formation\.unit/, /kJ\/kg/],
+  },
+  {
+    name: 'YAML alias bomb',
+    setup: write(
+      'bad.yaml',
+      'a: &a [x, x, x, x, x, x, x, x, x]\nb: &b [*a, *a, *a, *a, *a, *a, *a, *a, *a]\nc: &c [*b, *b, *b, *b, *b, *b, *b, *b, *b]\nd: &d [*c, *c, *c, *c, *c, *c, *c, *c, *c]\ne: [*d, *d, *d, *d, *d, *d, *d, *d, *d]\n',
+    ),
+    code: 1,
+    expect: [/bad\.yaml:\d+:\d+: error/, /alias/],
+  },
+  {
+    name: 'YAML tag that would construct an object',
+    setup: write('bad.yaml', atom('He').replace('name: He', 'name: !!js/function "function () { return 1 }"')),
+    code: 1,
+    expect: [/bad\.yaml:1:\d+: error/, /tag/],
+  },
+  {
+    name: 'nuclear spin weights on a heteronuclear molecule',
+    setup: async (ws) => {
+      const src = await readFile(path.join(ws.db, 'CO.yaml'), 'utf8');
+      await writeFile(path.join(ws.db, 'bad.yaml'), src.replace('name: CO', 'name: COx').replace('symmetry_number: 1\n', 'symmetry_number: 1\nnuclear_spin_weights: {even: 1, odd: 3}\n'));
+    },
+    code: 1,
+    expect: [/bad\.yaml:\d+:\d+: error/, /nuclear_spin_weights/],
+  },
+  {
+    name: 'dissociation energy below the zero-point level',
+    setup: async (ws) => {
+      const src = await readFile(path.join(ws.db, 'N2.yaml'), 'utf8');
+      await writeFile(path.join(ws.db, 'bad.yaml'), src.replace('name: N2', 'name: N2x').replace('dissociation_energy: 78714', 'dissociation_energy: 500'));
+    },
+    code: 1,
+    expect: [/bad\.yaml:\d+:\d+: error/, /dissociation_energy/],
+  },
+  {
+    name: 'file larger than the size limit',
+    setup: write('bad.yaml', `${atom('He')}# ${'x'.repeat(1024 * 1024 + 10)}\n`),
+    code: 1,
+    expect: [/bad\.yaml: error/, /too large/],
+  },
+  {
+    name: 'symlinked species file outside the database folder',
+    setup: async (ws) => {
+      const outside = path.join(ws.root, 'outside.yaml');
+      await writeFile(outside, atom('He'));
+      await symlink(outside, path.join(ws.db, 'link.yaml'));
+    },
+    code: 1,
+    expect: [/link\.yaml: error/, /outside the database folder/],
+  },
+  {
+    name: 'settings: unknown key',
+    setup: editSettings('title:', 'titel:'),
+    code: 1,
+    expect: [/qforge\.yaml:3:1: error/, /titel/, /unknown key/],
+  },
+  {
+    name: 'settings: record identifier longer than 6 characters',
+    setup: editSettings('record_identifier: QFTEST', 'record_identifier: TOOLONGID'),
+    code: 1,
+    expect: [/qforge\.yaml:4:\d+: error/, /record_identifier/, /TOOLONGID/],
+  },
+  {
+    name: 'settings: temperature ranges out of order',
+    setup: editSettings('mid: 1000', 'mid: 7000'),
+    code: 1,
+    expect: [/qforge\.yaml:5:\d+: error/, /temperature_ranges/, /low < mid < high/],
+  },
+  {
+    name: 'settings: unknown standard pressure',
+    setup: editSettings('standard_pressure: 1 bar', 'standard_pressure: 2 bar'),
+    code: 1,
+    expect: [/qforge\.yaml:6:\d+: error/, /standard_pressure/],
+  },
+  {
+    name: 'settings: negative tolerance',
+    setup: editSettings('tolerances: {cp: 0.1,', 'tolerances: {cp: -0.1,'),
+    code: 1,
+    expect: [/qforge\.yaml:11:\d+: error/, /tolerances\.cp/],
+  },
+  {
+    name: 'settings: YAML syntax error',
+    setup: editSettings('fit:', 'fit: [\n'),
+    code: 1,
+    expect: [/qforge\.yaml:\d+:\d+: error/, /YAML/],
+  },
+  {
+    name: 'settings: fit tolerance tighter than the form allows (fit check fails the species)',
+    setup: editSettings('tolerances: {cp: 0.1,', 'tolerances: {cp: 0.000001,'),
+    code: 1,
+    expect: [/N2\.yaml: error: \[N2\] fit\.cp/, /Cp\/R fit error/, /exceeds the tolerance/],
+  },
+  {
+    name: 'usage: --jobs 0',
+    setup: async () => {},
+    argv: ['build', 'db', '--out', 'out', '--jobs', '0'],
+    code: 2,
+    expect: [/--jobs/],
+  },
+  {
+    name: 'usage: unknown option',
+    setup: async () => {},
+    argv: ['build', 'db', '--out', 'out', '--fast'],
+    code: 2,
+    expect: [/unknown option '--fast'/],
+  },
+  {
+    name: 'usage: database folder does not exist',
+    setup: async () => {},
+    argv: ['build', 'no-such-db', '--out', 'out'],
+    code: 2,
+    expect: [/no-such-db: no such folder/],
+  },
+  {
+    name: 'usage: output folder not written by qforge',
+    setup: async (ws) => writeFile(path.join(ws.root, 'precious.txt'), 'keep me'),
+    argv: ['build', 'db', '--out', '.'],
+    code: 2,
+    expect: [/not written by qforge/],
+  },
+];
+
+describe('bad inputs: exit code, located message, outputs untouched', () => {
+  let template: Ws;
+  beforeAll(async () => {
+    template = await tempWorkspace();
+  });
+  afterAll(async () => {
+    await template.cleanup();
+  });
+
+  it('has at least 15 kinds of bad input', () => {
+    expect(CASES.length).toBeGreaterThanOrEqual(15);
+  });
+
+  for (const c of CASES) {
+    it(c.name, async () => {
+      const ws = await tempWorkspace();
+      try {
+        const first = await runCli(['build', 'db', '--out', 'out', '--quiet'], ws.root);
+        expect(first.code, first.stderr).toBe(0);
+        const before = await hashFolder(ws.out);
+        await c.setup(ws);
+        const r = await runCli(c.argv ?? ['build', 'db', '--out', 'out'], ws.root);
+        expect(r.code, r.stderr).toBe(c.code);
+        for (const e of c.expect) expect(r.stderr).toMatch(e);
+        expect(r.stderr).not.toMatch(/internal error/);
+        expect(await hashFolder(ws.out)).toBe(before);
+        if (c.argv?.includes('.')) expect(await readFile(path.join(ws.root, 'precious.txt'), 'utf8')).toBe('keep me');
+      } finally {
+        await ws.cleanup();
+      }
+    });
+  }
+
+  it('check reports every problem of every file in one run', async () => {
+    const ws = await tempWorkspace();
+    try {
+      await writeFile(path.join(ws.db, 'a.yaml'), atom('He', 'electronic_level: []\n'));
+      await writeFile(path.join(ws.db, 'b.yaml'), atom('Ne').replace('{He: 1}', '{Qq: 1}').replace('sources: ["invented for a test"]\n', ''));
+      const r = await runCli(['check', 'db'], ws.root);
+      expect(r.code).toBe(1);
+      expect(r.stderr).toMatch(/a\.yaml:6:1: error: .*electronic_level/);
+      expect(r.stderr).toMatch(/b\.yaml:2:\d+: error: .*Qq/);
+      expect(r.stderr).toMatch(/b\.yaml:\d+:\d+: error: .*sources/);
+      expect(await hashFolder(ws.out)).toBe('absent');
+    } finally {
+      await ws.cleanup();
+    }
+  });
+});

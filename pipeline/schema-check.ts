@@ -429,5 +429,6 @@ export function checkAgainstSchema(
         emit(at, doc.locate(at), { message: e.message ?? `fails '${e.keyword}'`, value: e.data });
     }
   }
-  return out;
+  // Source order, so a report reads top to bottom like the file.
+  return out.sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0) || a.path.localeCompare(b.path));
 }

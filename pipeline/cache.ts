@@ -42,9 +42,10 @@ export class StageCache {
 
   async get<T>(kind: CacheKind, key: string): Promise<CacheLookup<T>> {
     if (!this.dir) return { outcome: 'off' };
+    const file = this.entryPath(kind, key);
     let text: string;
     try {
-      text = await readFile(this.entryPath(kind, key), 'utf8');
+      text = await readFile(file, 'utf8');
     } catch {
       return { outcome: 'miss' };
     }

@@ -1,0 +1,160 @@
+/**
+ * Unit checks of the pipeline pieces: settings defaults against their schema, file-name safety, the cache
+ * entry checks, the temperature grids, the atomic swap and the help texts. No reference data here (common
+ * practice checks of our own code only).
+ */
+import { mkdir, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import settingsSchema from '../../schemas/settings.schema.json' with { type: 'json' };
+import { OutputFolderError, publishDirectory, safeJoin } from '../../pipeline/atomic-write.js';
+import { StageCache } from '../../pipeline/cache.js';
+import { speciesFileStem, tableFileNames } from '../../pipeline/emit.js';
+import { sha256Hex } from '../../pipeline/hash.js';
+import { temperatureGrid } from '../../pipeline/plan.js';
+import { DEFAULT_SETTINGS, withDefaults } from '../../pipeline/settings.js';
+import { parseTriple } from '../../pipeline/cli.js';
+import { runCli } from './helpers.js';
+
+/** Every `default` of the schema, by dotted path. */
+function schemaDefaults(schema: any, prefix = ''): Map<string, unknown> {
+  const out = new Map<string, unknown>();
+  for (const [k, sub] of Object.entries<any>(schema.properties ?? {})) {
+    const p = prefix ? `${prefix}.${k}` : k;
+    if ('default' in sub) out.set(p, sub.default);
+    for (const [kk, vv] of schemaDefaults(sub, p)) out.set(kk, vv);
+  }
+  return out;
+}
+
+const get = (o: any, p: string) => p.split('.').reduce((x, k) => x?.[k], o);
+
+describe('settings', () => {
+  it('every schema default equals the code default, and every leaf setting has a schema default', () => {
+    const defaults = schemaDefaults(settingsSchema);
+    for (const [p, v] of defaults) expect(get(DEFAULT_SETTINGS, p), p).toEqual(v);
+    const leaves = (o: any, prefix = ''): string[] =>
+      Object.entries(o).flatMap(([k, v]) =>
+        v && typeof v === 'object' && !Array.isArray(v) ? leaves(v, prefix ? `${prefix}.${k}` : k) : [prefix ? `${prefix}.${k}` : k],
+      );
+    for (const leaf of leaves(DEFAULT_SETTINGS)) expect(defaults.has(leaf), `${leaf} has no documented default`).toBe(true);
+  });
+
+  it('merges partial settings over the defaults', () => {
+    const s = withDefaults({ fit: { weights: { h: 2 } }, tables: { extra: [] } });
+    expect(s.fit.weights).toEqual({ cp: 1, h: 2, s: 1 });
+    expect(s.tables.extra).toEqual([]);
+    expect(s.temperature_ranges).toEqual({ low: 200, mid: 1000, high: 6000 });
+    expect(withDefaults({ fit: { optimise_mid: { min: 800, max: 1400 } } }).fit.optimise_mid).toEqual({ min: 800, max: 1400, step: 50 });
+  });
+});
+
+describe('file names never escape the output folder', () => {
+  it.each([
+    ['../x', '%2E%2E%2Fx'],
+    ['..', '%2E%2E'],
+    ['.hidden', '%2Ehidden'],
+    ['a/b', 'a%2Fb'],
+    ['C*', 'C%2A'],
+    ['NO+', 'NO+'],
+    ['CH2(S)', 'CH2(S)'],
+    ['C2H5,OH', 'C2H5,OH'],
+    ['a..b', 'a..b'],
+    ['100%', '100%25'],
+  ])('%s → %s', (name, stem) => {
+    expect(speciesFileStem(name)).toBe(stem);
+    const target = safeJoin('/out/tables', `${speciesFileStem(name)}.csv`);
+    expect(path.dirname(target)).toBe(path.resolve('/out/tables'));
+  });
+
+  it('safeJoin refuses paths that leave the root', () => {
+    expect(() => safeJoin('/out', '../x.csv')).toThrow(OutputFolderError);
+    expect(() => safeJoin('/out', '/etc/passwd')).toThrow(OutputFolderError);
+    expect(() => safeJoin('/out', 'tables/../../x')).toThrow(OutputFolderError);
+    expect(safeJoin('/out', 'tables/N2.csv')).toBe(path.resolve('/out/tables/N2.csv'));
+  });
+
+  it('names equal up to letter case get distinct files', () => {
+    const m = tableFileNames(['Co', 'CO'], sha256Hex);
+    expect(m.get('CO')).toBe('tables/CO.csv');
+    expect(m.get('Co')).toMatch(/^tables\/Co_[0-9a-f]{8}\.csv$/);
+  });
+});
+
+describe('cache entries', () => {
+  it('hit only when format, kind, key and checksum all match', async () => {
+    const dir = await mkdtemp(path.join(tmpdir(), 'qforge-cache-'));
+    try {
+      const cache = new StageCache(dir);
+      const key = sha256Hex('k');
+      expect((await cache.get('fit', key)).outcome).toBe('miss');
+      await cache.put('fit', key, { a: [1, 2.5] });
+      expect(await cache.get('fit', key)).toEqual({ outcome: 'hit', value: { a: [1, 2.5] } });
+      expect((await cache.get('samples', key)).outcome).toBe('miss');
+      const file = path.join(dir, 'fit', key.slice(0, 2), `${key}.json`);
+      const entry = JSON.parse(await readFile(file, 'utf8'));
+      await writeFile(file, JSON.stringify({ ...entry, kind: 'table' }));
+      expect((await cache.get('fit', key)).reason).toMatch(/kind/);
+      await writeFile(file, JSON.stringify({ ...entry, format: 'other/1' }));
+      expect((await cache.get('fit', key)).reason).toMatch(/foreign format/);
+      await writeFile(file, JSON.stringify({ ...entry, payload: { a: [1, 2.6] } }));
+      expect((await cache.get('fit', key)).reason).toMatch(/checksum/);
+      await expect(new StageCache(undefined).get('fit', key)).resolves.toEqual({ outcome: 'off' });
+      await expect(cache.get('fit', '../../etc')).rejects.toThrow(/sha256/);
+    } finally {
+      await rm(dir, { recursive: true, force: true });
+    }
+  });
+});
+
+describe('temperature grids', () => {
+  it('include the ends, the extras inside the range, and carry no binary noise', () => {
+    expect(temperatureGrid(200, 1000, 200, [298.15, 1000, 7000])).toEqual([200, 298.15, 400, 600, 800, 1000]);
+    const g = temperatureGrid(200, 201, 0.1);
+    expect(g).toHaveLength(11);
+    expect(g[3]).toBe(200.3);
+    expect(temperatureGrid(200, 6000, 7).at(-1)).toBe(6000);
+  });
+});
+
+describe('atomic publication', () => {
+  it('replaces a qforge folder as a whole and refuses a foreign one', async () => {
+    const root = await mkdtemp(path.join(tmpdir(), 'qforge-swap-'));
+    try {
+      const out = path.join(root, 'out');
+      await publishDirectory(out, new Map([['a.txt', 'one'], ['sub/b.txt', 'two']]));
+      expect(await readFile(path.join(out, 'sub/b.txt'), 'utf8')).toBe('two');
+      await publishDirectory(out, new Map([['c.txt', 'three']]));
+      await expect(readFile(path.join(out, 'a.txt'), 'utf8')).rejects.toThrow();
+      expect(await readFile(path.join(out, 'c.txt'), 'utf8')).toBe('three');
+      const foreign = path.join(root, 'foreign');
+      await mkdir(foreign);
+      await writeFile(path.join(foreign, 'thesis.tex'), 'precious');
+      await expect(publishDirectory(foreign, new Map([['x', 'y']]))).rejects.toThrow(/not written by qforge/);
+      await expect(publishDirectory(out, new Map([['../escape.txt', 'x']]))).rejects.toThrow(/leave the output folder/);
+      expect(await readFile(path.join(out, 'c.txt'), 'utf8')).toBe('three');
+    } finally {
+      await rm(root, { recursive: true, force: true });
+    }
+  });
+});
+
+describe('command line', () => {
+  it('--help of every command exits 0 and shows examples', async () => {
+    for (const cmd of ['build', 'check', 'table', 'diff', 'compare']) {
+      const r = await runCli([cmd, '--help'], process.cwd());
+      expect(r.code, cmd).toBe(0);
+      expect(r.stdout, cmd).toMatch(/Examples:/);
+    }
+    expect((await runCli(['--version'], process.cwd())).code).toBe(0);
+    const none = await runCli(['frobnicate'], process.cwd());
+    expect(none.code).toBe(2);
+  });
+
+  it('parses --fail-above / --tolerance lists', () => {
+    expect(parseTriple('cp=0.1,h=2e-3')).toEqual({ cp: 0.1, h: 0.002 });
+    expect(() => parseTriple('cp=-1')).toThrow();
+    expect(() => parseTriple('x=1')).toThrow();
+  });
+});

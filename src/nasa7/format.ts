@@ -89,6 +89,7 @@ export function formatNasa7Record(rec: Nasa7Record): string[] {
   if (name.length === 0 || name.length > NAME_WIDTH || !PRINTABLE.test(name)) {
     throw new Nasa7FormatError(name, 'name', `${JSON.stringify(name)}: expected 1–${NAME_WIDTH} printable ASCII characters without blanks (got ${name.length})`);
   }
+  if (name.startsWith('!')) throw new Nasa7FormatError(name, 'name', `${JSON.stringify(name)}: a leading '!' would make readers take the line for a comment`);
   if (rec.identifier.length > IDENTIFIER_WIDTH || !PRINTABLE_OR_BLANK.test(rec.identifier)) {
     throw new Nasa7FormatError(name, 'identifier', `${JSON.stringify(rec.identifier)}: expected at most ${IDENTIFIER_WIDTH} printable ASCII characters`);
   }

@@ -124,7 +124,8 @@ export function parseNasa7File(text: string, fileName: string): Nasa7ParseResult
       i = 2;
     }
   }
-  const isEnd = (l: SourceLine) => /^END\b/i.test(l.text.trim());
+  // A record whose name starts with END (line 1 carries '1' in column 80) is not the terminator.
+  const isEnd = (l: SourceLine) => /^END\b/i.test(l.text.trim()) && column80(l.text) !== '1';
   while (i < content.length && !isEnd(content[i]!)) {
     const group: SourceLine[] = [];
     let j = i;

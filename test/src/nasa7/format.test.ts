@@ -101,6 +101,7 @@ describe('what the layout cannot hold is an error, never a silent cut', () => {
     expect(err({ name: 'CH3CH2CH2CH2CH2OOH1' })).toThrow(/name: "CH3CH2CH2CH2CH2OOH1": expected 1–18 printable ASCII characters without blanks \(got 19\)/);
     expect(err({ name: 'N2 gas' })).toThrow(Nasa7FormatError);
     expect(err({ name: '' })).toThrow(Nasa7FormatError);
+    expect(err({ name: '!X' })).toThrow(/leading '!'/);
   });
   it('an identifier longer than 6, a count that does not fit 3 columns, a bad symbol, zero or real counts', () => {
     expect(err({ identifier: '2026-12' })).toThrow(/identifier: "2026-12": expected at most 6/);

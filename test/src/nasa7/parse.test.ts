@@ -116,3 +116,11 @@ describe('parseNasa7File', () => {
     expect(records[1]!.elements).toEqual([['N', 1], ['O', 1], ['E', -1]]);
   });
 });
+
+describe('names that look like framing', () => {
+  it('a record named END-X (with its column-80 number) is a record, not the terminator', () => {
+    const { records, errors } = parseNasa7File(rec([L1.replace('AB2   ', 'END-X '), L2, L3, L4, 'END']), 'e.dat');
+    expect(errors).toEqual([]);
+    expect(records.map((r) => r.name)).toEqual(['END-X']);
+  });
+});

@@ -18,7 +18,8 @@ export async function createProgressReporter(
   mode: { quiet: boolean; tty: boolean },
 ): Promise<ProgressReporter> {
   if (mode.quiet) return { onProgress: () => {}, stop: () => {} };
-  if (!mode.tty) {
+  const isTerminal = mode.tty && typeof (stderr as { cursorTo?: unknown }).cursorTo === 'function';
+  if (!isTerminal) {
     return {
       onProgress(e) {
         if (e.kind === 'stage') stderr.write(`qforge: ${e.stage}${e.detail ? `: ${e.detail}` : ''}\n`);

@@ -9,16 +9,22 @@
  *  3. Cp/R > 0, and Cp/R ≥ 5/2 − tolerances.cp (an ideal gas has Cv ≥ 3R/2 from translation and every other
  *     contribution is an energy variance ≥ 0, so Cp/R ≥ 5/2; McQuarrie, Statistical Mechanics, 1976,
  *     ch. 3) on a grid of step ≤ 5 K over [tLow − 100 K, tHigh + 100 K];
- *  4. smoothness: the number of direction reversals of the fitted Cp/R, counted with a hysteresis
- *     (zigzag) filter — a reversal counts only once Cp/R has moved back by more than an amplitude δ — must
- *     not exceed the number of reversals the samples show under the same filter. Done twice: inside
- *     [tLow, tHigh] with δ = max(tolerances.smoothness, 2 E), and over [tLow − 100 K, tHigh + 100 K] with
- *     δ = max(tolerances.extrapolationSmoothness, 2 E), where E is the fit's own max |ΔCp/R| at the
- *     samples. Why 2 E: if the data is monotone and the fit stays within ±E of it, the fit can reverse by
- *     up to 2 E without any defect (the error check bounds E separately); a larger reversal is structure
- *     the data does not have — between samples or beyond an end. The extra reversals farthest from any
- *     reversal of the data are reported. The hysteresis also keeps real structure in the data (e.g. the
- *     Cp maximum of an atom with low-lying levels) from being counted against the fit.
+ *  4. smoothness inside the range: the number of direction reversals of the fitted Cp/R, counted with a
+ *     hysteresis (zigzag) filter — a reversal counts only once Cp/R has moved back by more than an
+ *     amplitude δ — must not exceed the number of reversals the samples show under the same filter, with
+ *     δ = max(tolerances.smoothness, 2 E), E the fit's own max |ΔCp/R| at the samples. Why 2 E: if the data
+ *     is monotone and the fit stays within ±E of it, the fit can reverse by up to 2 E without any defect
+ *     (the error check bounds E separately); a larger reversal is structure the data does not have, e.g.
+ *     between samples. The extra reversals farthest from any reversal of the data are reported. The
+ *     hysteresis keeps real structure in the data (the Cp maximum of an atom with low-lying levels) from
+ *     counting against the fit.
+ *  5. smoothness beyond the ends: within `extrapolation` K beyond each end, walking outward, the fitted
+ *     Cp/R must not turn back against the direction it has at the end by more than
+ *     tolerances.extrapolationSmoothness. Continuing a trend (even a steep one) is not a turn-over — the
+ *     positivity checks above bound a plunge; a quartic that bends round just past the end is.
+ *     (A first version counted reversals over the extended span against the data's; it failed NO, whose
+ *     real Cp minimum near 300 K is shallow inside the range but deep once the fit, correctly, keeps rising
+ *     below 200 K.)
  *     Measured on closed-form RRHO data (test/src/nasa7): careful fits of N2, CH4, H2O turn over by
  *     ≈ 0.006–0.06 in Cp/R near the ends (CH4: 0.055 at 5540–6000 K with E = 0.083) — the form's floor.
  */
@@ -242,24 +248,16 @@ function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: 
   else if (floor) out.push(floor);
 
   const data = samples.filter((s) => s.T >= poly.tLow && s.T <= poly.tHigh).sort((a, b) => a.T - b.T);
-  const inside = ts.map((T, i) => [T, i] as const).filter(([T]) => T >= poly.tLow && T <= poly.tHigh);
+  const inside = ts.filter((T) => T >= poly.tLow && T <= poly.tHigh);
   let maxCpError = 0;
   for (const s of data) maxCpError = Math.max(maxCpError, Math.abs(evaluateNasa7(poly, s.T).cpR - s.cpR));
-  const band = 2 * maxCpError;
-  const passes: Array<{ ts: number[]; cps: number[]; delta: number; span: string }> = [
-    { ts: inside.map(([T]) => T), cps: inside.map(([, i]) => cps[i]!), delta: Math.max(tol.smoothness, band), span: `${fmt(poly.tLow)}–${fmt(poly.tHigh)} K` },
-    { ts, cps, delta: Math.max(tol.extrapolationSmoothness, band), span: `${fmt(from)}–${fmt(to)} K (${tol.extrapolation} K beyond the range)` },
-  ];
-  const reported = new Set<number>();
-  for (const pass of passes) {
-    const dataRev = hysteresisReversals(data.map((s) => s.T), data.map((s) => s.cpR), pass.delta);
-    const fitRev = hysteresisReversals(pass.ts, pass.cps, pass.delta);
-    if (fitRev.length <= dataRev.length) continue;
+  const delta = Math.max(tol.smoothness, 2 * maxCpError);
+  const dataRev = hysteresisReversals(data.map((s) => s.T), data.map((s) => s.cpR), delta);
+  const fitRev = hysteresisReversals(inside, inside.map((T) => evaluateNasa7(poly, T).cpR), delta);
+  if (fitRev.length > dataRev.length) {
     const distance = (T: number) => (dataRev.length ? Math.min(...dataRev.map((d) => Math.abs(d - T))) : Infinity);
     const extra = [...fitRev].sort((a, b) => distance(b) - distance(a) || a - b).slice(0, fitRev.length - dataRev.length).sort((a, b) => a - b);
     for (const T of extra) {
-      if (reported.has(T)) continue;
-      reported.add(T);
       const range = where(poly, T);
       out.push({
         quantity: 'cp-wiggle',
@@ -267,7 +265,39 @@ function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: 
         T,
         value: fitRev.length,
         limit: dataRev.length,
-        message: `Cp/R of the fit turns over at ${fmt(T)} K (${range}) where the data does not: over ${pass.span} the fit reverses direction by more than ${fmt(pass.delta)} in Cp/R ${fitRev.length} time(s), the samples ${dataRev.length}`,
+        message: `Cp/R of the fit turns over at ${fmt(T)} K (${range} range) where the data does not: over ${fmt(poly.tLow)}–${fmt(poly.tHigh)} K the fit reverses direction by more than ${fmt(delta)} in Cp/R ${fitRev.length} time(s), the samples ${dataRev.length}`,
+      });
+    }
+  }
+
+  for (const end of ['low', 'high'] as const) {
+    const tEnd = end === 'low' ? poly.tLow : poly.tHigh;
+    const outward = end === 'low' ? -1 : 1;
+    const coeffs = end === 'low' ? poly.low : poly.high;
+    // Direction of Cp/R when walking outward from the end (+1 rising, −1 falling, 0 flat → either way).
+    const slope = outward * cpDerivative(coeffs, tEnd);
+    const zone = ts.filter((T) => (end === 'low' ? T < tEnd && T >= from : T > tEnd && T <= to)).sort((a, b) => outward * (a - b));
+    let best = evaluateRange(coeffs, tEnd).cpR;
+    let bestT = tEnd;
+    let worst = { retreat: 0, T: tEnd, turn: tEnd };
+    for (const T of zone) {
+      const cp = evaluateNasa7(poly, T).cpR;
+      const dir = slope >= 0 ? 1 : -1;
+      if (dir * (cp - best) > 0) {
+        best = cp;
+        bestT = T;
+      }
+      const retreat = dir * (best - cp);
+      if (slope !== 0 && retreat > worst.retreat) worst = { retreat, T, turn: bestT };
+    }
+    if (worst.retreat > tol.extrapolationSmoothness) {
+      out.push({
+        quantity: 'cp-wiggle',
+        range: 'extrapolation',
+        T: worst.turn,
+        value: worst.retreat,
+        limit: tol.extrapolationSmoothness,
+        message: `Cp/R of the fit turns over at ${fmt(worst.turn)} K, ${fmt(Math.abs(worst.turn - tEnd))} K beyond T_${end === 'low' ? 'low' : 'high'} = ${fmt(tEnd)} K, and turns back by ${fmt(worst.retreat)} by ${fmt(worst.T)} K; limit ${fmt(tol.extrapolationSmoothness)} within ${tol.extrapolation} K of the range`,
       });
     }
   }

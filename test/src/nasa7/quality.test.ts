@@ -71,9 +71,21 @@ describe('assessFit', () => {
     const fit: FitResult = { ...fitN2, polynomial: poly, metrics: { ...fitN2.metrics, anchor: { h: 0, s: 0 } } };
     const v = assessFit(fit, samples);
     expect(v.map((x) => [x.quantity, x.range, x.T])).toEqual([['cp-wiggle', 'extrapolation', 150]]);
-    expect(v[0]!.message).toMatch(/^Cp\/R of the fit turns over at 150 K \(extrapolation\) where the data does not: over 100–2100 K \(100 K beyond the range\)/);
+    expect(v[0]!.message).toBe(
+      'Cp/R of the fit turns over at 150 K, 50 K beyond T_low = 200 K, and turns back by 0.25 by 100 K; limit 0.1 within 100 K of the range',
+    );
     // Checked only 40 K beyond the ends, the turn-over is out of sight.
     expect(assessFit(fit, samples, { extrapolation: 40 })).toEqual([]);
+  });
+
+  it('continuing a trend beyond the end is not a turn-over (a real Cp minimum inside the range, as for NO)', () => {
+    // INVENTED: Cp/R = 3.5 + 1e-5 (T − 250)², minimum at 250 K inside the data, rising steadily below 200 K.
+    const k = 1e-5;
+    const c: Coefficients7 = [3.5 + k * 250 * 250, -2 * k * 250, k, 0, 0, 0, 0];
+    const poly = { tLow: 200, tMid: 1000, tHigh: 2000, low: c, high: [...c] as Coefficients7 };
+    const samples = grid(200, 2000, 10).map((T) => ({ T, ...evaluateNasa7(poly, T) }));
+    const fit: FitResult = { ...fitN2, polynomial: poly, metrics: { ...fitN2.metrics, anchor: { h: 0, s: 0 } } };
+    expect(assessFit(fit, samples, { cp: 1, h: 1, s: 1 })).toEqual([]);
   });
 
   it('Cp ≤ 0 anywhere in the checked span is reported', () => {

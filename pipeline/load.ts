@@ -35,6 +35,11 @@ import type { Diagnostic } from './diagnostics.js';
 export const DEFAULT_MAX_BYTES = 1024 * 1024;
 /** Default cap on alias expansions per document (yaml's own default; legitimate files use a handful). */
 export const DEFAULT_MAX_ALIAS_COUNT = 100;
+/**
+ * Default cap on flow-collection nesting ([ ] and { }). A species needs 3 or 4 levels; a file of a few hundred
+ * thousand nested brackets (well under the size limit) would otherwise exhaust the parser's memory.
+ */
+export const DEFAULT_MAX_NESTING = 64;
 /** The settings file at the root of a database folder, never read as a species file. */
 export const SETTINGS_FILE_NAME = 'qforge.yaml';
 
@@ -73,6 +78,8 @@ export interface ParseOptions {
   maxBytes?: number;
   /** Cap on alias expansions per YAML document. Default 100. */
   maxAliasCount?: number;
+  /** Cap on nesting of flow collections ([ ] and { }). Default 64. */
+  maxNesting?: number;
   /**
    * How a YAML document maps to species: 'species' (default) splits a top-level list into one document per
    * item; 'single' keeps each YAML document whole (e.g. for a settings file).
@@ -162,6 +169,36 @@ function locateIn(
   return best === undefined ? undefined : positionOf(lc, best);
 }
 
+const QUOTE_OPENERS = new Set([' ', '\t', '\n', '\r', '[', '{', ',', ':', '-']);
+
+/**
+ * Offset where flow nesting first exceeds `limit`, or -1. A light scan, run before the parser: it skips
+ * comments and quoted scalars (so brackets inside text do not count) and only needs to be conservative.
+ */
+function flowNestingOverflow(text: string, limit: number): number {
+  let depth = 0;
+  for (let i = 0; i < text.length; i++) {
+    const ch = text[i]!;
+    const prev = i === 0 ? '\n' : text[i - 1]!;
+    if (ch === '#' && (prev === ' ' || prev === '\t' || prev === '\n' || prev === '\r')) {
+      while (i < text.length && text[i] !== '\n') i++;
+    } else if ((ch === '"' || ch === "'") && QUOTE_OPENERS.has(prev)) {
+      for (i++; i < text.length; i++) {
+        if (ch === '"' && text[i] === '\\') i++;
+        else if (text[i] === ch) {
+          if (ch === "'" && text[i + 1] === "'") i++;
+          else break;
+        }
+      }
+    } else if (ch === '[' || ch === '{') {
+      if (++depth > limit) return i;
+    } else if ((ch === ']' || ch === '}') && depth > 0) {
+      depth--;
+    }
+  }
+  return -1;
+}
+
 function isExcessiveAliasError(e: unknown): boolean {
   return e instanceof Error && /alias count|resource exhaustion/i.test(e.message);
 }
@@ -184,6 +221,21 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
   }
 
   const lc = new LineCounter();
+  const maxNesting = opts.maxNesting ?? DEFAULT_MAX_NESTING;
+  const overflow = flowNestingOverflow(text, maxNesting);
+  if (overflow >= 0) {
+    const upTo = text.slice(0, overflow);
+    const line = upTo.split('\n').length;
+    const column = overflow - upTo.lastIndexOf('\n');
+    result.diagnostics.push(
+      err(displayPath, `YAML nesting deeper than ${maxNesting} levels of [ ] / { }; refused`, {
+        line,
+        column,
+        expected: `at most ${maxNesting} nested lists or mappings`,
+      }),
+    );
+    return result;
+  }
   let docs: Document.Parsed[];
   try {
     docs = parseAllDocuments(text, {

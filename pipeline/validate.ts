@@ -173,7 +173,20 @@ interface Ctx {
 
 function checkName(ctx: Ctx): void {
   const name = ctx.input.name;
-  if (typeof name === 'string' && /^\.+$/.test(name)) {
+  if (typeof name !== 'string') return;
+  // The 80-column file is framed by THERMO ... END lines; readers would take a record of that name for framing.
+  if (/^(END|THERMO)$/i.test(name)) {
+    ctx.f.error(['name'], `'${name}' is a keyword of the 80-column thermo file and cannot name a record`, {
+      value: name,
+      expected: 'another name (e.g. with a suffix)',
+    });
+  } else if (/^END/i.test(name)) {
+    ctx.f.warn(['name'], `a name starting with '${name.slice(0, 3)}' may be read as the END line by some readers of the 80-column file`, {
+      value: name,
+      expected: 'a name that does not start with END',
+    });
+  }
+  if (/^\.+$/.test(name)) {
     ctx.f.error(['name'], 'a name made only of dots cannot name a record or an output file', {
       value: name,
       expected: 'a name with at least one letter, digit or symbol other than "."',

@@ -107,6 +107,21 @@ describe('parseYamlText', () => {
     expect(r.documents[0]!.value).toEqual({ x: { value: 1, unit: 'eV' }, y: { value: 1, unit: 'eV' }, z: { value: 1, unit: 'eV' } });
   });
 
+  it('refuses absurdly deep nesting before parsing (it would exhaust the parser), but not brackets in text', () => {
+    const n = 400_000;
+    const r = parseYamlText(`name: X\nx: ${'['.repeat(n)}${']'.repeat(n)}\n`, 'deep.yaml');
+    expect(r.documents).toEqual([]);
+    expect(r.diagnostics).toEqual([
+      expect.objectContaining({ severity: 'error', line: 2, column: 4 + 64, message: expect.stringContaining('nesting deeper than 64 levels') }),
+    ]);
+    const ok = parseYamlText(`sources: ["${'['.repeat(100)}", '${'{'.repeat(100)}', "a \\" ${'['.repeat(100)}"] # ${'['.repeat(100)}\n`, 'ok.yaml');
+    expect(ok.diagnostics).toEqual([]);
+    // Nesting the parser itself cannot follow is still a diagnostic, not a crash.
+    const deep = parseYamlText(`x: ${'['.repeat(2000)}${']'.repeat(2000)}\n`, 'deep2.yaml', { maxNesting: 5000 });
+    expect(deep.documents).toEqual([]);
+    expect(deep.diagnostics[0]!.severity).toBe('error');
+  });
+
   it('refuses text larger than the limit', () => {
     const r = parseYamlText(`name: ${'x'.repeat(2000)}\n`, 'big.yaml', { maxBytes: 1000 });
     expect(r.documents).toEqual([]);

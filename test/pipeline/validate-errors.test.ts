@@ -182,6 +182,10 @@ const ERRORS: Case[] = [
     kind: 'invalid record name', yaml: edit(ATOM, { 1: 'name: O atom!' }), line: 1, at: 'O atom!', path: 'name',
     contains: ['wrong form', 'got "O atom!"', '1-16 characters'],
   },
+  {
+    kind: 'name that is a keyword of the 80-column file', yaml: edit(ATOM, { 1: 'name: end' }), line: 1, at: 'end', path: 'name',
+    contains: ["'end' is a keyword of the 80-column thermo file"],
+  },
   { kind: 'name of dots only', yaml: edit(ATOM, { 1: 'name: ".."' }), line: 1, at: '".."', path: 'name', contains: ['only of dots'] },
   {
     kind: 'misspelt structure', yaml: edit(ATOM, { 5: 'structure: atomic' }), line: 5, at: 'atomic', path: 'structure',
@@ -246,6 +250,7 @@ const WARNINGS: Case[] = [
     kind: 'symmetry number without equivalent atoms', yaml: edit(NONLINEAR, { 1: 'name: HOCl', 2: 'composition: {H: 1, O: 1, Cl: 1}' }), line: 6, at: '2',
     path: 'symmetry_number', contains: ['no two atoms of the same element'],
   },
+  { kind: 'name starting with END', yaml: edit(ATOM, { 1: 'name: ENDO' }), line: 1, at: 'ENDO', path: 'name', contains: ['may be read as the END line'] },
   { kind: 'source that says nothing', yaml: edit(ATOM, { 4: 'sources: [TODO]' }), line: 4, at: 'TODO', path: 'sources[0]', contains: ['does not say where'] },
   {
     kind: 'enthalpy given at 0 K', yaml: edit(ATOM, { 3: 'enthalpy_of_formation: {value: 246.79, temperature: 0}' }), line: 3, at: '0}',

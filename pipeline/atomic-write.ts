@@ -16,7 +16,7 @@
  * OUT is owned by qforge: it carries a marker file, and a non-empty folder without one is never replaced.
  */
 import { randomBytes } from 'node:crypto';
-import { mkdir, open, readdir, rename, rm, stat } from 'node:fs/promises';
+import { mkdir, open, readdir, readFile, rename, rm, stat } from 'node:fs/promises';
 import path from 'node:path';
 
 /** Marker file that identifies a folder as a qforge build output (content is constant). */
@@ -30,6 +30,14 @@ export class OutputFolderError extends Error {
   }
 }
 
+/** Another live build holds the lock of the same output folder. */
+export class BuildLockedError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = 'BuildLockedError';
+  }
+}
+
 const siblings = (out: string) => {
   const abs = path.resolve(out);
   const parent = path.dirname(abs);
@@ -39,6 +47,7 @@ const siblings = (out: string) => {
     parent,
     base,
     old: path.join(parent, `.${base}.qforge-old`),
+    lock: path.join(parent, `.${base}.qforge-lock`),
     newPrefix: `.${base}.qforge-new-`,
   };
 };
@@ -60,6 +69,39 @@ function processAlive(pid: number): boolean {
   } catch (err) {
     return (err as NodeJS.ErrnoException).code === 'EPERM';
   }
+}
+
+/**
+ * Takes the lock of OUT (`.<OUT>.qforge-lock` next to it, holding the owner's pid) so that two builds never
+ * swap the same folder at once. A lock whose process is gone (killed build) is taken over. Returns the
+ * release function.
+ */
+export async function acquireOutputLock(out: string): Promise<() => Promise<void>> {
+  const s = siblings(out);
+  await mkdir(s.parent, { recursive: true });
+  for (let attempt = 0; attempt < 3; attempt++) {
+    try {
+      const fh = await open(s.lock, 'wx');
+      await fh.writeFile(`${process.pid}\n`);
+      await fh.close();
+      return async () => {
+        await rm(s.lock, { force: true });
+      };
+    } catch (err) {
+      if ((err as NodeJS.ErrnoException).code !== 'EEXIST') throw err;
+      let owner = NaN;
+      try {
+        owner = Number((await readFile(s.lock, 'utf8')).trim());
+      } catch {
+        // Vanished in between: try again.
+      }
+      if (processAlive(owner) && owner !== process.pid) {
+        throw new BuildLockedError(`another qforge build (pid ${owner}) is writing ${out}; try again when it has finished`);
+      }
+      await rm(s.lock, { force: true });
+    }
+  }
+  throw new BuildLockedError(`could not take the lock ${s.lock}`);
 }
 
 /** Writes a file through a temporary name and a rename, fsync'd. */

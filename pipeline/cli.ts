@@ -203,6 +203,10 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
       if (e.code === 'commander.helpDisplayed' || e.code === 'commander.version' || e.code === 'commander.help') return 0;
       return 2;
     }
+    if ((e as Error)?.name === 'BuildLockedError') {
+      io.stderr.write(`qforge: error: ${(e as Error).message}\n`);
+      return 1;
+    }
     if (e instanceof UsageError || ['UsageError', 'OutputFolderError'].includes((e as Error)?.name)) {
       io.stderr.write(`qforge: error: ${(e as Error).message}\n`);
       return 2;

@@ -11,7 +11,7 @@ import pLimit from 'p-limit';
 import type { Species, StandardProperties } from '../src/model.js';
 import { Nasa7FormatError } from '../src/nasa7/errors.js';
 import type { FitOptions, FitResult } from '../src/nasa7/types.js';
-import { recoverOutputDir, publishDirectory, type PublishHooks } from './atomic-write.js';
+import { acquireOutputLock, recoverOutputDir, publishDirectory, type PublishHooks } from './atomic-write.js';
 import { cached, StageCache, type CacheKind, type CacheOutcome } from './cache.js';
 import { computeSamples, computeTable, type ComputedSpecies } from './compute.js';
 import { compareDiagnostics, formatDiagnostic, hasErrors, type Diagnostic } from './diagnostics.js';
@@ -325,6 +325,15 @@ const ms = (x: number) => Math.round(x * 1000) / 1000;
 
 /** Runs a whole build. Writes OUT only when the build may be published (see the module comment of cli). */
 export async function runBuild(opts: BuildOptions): Promise<BuildReport> {
+  const release = await acquireOutputLock(opts.out);
+  try {
+    return await runLockedBuild(opts);
+  } finally {
+    await release();
+  }
+}
+
+async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   const t0 = performance.now();
   const progress = opts.onProgress ?? (() => {});
   const notes = await recoverOutputDir(opts.out);

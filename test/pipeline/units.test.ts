@@ -15,7 +15,7 @@ import { sha256Hex } from '../../pipeline/hash.js';
 import { temperatureGrid } from '../../pipeline/plan.js';
 import { DEFAULT_SETTINGS, withDefaults } from '../../pipeline/settings.js';
 import { parseTriple } from '../../pipeline/cli.js';
-import { runCli } from './helpers.js';
+import { FIXTURE_DB, runCli } from './helpers.js';
 
 /** Every `default` of the schema, by dotted path. */
 function schemaDefaults(schema: any, prefix = ''): Map<string, unknown> {
@@ -134,6 +134,28 @@ describe('atomic publication', () => {
       await expect(publishDirectory(foreign, new Map([['x', 'y']]))).rejects.toThrow(/not written by qforge/);
       await expect(publishDirectory(out, new Map([['../escape.txt', 'x']]))).rejects.toThrow(/leave the output folder/);
       expect(await readFile(path.join(out, 'c.txt'), 'utf8')).toBe('three');
+    } finally {
+      await rm(root, { recursive: true, force: true });
+    }
+  });
+});
+
+describe('output lock', () => {
+  it('a build refuses to run while another live process holds the lock, and takes over a stale one', async () => {
+    const root = await mkdtemp(path.join(tmpdir(), 'qforge-lock-'));
+    try {
+      await mkdir(path.join(root, 'db'));
+      await writeFile(path.join(root, 'db', 'Ar.yaml'), await readFile(path.join(FIXTURE_DB, 'Ar.yaml'), 'utf8'));
+      // The parent process (the test runner) is alive and is not this process.
+      await writeFile(path.join(root, '.out.qforge-lock'), `${process.ppid}\n`);
+      const locked = await runCli(['build', 'db', '--out', 'out'], root);
+      expect(locked.code).toBe(1);
+      expect(locked.stderr).toMatch(/another qforge build \(pid \d+\) is writing/);
+      // A pid that cannot be alive: stale, taken over.
+      await writeFile(path.join(root, '.out.qforge-lock'), '999999999\n');
+      const r = await runCli(['build', 'db', '--out', 'out', '--quiet'], root);
+      expect(r.code, r.stderr).toBe(0);
+      await expect(readFile(path.join(root, '.out.qforge-lock'))).rejects.toThrow();
     } finally {
       await rm(root, { recursive: true, force: true });
     }

@@ -1,6 +1,7 @@
 /**
  * Golden file of the 80-column writer: the fixed, INVENTED records of test/fixtures/nasa7/golden-records.ts
- * must produce test/fixtures/nasa7/golden.txt byte for byte (layout: Gordon & McBride 1971, NASA SP-273;
+ * must produce test/fixtures/nasa7/golden.txt byte for byte (source of the layout: the published record of
+ * Gordon & McBride 1971, NASA SP-273;
  * McBride, Gordon & Reno 1993, NASA TM-4513). To update after a deliberate layout change:
  *   QFORGE_UPDATE_GOLDEN=1 npx vitest run test/src/nasa7/golden.test.ts   (then review the diff)
  */

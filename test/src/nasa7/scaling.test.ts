@@ -1,6 +1,6 @@
 /**
  * The τ = T/1024 scaling and the Householder QR used by the solver. Checks are algebraic identities
- * (the substitution τ = T/T_SCALE in the NASA TM-4513 form; A = QR with QᵀQ = I, Golub & Van Loan,
+ * (sources: the substitution τ = T/T_SCALE in the published NASA TM-4513 form; A = QR with QᵀQ = I, Golub & Van Loan,
  * Matrix Computations, 4th ed., §5.2), on INVENTED coefficients.
  */
 import { describe, expect, it } from 'vitest';

@@ -36,8 +36,9 @@ export const DEFAULT_MAX_BYTES = 1024 * 1024;
 /** Default cap on alias expansions per document (yaml's own default; legitimate files use a handful). */
 export const DEFAULT_MAX_ALIAS_COUNT = 100;
 /**
- * Default cap on flow-collection nesting ([ ] and { }). A species needs 3 or 4 levels; a file of a few hundred
- * thousand nested brackets (well under the size limit) would otherwise exhaust the parser's memory.
+ * Default cap on nesting: of flow collections ([ ] and { }), of compact block indicators on one line
+ * (`- - - x`), and (times 4) of indentation columns. A species needs 3 or 4 levels; a few thousand levels,
+ * well under the size limit, can exhaust the parser's stack or memory.
  */
 export const DEFAULT_MAX_NESTING = 64;
 /** The settings file at the root of a database folder, never read as a species file. */
@@ -78,7 +79,7 @@ export interface ParseOptions {
   maxBytes?: number;
   /** Cap on alias expansions per YAML document. Default 100. */
   maxAliasCount?: number;
-  /** Cap on nesting of flow collections ([ ] and { }). Default 64. */
+  /** Cap on nesting levels (flow brackets, compact `- - x` indicators; indentation columns / 4). Default 64. */
   maxNesting?: number;
   /**
    * How a YAML document maps to species: 'species' (default) splits a top-level list into one document per
@@ -180,6 +181,18 @@ function flowNestingOverflow(text: string, limit: number): number {
   for (let i = 0; i < text.length; i++) {
     const ch = text[i]!;
     const prev = i === 0 ? '\n' : text[i - 1]!;
+    if (prev === '\n') {
+      // Block nesting: deep indentation, or compact indicators `- - - x` / `? ? ? x` opening one level each.
+      let j = i;
+      while (text[j] === ' ') j++;
+      if (j - i > limit * 4) return j;
+      let compact = 0;
+      while ((text[j] === '-' || text[j] === '?' || text[j] === ':') && (text[j + 1] === ' ' || text[j + 1] === '\t')) {
+        if (++compact > limit) return j;
+        j += 2;
+        while (text[j] === ' ' || text[j] === '\t') j++;
+      }
+    }
     if (ch === '#' && (prev === ' ' || prev === '\t' || prev === '\n' || prev === '\r')) {
       while (i < text.length && text[i] !== '\n') i++;
     } else if ((ch === '"' || ch === "'") && QUOTE_OPENERS.has(prev)) {
@@ -228,7 +241,7 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
     const line = upTo.split('\n').length;
     const column = overflow - upTo.lastIndexOf('\n');
     result.diagnostics.push(
-      err(displayPath, `YAML nesting deeper than ${maxNesting} levels of [ ] / { }; refused`, {
+      err(displayPath, `YAML nesting deeper than ${maxNesting} levels (or indented more than ${maxNesting * 4} columns); refused`, {
         line,
         column,
         expected: `at most ${maxNesting} nested lists or mappings`,

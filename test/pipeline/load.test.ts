@@ -116,6 +116,11 @@ describe('parseYamlText', () => {
     ]);
     const ok = parseYamlText(`sources: ["${'['.repeat(100)}", '${'{'.repeat(100)}', "a \\" ${'['.repeat(100)}"] # ${'['.repeat(100)}\n`, 'ok.yaml');
     expect(ok.diagnostics).toEqual([]);
+    for (const text of [`${'- '.repeat(5000)}x\n`, `a:\n  ${'? '.repeat(5000)}x\n`, Array.from({ length: 300 }, (_, i) => `${' '.repeat(i)}a:`).join('\n')]) {
+      const b = parseYamlText(text, 'deep-block.yaml');
+      expect(b.documents).toEqual([]);
+      expect(b.diagnostics[0]!.message).toContain('nesting deeper than 64 levels');
+    }
     // Nesting the parser itself cannot follow is still a diagnostic, not a crash.
     const deep = parseYamlText(`x: ${'['.repeat(2000)}${']'.repeat(2000)}\n`, 'deep2.yaml', { maxNesting: 5000 });
     expect(deep.documents).toEqual([]);

@@ -70,6 +70,8 @@ export interface ValidSpecies {
   displayFile: string;
   species: Species;
   normalisedInput: unknown;
+  /** Source positions for diagnostics of later stages: the species' `name` and `temperature_ranges`. */
+  positions: { name?: { line: number; column: number }; temperature_ranges?: { line: number; column: number } };
   loadMs: number;
   validateMs: number;
 }
@@ -86,6 +88,18 @@ export interface CheckReport {
   /** Files in which at least one species document failed validation or the file itself failed. */
   failedFiles: Set<string>;
   timings: { load: number; validate: number };
+}
+
+function positionsOf(doc: LoadedDocument): ValidSpecies['positions'] {
+  const out: ValidSpecies['positions'] = {};
+  const name = doc.locate(['name']);
+  if (name) out.name = { line: name.line, column: name.column };
+  const v = doc.value as Record<string, unknown> | null;
+  if (v && typeof v === 'object' && 'temperature_ranges' in v) {
+    const tr = doc.locate(['temperature_ranges']);
+    if (tr) out.temperature_ranges = { line: tr.line, column: tr.column };
+  }
+  return out;
 }
 
 /** Load and validate a database folder: every problem of every file at once. */
@@ -150,6 +164,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
             displayFile: show(file),
             species: r.species,
             normalisedInput: r.normalisedInput ?? r.species,
+            positions: positionsOf(doc),
             loadMs: loadMs / n,
             validateMs: vms,
           },
@@ -228,9 +243,11 @@ export async function buildOneSpecies(
     cacheNotes: [],
     timings: { load: v.loadMs, validate: v.validateMs },
   };
-  const where = { file: v.displayFile, species: v.name };
-  const fail = (pathText: string, message: string) =>
-    out.diagnostics.push({ severity: 'error', ...where, path: pathText, message });
+  const where = { file: v.displayFile, species: v.name, ...(v.positions.name ?? {}) };
+  const fail = (pathText: string, message: string) => {
+    const pos = (pathText === 'temperature_ranges' ? v.positions.temperature_ranges : undefined) ?? v.positions.name;
+    out.diagnostics.push({ severity: 'error', ...where, ...(pos ?? {}), path: pathText, message });
+  };
   const note = (kind: CacheKind, r: { outcome: CacheOutcome; reason?: string }) => {
     out.cache[kind] = r.outcome;
     if (r.outcome === 'corrupt') out.cacheNotes.push(`cache entry for ${kind} rejected (${r.reason}); recomputed`);
@@ -241,7 +258,7 @@ export async function buildOneSpecies(
   try {
     fitOptions = fitOptionsFor(plan.fitOptions);
   } catch (e) {
-    fail('temperature_ranges', `fit options: ${errorText(e)}`);
+    fail(v.species.temperatureRanges ? 'temperature_ranges' : '', `fit options: ${errorText(e)}`);
     return out;
   }
   const inputHash = `sha256:${sha256Hex(canonicalJson(v.normalisedInput))}`;

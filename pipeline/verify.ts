@@ -12,13 +12,12 @@ export function verifySpecies(
   samples: readonly FitSample[],
   tolerances: QuantityTriple,
   continuityOrder: 1 | 2,
-  where: { file: string; species: string },
+  where: { file: string; species: string; line?: number; column?: number },
 ): Diagnostic[] {
   const violations = assessFit(fit, samples, { ...tolerances, continuityOrder });
   return violations.map((v) => ({
     severity: 'error' as const,
-    file: where.file,
-    species: where.species,
+    ...where,
     path: `fit.${v.quantity}`,
     message: v.message,
   }));

@@ -162,7 +162,7 @@ function jsonTypeName(v: unknown): string {
   if (Array.isArray(v)) return 'a list';
   switch (typeof v) {
     case 'number':
-      return Number.isFinite(v) ? (Number.isInteger(v) ? 'a whole number' : 'a number') : `${v}`;
+      return Number.isFinite(v) ? (Number.isInteger(v) ? 'a whole number' : 'a number') : `not a finite number (${v})`;
     case 'string':
       return 'a text';
     case 'boolean':
@@ -354,7 +354,8 @@ export function checkAgainstSchema(
       case 'type':
         emit(at, doc.locate(at), {
           message: `wrong type: ${jsonTypeName(e.data)}`,
-          value: e.data,
+          // JSON would print Infinity and NaN as null.
+          value: typeof e.data === 'number' && !Number.isFinite(e.data) ? String(e.data) : e.data,
           // At the root the title names the whole document rather than phrasing an expectation.
           expected: at.length === 0 ? `${typeWords(params.type)}${title ? ` (${title})` : ''}` : title ?? typeWords(params.type),
         });

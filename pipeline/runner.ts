@@ -485,7 +485,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   const summary: Summary = {
     format: 'qforge-summary/1',
     tool: { name: TOOL_NAME, version: TOOL_VERSION },
-    database: opts.dir,
+    database: opts.displayBase ? path.relative(opts.displayBase, opts.dir) || '.' : opts.dir,
     status,
     written: mayWrite,
     outputs,

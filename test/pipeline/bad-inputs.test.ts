@@ -4,7 +4,7 @@
  * (hash of the output folder before and after). Species data in the cases are invented for the tests
  * unless a source is named.
  */
-import { readFile, symlink, writeFile } from 'node:fs/promises';
+import { mkdir, readFile, symlink, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { hashFolder, runCli, tempWorkspace } from './helpers.js';
@@ -185,6 +185,13 @@ const CASES: BadCase[] = [
     setup: editSettings('tolerances: {cp: 0.1,', 'tolerances: {cp: 0.000001,'),
     code: 1,
     expect: [/N2\.yaml:\d+:\d+: error: \[N2\] fit\.cp/, /Cp\/R fit error/, /exceeds the tolerance/],
+  },
+  {
+    name: 'database folder without species files',
+    setup: async (ws) => mkdir(path.join(ws.root, 'emptydb')),
+    argv: ['build', 'emptydb', '--out', 'out'],
+    code: 1,
+    expect: [/emptydb: error: no species files/],
   },
   {
     name: 'usage: --jobs 0',

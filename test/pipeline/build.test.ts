@@ -141,6 +141,24 @@ describe('qforge build of the fixture database', () => {
     }
   });
 
+  it('optimise_mid and a per-species range override reach thermo.json, the tables and nasa7.txt', async () => {
+    const settings = path.join(ws.db, 'qforge.yaml');
+    await writeFile(settings, (await readFile(settings, 'utf8')).replace('  sampling_step: 20', '  sampling_step: 20\n  optimise_mid: {min: 800, max: 1600, step: 100}'));
+    await writeFile(path.join(ws.db, 'Ar.yaml'), `${await readFile(path.join(ws.db, 'Ar.yaml'), 'utf8')}temperature_ranges: {low: 250, high: 5000}\n`);
+    const r = await build();
+    expect(r.code, r.stderr).toBe(0);
+    const db = await readJson(path.join(ws.out, 'thermo.json'));
+    const ar = db.species.find((s: { name: string }) => s.name === 'Ar');
+    expect([ar.temperature_ranges.low, ar.temperature_ranges.high]).toEqual([250, 5000]);
+    for (const s of db.species) expect(s.temperature_ranges.mid % 100).toBe(0);
+    expect(db.species.some((s: { temperature_ranges: { mid: number } }) => s.temperature_ranges.mid !== 1000)).toBe(true);
+    const csv = (await readFile(path.join(ws.out, 'tables/Ar.csv'), 'utf8')).trim().split('\n');
+    expect(csv[1]!.split(',')[0]).toBe('298.15');
+    expect(csv.at(-1)!.split(',')[0]).toBe('5000');
+    const parsed = parseNasa7File(await readFile(path.join(ws.out, 'nasa7.txt'), 'utf8'), 'nasa7.txt');
+    expect(parsed.records.find((x) => x.name === 'Ar')!.polynomial.tHigh).toBe(5000);
+  });
+
   it('a corrupted or foreign cache entry is detected and recomputed, never trusted', async () => {
     expect((await build()).code).toBe(0);
     const good = await deterministicOutputs(ws.out);

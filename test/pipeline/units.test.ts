@@ -10,7 +10,7 @@ import { describe, expect, it } from 'vitest';
 import settingsSchema from '../../schemas/settings.schema.json' with { type: 'json' };
 import { OutputFolderError, publishDirectory, safeJoin } from '../../pipeline/atomic-write.js';
 import { StageCache } from '../../pipeline/cache.js';
-import { speciesFileStem, tableFileNames } from '../../pipeline/emit.js';
+import { recordElements, speciesFileStem, tableFileNames } from '../../pipeline/emit.js';
 import { sha256Hex } from '../../pipeline/hash.js';
 import { temperatureGrid } from '../../pipeline/plan.js';
 import { DEFAULT_SETTINGS, withDefaults } from '../../pipeline/settings.js';
@@ -79,6 +79,15 @@ describe('file names never escape the output folder', () => {
     const m = tableFileNames(['Co', 'CO'], sha256Hex);
     expect(m.get('CO')).toBe('tables/CO.csv');
     expect(m.get('Co')).toMatch(/^tables\/Co_[0-9a-f]{8}\.csv$/);
+  });
+});
+
+describe('80-column elements', () => {
+  it('ions carry the electron as element E, negative for cations (NASA TM-4513 convention)', () => {
+    const base = { name: 'X', molarMass: 1, enthalpyOfFormation: { value: 0, temperature: 298.15 }, sources: ['s'], structure: 'atom', electronicLevels: [] } as const;
+    expect(recordElements({ ...base, composition: { N: 1, O: 1 }, charge: 1 } as never)).toEqual([['N', 1], ['O', 1], ['E', -1]]);
+    expect(recordElements({ ...base, composition: { O: 2 }, charge: -1 } as never)).toEqual([['O', 2], ['E', 1]]);
+    expect(recordElements({ ...base, composition: { Ar: 1 }, charge: 0 } as never)).toEqual([['Ar', 1]]);
   });
 });
 

@@ -71,6 +71,11 @@ function quantity(raw: unknown, table: Readonly<Record<string, number>>, default
 }
 const energy = (raw: unknown) => quantity(raw, ENERGY_UNITS_TO_CM1, 'cm-1');
 const rotational = (raw: unknown) => quantity(raw, ROTATIONAL_UNITS_TO_CM1, 'cm-1');
+/** A moment of inertia (amu*angstrom^2 when bare) as the rotational constant it implies, cm⁻¹. */
+function rotationalFromInertia(raw: unknown): number | undefined {
+  const kgm2 = quantity(raw, INERTIA_UNITS_TO_KG_M2, 'amu*angstrom^2');
+  return kgm2 === undefined ? undefined : rotationalConstantFromInertia(kgm2);
+}
 
 /** Number formatting for messages: enough digits to recognise the value, no float noise. */
 function fmt(x: number): string {
@@ -116,7 +121,10 @@ class Findings {
   }
 }
 
-/** Term value G(v) = ωe(v+½) − ωexe(v+½)² + ωeye(v+½)³, cm⁻¹ (Herzberg, Spectra of Diatomic Molecules, eq. III,79). */
+/**
+ * Vibrational term value G(v) = ωe(v+½) − ωexe(v+½)² + ωeye(v+½)³, cm⁻¹, in the notation of Huber & Herzberg,
+ * Constants of Diatomic Molecules (1979). Used here only to bound the ladders; the physics has its own.
+ */
 function termValue(s: Pick<DiatomicState, 'we' | 'wexe' | 'weye'>, v: number): number {
   const x = v + 0.5;
   return s.we * x - s.wexe * x * x + s.weye * x * x * x;
@@ -391,14 +399,7 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
           expected: structure === 'linear' ? (field === 'rotational_constants' ? '[B]' : '[I]') : field === 'rotational_constants' ? '[A, B, C]' : '[IA, IB, IC]',
         });
       } else {
-        const values = list.map((x) =>
-          field === 'rotational_constants'
-            ? rotational(x)
-            : (() => {
-                const kgm2 = quantity(x, INERTIA_UNITS_TO_KG_M2, 'amu*angstrom^2');
-                return kgm2 === undefined ? undefined : rotationalConstantFromInertia(kgm2);
-              })(),
-        );
+        const values = list.map(field === 'rotational_constants' ? rotational : rotationalFromInertia);
         if (values.every((v): v is number => v !== undefined && v > 0)) {
           rotationalConstants = values;
           if (structure === 'nonlinear' && !(values[0]! >= values[1]! && values[1]! >= values[2]!)) {

@@ -242,6 +242,17 @@ async function buildCommand(
   ]);
   await assertReplaceable(out);
   const reporter = await createProgressReporter(io.stderr, { quiet: !!o.quiet, tty: io.isTTY });
+  // In a real process: say what state OUT is in, then die of the same signal (default behaviour). The
+  // folder swap is safe at any instant, so nothing needs undoing here.
+  const signals = ['SIGINT', 'SIGTERM'] as const;
+  const onSignal = (sig: NodeJS.Signals) => {
+    reporter.stop();
+    io.stderr.write(`\nqforge: ${sig}: build interrupted; ${outLabel} keeps complete outputs (an unfinished swap is settled by the next command)\n`);
+    for (const s of signals) process.off(s, onSignal);
+    process.kill(process.pid, sig);
+  };
+  const ownProcess = io.stderr === process.stderr;
+  if (ownProcess) for (const s of signals) process.on(s, onSignal);
   let report;
   try {
     report = await runBuild({
@@ -259,6 +270,7 @@ async function buildCommand(
     });
   } finally {
     reporter.stop();
+    if (ownProcess) for (const s of signals) process.off(s, onSignal);
   }
   printDiagnostics(io, report.diagnostics, formatDiagnostic);
   const s = report.summary as unknown as { counts: { species: number; ok: number; failed: number; cache_hits: number; files_failed: number } };

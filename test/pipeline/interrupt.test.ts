@@ -55,6 +55,7 @@ describe('interrupted builds', () => {
         const r = await killedBuild(ws.root, { QFORGE_TEST_PAUSE: 'before-swap' }, /test pause before-swap/, signal);
         expect(r.stderr).toMatch(/test pause before-swap/);
         expect(r.code === 0).toBe(false);
+        if (signal !== 'SIGKILL') expect(r.stderr).toMatch(new RegExp(`${signal}: build interrupted`));
         expect(await hashFolder(ws.out)).toBe(before);
         // The unfinished new folder is left behind and cleaned up by the next build.
         expect((await readdir(ws.root)).some((n) => n.startsWith('.out.qforge-new-'))).toBe(true);

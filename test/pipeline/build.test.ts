@@ -159,6 +159,25 @@ describe('qforge build of the fixture database', () => {
     expect(parsed.records.find((x) => x.name === 'Ar')!.polynomial.tHigh).toBe(5000);
   });
 
+  it('outputs settings choose the files; diff reads nasa7.txt when there is no thermo.json, and lists added/removed', async () => {
+    expect((await runCli(['build', 'db', '--out', 'before', '--quiet'], ws.root)).code).toBe(0);
+    const settings = path.join(ws.db, 'qforge.yaml');
+    await writeFile(settings, `${await readFile(settings, 'utf8')}outputs: {thermo_json: false, tables: false}\n`);
+    await writeFile(path.join(ws.db, 'Ar.yaml'), (await readFile(path.join(ws.db, 'Ar.yaml'), 'utf8')).replace('name: Ar', 'name: Ar2'));
+    expect((await build()).code).toBe(0);
+    expect((await readdir(ws.out)).sort()).toEqual(['.qforge-build', 'nasa7.txt', 'summary.json']);
+    const d = await runCli(['diff', 'before', 'out', '--json'], ws.root);
+    expect(d.code).toBe(0);
+    const report = JSON.parse(d.stdout);
+    expect(report.added).toEqual(['Ar2']);
+    expect(report.removed).toEqual(['Ar']);
+    // JSON coefficients against their E15.8 rounding: only the coefficients moved.
+    expect(report.changed.every((c: { kind: string }) => c.kind === 'coefficients')).toBe(true);
+    const gate = await runCli(['diff', 'before', 'out', '--fail-on-removed'], ws.root);
+    expect(gate.code).toBe(1);
+    expect(gate.stderr).toMatch(/Ar: removed/);
+  });
+
   it('a corrupted or foreign cache entry is detected and recomputed, never trusted', async () => {
     expect((await build()).code).toBe(0);
     const good = await deterministicOutputs(ws.out);

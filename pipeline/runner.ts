@@ -445,10 +445,11 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   const emitMs = performance.now() - tEmit;
 
   const summarySpecies: SummarySpecies[] = [];
-  const validNames = new Set(ordered.map((o) => o.valid.name));
+  const speciesKey = (file: string, name: string) => `${file}\u0000${name}`;
+  const validKeys = new Set(ordered.map((o) => speciesKey(o.valid.displayFile, o.valid.name)));
   for (const o of ordered) {
     const fm = o.built?.fit.metrics;
-    const own = [...check.fileDiagnostics.values()].flat().filter((d) => d.species === o.valid.name);
+    const own = [...check.fileDiagnostics.values()].flat().filter((d) => d.species === o.valid.name && d.file === o.valid.displayFile);
     const s: SummarySpecies = {
       name: o.valid.name,
       file: o.valid.file,
@@ -473,7 +474,11 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   }
   // Files whose problems are not tied to a species that validated (syntax errors, invalid documents, …).
   const summaryFiles = [...check.fileDiagnostics.entries()]
-    .map(([file, ds]) => ({ file: ds[0]?.file ?? file, ds: ds.filter((d) => !(d.species && validNames.has(d.species))) }))
+    .map(([file, ds]) => ({
+      file: ds[0]?.file ?? file,
+      // Warnings of species that were built are reported with the species; everything else stays with the file.
+      ds: ds.filter((d) => !(d.severity === 'warning' && d.species && validKeys.has(speciesKey(d.file, d.species)))),
+    }))
     .filter(({ ds }) => ds.length > 0)
     .sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : 0))
     .map(({ file, ds }) => ({

@@ -214,6 +214,12 @@ describe('qforge build of the fixture database', () => {
     const summary = await readJson(path.join(ws.out, 'summary.json'));
     expect(summary.status).toBe('partial');
     expect(summary.files.map((f: { file: string }) => path.basename(f.file))).toEqual(['bad.yaml']);
+    // A duplicate name: the second definition fails and is reported with its file in the summary.
+    await writeFile(path.join(ws.db, 'zz.yaml'), await readFile(path.join(ws.db, 'Ar.yaml'), 'utf8'));
+    const dup = JSON.parse((await build('--keep-going', '--json', '--quiet')).stdout);
+    expect(dup.species.filter((s: { name: string }) => s.name === 'Ar')).toHaveLength(1);
+    const zz = dup.files.find((f: { file: string }) => f.file.endsWith('zz.yaml'));
+    expect(zz.errors.join('\n')).toMatch(/duplicate species name 'Ar'/);
   });
 
   it('a species named ".." writes its table inside tables/ (names never escape the output folder)', async () => {

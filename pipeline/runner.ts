@@ -71,7 +71,7 @@ export interface ValidSpecies {
   species: Species;
   normalisedInput: unknown;
   /** Source positions for diagnostics of later stages: the species' `name` and `temperature_ranges`. */
-  positions: { name?: { line: number; column: number }; temperature_ranges?: { line: number; column: number } };
+  positions: Partial<Record<'name' | 'composition' | 'temperature_ranges', { line: number; column: number }>>;
   loadMs: number;
   validateMs: number;
 }
@@ -92,8 +92,10 @@ export interface CheckReport {
 
 function positionsOf(doc: LoadedDocument): ValidSpecies['positions'] {
   const out: ValidSpecies['positions'] = {};
-  const name = doc.locate(['name']);
-  if (name) out.name = { line: name.line, column: name.column };
+  for (const key of ['name', 'composition'] as const) {
+    const p = doc.locate([key]);
+    if (p) out[key] = { line: p.line, column: p.column };
+  }
   const v = doc.value as Record<string, unknown> | null;
   if (v && typeof v === 'object' && 'temperature_ranges' in v) {
     const tr = doc.locate(['temperature_ranges']);
@@ -406,7 +408,8 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
           severity: 'error',
           file: o.valid.displayFile,
           species: o.valid.name,
-          path: e.field,
+          ...((e.field.startsWith('elements') ? o.valid.positions.composition : o.valid.positions.name) ?? {}),
+          path: e.field.startsWith('elements') ? 'composition' : e.field,
           message: `cannot be written as an 80-column record: ${e.message}`,
         });
         delete o.built;

@@ -187,6 +187,15 @@ const CASES: BadCase[] = [
     expect: [/N2\.yaml:\d+:\d+: error: \[N2\] fit\.cp/, /Cp\/R fit error/, /exceeds the tolerance/],
   },
   {
+    name: 'five elements: more than the 80-column record can hold',
+    setup: write(
+      'bad.yaml',
+      'name: CHNOS\ncomposition: {C: 1, H: 1, N: 1, O: 1, S: 1}\nenthalpy_of_formation: 0\nsources: ["invented for a test"]\nstructure: nonlinear\nsymmetry_number: 1\nrotational_constants: [1.0, 0.2, 0.15]\nvibrations: [3000, 2000, 1500, 1200, 1000, 800, 600, 500, 400]\n',
+    ),
+    code: 1,
+    expect: [/bad\.yaml:2:\d+: error: \[CHNOS\] composition: cannot be written as an 80-column record/, /at most 4/],
+  },
+  {
     name: 'database folder without species files',
     setup: async (ws) => mkdir(path.join(ws.root, 'emptydb')),
     argv: ['build', 'emptydb', '--out', 'out'],

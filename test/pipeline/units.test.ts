@@ -183,6 +183,22 @@ describe('command line', () => {
     expect(none.code).toBe(2);
   });
 
+  it('diff and compare: a missing path is a usage error (2), a malformed file an input error (1)', async () => {
+    const root = await mkdtemp(path.join(tmpdir(), 'qforge-cli-'));
+    try {
+      await writeFile(path.join(root, 'garbage.txt'), 'not a record\n');
+      const missing = await runCli(['diff', 'nope', 'nope2'], root);
+      expect(missing.code).toBe(2);
+      expect(missing.stderr).toMatch(/nope: no such build folder or file/);
+      const garbage = await runCli(['diff', 'garbage.txt', 'garbage.txt'], root);
+      expect(garbage.code).toBe(1);
+      expect(garbage.stderr).toMatch(/garbage\.txt:1: record starting on line 1/);
+      expect((await runCli(['compare', 'nope', '--reference', 'x.csv'], root)).code).toBe(2);
+    } finally {
+      await rm(root, { recursive: true, force: true });
+    }
+  });
+
   it('parses --fail-above / --tolerance lists', () => {
     expect(parseTriple('cp=0.1,h=2e-3')).toEqual({ cp: 0.1, h: 0.002 });
     expect(() => parseTriple('cp=-1')).toThrow();

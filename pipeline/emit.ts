@@ -18,6 +18,7 @@ import { GAS_CONSTANT, T_REF } from '../src/constants.js';
 import type { Species, StandardProperties } from '../src/model.js';
 import { evaluateNasa7 } from '../src/nasa7/evaluate.js';
 import { formatNasa7File } from '../src/nasa7/format.js';
+import { roundForRecord } from '../src/nasa7/round.js';
 import type { FitMetrics, FitResult, Nasa7Polynomial, Nasa7Record, RangeMetrics } from '../src/nasa7/types.js';
 import type { ComputedSpecies } from './compute.js';
 import type { DatabaseSettings } from './settings.js';
@@ -184,8 +185,19 @@ export function recordElements(species: Species): Array<[string, number]> {
   return pairs;
 }
 
+/**
+ * The 80-column record of a built species. Its coefficients are re-derived by `roundForRecord` so that the
+ * nine digits the layout holds still keep the two ranges continuous at T_mid (to ~1e-8) and H, S at 298.15 K;
+ * thermo.json keeps the unrounded coefficients.
+ */
 export function nasa7Record(b: BuiltSpecies, identifier: string): Nasa7Record {
-  return { name: b.name, identifier, elements: recordElements(b.species), phase: 'G', polynomial: b.fit.polynomial };
+  return {
+    name: b.name,
+    identifier,
+    elements: recordElements(b.species),
+    phase: 'G',
+    polynomial: roundForRecord(b.fit.polynomial),
+  };
 }
 
 /** '!' comment lines written above the records. */

@@ -9,7 +9,9 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import databaseSchema from '../../schemas/database.schema.json' with { type: 'json' };
 import settingsSchema from '../../schemas/settings.schema.json' with { type: 'json' };
 import summarySchema from '../../schemas/summary.schema.json' with { type: 'json' };
+import { evaluateNasa7, evaluateRange } from '../../src/nasa7/evaluate.js';
 import { parseNasa7File } from '../../src/nasa7/parse.js';
+import type { Nasa7Polynomial } from '../../src/nasa7/types.js';
 import { deterministicOutputs, hashFolder, readJson, runCli, tempWorkspace } from './helpers.js';
 
 const SPECIES = ['Ar', 'CO', 'H2O', 'N2', 'O'];
@@ -66,6 +68,36 @@ describe('qforge build of the fixture database', () => {
       'T [K],Cp computed [J/(mol K)],Cp fitted [J/(mol K)],Cp fitted-computed [J/(mol K)],S computed [J/(mol K)],S fitted [J/(mol K)],S fitted-computed [J/(mol K)],H-H298 computed [kJ/mol],H-H298 fitted [kJ/mol],H-H298 fitted-computed [kJ/mol],H computed [kJ/mol],H fitted [kJ/mol],H fitted-computed [kJ/mol],G computed [kJ/mol],G fitted [kJ/mol],G fitted-computed [kJ/mol]',
     );
     expect(csv[2]!.startsWith('298.15,')).toBe(true);
+  });
+
+  it('nasa7.txt read back stays continuous at T_mid (< 1e-7) and agrees with thermo.json to 1e-7 relative', async () => {
+    // Continuity and round-trip bounds from issue 3; the layout is the NASA 4-line record (McBride, Gordon &
+    // Reno 1993, NASA TM-4513), which holds 9 significant digits per coefficient.
+    expect((await build()).code).toBe(0);
+    const db = await readJson(path.join(ws.out, 'thermo.json'));
+    const parsed = parseNasa7File(await readFile(path.join(ws.out, 'nasa7.txt'), 'utf8'), 'nasa7.txt');
+    expect(parsed.errors).toEqual([]);
+    for (const rec of parsed.records) {
+      const p = rec.polynomial;
+      const lo = evaluateRange(p.low, p.tMid);
+      const hi = evaluateRange(p.high, p.tMid);
+      expect(Math.abs(lo.cpR - hi.cpR)).toBeLessThan(1e-7);
+      expect(Math.abs(lo.hRT - hi.hRT)).toBeLessThan(1e-7);
+      expect(Math.abs(lo.sR - hi.sR)).toBeLessThan(1e-7);
+      const inJson = db.species.find((s: { name: string }) => s.name === rec.name);
+      const exact = {
+        ...p,
+        low: inJson.coefficients.low,
+        high: inJson.coefficients.high,
+      } as Nasa7Polynomial;
+      for (const T of [200, 298.15, 700, 1000, 1500, 3000, 6000]) {
+        const a = evaluateNasa7(p, T);
+        const b = evaluateNasa7(exact, T);
+        for (const k of ['cpR', 'hRT', 'sR'] as const) {
+          expect(Math.abs(a[k] - b[k])).toBeLessThan(1e-7 * Math.max(1, Math.abs(b[k])));
+        }
+      }
+    }
   });
 
   it('a rebuild with nothing changed takes every species from the cache and gives byte-identical outputs', async () => {

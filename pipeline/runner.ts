@@ -266,27 +266,35 @@ export async function buildOneSpecies(
   const inputHash = `sha256:${sha256Hex(canonicalJson(v.normalisedInput))}`;
   const keys = stageKeys(inputHash, v.species, plan, fitOptions);
 
-  let computed: ComputedSpecies;
-  try {
-    const r = await cached(cache, 'samples', keys.samples, () => computeSamples(v.species, plan.physics, plan.sampleTemperatures));
-    note('samples', r);
-    out.timings.compute = r.ms;
-    computed = r.value;
-  } catch (e) {
-    fail('', `computing the properties failed: ${errorText(e)}`);
-    return out;
-  }
+  // One cached stage: its result, or undefined after recording the failure (the species stops there).
+  const stage = async <T>(
+    kind: CacheKind,
+    key: string,
+    run: () => T,
+    failPath: string,
+    what: string,
+  ): Promise<T | undefined> => {
+    try {
+      const r = await cached(cache, kind, key, run);
+      note(kind, r);
+      out.timings[kind === 'samples' ? 'compute' : kind] = r.ms;
+      return r.value;
+    } catch (e) {
+      fail(failPath, `${what} failed: ${errorText(e)}`);
+      return undefined;
+    }
+  };
 
-  let fit: FitResult;
-  try {
-    const r = await cached(cache, 'fit', keys.fit, () => fitSpecies(computed, fitOptions));
-    note('fit', r);
-    out.timings.fit = r.ms;
-    fit = r.value;
-  } catch (e) {
-    fail('fit', `the fit failed: ${errorText(e)}`);
-    return out;
-  }
+  const computed = await stage(
+    'samples',
+    keys.samples,
+    () => computeSamples(v.species, plan.physics, plan.sampleTemperatures),
+    '',
+    'computing the properties',
+  );
+  if (!computed) return out;
+  const fit = await stage('fit', keys.fit, () => fitSpecies(computed, fitOptions), 'fit', 'the fit');
+  if (!fit) return out;
 
   const tv = performance.now();
   const violations = verifySpecies(fit, computed.samples, plan.tolerances, fitOptions.continuityOrder, where);
@@ -298,15 +306,15 @@ export async function buildOneSpecies(
 
   let table: StandardProperties[] = [];
   if (settings.outputs.tables) {
-    try {
-      const r = await cached(cache, 'table', keys.table, () => computeTable(v.species, plan.physics, plan.tableTemperatures));
-      note('table', r);
-      out.timings.table = r.ms;
-      table = r.value;
-    } catch (e) {
-      fail('', `computing the table failed: ${errorText(e)}`);
-      return out;
-    }
+    const rows = await stage(
+      'table',
+      keys.table,
+      () => computeTable(v.species, plan.physics, plan.tableTemperatures),
+      '',
+      'computing the table',
+    );
+    if (!rows) return out;
+    table = rows;
   }
   out.built = { name: v.name, file: v.file, species: v.species, inputHash, computed, fit, table };
   return out;

@@ -2,7 +2,7 @@
  * A build killed at any moment leaves either the previous complete outputs or the new complete ones
  * (pipeline/atomic-write.ts). The CLI is spawned as a real process (dist/, built by `npm test`) and
  * killed at test hooks placed right before the folder swap and between its two renames, and at an
- * arbitrary point mid-way through the species.
+ * arbitrary point mid-way through the species. Holds no reference values (no source to name).
  */
 import { spawn } from 'node:child_process';
 import { execFileSync } from 'node:child_process';

@@ -1,5 +1,5 @@
 /**
- * Internal thermodynamic consistency: the moments must satisfy Cp = dH/dT and Cp/T = dS/dT (exact
+ * Internal thermodynamic consistency: the moments must satisfy Cp = dH/dT and Cp/T = dS/dT (exact, published
  * thermodynamic identities at constant p, e.g. McQuarrie, Statistical Mechanics (1976), ch. 1), checked by
  * central finite differences of the evaluator's own outputs. The physics itself never differentiates.
  */

@@ -62,12 +62,18 @@ Examples:
   qforge compare build --reference janaf/n2.csv janaf/o2.csv
   qforge compare build --reference tables.csv --tolerance cp=0.1,s=0.05,h=0.02
   qforge compare build --database species      use references.files of species/qforge.yaml
+  qforge compare build --database species --strict   ignore its known deviations
 
 Reference CSV: one row per temperature; header names with units, e.g.
   species,T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol]
 The species column is optional: without it the file name (without .csv) is the species name. Lines
 starting with '#' are comments. Units: J/(mol K), cal/(mol K) for Cp and S; kJ/mol, J/mol, kcal/mol for
-H-H298. An 80-column NASA file can also serve as the reference.`,
+H-H298. An 80-column NASA file can also serve as the reference.
+
+Known deviations (references.known_deviations in qforge.yaml: species, from/to K, widened tolerances,
+reason) turn a value beyond the normal tolerance but within the widened one into "known": printed with
+its reason, counted separately, exit 0. --tolerance changes the normal limits only; --strict ignores
+the known deviations. Entries that name a missing species or are no longer needed are warned about.`,
 };
 
 function positiveInt(value: string): number {
@@ -184,9 +190,10 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('-r, --reference <files...>', 'reference CSV tables or 80-column files')
     .option('-d, --database <dir>', 'database folder whose qforge.yaml names references and tolerances')
     .option('-t, --tolerance <limits>', 'largest accepted |deviation|: cp=J/(mol K),s=J/(mol K),h=kJ/mol', parseTriple)
+    .option('--strict', 'ignore the known deviations of the settings: every value must meet the normal tolerance')
     .option('--json', 'print the report as JSON on stdout')
     .addHelpText('after', EXAMPLES.compare)
-    .action(async (build: string, o: { reference?: string[]; database?: string; tolerance?: { cp?: number; h?: number; s?: number }; json?: boolean }) => {
+    .action(async (build: string, o: { reference?: string[]; database?: string; tolerance?: { cp?: number; h?: number; s?: number }; strict?: boolean; json?: boolean }) => {
       const { compareCommand } = await import('./compare.js');
       exitCode = await compareCommand(io, abs(build), build, {
         ...o,

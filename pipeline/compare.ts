@@ -16,6 +16,14 @@
  * valid outside it); rows outside are counted and reported as skipped.
  * Tolerances: --tolerance flags, else the references.tolerances of --database's qforge.yaml, else the
  * build's recorded settings, else the defaults (0.5 J/(mol K), 0.5 J/(mol K), 0.5 kJ/mol).
+ *
+ * Known deviations (references.known_deviations, from the same place as the tolerances): a value beyond
+ * the normal tolerance but within the widened limit of the entry covering its species, quantity and
+ * temperature has status 'known' instead of being a breach, and the entry's reason is printed once per
+ * species. Exit 0 when every value is ok or known. --tolerance changes only the normal limits (an entry's
+ * widened limit still applies where it is larger); --strict ignores every entry, so CI can also run the
+ * plain check. Entries naming a species absent from the build, covering no compared value, or no longer
+ * needed (all their values within the normal tolerance) are warnings, so stale exceptions get removed.
  */
 import { readFile, stat } from 'node:fs/promises';
 import path from 'node:path';
@@ -24,7 +32,7 @@ import { T_REF } from '../src/constants.js';
 import type { CliIo } from './cli.js';
 import { formatDiagnostic } from './diagnostics.js';
 import { polynomialProperties, readPolynomialSet, ReadBuildError, ReadBuildUsageError, type PolynomialSet } from './read-build.js';
-import { DEFAULT_SETTINGS, loadSettings, type QuantityTriple } from './settings.js';
+import { DEFAULT_SETTINGS, loadSettings, type KnownDeviation, type QuantityTriple } from './settings.js';
 
 export type RefQuantity = 'cp' | 's' | 'h';
 const QS: readonly RefQuantity[] = ['cp', 's', 'h'];
@@ -159,6 +167,8 @@ export function referenceFromPolynomials(ref: PolynomialSet, build: PolynomialSe
   return { file: ref.label, species };
 }
 
+export type DeviationStatus = 'ok' | 'known' | 'breach';
+
 export interface Deviation {
   species: string;
   reference: string;
@@ -168,23 +178,84 @@ export interface Deviation {
   buildValue: number;
   /** build − reference */
   deviation: number;
+  /** The normal tolerance (references.tolerances or --tolerance). */
   tolerance: number;
+  /** Within the normal tolerance. */
   ok: boolean;
+  /** ok: within the normal tolerance; known: beyond it but within a known deviation's widened limit; breach: neither. */
+  status: DeviationStatus;
+  /** Index into CompareReport.knownDeviations of the entry covering this value (also under --strict). */
+  knownDeviation?: number;
+  /** The widened limit of that entry (never below the normal tolerance). */
+  widenedTolerance?: number;
+}
+
+/** A known deviation as used by one compare run, with what it turned out to cover. */
+export interface KnownDeviationUse extends KnownDeviation {
+  /** Where it was recorded, e.g. `species/qforge.yaml:27` or `build settings (thermo.json)`. */
+  recordedAt: string;
+  /** Values it covers (species, window and one of its quantities). */
+  covered: number;
+  /** Covered values beyond the normal tolerance (reported as known unless --strict). */
+  needed: number;
+  /** Covered values beyond even the widened limit. */
+  exceeded: number;
+  /** Its quantities whose widening no covered value needs (stale parts). */
+  unneeded: RefQuantity[];
 }
 
 export interface CompareReport {
   build: string;
   tolerances: QuantityTriple;
+  /** --strict: known deviations ignored (values they cover are judged by the normal tolerance). */
+  strict: boolean;
+  knownDeviations: KnownDeviationUse[];
   deviations: Deviation[];
   /** Reference species absent from the build. */
   missing: Array<{ species: string; reference: string }>;
   /** Rows outside the fitted range of the built species, skipped. */
   skipped: Array<{ species: string; reference: string; T: number }>;
+  /** Values beyond the normal tolerance accepted by a known deviation. */
+  known: Deviation[];
   breaches: Deviation[];
+  /** Known deviations naming a species not in the build, covering nothing, or no longer needed. */
+  warnings: string[];
+  counts: { values: number; ok: number; known: number; breaches: number; skipped: number };
 }
 
-export function compareWithReferences(build: PolynomialSet, refs: readonly ReferenceTable[], tolerances: QuantityTriple): CompareReport {
-  const report: CompareReport = { build: build.label, tolerances, deviations: [], missing: [], skipped: [], breaches: [] };
+export interface CompareOptions {
+  /** Recorded exceptions (references.known_deviations) with where each was recorded. */
+  knownDeviations?: ReadonlyArray<KnownDeviation & { recordedAt: string }>;
+  /** Ignore the known deviations. */
+  strict?: boolean;
+}
+
+const inWindow = (k: KnownDeviation, T: number) => T >= (k.from ?? -Infinity) && T <= (k.to ?? Infinity);
+
+// A hair of slack so that float noise never turns a deviation equal to a tolerance into a breach.
+const within = (deviation: number, limit: number) => Math.abs(deviation) <= limit + 1e-9;
+
+export function compareWithReferences(
+  build: PolynomialSet,
+  refs: readonly ReferenceTable[],
+  tolerances: QuantityTriple,
+  options: CompareOptions = {},
+): CompareReport {
+  const strict = options.strict === true;
+  const report: CompareReport = {
+    build: build.label,
+    tolerances,
+    strict,
+    knownDeviations: (options.knownDeviations ?? []).map((k) => ({ ...k, covered: 0, needed: 0, exceeded: 0, unneeded: [] })),
+    deviations: [],
+    missing: [],
+    skipped: [],
+    known: [],
+    breaches: [],
+    warnings: [],
+    counts: { values: 0, ok: 0, known: 0, breaches: 0, skipped: 0 },
+  };
+  const neededBy = report.knownDeviations.map(() => new Set<RefQuantity>());
   for (const ref of refs) {
     for (const [name, rows] of [...ref.species].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))) {
       const b = build.species.get(name);
@@ -203,6 +274,7 @@ export function compareWithReferences(build: PolynomialSet, refs: readonly Refer
           const rv = row[q];
           if (rv === undefined) continue;
           const deviation = built[q] - rv;
+          const ok = within(deviation, tolerances[q]);
           const d: Deviation = {
             species: name,
             reference: ref.file,
@@ -212,27 +284,106 @@ export function compareWithReferences(build: PolynomialSet, refs: readonly Refer
             buildValue: built[q],
             deviation,
             tolerance: tolerances[q],
-            // A hair of slack so that float noise never turns a deviation equal to the tolerance into a breach.
-            ok: Math.abs(deviation) <= tolerances[q] + 1e-9,
+            ok,
+            status: ok ? 'ok' : 'breach',
           };
+          // The settings rules forbid overlapping entries, so at most one covers a value.
+          const ki = report.knownDeviations.findIndex((k) => k.species === name && k.tolerances[q] !== undefined && inWindow(k, row.T));
+          if (ki >= 0) {
+            const k = report.knownDeviations[ki]!;
+            d.knownDeviation = ki;
+            d.widenedTolerance = Math.max(k.tolerances[q]!, tolerances[q]);
+            k.covered++;
+            if (!ok) {
+              k.needed++;
+              neededBy[ki]!.add(q);
+              if (!within(deviation, d.widenedTolerance)) k.exceeded++;
+              else if (!strict) d.status = 'known';
+            }
+          }
           report.deviations.push(d);
-          if (!d.ok) report.breaches.push(d);
+          if (d.status === 'known') report.known.push(d);
+          if (d.status === 'breach') report.breaches.push(d);
         }
       }
     }
   }
+  report.knownDeviations.forEach((k, i) => {
+    const given = QS.filter((q) => k.tolerances[q] !== undefined);
+    const where = `known deviation for ${k.species} (${k.recordedAt}${windowText(k) ? `, ${windowText(k)}` : ''})`;
+    if (!build.species.has(k.species)) {
+      report.warnings.push(`${where}: ${k.species} is not in the build ${build.label}; fix the name or remove the entry`);
+      return;
+    }
+    if (k.covered === 0) {
+      report.warnings.push(`${where}: no reference value of ${k.species} in its window; nothing was compared against it`);
+      return;
+    }
+    k.unneeded = given.filter((q) => !neededBy[i]!.has(q));
+    if (k.needed === 0) {
+      report.warnings.push(
+        `${where} is no longer needed: all ${k.covered} value(s) it covers are within the normal tolerance (largest ${largestCovered(report.deviations, i)}); remove it`,
+      );
+    } else if (k.unneeded.length) {
+      report.warnings.push(
+        `${where}: the widened ${k.unneeded.map((q) => LABEL[q]).join(', ')} limit is no longer needed (every covered ${k.unneeded.length > 1 ? 'value of these' : 'value'} is within the normal tolerance); remove it from the entry`,
+      );
+    }
+  });
+  report.counts = {
+    values: report.deviations.length,
+    ok: report.deviations.filter((d) => d.status === 'ok').length,
+    known: report.known.length,
+    breaches: report.breaches.length,
+    skipped: report.skipped.length,
+  };
   return report;
+}
+
+function windowText(k: KnownDeviation): string {
+  if (k.from !== undefined && k.to !== undefined) return k.from === k.to ? `at ${k.from} K` : `${k.from}-${k.to} K`;
+  if (k.from !== undefined) return `from ${k.from} K`;
+  if (k.to !== undefined) return `up to ${k.to} K`;
+  return '';
+}
+
+function largestCovered(ds: readonly Deviation[], ki: number): string {
+  return QS.map((q) => {
+    const of = ds.filter((d) => d.knownDeviation === ki && d.quantity === q);
+    if (!of.length) return undefined;
+    const w = of.reduce((a, b) => (Math.abs(b.deviation) > Math.abs(a.deviation) ? b : a));
+    return `${LABEL[q]} ${signed(w.deviation, 4)} at ${w.T} K`;
+  })
+    .filter(Boolean)
+    .join(', ');
+}
+
+function limitsText(t: Partial<QuantityTriple>): string {
+  return QS.filter((q) => t[q] !== undefined)
+    .map((q) => `${LABEL[q]} ${t[q]} ${UNIT[q]}`)
+    .join(', ');
 }
 
 const signed = (x: number, d: number) => `${x >= 0 ? '+' : ''}${x.toFixed(d)}`;
 
-export function describeBreach(d: Deviation): string {
-  return `${d.species} ${LABEL[d.quantity]} at ${d.T} K: build ${d.buildValue.toFixed(4)} vs reference ${d.referenceValue.toFixed(4)} ${UNIT[d.quantity]} (${d.reference}): deviation ${signed(d.deviation, 4)} exceeds the tolerance ${d.tolerance} ${UNIT[d.quantity]}`;
+export function describeBreach(d: Deviation, report?: CompareReport): string {
+  const head = `${d.species} ${LABEL[d.quantity]} at ${d.T} K: build ${d.buildValue.toFixed(4)} vs reference ${d.referenceValue.toFixed(4)} ${UNIT[d.quantity]} (${d.reference}): deviation ${signed(d.deviation, 4)}`;
+  const k = d.knownDeviation !== undefined ? report?.knownDeviations[d.knownDeviation] : undefined;
+  if (k && d.widenedTolerance !== undefined && !within(d.deviation, d.widenedTolerance)) {
+    return `${head} exceeds even the widened tolerance ${d.widenedTolerance} ${UNIT[d.quantity]} of the known deviation at ${k.recordedAt}`;
+  }
+  const base = `${head} exceeds the tolerance ${d.tolerance} ${UNIT[d.quantity]}`;
+  if (k && report?.strict) return `${base} (the known deviation at ${k.recordedAt} would allow ${d.widenedTolerance}; ignored under --strict)`;
+  return base;
 }
 
+const STATUS_WORD: Record<DeviationStatus, string> = { ok: 'ok', known: 'known', breach: 'FAIL' };
+
 export function renderCompareText(r: CompareReport): string {
+  const kd = r.knownDeviations.length;
   const lines: string[] = [
-    `qforge compare ${r.build}: tolerances Cp ${r.tolerances.cp} J/(mol K), S ${r.tolerances.s} J/(mol K), H-H298 ${r.tolerances.h} kJ/mol`,
+    `qforge compare ${r.build}: tolerances Cp ${r.tolerances.cp} J/(mol K), S ${r.tolerances.s} J/(mol K), H-H298 ${r.tolerances.h} kJ/mol` +
+      (kd ? `; ${kd} known deviation(s)${r.strict ? ' IGNORED (--strict)' : ''}` : ''),
   ];
   const bySpecies = new Map<string, Deviation[]>();
   for (const d of r.deviations) bySpecies.set(d.species, [...(bySpecies.get(d.species) ?? []), d]);
@@ -243,18 +394,51 @@ export function renderCompareText(r: CompareReport): string {
       const w = of.reduce((a, b) => (Math.abs(b.deviation) > Math.abs(a.deviation) ? b : a));
       return `${LABEL[q]} ${signed(w.deviation, 4)} at ${w.T} K`;
     }).filter(Boolean);
-    const bad = ds.filter((d) => !d.ok).length;
-    lines.push(`${bad ? 'FAIL' : 'ok  '} ${name}: ${ds.length} values, largest deviations ${worst.join(', ')}${bad ? `; ${bad} beyond tolerance` : ''}`);
+    const bad = ds.filter((d) => d.status === 'breach').length;
+    const known = ds.filter((d) => d.status === 'known').length;
+    const status: DeviationStatus = bad ? 'breach' : known ? 'known' : 'ok';
+    const counts = [known ? `${known} value(s) within a known deviation` : '', bad ? `${bad} beyond tolerance` : ''].filter(Boolean).join(', ');
+    lines.push(`${STATUS_WORD[status].padEnd(5)} ${name}: ${ds.length} values, largest deviations ${worst.join(', ')}${counts ? `; ${counts}` : ''}`);
+    // The reason once per species, for every entry that covers one of its values.
+    const entries = [...new Set(ds.map((d) => d.knownDeviation).filter((i): i is number => i !== undefined))].sort((a, b) => a - b);
+    for (const i of entries) {
+      const k = r.knownDeviations[i]!;
+      lines.push(`      known deviation (${k.recordedAt}${windowText(k) ? `, ${windowText(k)}` : ''}; widened ${limitsText(k.tolerances)})${r.strict ? ' IGNORED (--strict)' : ''}`);
+      lines.push(`        reason: ${k.reason.trim().replace(/\s+/g, ' ')}`);
+    }
     lines.push(`       T [K]   quantity  reference      build  deviation`);
     for (const d of ds) {
+      const mark =
+        d.status === 'known'
+          ? `  known (within the widened ${d.widenedTolerance})`
+          : d.status === 'breach'
+            ? d.widenedTolerance !== undefined && !within(d.deviation, d.widenedTolerance)
+              ? `  <-- beyond the widened tolerance ${d.widenedTolerance}`
+              : '  <-- beyond tolerance'
+            : '';
       lines.push(
-        `  ${String(d.T).padStart(10)}   ${LABEL[d.quantity].padEnd(8)} ${d.referenceValue.toFixed(4).padStart(10)} ${d.buildValue.toFixed(4).padStart(10)} ${signed(d.deviation, 4).padStart(10)}${d.ok ? '' : '  <-- beyond tolerance'}`,
+        `  ${String(d.T).padStart(10)}   ${LABEL[d.quantity].padEnd(8)} ${d.referenceValue.toFixed(4).padStart(10)} ${d.buildValue.toFixed(4).padStart(10)} ${signed(d.deviation, 4).padStart(10)}${mark}`,
       );
     }
   }
   for (const m of r.missing) lines.push(`note: ${m.species} (in ${m.reference}) is not in the build`);
   if (r.skipped.length) lines.push(`note: ${r.skipped.length} reference row(s) outside the fitted ranges were skipped`);
   return `${lines.join('\n')}\n`;
+}
+
+/** The final line on stderr: counts of ok, known and breaching values. */
+export function compareSummaryLine(r: CompareReport): string {
+  const perSpecies = new Map<string, number>();
+  for (const d of r.known) perSpecies.set(d.species, (perSpecies.get(d.species) ?? 0) + 1);
+  const knownPart = r.counts.known
+    ? `, ${r.counts.known} within known deviations (${[...perSpecies].map(([s, n]) => `${s} ${n}`).join(', ')})`
+    : '';
+  const warnPart = r.warnings.length ? `; ${r.warnings.length} warning(s)` : '';
+  const strictPart = r.strict && r.knownDeviations.length ? '; known deviations ignored (--strict)' : '';
+  if (r.counts.breaches) {
+    return `qforge: compare FAILED: ${r.counts.values} values: ${r.counts.ok} within tolerance${knownPart}, ${r.counts.breaches} beyond tolerance${warnPart}${strictPart}`;
+  }
+  return `qforge: compare ok: ${r.counts.values} values: ${r.counts.ok} within tolerance${knownPart}${warnPart}${strictPart}`;
 }
 
 async function loadReference(p: { path: string; label: string }, build: PolynomialSet): Promise<ReferenceTable> {
@@ -271,12 +455,17 @@ export async function compareCommand(
   io: CliIo,
   buildPath: string,
   buildLabel: string,
-  o: { reference?: Array<{ path: string; label: string }>; database?: string; tolerance?: Partial<QuantityTriple>; json?: boolean },
+  o: { reference?: Array<{ path: string; label: string }>; database?: string; tolerance?: Partial<QuantityTriple>; strict?: boolean; json?: boolean },
 ): Promise<number> {
   try {
     const build = await readPolynomialSet(buildPath, buildLabel);
     let refs = o.reference ?? [];
     let tolerances: QuantityTriple = { ...(build.settings?.references?.tolerances ?? DEFAULT_SETTINGS.references.tolerances) };
+    // Same precedence as the tolerances: --database's qforge.yaml, else the build's recorded settings.
+    let knownDeviations: Array<KnownDeviation & { recordedAt: string }> = (build.settings?.references?.known_deviations ?? []).map((k, i) => ({
+      ...k,
+      recordedAt: `build settings (thermo.json) references.known_deviations[${i}]`,
+    }));
     if (o.database) {
       const s = await loadSettings(o.database, path.relative(io.cwd, o.database) || '.');
       if (s.diagnostics.some((d) => d.severity === 'error')) {
@@ -284,6 +473,10 @@ export async function compareCommand(
         return 1;
       }
       tolerances = { ...s.settings.references.tolerances };
+      knownDeviations = s.settings.references.known_deviations.map((k, i) => {
+        const line = s.locate?.(['references', 'known_deviations', i]).line;
+        return { ...k, recordedAt: `${s.file ?? 'qforge.yaml'}${line ? `:${line}` : ''}` };
+      });
       if (!refs.length) {
         refs = s.settings.references.files.map((f) => ({
           path: path.resolve(o.database!, f),
@@ -291,6 +484,8 @@ export async function compareCommand(
         }));
       }
     }
+    // --tolerance replaces the normal limits for every species; a known deviation still allows its own
+    // widened limit where that is larger. --strict drops the known deviations altogether.
     tolerances = { ...tolerances, ...(o.tolerance ?? {}) };
     if (!refs.length) {
       io.stderr.write('qforge: error: no reference files: give --reference FILE... or --database DIR with references.files in its qforge.yaml\n');
@@ -298,21 +493,19 @@ export async function compareCommand(
     }
     const tables: ReferenceTable[] = [];
     for (const r of refs) tables.push(await loadReference(r, build));
-    const report = compareWithReferences(build, tables, tolerances);
+    const report = compareWithReferences(build, tables, tolerances, { knownDeviations, strict: o.strict === true });
     if (o.json) io.stdout.write(`${JSON.stringify(report, null, 2)}\n`);
     else io.stdout.write(renderCompareText(report));
+    for (const w of report.warnings) io.stderr.write(`qforge: warning: ${w}\n`);
     if (report.deviations.length === 0) {
       io.stderr.write('qforge: compare FAILED: no reference value matched a species and temperature of the build\n');
       return 1;
     }
     if (report.breaches.length) {
-      io.stderr.write(
-        `qforge: compare FAILED: ${report.breaches.length} value(s) beyond tolerance:\n${report.breaches.map((d) => `  ${describeBreach(d)}`).join('\n')}\n`,
-      );
-      return 1;
+      io.stderr.write(`qforge: ${report.breaches.length} value(s) beyond tolerance:\n${report.breaches.map((d) => `  ${describeBreach(d, report)}`).join('\n')}\n`);
     }
-    io.stderr.write(`qforge: compare ok: ${report.deviations.length} values within tolerance\n`);
-    return 0;
+    io.stderr.write(`${compareSummaryLine(report)}\n`);
+    return report.breaches.length ? 1 : 0;
   } catch (e) {
     if (e instanceof ReferenceError || e instanceof ReadBuildError) {
       io.stderr.write(`qforge: error: ${e.message}\n`);

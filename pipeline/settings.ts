@@ -23,6 +23,20 @@ export interface QuantityTriple {
   s: number;
 }
 
+/**
+ * A recorded, reasoned exception to `references.tolerances` (see schemas/settings.schema.json): inside
+ * [from, to] K (inclusive; absent = unbounded) the given quantities of `species` may deviate up to the
+ * widened limits. Used only by `qforge compare`; never by the build.
+ */
+export interface KnownDeviation {
+  species: string;
+  from?: number;
+  to?: number;
+  /** cp, s in J/(mol K); h (H−H298) in kJ/mol; only the quantities given are widened. */
+  tolerances: Partial<QuantityTriple>;
+  reason: string;
+}
+
 /** Settings with every default filled in (same key names as the file). */
 export interface DatabaseSettings {
   title: string;
@@ -43,6 +57,7 @@ export interface DatabaseSettings {
     files: string[];
     /** cp, s in J/(mol K); h (H−H298) in kJ/mol. */
     tolerances: QuantityTriple;
+    known_deviations: KnownDeviation[];
   };
 }
 
@@ -60,7 +75,7 @@ export const DEFAULT_SETTINGS: Readonly<DatabaseSettings> = Object.freeze({
   tolerances: { cp: 0.1, h: 0.02, s: 0.02 },
   outputs: { thermo_json: true, nasa7: true, tables: true },
   tables: { from: 200, to: 6000, step: 100, extra: [298.15] },
-  references: { files: [], tolerances: { cp: 0.5, h: 0.5, s: 0.5 } },
+  references: { files: [], tolerances: { cp: 0.5, h: 0.5, s: 0.5 }, known_deviations: [] },
 } satisfies DatabaseSettings);
 
 /** Standard pressure in Pa for a settings label. */
@@ -99,6 +114,8 @@ export interface SettingsResult {
   /** Path of the settings file as displayed in messages (or undefined when the file is absent). */
   file?: string;
   diagnostics: Diagnostic[];
+  /** Line and column of a settings field (e.g. ['references', 'known_deviations', 0]), when known. */
+  locate?: (segments: Array<string | number>) => { line?: number; column?: number };
 }
 
 /** Cross-field rules the schema cannot express; all problems at once. */
@@ -132,7 +149,53 @@ export function checkSettingsRules(s: DatabaseSettings, file: string, doc?: Load
   }
   const ref = s.references.files;
   if (new Set(ref).size !== ref.length) push(['references', 'files'], 'a reference file is listed twice', ref, 'distinct files');
+  checkKnownDeviations(s.references, push);
   return out;
+}
+
+const PLACEHOLDER_REASON = /^\s*(todo|tbd|tba|fixme|xxx|n\/?a|none|unknown|known)\b/i;
+
+/** Windows, widened limits and reasons of references.known_deviations (all problems at once). */
+function checkKnownDeviations(
+  refs: DatabaseSettings['references'],
+  push: (segments: Array<string | number>, message: string, value: unknown, expected: string) => void,
+): void {
+  const list = refs.known_deviations;
+  list.forEach((k, i) => {
+    const at = ['references', 'known_deviations', i];
+    if (k.from !== undefined && k.to !== undefined && !(k.from <= k.to)) {
+      push([...at, 'to'], 'known deviation: empty temperature window', { from: k.from, to: k.to }, 'from ≤ to');
+    }
+    for (const q of ['cp', 's', 'h'] as const) {
+      const widened = k.tolerances[q];
+      if (widened !== undefined && !(widened > refs.tolerances[q])) {
+        push(
+          [...at, 'tolerances', q],
+          `known deviation: the limit does not widen references.tolerances.${q} (${refs.tolerances[q]})`,
+          widened,
+          `a value > ${refs.tolerances[q]}`,
+        );
+      }
+    }
+    if (PLACEHOLDER_REASON.test(k.reason)) {
+      push([...at, 'reason'], 'known deviation: the reason is a placeholder', k.reason, 'why the deviation is accepted, e.g. the model limit and where it is documented');
+    }
+    // Two entries covering the same species, quantity and temperature would make the limit ambiguous.
+    for (let j = 0; j < i; j++) {
+      const o = list[j]!;
+      if (o.species !== k.species) continue;
+      const overlap = Math.max(o.from ?? 0, k.from ?? 0) <= Math.min(o.to ?? Infinity, k.to ?? Infinity);
+      const shared = (['cp', 's', 'h'] as const).filter((q) => o.tolerances[q] !== undefined && k.tolerances[q] !== undefined);
+      if (overlap && shared.length) {
+        push(
+          at,
+          `known deviation overlaps references.known_deviations[${j}] for ${k.species} ${shared.join(', ')}`,
+          { species: k.species, from: k.from, to: k.to },
+          'windows of the same species and quantity that do not overlap',
+        );
+      }
+    }
+  });
 }
 
 function locate(doc: LoadedDocument | undefined, segments: Array<string | number>): { line?: number; column?: number } {
@@ -183,5 +246,5 @@ export async function loadSettings(dir: string, displayDir = dir): Promise<Setti
   const rules = checkSettingsRules(settings, display, doc);
   diagnostics.push(...rules);
   if (rules.length) return { settings: withDefaults({}), file: display, diagnostics };
-  return { settings, file: display, diagnostics };
+  return { settings, file: display, diagnostics, locate: (segments) => locate(doc, segments) };
 }

@@ -31,6 +31,9 @@ const editSettings = (from: string | RegExp, to: string) => async (ws: Ws) => {
   await writeFile(p, (await readFile(p, 'utf8')).replace(from, to));
 };
 
+/** The references.tolerances line of the fixture qforge.yaml (line 15). */
+const REF_TOLERANCES = '  tolerances: {cp: 0.25, s: 0.05, h: 0.05}';
+
 const CASES: BadCase[] = [
   {
     name: 'YAML syntax error',
@@ -185,6 +188,43 @@ const CASES: BadCase[] = [
     setup: editSettings('tolerances: {cp: 0.1,', 'tolerances: {cp: 0.000001,'),
     code: 1,
     expect: [/N2\.yaml:\d+:\d+: error: \[N2\] fit\.cp/, /Cp\/R fit error/, /exceeds the tolerance/],
+  },
+  // references.known_deviations (fixture qforge.yaml: the entry starts on line 17). A settings error stops
+  // the build and compare alike; the species and tolerances are those of the fixture (NIST-JANAF 4th ed.
+  // N-023 for N2, see test/fixtures/db/reference), the reasons are invented for the tests.
+  {
+    name: 'settings: known deviation without a reason (build)',
+    setup: editSettings(REF_TOLERANCES, `${REF_TOLERANCES}\n  known_deviations:\n    - {species: N2, from: 3000, tolerances: {cp: 0.5}}`),
+    code: 1,
+    expect: [/qforge\.yaml:17:\d+: error: references\.known_deviations\[0\]\.reason: missing required field 'reason'/],
+  },
+  {
+    name: 'settings: known deviation without a reason (compare)',
+    setup: editSettings(REF_TOLERANCES, `${REF_TOLERANCES}\n  known_deviations:\n    - {species: N2, from: 3000, tolerances: {cp: 0.5}}`),
+    argv: ['compare', 'out', '--database', 'db'],
+    code: 1,
+    expect: [/qforge\.yaml:17:\d+: error: references\.known_deviations\[0\]\.reason: missing required field 'reason'/],
+  },
+  {
+    name: 'settings: known deviation with an unknown key',
+    setup: editSettings(REF_TOLERANCES, `${REF_TOLERANCES}\n  known_deviations:\n    - {species: N2, above: 3000, tolerances: {cp: 0.5}, reason: "invented test reason"}`),
+    code: 1,
+    expect: [/qforge\.yaml:17:\d+: error: references\.known_deviations\[0\]\.above: unknown key 'above'/],
+  },
+  {
+    name: 'settings: known deviation that does not widen the tolerance',
+    setup: editSettings(REF_TOLERANCES, `${REF_TOLERANCES}\n  known_deviations:\n    - {species: N2, tolerances: {cp: 0.2}, reason: "invented test reason"}`),
+    code: 1,
+    expect: [/qforge\.yaml:17:\d+: error: references\.known_deviations\[0\]\.tolerances\.cp: known deviation: the limit does not widen/, /got 0\.2/],
+  },
+  {
+    name: 'settings: overlapping known deviations of one species and quantity',
+    setup: editSettings(
+      REF_TOLERANCES,
+      `${REF_TOLERANCES}\n  known_deviations:\n    - {species: N2, from: 3000, tolerances: {cp: 0.5}, reason: "invented test reason"}\n    - {species: N2, from: 5000, tolerances: {cp: 0.9}, reason: "invented test reason"}`,
+    ),
+    code: 1,
+    expect: [/qforge\.yaml:18:\d+: error: references\.known_deviations\[1\]: known deviation overlaps references\.known_deviations\[0\] for N2 cp/],
   },
   {
     name: 'five elements: more than the 80-column record can hold',

@@ -55,6 +55,14 @@ export interface NuclearSpinWeights {
   odd: number;
 }
 
+/**
+ * How the even-J and odd-J manifolds of a homonuclear diatomic with nuclear spin weights are populated:
+ * 'equilibrium' — one Boltzmann distribution over all levels (interconversion at every T; the basis of
+ * NIST-JANAF H2); 'frozen' — fixed mole fractions even/(even+odd) and odd/(even+odd) (the high-temperature
+ * ratio, e.g. "normal" H2 1:3), each manifold in its own Boltzmann distribution (no interconversion).
+ */
+export type NuclearSpinMixture = 'equilibrium' | 'frozen';
+
 interface SpeciesBase {
   /** Record name, 1–16 chars of [A-Za-z0-9()+*,._-]. */
   name: string;
@@ -104,6 +112,8 @@ export interface DiatomicSpecies extends SpeciesBase {
   /** D0 of the ground state from its lowest level, cm⁻¹; defines the dissociation limit. */
   dissociationEnergy: number;
   nuclearSpinWeights?: NuclearSpinWeights;
+  /** Only with `nuclearSpinWeights`; the validator always fills it there. Absent → 'equilibrium'. */
+  nuclearSpinMixture?: NuclearSpinMixture;
   /** Ground state first. */
   electronicStates: DiatomicState[];
 }

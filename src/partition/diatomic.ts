@@ -6,6 +6,7 @@ import { C2_CM_K } from '../constants.js';
 import type { DiatomicState, NuclearSpinWeights } from '../model.js';
 import { createLevelList, levelSumMoments, type LevelList } from './level-sum.js';
 import { LevelSumError, type PartitionMoments } from './moments.js';
+import type { FrozenMixtureComponent } from './spin-mixture.js';
 
 /** No real diatomic has more bound vibrational levels than this; more means the constants are unusable. */
 export const MAX_VIBRATIONAL_LEVELS = 2000;
@@ -65,34 +66,37 @@ function vibrationalTerm(state: DiatomicState, v: number): number {
   return state.we * h - state.wexe * h * h + state.weye * h * h * h;
 }
 
+/** Every bound level of every state, before any σ or nuclear-spin factor is applied. */
+interface EnumeratedLevels {
+  /** cm⁻¹ above the ground-state potential minimum. */
+  energies: number[];
+  /** g_el·(2J+1). */
+  weights: number[];
+  evenJ: boolean[];
+  states: DiatomicStateLevels[];
+}
+
 /**
- * Enumerate all bound levels and their weights g_el·(2J+1)·f(J), where f(J) is 1/σ without nuclear spin
- * weights, and even/(even+odd) or odd/(even+odd) for even or odd J with them (the normalisation that makes
- * the conventional entropy exclude nuclear spin; at high T it equals 1/σ with σ = 2).
+ * Enumerate all bound levels with weight g_el·(2J+1) and the parity of J.
  *
  * The dissociation limit is the ground state's lowest level plus D0; a state with its own
  * `dissociationEnergy` uses its lowest level plus that value. A v ladder ends where G(v) turns over,
  * where B_v ≤ 0, or where E(v,0) reaches the limit; a J ladder ends where E(v,J) stops rising
  * (dE/dJ ≤ 0) or reaches the limit. Quasi-bound levels above the limit are excluded.
- * Energies are measured from the lowest level found (the ground state's v = 0, J = 0).
  * Throws LevelSumError if a ladder does not terminate within the bounds above.
  */
-export function diatomicLevels(input: DiatomicModelInput): DiatomicLevels {
+function enumerateLevels(input: DiatomicModelInput): EnumeratedLevels {
   const states = input.electronicStates;
   const ground = states[0];
   if (!ground) throw new LevelSumError(`${input.name ?? 'diatomic'}: no electronic states`);
   const groundLowest = diatomicTermValue(ground, 0, 0);
   const commonLimit = groundLowest + input.dissociationEnergy;
-  const spin = input.nuclearSpinWeights;
-  const spinTotal = spin ? spin.even + spin.odd : 0;
-  const evenFactor = spin ? spin.even / spinTotal : 1 / input.symmetryNumber;
-  const oddFactor = spin ? spin.odd / spinTotal : 1 / input.symmetryNumber;
 
   const energies: number[] = [];
   const weights: number[] = [];
+  const evenJ: boolean[] = [];
   const summary: DiatomicStateLevels[] = [];
   const where = (s: DiatomicState) => `${input.name ?? 'diatomic'} state ${s.term}`;
-
   for (const state of states) {
     const ownLowest = diatomicTermValue(state, 0, 0);
     const limit = state.dissociationEnergy !== undefined ? ownLowest + state.dissociationEnergy : commonLimit;
@@ -138,7 +142,8 @@ export function diatomicLevels(input: DiatomicModelInput): DiatomicLevels {
         if (E >= limit || E <= previousE) break;
         previousE = E;
         energies.push(E);
-        weights.push(g * (2 * J + 1) * (J % 2 === 0 ? evenFactor : oddFactor));
+        weights.push(g * (2 * J + 1));
+        evenJ.push(J % 2 === 0);
       }
       info.levels += J;
       if (J - 1 > info.maxJ) info.maxJ = J - 1;
@@ -149,7 +154,78 @@ export function diatomicLevels(input: DiatomicModelInput): DiatomicLevels {
     }
   }
   if (energies.length === 0) throw new LevelSumError(`${input.name ?? 'diatomic'}: no bound levels below the dissociation limit`);
-  return { levels: createLevelList(energies, weights, C2_CM_K), states: summary };
+  return { energies, weights, evenJ, states: summary };
+}
+
+/**
+ * All bound levels in ONE level list (one Boltzmann distribution), weights g_el·(2J+1)·f(J): f = 1/σ
+ * without nuclear spin weights; with them f = even/(even+odd) or odd/(even+odd) for even or odd J, i.e.
+ * the EQUILIBRIUM ortho/para mixture, normalised so the conventional entropy excludes nuclear spin (at
+ * high T f averages to 1/σ with σ = 2). Energies are measured from the lowest level found (the ground
+ * state's v = 0, J = 0). For the frozen mixture see `diatomicSpinManifolds`.
+ * Throws LevelSumError if a ladder does not terminate within the bounds above.
+ */
+export function diatomicLevels(input: DiatomicModelInput): DiatomicLevels {
+  const { energies, weights, evenJ, states } = enumerateLevels(input);
+  const spin = input.nuclearSpinWeights;
+  const spinTotal = spin ? spin.even + spin.odd : 0;
+  const evenFactor = spin ? spin.even / spinTotal : 1 / input.symmetryNumber;
+  const oddFactor = spin ? spin.odd / spinTotal : 1 / input.symmetryNumber;
+  // Levels of a manifold with spin weight 0 do not exist; drop them rather than give them weight 0.
+  const e: number[] = [];
+  const w: number[] = [];
+  for (let i = 0; i < energies.length; i++) {
+    const f = evenJ[i] ? evenFactor : oddFactor;
+    if (f === 0) continue;
+    e.push(energies[i]!);
+    w.push(weights[i]! * f);
+  }
+  return { levels: createLevelList(e, w, C2_CM_K), states };
+}
+
+/** The even-J and odd-J manifolds of a homonuclear diatomic as components of a frozen mixture. */
+export interface DiatomicSpinManifolds {
+  /** Manifolds with a non-zero spin weight, even J first. */
+  components: FrozenMixtureComponent[];
+  states: DiatomicStateLevels[];
+}
+
+/**
+ * Split the levels into the even-J and odd-J manifolds, each with weight g_el·(2J+1) (no σ, no spin
+ * weight) and mole fraction x = even/(even+odd) or odd/(even+odd), for the FROZEN ortho/para mixture of
+ * spin-mixture.ts. Each list is measured from its own lowest level; `offsetTheta` records that level's
+ * height above the molecule's lowest level (c2·Δε, K), so both manifolds share one energy zero (para
+ * J = 0 for H2). A manifold with spin weight 0 is omitted.
+ * Requires `nuclearSpinWeights`; throws LevelSumError without them or if a manifold has no bound level.
+ */
+export function diatomicSpinManifolds(input: DiatomicModelInput): DiatomicSpinManifolds {
+  const spin = input.nuclearSpinWeights;
+  if (!spin) throw new LevelSumError(`${input.name ?? 'diatomic'}: a frozen spin mixture needs nuclear spin weights`);
+  const { energies, weights, evenJ, states } = enumerateLevels(input);
+  const total = spin.even + spin.odd;
+  const manifolds: { label: string; fraction: number; e: number[]; w: number[]; own: number }[] = [];
+  for (const [label, even, g] of [['even J', true, spin.even], ['odd J', false, spin.odd]] as const) {
+    if (g === 0) continue;
+    const m = { label, fraction: g / total, e: [] as number[], w: [] as number[], own: Infinity };
+    for (let i = 0; i < energies.length; i++) {
+      if (evenJ[i] !== even) continue;
+      m.e.push(energies[i]!);
+      m.w.push(weights[i]!);
+      if (energies[i]! < m.own) m.own = energies[i]!;
+    }
+    if (m.e.length === 0) throw new LevelSumError(`${input.name ?? 'diatomic'}: no bound ${label} levels`);
+    manifolds.push(m);
+  }
+  // The common zero is the lowest level that exists (a manifold of spin weight 0 has no levels), as in
+  // the single-list sum, so both mixtures give the same H − H0 scale.
+  const lowest = Math.min(...manifolds.map((m) => m.own));
+  const components: FrozenMixtureComponent[] = manifolds.map((m) => ({
+    label: m.label,
+    fraction: m.fraction,
+    levels: createLevelList(m.e, m.w, C2_CM_K),
+    offsetTheta: (m.own - lowest) * C2_CM_K,
+  }));
+  return { components, states };
 }
 
 /**

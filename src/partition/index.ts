@@ -1,4 +1,13 @@
-export { addMoments, assertTemperature, LevelSumError, TemperatureError, type PartitionMoments } from './moments.js';
+export {
+  addContributions,
+  addMoments,
+  assertTemperature,
+  contributionOf,
+  LevelSumError,
+  TemperatureError,
+  type PartitionMoments,
+  type ThermoContribution,
+} from './moments.js';
 export { createLevelList, levelSumMoments, type LevelList } from './level-sum.js';
 export { translationalMoments } from './translational.js';
 export { electronicLevelList, electronicMoments } from './electronic.js';
@@ -8,11 +17,14 @@ export { harmonicMoments } from './harmonic.js';
 export {
   diatomicLevels,
   diatomicMoments,
+  diatomicSpinManifolds,
   diatomicTermValue,
   MAX_ROTATIONAL_LEVELS,
   MAX_TOTAL_LEVELS,
   MAX_VIBRATIONAL_LEVELS,
   type DiatomicLevels,
   type DiatomicModelInput,
+  type DiatomicSpinManifolds,
   type DiatomicStateLevels,
 } from './diatomic.js';
+export { DEFAULT_NUCLEAR_SPIN_MIXTURE, frozenMixtureContribution, type FrozenMixtureComponent } from './spin-mixture.js';

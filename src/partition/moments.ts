@@ -31,6 +31,35 @@ export function addMoments(parts: readonly PartitionMoments[]): PartitionMoments
   return { lnQ, meanU, varU };
 }
 
+/**
+ * Already-combined contributions to the dimensionless functions: s → S/R, hmh0 → (H − H0)/(R T),
+ * cp → Cp/R. A mixture of independently populated species (e.g. frozen ortho/para hydrogen, see
+ * spin-mixture.ts) has no single partition function, so its share cannot be a `PartitionMoments`; it is
+ * a mole-fraction-weighted sum of these functions instead. Contributions of independent parts add.
+ */
+export interface ThermoContribution {
+  s: number;
+  hmh0: number;
+  cp: number;
+}
+
+/** The functions a partition-function factor contributes: S/R = lnQ + meanU, (H − H0)/RT = meanU, Cp/R = varU. */
+export function contributionOf(m: PartitionMoments): ThermoContribution {
+  return { s: m.lnQ + m.meanU, hmh0: m.meanU, cp: m.varU };
+}
+
+export function addContributions(parts: readonly ThermoContribution[]): ThermoContribution {
+  let s = 0;
+  let hmh0 = 0;
+  let cp = 0;
+  for (const p of parts) {
+    s += p.s;
+    hmh0 += p.hmh0;
+    cp += p.cp;
+  }
+  return { s, hmh0, cp };
+}
+
 /** Thrown when a level ladder does not terminate within its bound, or a level list is unusable. */
 export class LevelSumError extends Error {
   constructor(message: string) {

@@ -2,14 +2,22 @@
  * Combine the partition-function factors of a species into its thermodynamic functions.
  */
 import { CONSTANTS_EDITION, GAS_CONSTANT, STANDARD_PRESSURE_BAR, T_REF } from '../constants.js';
-import type { ModelSummary, PhysicsOptions, Species, ThermoEvaluator, ThermoPoint } from '../model.js';
-import { diatomicLevels, type DiatomicLevels } from '../partition/diatomic.js';
+import type { ModelSummary, NuclearSpinMixture, PhysicsOptions, Species, ThermoEvaluator, ThermoPoint } from '../model.js';
+import { diatomicLevels, diatomicSpinManifolds, type DiatomicStateLevels } from '../partition/diatomic.js';
 import { electronicLevelList } from '../partition/electronic.js';
 import { harmonicMoments } from '../partition/harmonic.js';
 import { levelSumMoments, type LevelList } from '../partition/level-sum.js';
-import { addMoments, assertTemperature, type PartitionMoments } from '../partition/moments.js';
+import {
+  addContributions,
+  addMoments,
+  assertTemperature,
+  contributionOf,
+  type PartitionMoments,
+  type ThermoContribution,
+} from '../partition/moments.js';
 import { linearRotorMoments } from '../partition/rigid-rotor-linear.js';
 import { nonlinearRotorMoments } from '../partition/rigid-rotor-nonlinear.js';
+import { DEFAULT_NUCLEAR_SPIN_MIXTURE, frozenMixtureContribution } from '../partition/spin-mixture.js';
 import { translationalMoments } from '../partition/translational.js';
 import { ELECTRON_CONVENTION, formationEnthalpyAt298 } from './reference-states.js';
 
@@ -45,6 +53,9 @@ export function normalisePhysicsOptions(options: Partial<PhysicsOptions> = {}): 
  *   nonlinear  q = q_trans · q_rot(classical)    · q_vib(harmonic) · q_el
  *   diatomic   q = q_trans · q_rovibronic (explicit sum over all bound levels of all states)
  * Then Cp/R = Σ varU, (H − H0)/RT = Σ meanU, S/R = Σ (lnQ + meanU), exactly from the moments.
+ * A diatomic with nuclear spin weights and `nuclearSpinMixture: 'frozen'` has no single q_rovibronic: its
+ * even-J and odd-J manifolds are a fixed-composition mixture (src/partition/spin-mixture.ts) whose
+ * already-combined contributions are added to the translational ones.
  * H0 is the lowest level of the species (the zero-point level for vibrations).
  */
 export function createThermoEvaluator(species: Species, options?: Partial<PhysicsOptions>): ThermoEvaluator {
@@ -53,13 +64,15 @@ export function createThermoEvaluator(species: Species, options?: Partial<Physic
   const mass = species.molarMass;
   const contributions: string[] = [`translational (Sackur-Tetrode), M = ${mass} g/mol`];
   const notes: string[] = [];
-  let internal: (T: number) => PartitionMoments;
+  /** The internal degrees of freedom: one partition function, or a mixture of independently populated parts. */
+  let internal: { moments: (T: number) => PartitionMoments } | { mixture: (T: number) => ThermoContribution };
+  let spinMixture: NuclearSpinMixture | undefined;
 
   switch (species.structure) {
     case 'atom': {
       const el = electronicLevelList(species.electronicLevels);
       contributions.push(`electronic level sum (${species.electronicLevels.length} levels)`);
-      internal = (T) => levelSumMoments(el, T);
+      internal = { moments: (T) => levelSumMoments(el, T) };
       break;
     }
     case 'linear': {
@@ -72,8 +85,9 @@ export function createThermoEvaluator(species: Species, options?: Partial<Physic
         `harmonic oscillators (${vib.reduce((n, v) => n + v.degeneracy, 0)} modes)`,
         `electronic level sum (${species.electronicLevels.length} levels)`,
       );
-      internal = (T) =>
-        addMoments([linearRotorMoments(B, sigma, T), harmonicMoments(vib, T), levelSumMoments(el, T)]);
+      internal = {
+        moments: (T) => addMoments([linearRotorMoments(B, sigma, T), harmonicMoments(vib, T), levelSumMoments(el, T)]),
+      };
       break;
     }
     case 'nonlinear': {
@@ -86,27 +100,48 @@ export function createThermoEvaluator(species: Species, options?: Partial<Physic
         `harmonic oscillators (${vib.reduce((n, v) => n + v.degeneracy, 0)} modes)`,
         `electronic level sum (${species.electronicLevels.length} levels)`,
       );
-      internal = (T) =>
-        addMoments([nonlinearRotorMoments(abc, sigma, T), harmonicMoments(vib, T), levelSumMoments(el, T)]);
+      internal = {
+        moments: (T) => addMoments([nonlinearRotorMoments(abc, sigma, T), harmonicMoments(vib, T), levelSumMoments(el, T)]),
+      };
       break;
     }
     case 'diatomic': {
-      const levels: DiatomicLevels = diatomicLevels(species);
       const spin = species.nuclearSpinWeights;
-      contributions.push(
-        `rovibronic level sum over all bound levels (${levels.levels.theta.length} levels, ${levels.states.length} electronic states)`,
-      );
-      for (const s of levels.states) {
-        notes.push(
-          `state ${s.term}: ${s.vibrationalLevels} vibrational levels (ladder end: ${s.vEnd}), ${s.levels} levels, J <= ${s.maxJ}, limit ${s.limit.toFixed(3)} cm-1 above the lowest level`,
+      const mixture: NuclearSpinMixture | undefined = spin ? (species.nuclearSpinMixture ?? DEFAULT_NUCLEAR_SPIN_MIXTURE) : undefined;
+      spinMixture = mixture;
+      const describeStates = (states: readonly DiatomicStateLevels[]) => {
+        for (const s of states) {
+          notes.push(
+            `state ${s.term}: ${s.vibrationalLevels} vibrational levels (ladder end: ${s.vEnd}), ${s.levels} levels, J <= ${s.maxJ}, limit ${s.limit.toFixed(3)} cm-1 above the lowest level`,
+          );
+        }
+      };
+      if (spin && mixture === 'frozen') {
+        const { components, states } = diatomicSpinManifolds(species);
+        const counts = components.map((c) => `${c.levels.theta.length} ${c.label}`).join(', ');
+        contributions.push(
+          `rovibronic level sums over all bound levels, frozen even/odd-J mixture (${counts} levels, ${states.length} electronic states)`,
         );
+        describeStates(states);
+        notes.push(
+          `nuclear spin weights even:odd = ${spin.even}:${spin.odd}; frozen mixture: even-J and odd-J manifolds at fixed mole fractions ${components
+            .map((c) => `${c.label} ${c.fraction}`)
+            .join(', ')} (no interconversion), energies from the molecule's lowest level; conventional entropy (nuclear spin and its mixing term excluded)`,
+        );
+        internal = { mixture: (T) => frozenMixtureContribution(components, T) };
+      } else {
+        const levels = diatomicLevels(species);
+        contributions.push(
+          `rovibronic level sum over all bound levels (${levels.levels.theta.length} levels, ${levels.states.length} electronic states)`,
+        );
+        describeStates(levels.states);
+        notes.push(
+          spin
+            ? `nuclear spin weights even:odd = ${spin.even}:${spin.odd}, normalised by their sum (conventional entropy, nuclear spin excluded); equilibrium between even and odd J`
+            : `symmetry number ${species.symmetryNumber} divides every level`,
+        );
+        internal = { moments: (T) => levelSumMoments(levels.levels, T) };
       }
-      notes.push(
-        spin
-          ? `nuclear spin weights even:odd = ${spin.even}:${spin.odd}, normalised by their sum (conventional entropy, nuclear spin excluded); equilibrium between even and odd J`
-          : `symmetry number ${species.symmetryNumber} divides every level`,
-      );
-      internal = (T) => levelSumMoments(levels.levels, T);
       break;
     }
     default: {
@@ -122,8 +157,14 @@ export function createThermoEvaluator(species: Species, options?: Partial<Physic
     const known = memo.get(T);
     if (known) return { ...known };
     assertTemperature(T);
-    const m = addMoments([translationalMoments(mass, T, p), internal(T)]);
-    const point: ThermoPoint = { T, cp: m.varU, hmh0: m.meanU, s: m.lnQ + m.meanU };
+    let point: ThermoPoint;
+    if ('mixture' in internal) {
+      const c = addContributions([contributionOf(translationalMoments(mass, T, p)), internal.mixture(T)]);
+      point = { T, cp: c.cp, hmh0: c.hmh0, s: c.s };
+    } else {
+      const m = addMoments([translationalMoments(mass, T, p), internal.moments(T)]);
+      point = { T, cp: m.varU, hmh0: m.meanU, s: m.lnQ + m.meanU };
+    }
     if (memo.size >= MEMO_LIMIT) memo.clear();
     memo.set(T, point);
     return { ...point };
@@ -154,6 +195,7 @@ export function createThermoEvaluator(species: Species, options?: Partial<Physic
       constants: CONSTANTS_EDITION,
       electronConvention: ELECTRON_CONVENTION,
       enthalpyZero: 'lowest level (H0 at 0 K)',
+      ...(spinMixture ? { nuclearSpinMixture: spinMixture } : {}),
     },
     notes,
   };

@@ -62,7 +62,7 @@ Examples:
   qforge compare build --reference janaf/n2.csv janaf/o2.csv
   qforge compare build --reference tables.csv --tolerance cp=0.1,s=0.05,h=0.02
   qforge compare build --database species      use references.files of species/qforge.yaml
-  qforge compare build --database species --strict   ignore its known deviations
+  qforge compare build --database species --strict   ignore known deviations
 
 Reference CSV: one row per temperature; header names with units, e.g.
   species,T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol]

@@ -14,9 +14,11 @@
 import { elementsObject } from 'chemical-elements';
 import schema from '../schemas/species.schema.json' with { type: 'json' };
 import { isKnownElement, molarMass } from '../src/elements.js';
+import { DEFAULT_NUCLEAR_SPIN_MIXTURE } from '../src/partition/spin-mixture.js';
 import type {
   DiatomicState,
   ElectronicLevel,
+  NuclearSpinMixture,
   NuclearSpinWeights,
   Species,
   Structure,
@@ -581,7 +583,34 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
   }
 }
 
-function readDiatomic(ctx: Ctx): { states?: DiatomicState[]; d0?: number; spin?: NuclearSpinWeights } {
+interface DiatomicReading {
+  states?: DiatomicState[];
+  d0?: number;
+  spin?: NuclearSpinWeights;
+  /** Only with `spin`; the default filled in, so the cache hash states it explicitly. */
+  mixture?: NuclearSpinMixture;
+}
+
+/**
+ * `nuclear_spin_mixture` says how the even-J and odd-J manifolds set by `nuclear_spin_weights` are
+ * populated, so without spin weights it has nothing to act on (σ divides every level then): an error, not
+ * a silent no-op. Returns the mixture to use when spin weights are present.
+ */
+function readSpinMixture(ctx: Ctx): NuclearSpinMixture {
+  const { f, input } = ctx;
+  const raw = input.nuclear_spin_mixture;
+  const given = raw === 'equilibrium' || raw === 'frozen' ? raw : undefined;
+  if (given !== undefined && input.nuclear_spin_weights === undefined) {
+    f.error(['nuclear_spin_mixture'], 'nuclear_spin_mixture needs nuclear_spin_weights: without them the symmetry number divides every level and there is no even/odd-J mixture to choose', {
+      key: true,
+      value: raw,
+      expected: 'nuclear_spin_weights {even, odd} on a homonuclear diatomic (e.g. {even: 1, odd: 3} for H2), or no nuclear_spin_mixture',
+    });
+  }
+  return given ?? DEFAULT_NUCLEAR_SPIN_MIXTURE;
+}
+
+function readDiatomic(ctx: Ctx): DiatomicReading {
   const { f, input, composition: c } = ctx;
   const d0 = energy(input.dissociation_energy);
   let spin: NuclearSpinWeights | undefined;
@@ -603,12 +632,14 @@ function readDiatomic(ctx: Ctx): { states?: DiatomicState[]; d0?: number; spin?:
       } else spin = { even: rawSpin.even as number, odd: rawSpin.odd as number };
     }
   }
+  const mixture = readSpinMixture(ctx);
+  const spinPart = spin ? { spin, mixture } : {};
   const rawStates = input.electronic_states;
-  if (!Array.isArray(rawStates) || rawStates.length === 0) return { d0, spin };
+  if (!Array.isArray(rawStates) || rawStates.length === 0) return { d0, ...spinPart };
   const states = rawStates.map(readDiatomicState);
   checkDiatomicLadders(ctx, states, d0);
-  if (states.every((s): s is DiatomicState => s !== undefined)) return { states, d0, spin };
-  return { d0, spin };
+  if (states.every((s): s is DiatomicState => s !== undefined)) return { states, d0, ...spinPart };
+  return { d0, ...spinPart };
 }
 
 /**
@@ -662,11 +693,14 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
       species = { ...common(), structure, symmetryNumber: sigma, electronicLevels, rotationalConstants: rc, vibrations } as Species;
     }
   } else if (structure === 'diatomic') {
-    const { states, d0, spin } = readDiatomic(ctx);
+    const { states, d0, spin, mixture } = readDiatomic(ctx);
     if (sigma !== undefined) checkSymmetryNumber(ctx, sigma, spin !== undefined);
     if (canBuild && states && d0 !== undefined && sigma !== undefined) {
       const s: Species = { ...common(), structure, symmetryNumber: sigma, dissociationEnergy: d0, electronicStates: states };
-      if (spin) s.nuclearSpinWeights = spin;
+      if (spin) {
+        s.nuclearSpinWeights = spin;
+        s.nuclearSpinMixture = mixture ?? DEFAULT_NUCLEAR_SPIN_MIXTURE;
+      }
       species = s;
     }
   }

@@ -218,6 +218,10 @@ export interface SpeciesInput {
     odd: number;
   };
   /**
+   * Homonuclear diatomic with nuclear_spin_weights only, optional (default equilibrium): how the even-J and odd-J manifolds are populated. equilibrium: one Boltzmann distribution over all levels (ortho/para interconversion at every T); this reproduces NIST-JANAF 4th ed. H2 (H-050) and CODATA, e.g. Cp(200 K) within 0.01 J/(mol K), and is the default so tables stay comparable with them. frozen: fixed mole fractions even/(even+odd) and odd/(even+odd) (normal hydrogen 1:3, as H2 stays without a conversion catalyst when cooled from room temperature), each manifold in its own Boltzmann distribution; for H2 it is 0.17 J/(mol K) lower in Cp at 200 K than equilibrium and JANAF, and agrees with equilibrium within 1e-5 relative from 500 to 6000 K.
+   */
+  nuclear_spin_mixture?: "equilibrium" | "frozen";
+  /**
    * Diatomic only, required: electronic states with their spectroscopic constants, ground state first.
    *
    * @minItems 1

@@ -126,6 +126,19 @@ const ERRORS: Case[] = [
     line: 10, at: 'nuclear_spin_weights', path: 'nuclear_spin_weights', contains: ['only to a homonuclear diatomic', 'got {"C":1,"O":1}'],
   },
   {
+    kind: 'spin mixture without spin weights',
+    yaml: edit(DIATOMIC, {}, ['nuclear_spin_mixture: frozen']), line: 10, at: 'nuclear_spin_mixture', path: 'nuclear_spin_mixture',
+    contains: ['nuclear_spin_mixture needs nuclear_spin_weights', 'got "frozen"', 'expected nuclear_spin_weights {even, odd}'],
+  },
+  {
+    kind: 'spin mixture not one of the two', yaml: edit(DIATOMIC, {}, ['nuclear_spin_weights: {even: 6, odd: 3}', 'nuclear_spin_mixture: normal']),
+    line: 11, at: 'normal', path: 'nuclear_spin_mixture', contains: ['got "normal"', 'equilibrium', 'frozen'],
+  },
+  {
+    kind: 'spin mixture on a non-diatomic', yaml: edit(NONLINEAR, {}, ['nuclear_spin_mixture: frozen']), line: 9, at: 'nuclear_spin_mixture',
+    path: 'nuclear_spin_mixture', contains: ["'nuclear_spin_mixture' does not apply to structure 'nonlinear'"],
+  },
+  {
     kind: 'nuclear spin weights both zero', yaml: edit(DIATOMIC, {}, ['nuclear_spin_weights: {even: 0, odd: 0}']), line: 10, at: '{even',
     path: 'nuclear_spin_weights', contains: ['both 0'],
   },

@@ -127,6 +127,40 @@ name: N2
     expect(keys).toEqual([...keys].sort());
   });
 
+  it('fills nuclear_spin_mixture (default equilibrium) only with spin weights, so the hash states it', () => {
+    // H2 X1Sigma_g+ constants: Huber & Herzberg (1979), from memory; 1:3 para:ortho (textbook nuclear spin statistics).
+    const h2 = (extra: string) =>
+      validateSpecies(
+        parseYamlText(
+          `name: H2
+composition: {H: 2}
+enthalpy_of_formation: 0
+sources: ["Huber & Herzberg (1979), from memory"]
+structure: diatomic
+symmetry_number: 2
+nuclear_spin_weights: {even: 1, odd: 3}
+${extra}
+dissociation_energy: 36118.1
+electronic_states:
+  - {term: X, energy: 0, degeneracy: 1, we: 4401.21, wexe: 121.33, Be: 60.853, alphae: 3.062, De: 0.0471}
+`,
+          'h2.yaml',
+        ).documents[0]!,
+      );
+    const omitted = h2('');
+    const explicit = h2('nuclear_spin_mixture: equilibrium');
+    const frozen = h2('nuclear_spin_mixture: frozen');
+    for (const r of [omitted, explicit, frozen]) expect(r.diagnostics).toEqual([]);
+    expect((omitted.species as DiatomicSpecies).nuclearSpinMixture).toBe('equilibrium');
+    expect((frozen.species as DiatomicSpecies).nuclearSpinMixture).toBe('frozen');
+    expect(omitted.normalisedInput).toHaveProperty('nuclearSpinMixture', 'equilibrium');
+    expect(JSON.stringify(explicit.normalisedInput)).toBe(JSON.stringify(omitted.normalisedInput));
+    expect(JSON.stringify(frozen.normalisedInput)).not.toBe(JSON.stringify(omitted.normalisedInput));
+    // Without spin weights there is no mixture to state.
+    const [n2] = validateFixture('n2.yaml');
+    expect(n2!.normalisedInput).not.toHaveProperty('nuclearSpinMixture');
+  });
+
   it('fills charge and corrects the molar mass of a cation for the missing electron', () => {
     const doc = parseYamlText(
       `name: Ar+

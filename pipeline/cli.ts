@@ -290,8 +290,16 @@ async function buildCommand(
           `${s.counts.files_failed ? `; ${s.counts.files_failed} file(s) with errors` : ''}\n`,
       );
     } else {
+      const settingsErrors = ((report.summary.settings_diagnostics as string[] | undefined) ?? []).filter((d) =>
+        d.includes(': error: '),
+      ).length;
+      const causes = [
+        settingsErrors ? `${settingsErrors} error(s) in the settings file` : '',
+        s.counts.failed ? `${s.counts.failed} species failed` : '',
+        s.counts.files_failed ? `${s.counts.files_failed} file(s) with errors` : '',
+      ].filter(Boolean);
       io.stderr.write(
-        `qforge: build failed (${s.counts.failed} species failed, ${s.counts.files_failed} file(s) with errors); ${outLabel} left unchanged\n`,
+        `qforge: build failed (${causes.join(', ') || 'see the errors above'}); ${outLabel} left unchanged\n`,
       );
     }
   }

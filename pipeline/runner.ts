@@ -33,6 +33,7 @@ import { planSpecies, type SpeciesPlan } from './plan.js';
 import { loadSettings, type DatabaseSettings } from './settings.js';
 import { checkUniqueNames, validateSpecies } from './validate.js';
 import { verifySpecies } from './verify.js';
+import { codeFingerprint } from './code-fingerprint.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './version.js';
 
 export type StageName = 'load' | 'validate' | 'compute' | 'fit' | 'verify' | 'emit';
@@ -221,11 +222,11 @@ export interface SpeciesOutcome {
 
 /** Cache keys of one species' stages; see plan.ts for what each depends on. */
 export function stageKeys(inputHash: string, species: Species, plan: SpeciesPlan, fitOptions: FitOptions) {
-  const base = [TOOL_NAME, TOOL_VERSION, CONSTANTS_EDITION, inputHash, species, plan.physics];
+  const base = [TOOL_NAME, TOOL_VERSION, codeFingerprint(), CONSTANTS_EDITION, inputHash, species, plan.physics];
   const samples = hashParts('samples', ...base, plan.sampleTemperatures);
   return {
     samples,
-    fit: hashParts('fit', TOOL_NAME, TOOL_VERSION, samples, fitOptions),
+    fit: hashParts('fit', TOOL_NAME, TOOL_VERSION, codeFingerprint(), samples, fitOptions),
     table: hashParts('table', ...base, plan.tableTemperatures),
   };
 }

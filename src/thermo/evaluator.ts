@@ -2,7 +2,16 @@
  * Combine the partition-function factors of a species into its thermodynamic functions.
  */
 import { CONSTANTS_EDITION, GAS_CONSTANT, STANDARD_PRESSURE_BAR, T_REF } from '../constants.js';
-import type { ModelSummary, NuclearSpinMixture, PhysicsOptions, Species, ThermoEvaluator, ThermoPoint } from '../model.js';
+import type {
+  LinearSpecies,
+  ModelSummary,
+  NonlinearSpecies,
+  NuclearSpinMixture,
+  PhysicsOptions,
+  Species,
+  ThermoEvaluator,
+  ThermoPoint,
+} from '../model.js';
 import { diatomicLevels, diatomicSpinManifolds, type DiatomicStateLevels } from '../partition/diatomic.js';
 import { electronicLevelList } from '../partition/electronic.js';
 import { harmonicMoments } from '../partition/harmonic.js';
@@ -45,6 +54,34 @@ export function normalisePhysicsOptions(options: Partial<PhysicsOptions> = {}): 
 }
 
 /**
+ * Internal factors of a polyatomic: rigid rotor × harmonic oscillators × electronic levels (independent
+ * factors, so their moments add). The linear rotor is a direct sum over J; the nonlinear one is classical.
+ */
+function polyatomicInternal(
+  species: LinearSpecies | NonlinearSpecies,
+  contributions: string[],
+): (T: number) => PartitionMoments {
+  const el = electronicLevelList(species.electronicLevels);
+  const sigma = species.symmetryNumber;
+  const vib = species.vibrations;
+  let rotor: (T: number) => PartitionMoments;
+  if (species.structure === 'linear') {
+    const [B] = species.rotationalConstants;
+    contributions.push(`rigid rotor, linear, direct sum over J (B = ${B} cm-1, sigma = ${sigma})`);
+    rotor = (T) => linearRotorMoments(B, sigma, T);
+  } else {
+    const abc = species.rotationalConstants;
+    contributions.push(`rigid rotor, nonlinear, classical (A, B, C = ${abc.join(', ')} cm-1, sigma = ${sigma})`);
+    rotor = (T) => nonlinearRotorMoments(abc, sigma, T);
+  }
+  contributions.push(
+    `harmonic oscillators (${vib.reduce((n, v) => n + v.degeneracy, 0)} modes)`,
+    `electronic level sum (${species.electronicLevels.length} levels)`,
+  );
+  return (T) => addMoments([rotor(T), harmonicMoments(vib, T), levelSumMoments(el, T)]);
+}
+
+/**
  * Build the thermodynamic model of a species. Level lists are built here, once; `at(T)` only sums them.
  *
  * Factorisation by structure (each factor documented in src/partition/):
@@ -75,36 +112,10 @@ export function createThermoEvaluator(species: Species, options?: Partial<Physic
       internal = { moments: (T) => levelSumMoments(el, T) };
       break;
     }
-    case 'linear': {
-      const el = electronicLevelList(species.electronicLevels);
-      const [B] = species.rotationalConstants;
-      const sigma = species.symmetryNumber;
-      const vib = species.vibrations;
-      contributions.push(
-        `rigid rotor, linear, direct sum over J (B = ${B} cm-1, sigma = ${sigma})`,
-        `harmonic oscillators (${vib.reduce((n, v) => n + v.degeneracy, 0)} modes)`,
-        `electronic level sum (${species.electronicLevels.length} levels)`,
-      );
-      internal = {
-        moments: (T) => addMoments([linearRotorMoments(B, sigma, T), harmonicMoments(vib, T), levelSumMoments(el, T)]),
-      };
+    case 'linear':
+    case 'nonlinear':
+      internal = { moments: polyatomicInternal(species, contributions) };
       break;
-    }
-    case 'nonlinear': {
-      const el = electronicLevelList(species.electronicLevels);
-      const abc = species.rotationalConstants;
-      const sigma = species.symmetryNumber;
-      const vib = species.vibrations;
-      contributions.push(
-        `rigid rotor, nonlinear, classical (A, B, C = ${abc.join(', ')} cm-1, sigma = ${sigma})`,
-        `harmonic oscillators (${vib.reduce((n, v) => n + v.degeneracy, 0)} modes)`,
-        `electronic level sum (${species.electronicLevels.length} levels)`,
-      );
-      internal = {
-        moments: (T) => addMoments([nonlinearRotorMoments(abc, sigma, T), harmonicMoments(vib, T), levelSumMoments(el, T)]),
-      };
-      break;
-    }
     case 'diatomic': {
       const spin = species.nuclearSpinWeights;
       const mixture: NuclearSpinMixture | undefined = spin ? (species.nuclearSpinMixture ?? DEFAULT_NUCLEAR_SPIN_MIXTURE) : undefined;

@@ -7,24 +7,10 @@ import { describe, expect, it } from 'vitest';
 import { GAS_CONSTANT } from '../../../src/constants.js';
 import type { Species } from '../../../src/model.js';
 import { createThermoEvaluator } from '../../../src/thermo/index.js';
-import {
-  ARGON,
-  CARBON_DIOXIDE,
-  CARBON_MONOXIDE,
-  HYDROGEN,
-  NITROGEN,
-  OXYGEN,
-  OXYGEN_ATOM,
-  WATER,
-} from '../../fixtures/physics-species.js';
+import { CARBON_DIOXIDE, EXCERPT_SPECIES, WATER } from '../../fixtures/physics-species.js';
 
-const SPECIES: [string, Species][] = [
-  ['Ar', ARGON],
-  ['O', OXYGEN_ATOM],
-  ['N2', NITROGEN],
-  ['O2', OXYGEN],
-  ['H2', HYDROGEN],
-  ['CO', CARBON_MONOXIDE],
+const SPECIES: ReadonlyArray<readonly [string, Species]> = [
+  ...EXCERPT_SPECIES,
   ['H2O', WATER],
   ['CO2', CARBON_DIOXIDE],
 ];

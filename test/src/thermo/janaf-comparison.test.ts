@@ -10,6 +10,7 @@ import { createThermoEvaluator, standardProperties } from '../../../src/thermo/i
 import { CODATA_S298, JANAF } from '../../fixtures/janaf.js';
 import {
   ARGON,
+  EXCERPT_SPECIES,
   CARBON_MONOXIDE,
   HYDROGEN,
   NITROGEN,
@@ -94,14 +95,7 @@ describe('H2 with nuclear spin weights {even: 1, odd: 3}', () => {
 });
 
 describe('H°(298.15) − H°(0) of every excerpt species (NIST-JANAF 4th ed.)', () => {
-  it.each([
-    ['Ar', ARGON],
-    ['O', OXYGEN_ATOM],
-    ['N2', NITROGEN],
-    ['O2', OXYGEN],
-    ['H2', HYDROGEN],
-    ['CO', CARBON_MONOXIDE],
-  ] as const)('%s', (name, species) => {
+  it.each(EXCERPT_SPECIES)('%s', (name, species) => {
     const ev = createThermoEvaluator(species);
     expect(Math.abs(ev.h298MinusH0 / 1000 - JANAF[name]!.H298mH0)).toBeLessThan(0.002);
   });

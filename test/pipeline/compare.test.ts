@@ -4,23 +4,15 @@
  */
 import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { parseReferenceCsv } from '../../pipeline/compare.js';
-import { runCli, tempWorkspace } from './helpers.js';
+import { runCli, sharedBuiltWorkspace } from './helpers.js';
 
-let ws: Awaited<ReturnType<typeof tempWorkspace>>;
-beforeAll(async () => {
-  ws = await tempWorkspace();
-  const r = await runCli(['build', 'db', '--out', 'out', '--quiet'], ws.root);
-  expect(r.code, r.stderr).toBe(0);
-});
-afterAll(async () => {
-  await ws.cleanup();
-});
+const workspace = sharedBuiltWorkspace();
 
 describe('qforge compare against NIST-JANAF 4th ed.', () => {
   it('passes for every covered species with the fixture tolerances (settings of --database)', async () => {
-    const r = await runCli(['compare', 'out', '--database', 'db', '--json'], ws.root);
+    const r = await runCli(['compare', 'out', '--database', 'db', '--json'], workspace().root);
     expect(r.code, r.stderr).toBe(0);
     const report = JSON.parse(r.stdout);
     const species = [...new Set(report.deviations.map((d: { species: string }) => d.species))].sort();
@@ -33,14 +25,14 @@ describe('qforge compare against NIST-JANAF 4th ed.', () => {
   });
 
   it('passes with --reference and the tolerances given as flags', async () => {
-    const r = await runCli(['compare', 'out', '--reference', 'db/reference/janaf-4th-ed.csv', '--tolerance', 'cp=0.25,s=0.05,h=0.05'], ws.root);
+    const r = await runCli(['compare', 'out', '--reference', 'db/reference/janaf-4th-ed.csv', '--tolerance', 'cp=0.25,s=0.05,h=0.05'], workspace().root);
     expect(r.code, r.stderr).toBe(0);
     expect(r.stderr).toMatch(/compare ok: 72 values: 72 within tolerance$/m);
     expect(r.stdout).toMatch(/^ok {4}N2: 18 values/m);
   });
 
   it('fails with a useful message when a tolerance is tightened below the error', async () => {
-    const r = await runCli(['compare', 'out', '--database', 'db', '--tolerance', 'cp=0.01'], ws.root);
+    const r = await runCli(['compare', 'out', '--database', 'db', '--tolerance', 'cp=0.01'], workspace().root);
     expect(r.code).toBe(1);
     // e.g. "N2 Cp at 6000 K: build 38.10 vs reference 38.2760 J/(mol K) (...): deviation -0.17 exceeds the tolerance 0.01 J/(mol K)"
     expect(r.stderr).toMatch(/\d+ value\(s\) beyond tolerance:/);
@@ -51,26 +43,26 @@ describe('qforge compare against NIST-JANAF 4th ed.', () => {
 
   it('reads one-species files named by their file name, with units converted (cal → J)', async () => {
     // NIST-JANAF 4th ed. N-023: Cp(1000 K) = 32.697 J/(mol K) = 7.8148 cal/(mol K) (thermochemical calorie).
-    const file = path.join(ws.root, 'N2.csv');
+    const file = path.join(workspace().root, 'N2.csv');
     await writeFile(file, '# NIST-JANAF 4th ed., table N-023, converted to cal\nT [K],Cp [cal/(mol K)]\n1000,7.8148\n');
     const t = await parseReferenceCsv('# c\nT [K],Cp [cal/(mol K)]\n1000,7.8148\n', 'N2.csv');
     expect(t.species.get('N2')![0]!.cp).toBeCloseTo(32.697, 3);
-    const r = await runCli(['compare', 'out', '--reference', 'N2.csv', '--tolerance', 'cp=0.25'], ws.root);
+    const r = await runCli(['compare', 'out', '--reference', 'N2.csv', '--tolerance', 'cp=0.25'], workspace().root);
     expect(r.code, r.stderr).toBe(0);
   });
 
   it('accepts an 80-column file as the reference (the build against its own nasa7.txt)', async () => {
-    const r = await runCli(['compare', 'out', '--reference', 'out/nasa7.txt', '--tolerance', 'cp=1e-5,s=1e-5,h=1e-5', '--json'], ws.root);
+    const r = await runCli(['compare', 'out', '--reference', 'out/nasa7.txt', '--tolerance', 'cp=1e-5,s=1e-5,h=1e-5', '--json'], workspace().root);
     expect(r.code, r.stderr).toBe(0);
     expect(JSON.parse(r.stdout).deviations.length).toBeGreaterThan(100);
   });
 
   it('reports malformed reference tables and missing files clearly', async () => {
-    await writeFile(path.join(ws.root, 'bad.csv'), 'T,Cp\n300,29\n');
-    const bad = await runCli(['compare', 'out', '--reference', 'bad.csv'], ws.root);
+    await writeFile(path.join(workspace().root, 'bad.csv'), 'T,Cp\n300,29\n');
+    const bad = await runCli(['compare', 'out', '--reference', 'bad.csv'], workspace().root);
     expect(bad.code).toBe(1);
     expect(bad.stderr).toMatch(/bad\.csv: column 'T' has no unit/);
-    const missing = await runCli(['compare', 'out', '--reference', 'nope.csv'], ws.root);
+    const missing = await runCli(['compare', 'out', '--reference', 'nope.csv'], workspace().root);
     expect(missing.code).toBe(2);
     expect(missing.stderr).toMatch(/nope\.csv: no such file/);
   });

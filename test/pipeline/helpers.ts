@@ -5,6 +5,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { main } from '../../pipeline/cli.js';
+import { afterAll, beforeAll, expect } from 'vitest';
 
 export const REPO = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 export const FIXTURE_DB = path.join(REPO, 'test/fixtures/db');
@@ -78,4 +79,27 @@ export async function deterministicOutputs(out: string): Promise<Map<string, str
 
 export async function readJson<T = any>(file: string): Promise<T> {
   return JSON.parse(await readFile(file, 'utf8')) as T;
+}
+
+export type Workspace = Awaited<ReturnType<typeof tempWorkspace>>;
+
+/**
+ * For a test file that only reads one build: a workspace with the fixture database built into `out/`
+ * once before all its tests, removed after them. Returns a getter, since the workspace exists only
+ * once `beforeAll` has run.
+ */
+export function sharedBuiltWorkspace(): () => Workspace {
+  let ws: Workspace | undefined;
+  beforeAll(async () => {
+    ws = await tempWorkspace();
+    const r = await runCli(['build', 'db', '--out', 'out', '--quiet'], ws.root);
+    expect(r.code, r.stderr).toBe(0);
+  });
+  afterAll(async () => {
+    await ws?.cleanup();
+  });
+  return () => {
+    if (!ws) throw new Error('workspace used outside a test');
+    return ws;
+  };
 }

@@ -10,10 +10,10 @@
  */
 import { readFile, writeFile } from 'node:fs/promises';
 import path from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { FIXTURE_DB, runCli, tempWorkspace } from './helpers.js';
+import { describe, expect, it } from 'vitest';
+import { FIXTURE_DB, runCli, sharedBuiltWorkspace, tempWorkspace, type Workspace } from './helpers.js';
 
-type Ws = Awaited<ReturnType<typeof tempWorkspace>>;
+type Ws = Workspace;
 
 const N2_REASON = 'test reason: N2 rigid-rotor formula too crude at 6000 K';
 const CO_REASON = 'test reason: CO level formula too crude at 6000 K';
@@ -39,20 +39,12 @@ const ACCEPTING = `  known_deviations:
       reason: "${CO_REASON}"
 `;
 
-let ws: Ws;
-beforeAll(async () => {
-  ws = await tempWorkspace();
-  const r = await runCli(['build', 'db', '--out', 'out', '--quiet'], ws.root);
-  expect(r.code, r.stderr).toBe(0);
-});
-afterAll(async () => {
-  await ws.cleanup();
-});
+const workspace = sharedBuiltWorkspace();
 
 describe('known deviations in qforge compare (NIST-JANAF 4th ed. N-023, C-093)', () => {
   it('without them the two 6000 K Cp values breach the normal tolerance', async () => {
-    await writeSettings(ws, '');
-    const r = await runCli(['compare', 'out', '--database', 'db'], ws.root);
+    await writeSettings(workspace(), '');
+    const r = await runCli(['compare', 'out', '--database', 'db'], workspace().root);
     expect(r.code).toBe(1);
     expect(r.stderr).toMatch(/N2 Cp at 6000 K: .* exceeds the tolerance 0\.1 J\/\(mol K\)/);
     expect(r.stderr).toMatch(/CO Cp at 6000 K: .* exceeds the tolerance 0\.1 J\/\(mol K\)/);
@@ -60,8 +52,8 @@ describe('known deviations in qforge compare (NIST-JANAF 4th ed. N-023, C-093)',
   });
 
   it('accepts a value inside the widened limit as "known", prints the reason once per species, exits 0', async () => {
-    await writeSettings(ws, ACCEPTING);
-    const r = await runCli(['compare', 'out', '--database', 'db'], ws.root);
+    await writeSettings(workspace(), ACCEPTING);
+    const r = await runCli(['compare', 'out', '--database', 'db'], workspace().root);
     expect(r.code, r.stderr).toBe(0);
     expect(r.stdout).toMatch(/^known N2: 18 values, .*; 1 value\(s\) within a known deviation$/m);
     expect(r.stdout).toMatch(/^known CO: 18 values/m);
@@ -76,8 +68,8 @@ describe('known deviations in qforge compare (NIST-JANAF 4th ed. N-023, C-093)',
   });
 
   it('carries the same in the JSON report', async () => {
-    await writeSettings(ws, ACCEPTING);
-    const r = await runCli(['compare', 'out', '--database', 'db', '--json'], ws.root);
+    await writeSettings(workspace(), ACCEPTING);
+    const r = await runCli(['compare', 'out', '--database', 'db', '--json'], workspace().root);
     expect(r.code, r.stderr).toBe(0);
     const report = JSON.parse(r.stdout);
     expect(report.counts).toEqual({ values: 72, ok: 70, known: 2, breaches: 0, skipped: 0 });
@@ -92,8 +84,8 @@ describe('known deviations in qforge compare (NIST-JANAF 4th ed. N-023, C-093)',
   });
 
   it('still fails a value beyond the widened limit, naming the entry', async () => {
-    await writeSettings(ws, ACCEPTING.replace('tolerances: {cp: 0.25}', 'tolerances: {cp: 0.15}'));
-    const r = await runCli(['compare', 'out', '--database', 'db'], ws.root);
+    await writeSettings(workspace(), ACCEPTING.replace('tolerances: {cp: 0.25}', 'tolerances: {cp: 0.15}'));
+    const r = await runCli(['compare', 'out', '--database', 'db'], workspace().root);
     expect(r.code).toBe(1);
     expect(r.stderr).toMatch(
       /N2 Cp at 6000 K: build [\d.]+ vs reference 38\.2760 J\/\(mol K\) \(db\/reference\/janaf-4th-ed\.csv\): deviation -0\.17\d\d exceeds even the widened tolerance 0\.15 J\/\(mol K\) of the known deviation at db\/qforge\.yaml:17/,
@@ -104,8 +96,8 @@ describe('known deviations in qforge compare (NIST-JANAF 4th ed. N-023, C-093)',
   });
 
   it('--strict ignores the known deviations (and says which entry would have allowed the value)', async () => {
-    await writeSettings(ws, ACCEPTING);
-    const r = await runCli(['compare', 'out', '--database', 'db', '--strict'], ws.root);
+    await writeSettings(workspace(), ACCEPTING);
+    const r = await runCli(['compare', 'out', '--database', 'db', '--strict'], workspace().root);
     expect(r.code).toBe(1);
     expect(r.stdout).toMatch(/2 known deviation\(s\) IGNORED \(--strict\)/);
     expect(r.stderr).toMatch(/N2 Cp at 6000 K: .* exceeds the tolerance 0\.1 J\/\(mol K\) \(the known deviation at db\/qforge\.yaml:17 would allow 0\.25; ignored under --strict\)/);
@@ -113,8 +105,8 @@ describe('known deviations in qforge compare (NIST-JANAF 4th ed. N-023, C-093)',
   });
 
   it('--tolerance replaces the normal limits only: a known deviation keeps its widened limit', async () => {
-    await writeSettings(ws, ACCEPTING);
-    const r = await runCli(['compare', 'out', '--database', 'db', '--tolerance', 'cp=0.01', '--json'], ws.root);
+    await writeSettings(workspace(), ACCEPTING);
+    const r = await runCli(['compare', 'out', '--database', 'db', '--tolerance', 'cp=0.01', '--json'], workspace().root);
     expect(r.code).toBe(1);
     const report = JSON.parse(r.stdout);
     expect(report.tolerances).toEqual({ cp: 0.01, s: 0.05, h: 0.05 });
@@ -127,13 +119,13 @@ describe('known deviations in qforge compare (NIST-JANAF 4th ed. N-023, C-093)',
 
   it('reports an entry that is no longer needed, and an unneeded quantity of an entry', async () => {
     await writeSettings(
-      ws,
+      workspace(),
       `${ACCEPTING.replace('tolerances: {cp: 0.25}', 'tolerances: {cp: 0.25, s: 0.2}')}    - species: Ar
       tolerances: {cp: 0.2, s: 0.2}
       reason: "test reason: an exception whose cause was fixed"
 `,
     );
-    const r = await runCli(['compare', 'out', '--database', 'db'], ws.root);
+    const r = await runCli(['compare', 'out', '--database', 'db'], workspace().root);
     expect(r.code, r.stderr).toBe(0);
     expect(r.stderr).toMatch(
       /warning: known deviation for Ar \(db\/qforge\.yaml:26\) is no longer needed: all 12 value\(s\) it covers are within the normal tolerance \(largest Cp \+0\.000\d at \d+ K, S \+0\.00\d\d at \d+ K\); remove it/,
@@ -144,7 +136,7 @@ describe('known deviations in qforge compare (NIST-JANAF 4th ed. N-023, C-093)',
 
   it('warns about an entry for a species absent from the build, and one covering no reference value', async () => {
     await writeSettings(
-      ws,
+      workspace(),
       `${ACCEPTING}    - species: H2
       tolerances: {cp: 1.5}
       reason: "test reason: a species this build does not hold"
@@ -154,7 +146,7 @@ describe('known deviations in qforge compare (NIST-JANAF 4th ed. N-023, C-093)',
       reason: "test reason: a window without reference rows for H"
 `,
     );
-    const r = await runCli(['compare', 'out', '--database', 'db', '--json'], ws.root);
+    const r = await runCli(['compare', 'out', '--database', 'db', '--json'], workspace().root);
     expect(r.code, r.stderr).toBe(0);
     expect(r.stderr).toMatch(/warning: known deviation for H2 \(db\/qforge\.yaml:26\): H2 is not in the build out; fix the name or remove the entry/);
     // O-001 has a row at 200 K; the entry widens H-H298 there, a value that is within 0.05: "no longer needed".
@@ -163,8 +155,8 @@ describe('known deviations in qforge compare (NIST-JANAF 4th ed. N-023, C-093)',
   });
 
   it('warns when an entry covers no compared value', async () => {
-    await writeSettings(ws, `${ACCEPTING}    - species: O\n      from: 4000\n      to: 5000\n      tolerances: {cp: 1}\n      reason: "test reason: no reference row in this window"\n`);
-    const r = await runCli(['compare', 'out', '--database', 'db'], ws.root);
+    await writeSettings(workspace(), `${ACCEPTING}    - species: O\n      from: 4000\n      to: 5000\n      tolerances: {cp: 1}\n      reason: "test reason: no reference row in this window"\n`);
+    const r = await runCli(['compare', 'out', '--database', 'db'], workspace().root);
     expect(r.code, r.stderr).toBe(0);
     expect(r.stderr).toMatch(/warning: known deviation for O \(db\/qforge\.yaml:26, 4000-5000 K\): no reference value of O in its window/);
   });

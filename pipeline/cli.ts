@@ -10,6 +10,7 @@ import path from 'node:path';
 import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import type { Diagnostic } from './diagnostics.js';
 import type { TextSink } from './progress.js';
+import { displayPath } from './display-path.js';
 
 export interface CliIo {
   stdout: TextSink;
@@ -308,7 +309,7 @@ async function buildCommand(
 }
 
 async function checkCommand(io: CliIo, dir: string, o: { json?: boolean }): Promise<number> {
-  await assertFolder(dir, `database folder ${path.relative(io.cwd, dir) || '.'}`);
+  await assertFolder(dir, `database folder ${displayPath(io.cwd, dir)}`);
   const [{ checkDatabase }, { formatDiagnostic, hasErrors }] = await Promise.all([import('./runner.js'), import('./diagnostics.js')]);
   const report = await checkDatabase({ dir, displayBase: io.cwd });
   printDiagnostics(io, report.diagnostics, formatDiagnostic);

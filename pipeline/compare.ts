@@ -33,6 +33,7 @@ import type { CliIo } from './cli.js';
 import { formatDiagnostic } from './diagnostics.js';
 import { polynomialProperties, readPolynomialSet, ReadBuildError, ReadBuildUsageError, type PolynomialSet } from './read-build.js';
 import { DEFAULT_SETTINGS, loadSettings, type KnownDeviation, type QuantityTriple } from './settings.js';
+import { displayPath } from './display-path.js';
 
 export type RefQuantity = 'cp' | 's' | 'h';
 const QS: readonly RefQuantity[] = ['cp', 's', 'h'];
@@ -467,7 +468,7 @@ export async function compareCommand(
       recordedAt: `build settings (thermo.json) references.known_deviations[${i}]`,
     }));
     if (o.database) {
-      const s = await loadSettings(o.database, path.relative(io.cwd, o.database) || '.');
+      const s = await loadSettings(o.database, displayPath(io.cwd, o.database));
       if (s.diagnostics.some((d) => d.severity === 'error')) {
         for (const d of s.diagnostics) io.stderr.write(`${formatDiagnostic(d)}\n`);
         return 1;
@@ -480,7 +481,7 @@ export async function compareCommand(
       if (!refs.length) {
         refs = s.settings.references.files.map((f) => ({
           path: path.resolve(o.database!, f),
-          label: path.relative(io.cwd, path.resolve(o.database!, f)),
+          label: displayPath(io.cwd, path.resolve(o.database!, f)),
         }));
       }
     }

@@ -35,6 +35,7 @@ import { checkUniqueNames, validateSpecies } from './validate.js';
 import { verifySpecies } from './verify.js';
 import { codeFingerprint } from './code-fingerprint.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './version.js';
+import { displayPath } from './display-path.js';
 
 export type StageName = 'load' | 'validate' | 'compute' | 'fit' | 'verify' | 'emit';
 
@@ -124,7 +125,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   discovered.diagnostics.forEach(addFileDiag);
 
   const displayOf = (f: string) => (path.relative(dir, f) || f).split(path.sep).join('/');
-  const show = (f: string) => (opts.displayBase && path.isAbsolute(f) ? path.relative(opts.displayBase, f) || f : f);
+  const show = (f: string) => (opts.displayBase && path.isAbsolute(f) ? displayPath(opts.displayBase, f) : f);
   let validateTotal = 0;
   const perFile = await Promise.all(
     discovered.files.map((f) =>
@@ -502,7 +503,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   const summary: Summary = {
     format: 'qforge-summary/1',
     tool: { name: TOOL_NAME, version: TOOL_VERSION },
-    database: opts.displayBase ? path.relative(opts.displayBase, opts.dir) || '.' : opts.dir,
+    database: opts.displayBase ? displayPath(opts.displayBase, opts.dir) : opts.dir,
     status,
     written: mayWrite,
     outputs,

@@ -80,7 +80,10 @@ export function nearestKey(word: string, candidates: Iterable<string>): string |
     }
   }
   if (best === undefined) return undefined;
-  return bestDistance <= Math.max(2, Math.floor(word.length / 3)) ? best : undefined;
+  // Short words are within two edits of almost anything, so the allowance grows with the length and a
+  // suggestion must keep at least one character of the word.
+  const allowance = Math.max(1, Math.min(2, Math.floor(word.length / 3)));
+  return bestDistance <= allowance && bestDistance < word.length ? best : undefined;
 }
 
 function decodePointer(pointer: string): string[] {

@@ -14,6 +14,7 @@
 import { elementsObject } from 'chemical-elements';
 import schema from '../schemas/species.schema.json' with { type: 'json' };
 import { isKnownElement, molarMass } from '../src/elements.js';
+import { centrifugalConstantOf, rotationalConstantOf, vibrationalTerm } from '../src/partition/diatomic.js';
 import { DEFAULT_NUCLEAR_SPIN_MIXTURE } from '../src/partition/spin-mixture.js';
 import type {
   DiatomicState,
@@ -124,12 +125,41 @@ class Findings {
 }
 
 /**
- * Vibrational term value G(v) = ωe(v+½) − ωexe(v+½)² + ωeye(v+½)³, cm⁻¹, in the notation of Huber & Herzberg,
- * Constants of Diatomic Molecules (1979). Used here only to bound the ladders; the physics has its own.
+ * Vibrational term value G(v) = ωe(v+½) − ωexe(v+½)² + ωeye(v+½)³ + ωeze(v+½)⁴, cm⁻¹, in the notation of
+ * Huber & Herzberg, Constants of Diatomic Molecules (1979): the level sum's own function, so the checks
+ * bound exactly the ladders the physics will walk.
  */
-function termValue(s: Pick<DiatomicState, 'we' | 'wexe' | 'weye'>, v: number): number {
-  const x = v + 0.5;
-  return s.we * x - s.wexe * x * x + s.weye * x * x * x;
+const termValue = vibrationalTerm;
+
+/** Our threshold for "a higher-order constant out of proportion": see checkHigherOrderConstants. */
+const HIGHER_ORDER_RATIO_LIMIT = 0.25;
+/** The J ladder of v = 0 turning over below this fraction of the way to the limit draws a warning. */
+const EARLY_TURNOVER_FRACTION = 0.75;
+
+/**
+ * Where the J ladder of one v ends, with x = J(J+1) treated as continuous: the first turnover of
+ * E_rot(x) = B_v x − D_v x² + H_v x³ (dE_rot/dx = 0, smallest positive root), or else where E_rot
+ * reaches `room` (cm⁻¹ above E(v,0)). The turnover root is written B_v / (D_v + √(D_v² − 3H_v B_v)),
+ * which avoids cancellation and covers H_v = 0 (x = B_v/2D_v) and both signs of H_v. Needs B_v > 0.
+ * Used only to warn and to estimate level counts; the level sum walks integer J itself.
+ */
+function rotationalLadderTop(bv: number, dv: number, hv: number, room: number): { x: number; energy: number; turnsOver: boolean } {
+  const rot = (x: number) => bv * x - dv * x * x + hv * x * x * x;
+  const disc = dv * dv - 3 * hv * bv;
+  const denominator = disc >= 0 ? dv + Math.sqrt(disc) : 0;
+  const turnover = denominator > 0 ? bv / denominator : Infinity;
+  if (turnover < Infinity && rot(turnover) < room) return { x: turnover, energy: rot(turnover), turnsOver: true };
+  // E_rot rises monotonically up to `turnover`: bracket the crossing of `room`, then bisect.
+  let lo = 0;
+  let hi = room / bv;
+  for (let i = 0; i < 200 && rot(hi) < room && hi < turnover; i++) [lo, hi] = [hi, 2 * hi];
+  hi = Math.min(hi, turnover);
+  for (let i = 0; i < 100; i++) {
+    const mid = 0.5 * (lo + hi);
+    if (rot(mid) < room) lo = mid;
+    else hi = mid;
+  }
+  return { x: hi, energy: room, turnsOver: false };
 }
 
 interface CompositionView {
@@ -464,8 +494,12 @@ function readDiatomicState(raw: unknown): DiatomicState | undefined {
   const Be = rotational(raw.Be);
   const alphae = raw.alphae === undefined ? 0 : rotational(raw.alphae);
   const De = raw.De === undefined ? 0 : rotational(raw.De);
+  const weze = raw.weze === undefined ? 0 : energy(raw.weze);
+  const gammae = raw.gammae === undefined ? 0 : rotational(raw.gammae);
+  const betae = raw.betae === undefined ? 0 : rotational(raw.betae);
+  const He = raw.He === undefined ? 0 : rotational(raw.He);
   const d0 = raw.dissociation_energy === undefined ? undefined : energy(raw.dissociation_energy);
-  if ([te, we, wexe, weye, Be, alphae, De].some((x) => x === undefined)) return undefined;
+  if ([te, we, wexe, weye, Be, alphae, De, weze, gammae, betae, He].some((x) => x === undefined)) return undefined;
   if (raw.dissociation_energy !== undefined && d0 === undefined) return undefined;
   if (te! < 0 || !(we! > 0) || !(Be! > 0) || De! < 0 || (d0 !== undefined && !(d0 > 0))) return undefined;
   const s: DiatomicState = {
@@ -479,8 +513,75 @@ function readDiatomicState(raw: unknown): DiatomicState | undefined {
     alphae: alphae!,
     De: De!,
   };
+  // Higher-order constants enter only when non-zero: an explicit 0 normalises (and hashes) like an
+  // absent field, and every species written without them keeps its normalised form and cache hash.
+  if (weze !== 0) s.weze = weze!;
+  if (gammae !== 0) s.gammae = gammae!;
+  if (betae !== 0) s.betae = betae!;
+  if (He !== 0) s.He = He!;
   if (d0 !== undefined) s.dissociationEnergy = d0;
   return s;
+}
+
+/**
+ * Checks of the optional higher-order constants (weze, gammae, betae, He) of one state.
+ *
+ * Error (impossible): D_0 = De + βe/2 < 0. The centrifugal correction of the lowest vibrational level is
+ * a second-order perturbation from the higher levels only, so it lowers every J > 0 level: D_0 ≥ 0
+ * (Herzberg 1950, ch. III).
+ * Warnings (legal but suspicious):
+ * - γe, βe, ωeze out of proportion: in Dunham's ordering each further power of (v+½) costs a factor of
+ *   about Be/ωe (0.01–0.03 even for hydrides), so |γe| > 0.25·αe, |βe| > 0.25·De or |ωeze| > 0.25·ωexe
+ *   (or any of them given without the lower constant) points to a unit or sign slip. 0.25 is our own
+ *   threshold, loose enough for every state we know of.
+ * - He far from the estimate H_e ≈ (2De/(3ωe²))·(12Be² − αe·ωe) (Herzberg 1950, ch. III; from the
+ *   Dunham relations): off by more than a factor of 10 or of the other sign, checked only where the
+ *   bracket is clearly non-zero (its sign is then reliable). The usual slips are a sign convention
+ *   (tables that write −H J³(J+1)³) or a unit.
+ * A negative He by itself is not an error: heavy molecules have 12Be² < αe·ωe and so H_e < 0. Its effect —
+ * J ladders that turn over early — is caught by the turnover warning of the ladder checks.
+ */
+function checkHigherOrderConstants(f: Findings, s: DiatomicState, i: number, raw: Obj): void {
+  const at = (field: string): Segment[] => ['electronic_states', i, field];
+  if (s.betae !== undefined && s.De + 0.5 * s.betae < 0) {
+    f.error(at('betae'), `D_0 = De + betae/2 = ${fmt(s.De + 0.5 * s.betae)} cm-1 is negative: the centrifugal distortion of the lowest vibrational level cannot raise the rotational levels`, {
+      value: raw.betae,
+      expected: `betae >= ${fmt(-2 * s.De)} cm-1 (D_0 >= 0; betae is usually a few percent of De, check its sign and unit)`,
+    });
+  }
+  const outOfProportion = (field: string, value: number | undefined, lower: number, lowerName: string) => {
+    if (value === undefined) return;
+    if (lower === 0) {
+      f.warn(at(field), `${field} = ${fmt(value)} cm-1 is given but ${lowerName} is 0: a higher-order correction without the term it corrects`, {
+        value: raw[field],
+        expected: `${lowerName} as well, or no ${field}`,
+      });
+    } else if (Math.abs(value) > HIGHER_ORDER_RATIO_LIMIT * Math.abs(lower)) {
+      f.warn(at(field), `|${field}| = ${fmt(Math.abs(value))} cm-1 is more than ${HIGHER_ORDER_RATIO_LIMIT} of ${lowerName} = ${fmt(lower)} cm-1; higher-order constants are usually a few percent of the one before (check the unit)`, {
+        value: raw[field],
+        expected: `|${field}| << |${lowerName}|`,
+      });
+    }
+  };
+  outOfProportion('weze', s.weze, s.wexe, 'wexe');
+  outOfProportion('gammae', s.gammae, s.alphae, 'alphae');
+  outOfProportion('betae', s.betae, s.De, 'De');
+  if (s.He !== undefined) {
+    if (s.De === 0) {
+      outOfProportion('He', s.He, 0, 'De');
+      return;
+    }
+    const bracket = 12 * s.Be * s.Be - s.alphae * s.we;
+    if (Math.abs(bracket) < 0.1 * 12 * s.Be * s.Be) return;
+    const estimate = ((2 * s.De) / (3 * s.we * s.we)) * bracket;
+    const ratio = s.He / estimate;
+    if (!(ratio >= 0.1 && ratio <= 10)) {
+      f.warn(at('He'), `He = ${fmt(s.He)} cm-1 is ${ratio < 0 ? 'of the other sign from' : 'more than a factor of 10 away from'} the estimate (2De/(3we^2))(12Be^2 - alphae we) = ${fmt(estimate)} cm-1 (Herzberg 1950)`, {
+        value: raw.He,
+        expected: `He of the order of ${fmt(estimate)} cm-1 in the convention E = ... - D_v J^2(J+1)^2 + He J^3(J+1)^3 (check the sign and the unit)`,
+      });
+    }
+  }
 }
 
 function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d0: number | undefined): void {
@@ -512,7 +613,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
     if (d0 <= g0) {
       f.error(['dissociation_energy'], `dissociation energy D0 = ${fmt(d0)} cm-1 is below the zero-point energy G(0) = ${fmt(g0)} cm-1 of the ground state`, {
         value: ctx.input.dissociation_energy,
-        expected: 'D0 measured from the lowest level, well above G(0) = we/2 - wexe/4 + weye/8 (check the unit)',
+        expected: 'D0 measured from the lowest level, well above G(0) = we/2 - wexe/4 + weye/8 + weze/16 (check the unit)',
       });
       return;
     }
@@ -520,6 +621,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
   let totalLevels = 0;
   states.forEach((s, i) => {
     if (!s) return;
+    let negativeDvWarned = false;
     if (s.wexe < 0) {
       f.warn(['electronic_states', i, 'wexe'], 'negative anharmonicity wexe: vibrational spacings grow with v', {
         value: (rawStates[i] as Obj).wexe,
@@ -532,6 +634,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
         expected: 'De << Be',
       });
     }
+    checkHigherOrderConstants(f, s, i, rawStates[i] as Obj);
     // Height of this state's dissociation limit above its own lowest level.
     let limit: number | undefined;
     if (s.dissociationEnergy !== undefined) limit = s.dissociationEnergy;
@@ -562,18 +665,49 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
         });
         return;
       }
-      const bv = s.Be - s.alphae * (v + 0.5);
+      const bv = rotationalConstantOf(s, v);
       if (bv <= 0) {
-        f.error(['electronic_states', i, 'alphae'], `B_v = Be - alphae(v+1/2) is ${fmt(bv)} cm-1 at v = ${v}, below the dissociation limit: the rotational ladder of that level would not rise`, {
-          value: (rawStates[i] as Obj).alphae,
-          expected: `alphae < ${fmt(s.Be / (v + 0.5))} cm-1 so that B_v stays positive for every bound level`,
+        // Blame gammae when the linear part alone would still be positive.
+        const byGamma = s.gammae !== undefined && s.Be - s.alphae * (v + 0.5) > 0;
+        const field = byGamma ? 'gammae' : 'alphae';
+        f.error(['electronic_states', i, field], `B_v = Be - alphae(v+1/2)${s.gammae !== undefined ? ' + gammae(v+1/2)^2' : ''} is ${fmt(bv)} cm-1 at v = ${v}, below the dissociation limit: the rotational ladder of that level would not rise`, {
+          value: (rawStates[i] as Obj)[field],
+          expected: byGamma
+            ? `gammae > ${fmt(-(s.Be - s.alphae * (v + 0.5)) / ((v + 0.5) * (v + 0.5)))} cm-1 so that B_v stays positive for every bound level (check its sign)`
+            : `alphae < ${fmt(s.Be / (v + 0.5))} cm-1 so that B_v stays positive for every bound level`,
         });
         return;
       }
+      const dv = centrifugalConstantOf(s, v);
+      const hv = s.He ?? 0;
+      if (2 * bv - 4 * dv + 8 * hv <= 0) {
+        const field = hv < 0 && 2 * bv - 4 * dv > 0 ? 'He' : 'De';
+        f.error(['electronic_states', i, field], `E(v,1) <= E(v,0) at v = ${v} (2B_v - 4D_v + 8H_v = ${fmt(2 * bv - 4 * dv + 8 * hv)} cm-1), below the dissociation limit: the rotational ladder of that level would not rise`, {
+          value: (rawStates[i] as Obj)[field],
+          expected: 'centrifugal terms that are small corrections to B_v J(J+1) (D_v << B_v, |H_v| << D_v; check the units)',
+        });
+        return;
+      }
+      if (dv < 0 && v > 0 && !negativeDvWarned) {
+        negativeDvWarned = true;
+        f.warn(['electronic_states', i, 'betae'], `D_v = De + betae(v+1/2) is ${fmt(dv)} cm-1 at v = ${v}, below the dissociation limit: the linear D_v is extrapolated past where it holds, and those J ladders rise faster than B_v J(J+1)`, {
+          value: (rawStates[i] as Obj).betae,
+          expected: `D_v > 0 for every bound level: |betae| < ${fmt(s.De / (v + 0.5))} cm-1, or constants fitted up to this v`,
+        });
+      }
       const room = limit - (gv - g0);
-      // Rotational levels of one v: up to J(J+1) ~ room/B_v, or to the turnover J(J+1) = B_v/(2 De).
-      const jj = s.De > 0 ? Math.min(room / bv, bv / (2 * s.De)) : room / bv;
-      totalLevels += Math.sqrt(Math.max(jj, 0)) + 1;
+      // Rotational levels of one v: up to the J(J+1) where E reaches the limit or the ladder turns over.
+      const top = rotationalLadderTop(bv, dv, hv, room);
+      if (v === 0 && top.turnsOver && top.energy < EARLY_TURNOVER_FRACTION * room) {
+        const field = hv < 0 ? 'He' : 'De';
+        f.warn(['electronic_states', i, field], `the J ladder of v = 0 of state '${s.term}' turns over at J = ${Math.floor(Math.sqrt(top.x + 0.25) - 0.5)}, ${fmt(top.energy)} cm-1 above J = 0, while the dissociation limit is ${fmt(room)} cm-1 above it: the truncated level expression crowds and then loses the high-J levels, so Cp and S come out wrong at high temperature`, {
+          value: (rawStates[i] as Obj)[field],
+          expected: hv < 0
+            ? 'He from the tables (its sign: usually that of 12 Be^2 - alphae we)'
+            : 'the sextic constant He of the tables (it removes the turnover), or accept a high-temperature error',
+        });
+      }
+      totalLevels += Math.sqrt(Math.max(top.x, 0)) + 1;
     }
   });
   if (totalLevels > MAX_ROVIBRATIONAL_LEVELS) {

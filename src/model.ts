@@ -38,10 +38,18 @@ export interface DiatomicState {
   we: number;
   wexe: number;
   weye: number;
+  /** Third anharmonicity ωeze, cm⁻¹: + ωeze(v+½)⁴ in G(v). Absent = 0. */
+  weze?: number;
   Be: number;
   alphae: number;
-  /** Centrifugal distortion constant; D_v = De for all v. */
+  /** Second vibration-rotation constant γe, cm⁻¹: B_v = Be − αe(v+½) + γe(v+½)². Absent = 0. */
+  gammae?: number;
+  /** Centrifugal distortion constant De, cm⁻¹: D_v = De + βe(v+½). */
   De: number;
+  /** Vibrational dependence of the centrifugal distortion βe, cm⁻¹. Absent = 0. */
+  betae?: number;
+  /** Sextic centrifugal constant He, cm⁻¹: + H_v·J³(J+1)³ with H_v = He for all v. Absent = 0. */
+  He?: number;
   /**
    * Dissociation energy D0 of this state measured from its own lowest level (v=0, J=0), cm⁻¹. When absent
    * the state shares the molecule's dissociation limit.

@@ -257,7 +257,7 @@ export interface ElectronicLevel {
   term?: string;
 }
 /**
- * One electronic state of a diatomic molecule with its spectroscopic constants (Huber & Herzberg notation). Term values G(v) = we(v+1/2) - wexe(v+1/2)^2 + weye(v+1/2)^3, B_v = Be - alphae(v+1/2), D_v = De.
+ * One electronic state of a diatomic molecule with its spectroscopic constants (Huber & Herzberg notation). Term values E(v,J) = Te + G(v) + B_v x - D_v x^2 + H_v x^3 with x = J(J+1), G(v) = we(v+1/2) - wexe(v+1/2)^2 + weye(v+1/2)^3 + weze(v+1/2)^4, B_v = Be - alphae(v+1/2) + gammae(v+1/2)^2, D_v = De + betae(v+1/2), H_v = He; the higher-order constants weze, gammae, betae, He are optional (0 when absent).
  */
 export interface ElectronicState {
   /**
@@ -269,8 +269,12 @@ export interface ElectronicState {
   we: PositiveEnergy;
   wexe?: Energy;
   weye?: Energy;
+  weze?: Energy;
   Be: RotationalConstant;
   alphae?: RotationalTerm;
+  gammae?: RotationalTerm;
   De?: NonNegativeRotationalTerm;
+  betae?: RotationalTerm;
+  He?: RotationalTerm;
   dissociation_energy?: PositiveEnergy;
 }

@@ -37,6 +37,8 @@ export interface DiatomicStateLevels {
   maxJ: number;
   /** Why the v ladder ended: 'limit', 'turnover' (G(v) stopped rising) or 'B_v<=0'. */
   vEnd: 'limit' | 'turnover' | 'B_v<=0' | 'unbound';
+  /** How many J ladders ended because E(v,J) stopped rising (the others reached the limit). */
+  rotationalTurnovers: number;
 }
 
 export interface DiatomicLevels {
@@ -45,25 +47,75 @@ export interface DiatomicLevels {
 }
 
 /**
- * Term value of level (v, J) of a state, cm⁻¹ above the ground-state potential minimum.
- *
- * Formula: E(v,J) = Te + G(v) + B_v·J(J+1) − D_v·J²(J+1)², with
- *   G(v) = ωe(v+½) − ωexe(v+½)² + ωeye(v+½)³,  B_v = Be − αe(v+½),  D_v = De.
- * Units: cm⁻¹. Valid within the range of v, J where the Dunham-type expansion represents the levels.
- * Source: Huber & Herzberg, Constants of Diatomic Molecules (1979), introduction (notation);
- * Herzberg, Spectra of Diatomic Molecules (1950), eqs. III,75 and III,112.
+ * Vibrational term G(v) = ωe(v+½) − ωexe(v+½)² + ωeye(v+½)³ + ωeze(v+½)⁴, cm⁻¹ above the potential
+ * minimum (ωeze absent = 0). Valid where the constants were fitted (see `diatomicTermValue`).
+ * Sources: Herzberg, Molecular Spectra and Molecular Structure I (1950), ch. III (eq. III,75 and the
+ * higher powers after it); Huber & Herzberg, Constants of Diatomic Molecules (1979), introduction.
  */
-export function diatomicTermValue(state: DiatomicState, v: number, J: number): number {
+export function vibrationalTerm(state: DiatomicState, v: number): number {
   const h = v + 0.5;
-  const x = J * (J + 1);
-  const G = state.we * h - state.wexe * h * h + state.weye * h * h * h;
-  const Bv = state.Be - state.alphae * h;
-  return state.energy + G + Bv * x - state.De * x * x;
+  return state.we * h - state.wexe * h * h + state.weye * h * h * h + (state.weze ?? 0) * h * h * h * h;
 }
 
-function vibrationalTerm(state: DiatomicState, v: number): number {
+/**
+ * Rotational constant of level v, B_v = Be − αe(v+½) + γe(v+½)², cm⁻¹ (γe absent = 0).
+ * Sources: Herzberg (1950) ch. III (eq. III,112 and the γe term after it); Huber & Herzberg (1979).
+ */
+export function rotationalConstantOf(state: DiatomicState, v: number): number {
   const h = v + 0.5;
-  return state.we * h - state.wexe * h * h + state.weye * h * h * h;
+  return state.Be - state.alphae * h + (state.gammae ?? 0) * h * h;
+}
+
+/**
+ * Quartic centrifugal constant of level v, D_v = De + βe(v+½), cm⁻¹ (βe absent = 0). Huber & Herzberg
+ * (1979) sign convention: the term enters as −D_v·J²(J+1)². Source: Herzberg (1950) ch. III.
+ */
+export function centrifugalConstantOf(state: DiatomicState, v: number): number {
+  return state.De + (state.betae ?? 0) * (v + 0.5);
+}
+
+/**
+ * Term value of level (v, J) of a state, cm⁻¹ above the ground-state potential minimum.
+ *
+ * Formula, with x = J(J+1):
+ *   E(v,J) = Te + G(v) + B_v·x − D_v·x² + H_v·x³,
+ *   G(v) = ωe(v+½) − ωexe(v+½)² + ωeye(v+½)³ + ωeze(v+½)⁴,
+ *   B_v = Be − αe(v+½) + γe(v+½)²,  D_v = De + βe(v+½),  H_v = He.
+ * The higher-order constants (ωeze, γe, βe, He) are optional and 0 when absent; adding an exact 0
+ * changes no bit, so states without them give the three-term G(v), linear B_v, D_v = De levels exactly.
+ * This is Dunham's double series E = Σ Y_lm (v+½)^l x^m cut after the listed terms, in band-spectrum
+ * notation (Y01 = Be, Y11 = −αe, Y21 = γe, Y02 = −De, Y12 = −βe, Y03 = He; Dunham's small corrections
+ * to these identities are ignored, as in the tables).
+ * Units: cm⁻¹ (every constant and the result).
+ * Validity: the v, J region the published constants were fitted to. The series in x is asymptotic, so
+ * far outside it (high J near the dissociation limit) each added term moves the levels a lot; a
+ * truncated series can turn over (dE/dJ ≤ 0) well below the limit, which is why the J ladders stop
+ * there. With He > 0 the turnover may disappear and the ladder then ends at the limit.
+ * Sources: Herzberg, Molecular Spectra and Molecular Structure I, Spectra of Diatomic Molecules (1950),
+ * ch. III (eqs. III,75 and III,112 and the higher-order terms after them); Huber & Herzberg, Constants
+ * of Diatomic Molecules (1979), introduction (notation, signs); J. L. Dunham, Phys. Rev. 41, 721 (1932).
+ */
+export function diatomicTermValue(state: DiatomicState, v: number, J: number): number {
+  const x = J * (J + 1);
+  const G = vibrationalTerm(state, v);
+  const Bv = rotationalConstantOf(state, v);
+  const Dv = centrifugalConstantOf(state, v);
+  const Hv = state.He ?? 0;
+  return state.energy + G + Bv * x - Dv * x * x + Hv * x * x * x;
+}
+
+/**
+ * The non-zero higher-order constants of a state as `name = value cm-1` texts, in input-field names
+ * (empty for a state described by ωe, ωexe, ωeye, Be, αe, De only). For the model summary.
+ */
+export function higherOrderTermsOf(state: DiatomicState): string[] {
+  const terms: [string, number | undefined][] = [
+    ['weze', state.weze],
+    ['gammae', state.gammae],
+    ['betae', state.betae],
+    ['He', state.He],
+  ];
+  return terms.filter(([, value]) => value !== undefined && value !== 0).map(([name, value]) => `${name} = ${value} cm-1`);
 }
 
 /** Every bound level of every state, before any σ or nuclear-spin factor is applied. */
@@ -82,7 +134,8 @@ interface EnumeratedLevels {
  * The dissociation limit is the ground state's lowest level plus D0; a state with its own
  * `dissociationEnergy` uses its lowest level plus that value. A v ladder ends where G(v) turns over,
  * where B_v ≤ 0, or where E(v,0) reaches the limit; a J ladder ends where E(v,J) stops rising
- * (dE/dJ ≤ 0) or reaches the limit. Quasi-bound levels above the limit are excluded.
+ * (dE/dJ ≤ 0) or reaches the limit (with He > 0 it may only end at the limit). Quasi-bound levels
+ * above the limit are excluded.
  * Throws LevelSumError if a ladder does not terminate within the bounds above.
  */
 function enumerateLevels(input: DiatomicModelInput): EnumeratedLevels {
@@ -107,6 +160,7 @@ function enumerateLevels(input: DiatomicModelInput): EnumeratedLevels {
       levels: 0,
       maxJ: 0,
       vEnd: 'unbound',
+      rotationalTurnovers: 0,
     };
     summary.push(info);
     let previousG = -Infinity;
@@ -115,7 +169,8 @@ function enumerateLevels(input: DiatomicModelInput): EnumeratedLevels {
         throw new LevelSumError(`${where(state)}: vibrational ladder not terminated below v = ${MAX_VIBRATIONAL_LEVELS}`);
       }
       const G = vibrationalTerm(state, v);
-      const Bv = state.Be - state.alphae * (v + 0.5);
+      const Bv = rotationalConstantOf(state, v);
+      const Dv = centrifugalConstantOf(state, v);
       const base = state.energy + G;
       if (v > 0 && G <= previousG) {
         info.vEnd = 'turnover';
@@ -131,6 +186,9 @@ function enumerateLevels(input: DiatomicModelInput): EnumeratedLevels {
       }
       previousG = G;
       const g = state.degeneracy;
+      // With He > 0 the ladder may never turn over: E then grows like He·x³ and ends at the limit, and
+      // MAX_ROTATIONAL_LEVELS still bounds it for constants in the wrong unit.
+      const Hv = state.He ?? 0;
       let previousE = -Infinity;
       let J = 0;
       for (; ; J++) {
@@ -138,8 +196,12 @@ function enumerateLevels(input: DiatomicModelInput): EnumeratedLevels {
           throw new LevelSumError(`${where(state)}: rotational ladder of v = ${v} not terminated below J = ${MAX_ROTATIONAL_LEVELS}`);
         }
         const x = J * (J + 1);
-        const E = base + Bv * x - state.De * x * x;
-        if (E >= limit || E <= previousE) break;
+        const E = base + Bv * x - Dv * x * x + Hv * x * x * x;
+        if (E >= limit) break;
+        if (E <= previousE) {
+          info.rotationalTurnovers++;
+          break;
+        }
         previousE = E;
         energies.push(E);
         weights.push(g * (2 * J + 1));

@@ -12,7 +12,7 @@ import type {
   ThermoEvaluator,
   ThermoPoint,
 } from '../model.js';
-import { diatomicLevels, diatomicSpinManifolds, type DiatomicStateLevels } from '../partition/diatomic.js';
+import { diatomicLevels, diatomicSpinManifolds, higherOrderTermsOf, type DiatomicStateLevels } from '../partition/diatomic.js';
 import { electronicLevelList } from '../partition/electronic.js';
 import { harmonicMoments } from '../partition/harmonic.js';
 import { levelSumMoments, type LevelList } from '../partition/level-sum.js';
@@ -121,11 +121,18 @@ export function createThermoEvaluator(species: Species, options?: Partial<Physic
       const mixture: NuclearSpinMixture | undefined = spin ? (species.nuclearSpinMixture ?? DEFAULT_NUCLEAR_SPIN_MIXTURE) : undefined;
       spinMixture = mixture;
       const describeStates = (states: readonly DiatomicStateLevels[]) => {
-        for (const s of states) {
+        states.forEach((s, i) => {
           notes.push(
             `state ${s.term}: ${s.vibrationalLevels} vibrational levels (ladder end: ${s.vEnd}), ${s.levels} levels, J <= ${s.maxJ}, limit ${s.limit.toFixed(3)} cm-1 above the lowest level`,
           );
-        }
+          // Only states that use them get this note, so the summary of every other state is unchanged.
+          const higher = higherOrderTermsOf(species.electronicStates[i]!);
+          if (higher.length > 0) {
+            notes.push(
+              `state ${s.term}: higher-order level constants ${higher.join(', ')}; ${s.rotationalTurnovers} of ${s.vibrationalLevels} J ladders end where E(v,J) turns over, the rest at the limit`,
+            );
+          }
+        });
       };
       if (spin && mixture === 'frozen') {
         const { components, states } = diatomicSpinManifolds(species);

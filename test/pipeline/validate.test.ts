@@ -129,6 +129,7 @@ name: N2
 
   it('fills nuclear_spin_mixture (default equilibrium) only with spin weights, so the hash states it', () => {
     // H2 X1Sigma_g+ constants: Huber & Herzberg (1979), from memory; 1:3 para:ortho (textbook nuclear spin statistics).
+    // He estimated from Herzberg's (1950) relation (our arithmetic): without it the J ladders turn over early (a warning).
     const h2 = (extra: string) =>
       validateSpecies(
         parseYamlText(
@@ -142,7 +143,7 @@ nuclear_spin_weights: {even: 1, odd: 3}
 ${extra}
 dissociation_energy: 36118.1
 electronic_states:
-  - {term: X, energy: 0, degeneracy: 1, we: 4401.21, wexe: 121.33, Be: 60.853, alphae: 3.062, De: 0.0471}
+  - {term: X, energy: 0, degeneracy: 1, we: 4401.21, wexe: 121.33, Be: 60.853, alphae: 3.062, De: 0.0471, He: 5.02e-5}
 `,
           'h2.yaml',
         ).documents[0]!,

@@ -47,13 +47,18 @@ export function formatDiagnostic(d: Diagnostic): string {
   return `${where}: ${d.severity}: ${who}${field}${d.message}${tail}`;
 }
 
-/** Stable order: file, line, column, then message; so reports do not depend on completion order. */
+/** Code-unit order of two strings: unlike localeCompare it cannot depend on the machine's locale. */
+export function compareText(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0;
+}
+
+/** Stable order: file, line, column, then message; so reports depend neither on completion order nor locale. */
 export function compareDiagnostics(a: Diagnostic, b: Diagnostic): number {
   return (
-    a.file.localeCompare(b.file) ||
+    compareText(a.file, b.file) ||
     (a.line ?? 0) - (b.line ?? 0) ||
     (a.column ?? 0) - (b.column ?? 0) ||
-    a.message.localeCompare(b.message)
+    compareText(a.message, b.message)
   );
 }
 

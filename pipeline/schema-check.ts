@@ -13,7 +13,7 @@
  */
 import { Ajv2020 } from 'ajv/dist/2020.js';
 import type { ErrorObject, ValidateFunction } from 'ajv';
-import type { Diagnostic } from './diagnostics.js';
+import { compareText, type Diagnostic } from './diagnostics.js';
 import type { LoadedDocument, SourcePosition } from './load.js';
 
 /** The ajv options every qforge schema is compiled with (the messages below rely on `verbose`). */
@@ -434,5 +434,5 @@ export function checkAgainstSchema(
     }
   }
   // Source order, so a report reads top to bottom like the file.
-  return out.sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0) || a.path.localeCompare(b.path));
+  return out.sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0) || compareText(a.path, b.path));
 }

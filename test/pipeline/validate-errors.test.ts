@@ -29,6 +29,12 @@ const DIATOMIC = [
   'electronic_states:',
   '  - {term: X, energy: 0, degeneracy: 1, we: 2358.57, wexe: 14.324, Be: 1.99824, alphae: 0.017318}',
 ];
+/**
+ * Line 9 of DIATOMIC with higher-order constants appended (`, He: ...`). N2's De = 5.76e-6 cm-1 is from
+ * Huber & Herzberg (1979), from memory; the higher-order values of the cases are invented mistakes.
+ */
+const n2State = (extra: string) =>
+  `  - {term: X, energy: 0, degeneracy: 1, we: 2358.57, wexe: 14.324, Be: 1.99824, alphae: 0.017318${extra}}`;
 const NONLINEAR = [
   'name: H2O',
   'composition: {H: 2, O: 1}',
@@ -237,6 +243,44 @@ const ERRORS: Case[] = [
   {
     kind: 'document that is not a mapping', yaml: 'just a string\n', line: 1, at: 'just', path: '', contains: ['wrong type: a text', 'expected a mapping'],
   },
+  // Higher-order level constants (weze, gammae, betae, He).
+  {
+    kind: 'higher-order constant in an unknown unit', yaml: edit(DIATOMIC, { 9: n2State(', gammae: {value: -1e-5, unit: cm^-1}') }), line: 9,
+    at: 'cm^-1', path: 'electronic_states[0].gammae.unit', contains: ['unknown unit', 'got "cm^-1"', 'MHz'],
+  },
+  {
+    // He is a rotational-type constant (MHz allowed, see the warnings); an inertia unit is not.
+    kind: 'sextic constant in a unit of inertia', yaml: edit(DIATOMIC, { 9: n2State(', De: 5.76e-6, He: {value: 5, unit: amu*angstrom^2}') }), line: 9,
+    at: 'amu*angstrom^2', path: 'electronic_states[0].He.unit', contains: ['unknown unit', 'got "amu*angstrom^2"'],
+  },
+  {
+    // weze belongs to G(v): energy units only, no MHz.
+    kind: 'vibrational constant weze in a rotational unit', yaml: edit(DIATOMIC, { 9: n2State(', weze: {value: 3, unit: MHz}') }), line: 9,
+    at: 'MHz', path: 'electronic_states[0].weze.unit', contains: ['unknown unit', 'got "MHz"', 'kcal/mol'],
+  },
+  {
+    kind: 'sextic constant as text', yaml: edit(DIATOMIC, { 9: n2State(', De: 5.76e-6, He: "5e-12"') }), line: 9, at: '"5e-12"',
+    path: 'electronic_states[0].He', contains: ['wrong type', 'got "5e-12"'],
+  },
+  {
+    kind: 'higher-order constant misspelt', yaml: edit(DIATOMIC, { 9: n2State(', De: 5.76e-6, Hee: 5e-12') }), line: 9, at: 'Hee',
+    path: 'electronic_states[0].Hee', contains: ["unknown key 'Hee'", "did you mean 'He'"],
+  },
+  {
+    // D_0 = 5.76e-6 - 2e-5/2 < 0: impossible for the lowest vibrational level.
+    kind: 'betae making D_0 negative', yaml: edit(DIATOMIC, { 9: n2State(', De: 5.76e-6, betae: -2e-5') }), line: 9, at: '-2e-5',
+    path: 'electronic_states[0].betae', contains: ['D_0 = De + betae/2 = -0.00000424 cm-1 is negative', 'got -0.00002', 'betae >= -0.00001152 cm-1'],
+  },
+  {
+    // B_v = 1.99824 - 0.017318 h - 0.01 h^2 falls below 0 at v = 13 (h = 13.5); the linear part is still positive.
+    kind: 'gammae making B_v <= 0 at a bound level', yaml: edit(DIATOMIC, { 9: n2State(', gammae: -0.01') }), line: 9, at: '-0.01',
+    path: 'electronic_states[0].gammae', contains: ['+ gammae(v+1/2)^2 is', 'at v = 13', 'would not rise', 'got -0.01'],
+  },
+  {
+    // 2B - 4D + 8H = 3.979 - 8 < 0: the J = 1 level of v = 0 would lie below J = 0.
+    kind: 'negative He so large that the J ladder never rises', yaml: edit(DIATOMIC, { 9: n2State(', De: 5.76e-6, He: -1') }), line: 9, at: '-1}',
+    path: 'electronic_states[0].He', contains: ['E(v,1) <= E(v,0) at v = 0', 'would not rise', 'got -1'],
+  },
 ];
 
 const WARNINGS: Case[] = [
@@ -277,6 +321,52 @@ const WARNINGS: Case[] = [
   {
     kind: 'wavenumber in the wrong unit', yaml: edit(NONLINEAR, { 8: 'vibrations: [365700, 1595, 3756]' }), line: 8, at: '365700',
     path: 'vibrations[0]', contains: ['check the unit'],
+  },
+  // Higher-order level constants (weze, gammae, betae, He); values invented, N2 base from Huber & Herzberg (1979).
+  {
+    kind: 'gammae out of proportion to alphae', yaml: edit(DIATOMIC, { 9: n2State(', gammae: 0.01') }), line: 9, at: '0.01}',
+    path: 'electronic_states[0].gammae', contains: ['|gammae| = 0.01 cm-1 is more than 0.25 of alphae = 0.017318 cm-1', 'check the unit'],
+  },
+  {
+    kind: 'betae out of proportion to De', yaml: edit(DIATOMIC, { 9: n2State(', De: 5.76e-6, betae: 5e-6') }), line: 9, at: '5e-6}',
+    path: 'electronic_states[0].betae', contains: ['|betae| = 0.000005 cm-1 is more than 0.25 of De = 0.00000576 cm-1'],
+  },
+  {
+    kind: 'betae without De', yaml: edit(DIATOMIC, { 9: n2State(', betae: 1e-8') }), line: 9, at: '1e-8',
+    path: 'electronic_states[0].betae', contains: ['is given but De is 0'],
+  },
+  {
+    kind: 'weze out of proportion to wexe', yaml: edit(DIATOMIC, { 9: n2State(', weze: 5') }), line: 9, at: '5}',
+    path: 'electronic_states[0].weze', contains: ['more than 0.25 of wexe = 14.324 cm-1'],
+  },
+  {
+    // Herzberg's (1950) estimate (2De/(3we^2))(12Be^2 - alphae we) is +4.88e-12 cm-1 for these constants (our arithmetic).
+    kind: 'He of the other sign from the estimate (sign convention)', yaml: edit(DIATOMIC, { 9: n2State(', De: 5.76e-6, He: -5e-12') }), line: 9,
+    at: '-5e-12', path: 'electronic_states[0].He', contains: ['of the other sign from the estimate', '4.88', 'check the sign and the unit'],
+  },
+  {
+    // 5e-12 cm-1 typed as MHz-sized number: 150 MHz = 0.005 cm-1, a factor of 1e9 too large.
+    kind: 'He far from the estimate (unit)', yaml: edit(DIATOMIC, { 9: n2State(', De: 5.76e-6, He: {value: 150, unit: MHz}') }), line: 9,
+    at: '{value: 150', path: 'electronic_states[0].He', contains: ['more than a factor of 10 away from the estimate'],
+  },
+  {
+    kind: 'He without De', yaml: edit(DIATOMIC, { 9: n2State(', He: 5e-12') }), line: 9, at: '5e-12', path: 'electronic_states[0].He',
+    contains: ['is given but De is 0'],
+  },
+  {
+    // B_v/(2 D_v) = 1.99/2e-4: the v = 0 ladder turns over near 9900 cm-1, far below D0 = 78714 cm-1 (H2 without He is like this).
+    kind: 'J ladder turning over far below the limit', yaml: edit(DIATOMIC, { 9: n2State(', De: 1e-4') }), line: 9, at: '1e-4',
+    path: 'electronic_states[0].De', contains: ['the J ladder of v = 0', 'turns over at J = 99', 'the sextic constant He'],
+  },
+  {
+    // With He < 0 the ladder always turns over; here near J = 154 and 30600 cm-1, far below the limit.
+    kind: 'negative He turning the J ladder over early', yaml: edit(DIATOMIC, { 9: n2State(', De: 5.76e-6, He: -1e-9') }), line: 9,
+    at: '-1e-9', path: 'electronic_states[0].He', contains: ['the J ladder of v = 0', 'turns over', 'He from the tables'],
+  },
+  {
+    // D_v = 5.76e-6 - 1e-6 (v + 1/2) < 0 from v = 6, below the limit; |betae|/De = 0.17 draws no ratio warning.
+    kind: 'betae making D_v negative at a higher bound level', yaml: edit(DIATOMIC, { 9: n2State(', De: 5.76e-6, betae: -1e-6') }), line: 9,
+    at: '-1e-6', path: 'electronic_states[0].betae', contains: ['D_v = De + betae(v+1/2) is', 'at v = 6', 'extrapolated'],
   },
 ];
 

@@ -162,6 +162,39 @@ electronic_states:
     expect(n2!.normalisedInput).not.toHaveProperty('nuclearSpinMixture');
   });
 
+  it('keeps non-zero higher-order constants (units converted) and omits zeros, so explicit 0 hashes like absent', () => {
+    // N2 X1Sigma_g+: Huber & Herzberg (1979), from memory; the higher-order values are invented for this test.
+    const n2 = (extra: string) =>
+      validateSpecies(
+        parseYamlText(
+          `name: N2
+composition: {N: 2}
+enthalpy_of_formation: 0
+sources: ["Huber & Herzberg (1979), from memory"]
+structure: diatomic
+symmetry_number: 2
+dissociation_energy: 78714
+electronic_states:
+  - {term: X, energy: 0, degeneracy: 1, we: 2358.57, wexe: 14.324, weye: -0.00226, Be: 1.99824, alphae: 0.017318, De: 5.76e-6${extra}}
+`,
+          'n2.yaml',
+        ).documents[0]!,
+      );
+    const plain = n2('');
+    const zeros = n2(', weze: 0, gammae: 0, betae: {value: 0, unit: MHz}, He: 0');
+    // He = 1.5e-7 MHz = 5.0e-12 cm-1, near Herzberg's (1950) estimate 4.88e-12 cm-1 for these constants (our arithmetic).
+    const given = n2(', weze: 0.001, gammae: -3e-5, betae: 1e-8, He: {value: 1.5e-7, unit: MHz}');
+    for (const r of [plain, zeros, given]) expect(r.diagnostics).toEqual([]);
+    expect(JSON.stringify(zeros.normalisedInput)).toBe(JSON.stringify(plain.normalisedInput));
+    expect((zeros.species as DiatomicSpecies).electronicStates[0]).not.toHaveProperty('He');
+    const state = (given.species as DiatomicSpecies).electronicStates[0]!;
+    expect(state.weze).toBe(0.001);
+    expect(state.gammae).toBe(-3e-5);
+    expect(state.betae).toBe(1e-8);
+    expect(state.He! / ((1.5e-7 * GHZ_CM1) / 1000) - 1).toBeCloseTo(0, 14); // MHz = GHz/1000, factor above
+    expect(JSON.stringify(given.normalisedInput)).not.toBe(JSON.stringify(plain.normalisedInput));
+  });
+
   it('fills charge and corrects the molar mass of a cation for the missing electron', () => {
     const doc = parseYamlText(
       `name: Ar+

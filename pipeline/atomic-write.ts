@@ -13,15 +13,47 @@
  *   - killed between 2 and 3: OUT absent, `-old` complete → `recoverOutputDir` renames it back (readers
  *     use it directly, see `resolveReadableBuild`);
  *   - killed between 3 and 4: OUT is the new complete set; `-old` is removed.
- * OUT is owned by qforge: it carries a marker file, and a non-empty folder without one is never replaced.
+ * OUT is owned by qforge and replaced whole. Its marker file `.qforge-build` lists every file qforge wrote
+ * there; a folder is replaced only when it is empty or holds nothing but the files its marker lists, so a
+ * file a user put into OUT (notes, a species file) stops the build instead of vanishing. A non-empty folder
+ * without a marker is never replaced. (A marker of an older qforge, without a list, is trusted as before.)
  */
 import { randomBytes } from 'node:crypto';
-import { mkdir, open, readdir, readFile, rename, rm, stat } from 'node:fs/promises';
+import { lstat, mkdir, open, readdir, readFile, rename, rm, stat } from 'node:fs/promises';
 import path from 'node:path';
 
-/** Marker file that identifies a folder as a qforge build output (content is constant). */
+/** Marker file that identifies a folder as a qforge build output; it lists the files written (sorted). */
 export const BUILD_MARKER = '.qforge-build';
-const MARKER_TEXT = 'This folder is written by qforge build and is replaced as a whole on every build.\n';
+const MARKER_HEADER = 'This folder is written by qforge build and is replaced as a whole on every build.\n';
+const MARKER_LIST_LINE = 'Files written by qforge (any other entry here stops the next build):\n';
+
+/** Deterministic marker text for a set of output files (relative paths, '/' separators). */
+export function markerText(files: Iterable<string>): string {
+  const list = [...files].filter((f) => f !== BUILD_MARKER).sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
+  return `${MARKER_HEADER}${MARKER_LIST_LINE}${list.map((f) => `${f}\n`).join('')}`;
+}
+
+/** Files a marker lists, or undefined for a marker without a list (older qforge). */
+function parseMarker(text: string): Set<string> | undefined {
+  const at = text.indexOf(MARKER_LIST_LINE);
+  if (at < 0) return undefined;
+  return new Set(text.slice(at + MARKER_LIST_LINE.length).split('\n').filter((l) => l !== ''));
+}
+
+/**
+ * `syscall path: CODE (reason)` of a Node file-system error, e.g. "mkdir '/etc/passwd': ENOTDIR (not a
+ * directory)"; undefined for other errors.
+ */
+export function describeFsError(err: unknown): string | undefined {
+  const e = err as NodeJS.ErrnoException | undefined;
+  if (!e || typeof e !== 'object' || typeof e.code !== 'string') return undefined;
+  if (!/^E[A-Z0-9]+$/.test(e.code) && !e.code.startsWith('ERR_FS_')) return undefined;
+  // Node's message reads "ENOTDIR: not a directory, mkdir '/etc/passwd'"; keep the reason words.
+  const m = /^[A-Z0-9_]+: (.*?)(?:, [a-z]+ '.*')?$/.exec(e.message ?? '');
+  const reason = m?.[1] ?? e.message ?? e.code;
+  const where = e.syscall ? `${e.syscall}${e.path ? ` '${e.path}'` : ''}: ` : e.path ? `'${e.path}': ` : '';
+  return `${where}${e.code} (${reason})`;
+}
 
 export class OutputFolderError extends Error {
   constructor(message: string) {
@@ -78,7 +110,14 @@ function processAlive(pid: number): boolean {
  */
 export async function acquireOutputLock(out: string): Promise<() => Promise<void>> {
   const s = siblings(out);
-  await mkdir(s.parent, { recursive: true });
+  // A path qforge cannot create (under a file, in /proc, read-only) is a bad --out, not an internal error.
+  const unusable = (err: unknown) =>
+    describeFsError(err) ? new OutputFolderError(`cannot use the output folder ${out}: ${describeFsError(err)}`) : err;
+  try {
+    await mkdir(s.parent, { recursive: true });
+  } catch (err) {
+    throw unusable(err);
+  }
   for (let attempt = 0; attempt < 3; attempt++) {
     try {
       const fh = await open(s.lock, 'wx');
@@ -88,7 +127,7 @@ export async function acquireOutputLock(out: string): Promise<() => Promise<void
         await rm(s.lock, { force: true });
       };
     } catch (err) {
-      if ((err as NodeJS.ErrnoException).code !== 'EEXIST') throw err;
+      if ((err as NodeJS.ErrnoException).code !== 'EEXIST') throw unusable(err);
       let owner = NaN;
       try {
         owner = Number((await readFile(s.lock, 'utf8')).trim());
@@ -171,20 +210,62 @@ export async function resolveReadableBuild(out: string): Promise<string> {
   return s.abs;
 }
 
-/** Refuses to replace a folder qforge did not write (protects e.g. `--out ~`). */
-export async function assertReplaceable(out: string): Promise<void> {
+/** Entries below `dir` (relative, '/' separators) that are not listed, nor folders holding listed files. */
+async function unlistedEntries(dir: string, listed: ReadonlySet<string>): Promise<string[]> {
+  const folders = new Set<string>();
+  for (const f of listed) for (let d = path.posix.dirname(f); d !== '.'; d = path.posix.dirname(d)) folders.add(d);
+  const out: string[] = [];
+  const walk = async (abs: string, rel: string): Promise<void> => {
+    const entries = (await readdir(abs, { withFileTypes: true })).sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));
+    for (const e of entries) {
+      const r = rel ? `${rel}/${e.name}` : e.name;
+      if (r === BUILD_MARKER) continue;
+      if (e.isDirectory() && folders.has(r)) await walk(path.join(abs, e.name), r);
+      else if (!(e.isFile() && listed.has(r))) out.push(e.isDirectory() ? `${r}/` : r);
+    }
+  };
+  await walk(dir, '');
+  return out;
+}
+
+/**
+ * Refuses to replace a folder holding anything qforge did not write: a non-empty folder without the
+ * marker (protects e.g. `--out ~`), or one holding entries its marker does not list (a user's notes).
+ */
+export async function assertReplaceable(out: string, label: string = out): Promise<void> {
   const s = siblings(out);
   let st;
   try {
-    st = await stat(s.abs);
-  } catch {
-    return;
+    st = await lstat(s.abs);
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code === 'ENOENT') return;
+    throw new OutputFolderError(`cannot use the output folder ${label}: ${describeFsError(err) ?? String(err)}`);
   }
-  if (!st.isDirectory()) throw new OutputFolderError(`output path ${out} exists and is not a folder`);
-  const entries = await readdir(s.abs);
-  if (entries.length === 0 || entries.includes(BUILD_MARKER)) return;
+  if (st.isSymbolicLink()) st = await stat(s.abs).catch(() => st!);
+  if (!st.isDirectory()) throw new OutputFolderError(`output path ${label} exists and is not a folder`);
+  let entries: string[];
+  let marker: string | undefined;
+  try {
+    entries = await readdir(s.abs);
+    if (entries.includes(BUILD_MARKER)) marker = await readFile(path.join(s.abs, BUILD_MARKER), 'utf8');
+  } catch (err) {
+    throw new OutputFolderError(`cannot use the output folder ${label}: ${describeFsError(err) ?? String(err)}`);
+  }
+  if (entries.length === 0) return;
+  if (marker === undefined) {
+    throw new OutputFolderError(
+      `output folder ${label} is not empty and was not written by qforge (no ${BUILD_MARKER}); refusing to replace it`,
+    );
+  }
+  const listed = parseMarker(marker);
+  if (!listed) return;
+  const foreign = await unlistedEntries(s.abs, listed);
+  if (foreign.length === 0) return;
+  const shown = foreign.slice(0, 5).join(', ') + (foreign.length > 5 ? `, … (${foreign.length} in all)` : '');
   throw new OutputFolderError(
-    `output folder ${out} is not empty and was not written by qforge (no ${BUILD_MARKER}); refusing to replace it`,
+    `output folder ${label} holds ${foreign.length === 1 ? 'an entry' : `${foreign.length} entries`} qforge did not write (${shown}); ` +
+      'qforge replaces the output folder as a whole and would delete ' +
+      `${foreign.length === 1 ? 'it' : 'them'}: move ${foreign.length === 1 ? 'it' : 'them'} elsewhere or choose another --out`,
   );
 }
 
@@ -208,13 +289,14 @@ export interface PublishHooks {
 
 /**
  * Writes `files` (relative path → content) as the complete new content of OUT, atomically as described in
- * the module comment. The marker file is added.
+ * the module comment. The marker file (listing the files) is added. Returns whether a previous OUT was
+ * replaced.
  */
 export async function publishDirectory(
   out: string,
   files: ReadonlyMap<string, string | Uint8Array>,
   hooks: PublishHooks = {},
-): Promise<void> {
+): Promise<{ replaced: boolean }> {
   const s = siblings(out);
   await mkdir(s.parent, { recursive: true });
   await assertReplaceable(out);
@@ -222,7 +304,7 @@ export async function publishDirectory(
   await mkdir(tmp);
   try {
     const all = new Map(files);
-    all.set(BUILD_MARKER, MARKER_TEXT);
+    all.set(BUILD_MARKER, markerText(files.keys()));
     const dirs = new Set<string>([tmp]);
     for (const [rel, data] of [...all].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))) {
       const target = safeJoin(tmp, rel);
@@ -250,6 +332,7 @@ export async function publishDirectory(
     await rename(tmp, s.abs);
     await fsyncDir(s.parent);
     if (hadOld) await rm(s.old, { recursive: true, force: true });
+    return { replaced: hadOld };
   } catch (err) {
     await rm(tmp, { recursive: true, force: true });
     if (!(await exists(s.abs)) && (await exists(s.old))) await rename(s.old, s.abs);

@@ -9,7 +9,7 @@
  */
 import { mkdir, readFile } from 'node:fs/promises';
 import path from 'node:path';
-import { writeFileAtomic } from './atomic-write.js';
+import { describeFsError, writeFileAtomic } from './atomic-write.js';
 import { canonicalJson, sha256Hex } from './hash.js';
 
 export const CACHE_FORMAT = 'qforge-cache/1';
@@ -32,8 +32,20 @@ export interface CacheLookup<T> {
 }
 
 export class StageCache {
+  /**
+   * Why the cache could not be written (the first failure of this build), e.g.
+   * "mkdir '/x/.qforge-cache': EACCES (permission denied)"; undefined while every write succeeded.
+   * The build goes on (a cache only saves time) but reports it, so a cache that never fills is not silent.
+   */
+  writeProblem: string | undefined;
+
   /** `dir` undefined disables the cache (every lookup is 'off', nothing is written). */
   constructor(readonly dir: string | undefined) {}
+
+  /** Records a failed write (once per build). */
+  noteWriteFailure(err: unknown): void {
+    this.writeProblem ??= describeFsError(err) ?? (err instanceof Error ? err.message : String(err));
+  }
 
   private entryPath(kind: CacheKind, key: string): string {
     if (!/^[0-9a-f]{64}$/.test(key)) throw new Error(`cache key must be a sha256 hex digest, got ${key}`);
@@ -92,8 +104,9 @@ export async function cached<T>(
   const value = jsonRoundTrip(compute());
   try {
     await cache.put(kind, key, value);
-  } catch {
-    // A cache that cannot be written only costs time on the next build.
+  } catch (err) {
+    // A cache that cannot be written only costs time on the next build; the runner reports it once.
+    cache.noteWriteFailure(err);
   }
   const r: { value: T; outcome: CacheOutcome; reason?: string; ms: number } = {
     value,

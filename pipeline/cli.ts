@@ -2,9 +2,16 @@
  * The command line. `main` parses the arguments with commander, runs one command and returns its exit
  * code; it never calls process.exit (bin/qforge.js sets process.exitCode).
  *
- * Exit codes: 0 success; 1 input, species or check failures (the build, check, diff gate or compare
- * found a problem); 2 usage errors (unknown option, bad option value, missing folder, an output folder
- * qforge may not replace). Heavy modules are imported per command so start-up stays fast.
+ * Exit codes (the one rule for every command):
+ *   0  success;
+ *   1  the data failed: input, species, fit checks, a diff gate or compare breach, malformed build or
+ *      reference files, an output folder locked by a live build, a file-system error while reading or
+ *      writing (reported as `qforge: error: <syscall> '<path>': <CODE> (<reason>)`);
+ *   2  usage: bad command line (no command, unknown option, bad value, `table` without or with a wrong
+ *      --name), a missing or unusable path argument (DIR, FILE, an --out qforge cannot create or may not
+ *      replace, a database or cache folder inside the output folder).
+ * bin/qforge.js turns anything else (a bug) into exit 3. Heavy modules are imported per command so
+ * start-up stays fast.
  */
 import path from 'node:path';
 import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
@@ -35,29 +42,40 @@ const EXAMPLES = {
 Examples:
   qforge build                         build species/ into build/
   qforge build mydb --out mydb-build   build another database folder
-  qforge build --keep-going --json     write the good species, print the summary as JSON
+  qforge build --keep-going --json     write the good species, print the summary
   qforge build --no-cache --jobs 1     recompute everything, one species at a time
 
-Outputs (in OUT): thermo.json, nasa7.txt, tables/<name>.csv, summary.json (summary.json holds timings;
-the other files are byte-identical for identical inputs). OUT is replaced as a whole, atomically; the
-cache lives in .qforge-cache/ next to OUT.`,
+Outputs (in OUT): thermo.json, nasa7.txt, tables/<name>.csv, summary.json
+(summary.json holds timings; the other files are byte-identical for identical
+inputs). The cache lives in .qforge-cache/ next to OUT.
+
+OUT belongs to qforge: every build replaces it as a whole, atomically. Its
+.qforge-build file lists what qforge wrote; a file you put into OUT stops the
+build (exit 2) instead of being deleted. OUT may not contain the database
+folder or the cache; OUT inside the database folder is fine (only *.yaml
+files are read there, and OUT holds none).`,
   check: `
 Examples:
   qforge check                 check species/ (settings and every species file)
   qforge check mydb --json     the diagnostics as JSON`,
   table: `
 Examples:
-  qforge table species/n2.yaml
-  qforge table species/air.yaml --name O2 --at 298.15,1000,2000
-  qforge table species/h2o.yaml --range 200:6000:100 --format csv > h2o.csv`,
+  qforge table species/N2.yaml
+  qforge table species/O2.yaml --at 298.15,1000,2000
+  qforge table test/fixtures/input/multi.yaml --name N2
+  qforge table species/H2O.yaml --range 200:6000:100 --format csv > H2O.csv
+
+--name picks one species of a file holding several; a missing or wrong --name
+then is a usage error (exit 2), like a FILE that does not exist.`,
   diff: `
 Examples:
   qforge diff build-yesterday build
   qforge diff old/nasa7.txt build --fail-above cp=0.05,h=0.1,s=0.05
   qforge diff build-main build --json
 
-A species counts as "properties changed" when any of |dCp|, |dS| exceeds 0.001 J/(mol K) or |dH|
-exceeds 0.001 kJ/mol somewhere on the common range (10 K grid); otherwise only its coefficients moved.`,
+A species counts as "properties changed" when any of |dCp|, |dS| exceeds
+0.001 J/(mol K) or |dH| exceeds 0.001 kJ/mol somewhere on the common range
+(10 K grid); otherwise only its coefficients moved.`,
   compare: `
 Examples:
   qforge compare build --reference janaf/n2.csv janaf/o2.csv
@@ -67,14 +85,17 @@ Examples:
 
 Reference CSV: one row per temperature; header names with units, e.g.
   species,T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol]
-The species column is optional: without it the file name (without .csv) is the species name. Lines
-starting with '#' are comments. Units: J/(mol K), cal/(mol K) for Cp and S; kJ/mol, J/mol, kcal/mol for
-H-H298. An 80-column NASA file can also serve as the reference.
+The species column is optional: without it the file name (without .csv) is the
+species name. Lines starting with '#' are comments. Units: J/(mol K),
+cal/(mol K) for Cp and S; kJ/mol, J/mol, kcal/mol for H-H298. An 80-column
+NASA file can also serve as the reference.
 
-Known deviations (references.known_deviations in qforge.yaml: species, from/to K, widened tolerances,
-reason) turn a value beyond the normal tolerance but within the widened one into "known": printed with
-its reason, counted separately, exit 0. --tolerance changes the normal limits only; --strict ignores
-the known deviations. Entries that name a missing species or are no longer needed are warned about.`,
+Known deviations (references.known_deviations in qforge.yaml: species, from/to
+K, widened tolerances, reason) turn a value beyond the normal tolerance but
+within the widened one into "known": printed with its reason, counted
+separately, exit 0. --tolerance changes the normal limits only; --strict
+ignores the known deviations. Entries that name a missing species or are no
+longer needed are warned about.`,
 };
 
 function positiveInt(value: string): number {
@@ -101,12 +122,20 @@ function printDiagnostics(io: CliIo, ds: readonly Diagnostic[], format: (d: Diag
   for (const d of ds) io.stderr.write(`${format(d)}\n`);
 }
 
+/**
+ * TEST-ONLY hook (test/pipeline/interrupt.test.ts): with QFORGE_TEST=1 and QFORGE_TEST_PAUSE set to
+ * 'before-swap' or 'mid-swap', the build announces the point on stderr and holds still for 60 s so the
+ * test can kill it exactly there. Both variables are required, so a stray QFORGE_TEST_PAUSE in a user's
+ * environment never stalls a real build. Not a user feature; not documented in --help.
+ */
 async function waitForTestPause(io: CliIo, where: string): Promise<void> {
-  if (io.env.QFORGE_TEST_PAUSE !== where) return;
+  if (io.env.QFORGE_TEST !== '1' || io.env.QFORGE_TEST_PAUSE !== where) return;
   io.stderr.write(`qforge: test pause ${where}\n`);
-  // Test hook only: hold still so a test can kill the process at this exact point.
   await new Promise((r) => setTimeout(r, 60_000));
 }
+
+/** Width the help text is wrapped to (and the epilogs are written for). */
+export const HELP_WIDTH = 80;
 
 export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<number> {
   const io: CliIo = {
@@ -127,7 +156,12 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .version(TOOL_VERSION)
     .exitOverride()
     .showHelpAfterError('(run with --help for usage)')
-    .configureOutput({ writeOut: (s) => io.stdout.write(s), writeErr: (s) => io.stderr.write(s) });
+    .configureOutput({
+      writeOut: (s) => io.stdout.write(s),
+      writeErr: (s) => io.stderr.write(s),
+      getOutHelpWidth: () => HELP_WIDTH,
+      getErrHelpWidth: () => HELP_WIDTH,
+    });
 
   program
     .command('build')
@@ -203,12 +237,18 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
       });
     });
 
+  // No command at all is a usage error: the help goes to stderr, exit 2.
+  if (argv.length === 0) {
+    io.stderr.write(program.helpInformation());
+    io.stderr.write('qforge: error: no command given (build, check, table, diff or compare)\n');
+    return 2;
+  }
   try {
     await program.parseAsync(argv, { from: 'user' });
     return exitCode;
   } catch (e) {
     if (e instanceof CommanderError) {
-      if (e.code === 'commander.helpDisplayed' || e.code === 'commander.version' || e.code === 'commander.help') return 0;
+      if (e.code === 'commander.helpDisplayed' || e.code === 'commander.version') return 0;
       return 2;
     }
     if ((e as Error)?.name === 'BuildLockedError') {
@@ -219,7 +259,76 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
       io.stderr.write(`qforge: error: ${(e as Error).message}\n`);
       return 2;
     }
+    // Any file-system error that escaped a command (a disk that filled, a folder that vanished, a
+    // permission): the path and the OS reason, not a stack trace.
+    const { describeFsError } = await import('./atomic-write.js');
+    const fs = describeFsError(e);
+    if (fs) {
+      io.stderr.write(`qforge: error: ${fs}\n`);
+      return 1;
+    }
     throw e;
+  }
+}
+
+/** Real path of `p`, also when its tail does not exist yet (the existing ancestor is resolved). */
+async function realpathLoose(p: string): Promise<string> {
+  const { realpath } = await import('node:fs/promises');
+  const rest: string[] = [];
+  let cur = path.resolve(p);
+  for (;;) {
+    try {
+      return path.join(await realpath(cur), ...rest.reverse());
+    } catch {
+      const parent = path.dirname(cur);
+      if (parent === cur) return path.resolve(p);
+      rest.push(path.basename(cur));
+      cur = parent;
+    }
+  }
+}
+
+/** `inner` equals `outer` or lies below it (both real, absolute). */
+function within(inner: string, outer: string): boolean {
+  const rel = path.relative(outer, inner);
+  return rel === '' || (!rel.startsWith('..') && !path.isAbsolute(rel));
+}
+
+/**
+ * Refuses folder layouts in which a build would delete its own inputs: OUT is replaced as a whole, so the
+ * database folder, the settings file and the cache may not lie inside it (compared by real path, so
+ * symlinks do not hide it). OUT inside the database folder is allowed: discovery reads only *.yaml there
+ * and skips dot-folders, and OUT holds only *.json, *.txt, *.csv and the marker.
+ */
+export async function assertSafeBuildPaths(p: {
+  dir: string;
+  dirLabel: string;
+  out: string;
+  outLabel: string;
+  cacheDir?: string;
+  cacheLabel?: string;
+}): Promise<void> {
+  const [dir, out] = await Promise.all([realpathLoose(p.dir), realpathLoose(p.out)]);
+  const why = 'a build replaces the output folder as a whole and would delete';
+  if (within(dir, out)) {
+    throw new UsageError(
+      `the database folder ${p.dirLabel} ${dir === out ? 'is the output folder' : `is inside the output folder ${p.outLabel}`}; ` +
+        `${why} the species files: choose an --out outside ${p.dirLabel}`,
+    );
+  }
+  const { SETTINGS_FILE_NAME } = await import('./load.js');
+  const settings = await realpathLoose(path.join(p.dir, SETTINGS_FILE_NAME));
+  if (within(settings, out)) {
+    throw new UsageError(`the settings file ${path.join(p.dirLabel, SETTINGS_FILE_NAME)} resolves into the output folder ${p.outLabel}; ${why} it`);
+  }
+  if (p.cacheDir !== undefined) {
+    const cache = await realpathLoose(p.cacheDir);
+    if (within(cache, out)) {
+      throw new UsageError(`the cache folder ${p.cacheLabel ?? p.cacheDir} is inside the output folder ${p.outLabel}; ${why} the cache on every build`);
+    }
+    if (within(out, cache)) {
+      throw new UsageError(`the output folder ${p.outLabel} is inside the cache folder ${p.cacheLabel ?? p.cacheDir}; choose folders apart`);
+    }
   }
 }
 
@@ -242,13 +351,22 @@ async function buildCommand(
   o: { cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean },
 ): Promise<number> {
   await assertFolder(dir, `database folder ${dirLabel}`);
-  const [{ runBuild }, { formatDiagnostic }, { createProgressReporter }, { assertReplaceable }] = await Promise.all([
+  const [{ runBuild }, { formatDiagnostic }, { createProgressReporter }, { assertReplaceable }, { CACHE_DIR_NAME }] = await Promise.all([
     import('./runner.js'),
     import('./diagnostics.js'),
     import('./progress.js'),
     import('./atomic-write.js'),
+    import('./cache.js'),
   ]);
-  await assertReplaceable(out);
+  const cacheDir = o.cache === false ? null : o.cacheDir ? path.resolve(io.cwd, o.cacheDir) : undefined;
+  await assertSafeBuildPaths({
+    dir,
+    dirLabel,
+    out,
+    outLabel,
+    ...(cacheDir === null ? {} : { cacheDir: cacheDir ?? path.join(path.dirname(out), CACHE_DIR_NAME), cacheLabel: o.cacheDir ?? CACHE_DIR_NAME }),
+  });
+  await assertReplaceable(out, outLabel);
   const reporter = await createProgressReporter(io.stderr, { quiet: !!o.quiet, tty: io.isTTY });
   // In a real process: say what state OUT is in, then die of the same signal (default behaviour). The
   // folder swap is safe at any instant, so nothing needs undoing here.
@@ -269,7 +387,7 @@ async function buildCommand(
       displayBase: io.cwd,
       jobs: o.jobs,
       keepGoing: !!o.keepGoing,
-      cacheDir: o.cache === false ? null : o.cacheDir ? path.resolve(io.cwd, o.cacheDir) : undefined,
+      cacheDir,
       onProgress: (e) => reporter.onProgress(e),
       hooks: {
         beforeSwap: () => waitForTestPause(io, 'before-swap'),
@@ -281,26 +399,37 @@ async function buildCommand(
     if (ownProcess) for (const s of signals) process.off(s, onSignal);
   }
   printDiagnostics(io, report.diagnostics, formatDiagnostic);
+  // Cache problems are warnings, printed even with --quiet (like the diagnostics): a cache that never
+  // fills or a tampered entry should not go unnoticed.
+  for (const w of report.warnings) io.stderr.write(`qforge: warning: ${w}\n`);
   const s = report.summary as unknown as { counts: { species: number; ok: number; failed: number; cache_hits: number; files_failed: number } };
+  const failedList = report.failed.length ? `${report.failed.length} species failed: ${report.failed.join(', ')}` : '';
+  const filesList = s.counts.files_failed ? `${s.counts.files_failed} file(s) with errors` : '';
   if (!o.quiet || report.exitCode !== 0) {
     if (report.exitCode === 0) {
-      io.stderr.write(`qforge: built ${s.counts.ok} species into ${outLabel} (${s.counts.cache_hits} from the cache)\n`);
-    } else if (report.written) {
       io.stderr.write(
-        `qforge: wrote ${s.counts.ok} species into ${outLabel}; FAILED: ${report.summary.species.filter((x) => x.status === 'failed').map((x) => x.name).join(', ') || '(none)'}` +
-          `${s.counts.files_failed ? `; ${s.counts.files_failed} file(s) with errors` : ''}\n`,
+        `qforge: built ${s.counts.ok} species into ${outLabel} (${s.counts.cache_hits} from the cache)` +
+          `${report.replaced ? `; the previous ${outLabel} was replaced as a whole (it belongs to qforge)` : ''}\n`,
+      );
+    } else if (report.written) {
+      const failedNames = report.failed.length ? `${report.failed.join(', ')}` : '';
+      io.stderr.write(
+        `qforge: wrote ${s.counts.ok} species into ${outLabel}` +
+          `${report.replaced ? ' (replaced as a whole)' : ''}; FAILED: ${[failedNames, filesList].filter(Boolean).join('; ') || 'see the errors above'}\n`,
       );
     } else {
       const settingsErrors = ((report.summary.settings_diagnostics as string[] | undefined) ?? []).filter((d) =>
         d.includes(': error: '),
       ).length;
+      const settingsFile = report.settingsFile;
       const causes = [
-        settingsErrors ? `${settingsErrors} error(s) in the settings file` : '',
-        s.counts.failed ? `${s.counts.failed} species failed` : '',
-        s.counts.files_failed ? `${s.counts.files_failed} file(s) with errors` : '',
+        settingsErrors ? `${settingsErrors} error(s) in the settings file${settingsFile ? ` ${settingsFile}` : ''}` : '',
+        failedList,
+        filesList,
+        report.notWrittenReason ?? '',
       ].filter(Boolean);
       io.stderr.write(
-        `qforge: build failed (${causes.join(', ') || 'see the errors above'}); ${outLabel} left unchanged\n`,
+        `qforge: build failed (${causes.join('; ') || 'see the errors above'}); ${outLabel} left unchanged\n`,
       );
     }
   }

@@ -30,7 +30,7 @@ import { fitOptionsFor, fitSpecies } from './fit.js';
 import { canonicalJson, hashParts, sha256Hex } from './hash.js';
 import { discoverSpeciesFiles, loadYamlFile, type LoadedDocument } from './load.js';
 import { planSpecies, type SpeciesPlan } from './plan.js';
-import { loadSettings, type DatabaseSettings } from './settings.js';
+import { loadSettings, type DatabaseSettings, type QuantityTriple } from './settings.js';
 import { checkUniqueNames, validateSpecies } from './validate.js';
 import { verifySpecies } from './verify.js';
 import { codeFingerprint } from './code-fingerprint.js';
@@ -78,9 +78,28 @@ export interface ValidSpecies {
   validateMs: number;
 }
 
+/** A species document that failed validation (or lost a duplicate-name clash): listed as failed. */
+export interface InvalidDocument {
+  /** The document's `name`, when it has a string one. */
+  name?: string;
+  /** Species file relative to the database folder. */
+  file: string;
+  /** Species file as shown in messages. */
+  displayFile: string;
+  /** 1-based position of the species within its file. */
+  document: number;
+  diagnostics: Diagnostic[];
+}
+
 export interface CheckReport {
   settings: DatabaseSettings;
   settingsOk: boolean;
+  /** Settings file as shown in messages; undefined when the database has none (all defaults). */
+  settingsFile?: string;
+  /** Where the settings file sets exactly this field (see SettingsResult.setAt). */
+  settingsSetAt?: (segments: Array<string | number>) => { line: number; column: number } | undefined;
+  /** Species documents that failed validation, in file order. */
+  invalid: InvalidDocument[];
   files: string[];
   species: ValidSpecies[];
   /** All diagnostics (settings, files, species), sorted. */
@@ -147,6 +166,17 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   const tLoad = performance.now() - t0 - validateTotal;
 
   const valid: Array<{ doc: LoadedDocument; v: ValidSpecies }> = [];
+  const invalid: Array<{ doc: LoadedDocument; entry: InvalidDocument }> = [];
+  const nameOf = (doc: LoadedDocument): string | undefined => {
+    const n = doc.value && typeof doc.value === 'object' ? (doc.value as { name?: unknown }).name : undefined;
+    return typeof n === 'string' && n !== '' ? n : undefined;
+  };
+  const invalidEntry = (doc: LoadedDocument, file: string, ds: Diagnostic[]): InvalidDocument => {
+    const e: InvalidDocument = { file: displayOf(file), displayFile: show(file), document: doc.index + 1, diagnostics: ds };
+    const n = nameOf(doc);
+    if (n !== undefined) e.name = n;
+    return e;
+  };
   for (const { file, loaded, results, loadMs } of perFile) {
     loaded.diagnostics.forEach(addFileDiag);
     diagnostics.push(...loaded.diagnostics);
@@ -173,6 +203,8 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
             validateMs: vms,
           },
         });
+      } else {
+        invalid.push({ doc, entry: invalidEntry(doc, file, [...r.diagnostics]) });
       }
     }
   }
@@ -180,12 +212,25 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   const dup = checkUniqueNames(perFile.flatMap((p) => p.results.map((x) => x.doc)));
   diagnostics.push(...dup);
   dup.forEach(addFileDiag);
-  const species: ValidSpecies[] = valid
-    .filter(
-      ({ doc, v }) =>
-        !dup.some((d) => d.severity === 'error' && d.file === doc.file && d.species === v.name && doc.locate(['name'])?.line === d.line),
-    )
-    .map(({ v }) => v);
+  const isDuplicate = (doc: LoadedDocument, name: string) =>
+    dup.some((d) => d.severity === 'error' && d.file === doc.file && d.species === name && doc.locate(['name'])?.line === d.line);
+  const species: ValidSpecies[] = [];
+  for (const { doc, v } of valid) {
+    if (!isDuplicate(doc, v.name)) species.push(v);
+    else {
+      const ds = dup.filter((d) => d.file === doc.file && d.species === v.name && doc.locate(['name'])?.line === d.line);
+      invalid.push({ doc, entry: invalidEntry(doc, doc.file, ds) });
+    }
+  }
+  for (const { doc, entry } of invalid) {
+    if (entry.name === undefined) continue;
+    // A duplicate of an invalid document is reported with that document too.
+    for (const d of dup) {
+      if (d.file === doc.file && d.species === entry.name && doc.locate(['name'])?.line === d.line && !entry.diagnostics.includes(d)) {
+        entry.diagnostics.push(d);
+      }
+    }
+  }
   if (discovered.files.length === 0 && !hasErrors(discovered.diagnostics)) {
     diagnostics.push({
       severity: 'error',
@@ -198,9 +243,14 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   species.sort(byName);
   for (const d of diagnostics) d.file = show(d.file);
   diagnostics.sort(compareDiagnostics);
-  return {
+  const invalidDocs = invalid
+    .map(({ entry }) => entry)
+    .sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : a.document - b.document));
+  for (const e of invalidDocs) e.diagnostics.sort(compareDiagnostics);
+  const report: CheckReport = {
     settings: settingsResult.settings,
     settingsOk: !hasErrors(settingsResult.diagnostics),
+    invalid: invalidDocs,
     files: discovered.files,
     species,
     diagnostics,
@@ -208,6 +258,9 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     failedFiles,
     timings: { load: tLoad, validate: validateTotal },
   };
+  if (settingsResult.file !== undefined) report.settingsFile = show(settingsResult.file);
+  if (settingsResult.setAt) report.settingsSetAt = settingsResult.setAt;
+  return report;
 }
 
 // ---------------------------------------------------------------------------------------------------------
@@ -234,11 +287,37 @@ export function stageKeys(inputHash: string, species: Species, plan: SpeciesPlan
 
 const errorText = (e: unknown): string => (e instanceof Error ? e.message : String(e));
 
+/** Where a fit check's limit came from, for the message: the settings file (file:line) or a default. */
+export interface LimitSource {
+  settingsFile?: string;
+  settingsSetAt?: (segments: Array<string | number>) => { line: number; column: number } | undefined;
+}
+
+/**
+ * A fit-check diagnostic located at the species (not at an invented field), its message extended by the
+ * settings key that set the limit: "… exceeds the tolerance 1e-06 by …; limit set by tolerances.cp in
+ * db/qforge.yaml:11:17".
+ */
+export function locateFitViolation(d: Diagnostic, tolerances: QuantityTriple, source: LimitSource): Diagnostic {
+  const q = d.path.startsWith('fit.') ? d.path.slice(4) : '';
+  let origin: string;
+  if (q === 'cp' || q === 'h' || q === 's') {
+    const at = source.settingsSetAt?.(['tolerances', q]);
+    if (at && source.settingsFile) origin = `limit set by tolerances.${q} in ${source.settingsFile}:${at.line}:${at.column}`;
+    else if (source.settingsFile) origin = `limit is the default tolerances.${q} = ${tolerances[q]} (not set in ${source.settingsFile})`;
+    else origin = `limit is the default tolerances.${q} = ${tolerances[q]} (the database has no qforge.yaml)`;
+  } else {
+    origin = 'a built-in check of every fit (not a setting)';
+  }
+  return { ...d, path: '', message: `fit check: ${d.message}; ${origin}` };
+}
+
 /** compute → fit → verify (and the table points) of one species, through the cache. */
 export async function buildOneSpecies(
   v: ValidSpecies,
   settings: DatabaseSettings,
   cache: StageCache,
+  limitSource: LimitSource = {},
 ): Promise<SpeciesOutcome> {
   const out: SpeciesOutcome = {
     valid: v,
@@ -302,7 +381,7 @@ export async function buildOneSpecies(
   const violations = verifySpecies(fit, computed.samples, plan.tolerances, fitOptions.continuityOrder, where);
   out.timings.verify = performance.now() - tv;
   if (violations.length) {
-    out.diagnostics.push(...violations);
+    out.diagnostics.push(...violations.map((d) => locateFitViolation(d, plan.tolerances, limitSource)));
     return out;
   }
 
@@ -327,9 +406,19 @@ export async function buildOneSpecies(
 export interface BuildReport {
   exitCode: 0 | 1;
   written: boolean;
+  /** Whether a previous OUT was replaced (it is replaced as a whole). */
+  replaced: boolean;
+  /** Why nothing was written although the settings were valid and --keep-going was given. */
+  notWrittenReason?: string;
   summary: Summary;
   diagnostics: Diagnostic[];
   notes: string[];
+  /** Build-level warnings for the terminal: an unwritable cache, rejected cache entries (one per species). */
+  warnings: string[];
+  /** Names of the failed species (or `file#document` when a document has no name), in summary order. */
+  failed: string[];
+  /** Settings file as shown in messages (undefined: the database has none). */
+  settingsFile?: string;
 }
 
 export type Summary = Record<string, unknown> & {
@@ -339,8 +428,11 @@ export type Summary = Record<string, unknown> & {
 };
 
 interface SummarySpecies {
-  name: string;
+  /** Absent only for a document without a usable name (then `document` tells which one it is). */
+  name?: string;
   file: string;
+  /** 1-based position within the file; given for species that failed validation. */
+  document?: number;
   status: 'ok' | 'failed';
   warnings: string[];
   errors: string[];
@@ -389,7 +481,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
         limit(async () => {
           // Yield between species so progress output and signals are handled during long builds.
           await new Promise((r) => setImmediate(r));
-          const o = await buildOneSpecies(v, settings, cache);
+          const o = await buildOneSpecies(v, settings, cache, check);
           outcomes.set(v.name, o);
           done++;
           const hit = isCacheHit(o);
@@ -431,8 +523,23 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   const speciesDiagnostics = ordered.flatMap((o) => o.diagnostics);
   const allDiagnostics = [...check.diagnostics, ...speciesDiagnostics].sort(compareDiagnostics);
   const failedSpecies = ordered.filter((o) => !o.built);
+  // Nothing good to publish: never replace a previous database with an empty one (also not with --keep-going).
+  let notWrittenReason: string | undefined;
+  if (check.settingsOk && check.files.length > 0 && good.length === 0) {
+    if (opts.keepGoing) notWrittenReason = 'no species succeeded, so --keep-going wrote nothing';
+    if (!hasErrors(allDiagnostics)) {
+      allDiagnostics.push({
+        severity: 'error',
+        file: opts.displayBase ? displayPath(opts.displayBase, opts.dir) : opts.dir,
+        path: '',
+        message: 'the database holds no species',
+        expected: 'at least one species document',
+      });
+    }
+  }
+  allDiagnostics.sort(compareDiagnostics);
   const anyError = !check.settingsOk || hasErrors(allDiagnostics);
-  const mayWrite = check.settingsOk && (!anyError || opts.keepGoing === true) && check.files.length > 0;
+  const mayWrite = check.settingsOk && (!anyError || opts.keepGoing === true) && check.files.length > 0 && good.length > 0;
   const status: Summary['status'] = !anyError ? 'ok' : mayWrite ? 'partial' : 'failed';
 
   const files = new Map<string, string>();
@@ -485,6 +592,36 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     }
     summarySpecies.push(s);
   }
+  for (const inv of check.invalid) {
+    const s: SummarySpecies = {
+      ...(inv.name !== undefined ? { name: inv.name } : {}),
+      file: inv.file,
+      document: inv.document,
+      status: 'failed',
+      warnings: inv.diagnostics.filter((d) => d.severity === 'warning').map(formatDiagnostic),
+      errors: inv.diagnostics.filter((d) => d.severity === 'error').map(formatDiagnostic),
+      cache: {},
+      cache_hit: false,
+      timings_ms: {},
+    };
+    summarySpecies.push(s);
+  }
+  // Name order (unnamed documents last), then file and document: independent of completion order.
+  const nameKey = (x: SummarySpecies) => (x.name === undefined ? '\uffff' : x.name);
+  summarySpecies.sort(
+    (a, b) =>
+      (nameKey(a) < nameKey(b) ? -1 : nameKey(a) > nameKey(b) ? 1 : 0) ||
+      (a.file < b.file ? -1 : a.file > b.file ? 1 : 0) ||
+      (a.document ?? 0) - (b.document ?? 0),
+  );
+  const failedLabels = summarySpecies
+    .filter((x) => x.status === 'failed')
+    .map((x) => x.name ?? `${x.file}#${x.document}`);
+
+  // Cache problems: once per build for an unwritable cache, one line per species for rejected entries.
+  const warnings: string[] = [];
+  if (cache.writeProblem) warnings.push(`cache: not writable: ${cache.dir}: ${cache.writeProblem}; every species is recomputed on each build`);
+  for (const o of ordered) for (const n of o.cacheNotes) warnings.push(`${o.valid.name}: ${n}`);
   // Files whose problems are not tied to a species that validated (syntax errors, invalid documents, …).
   const summaryFiles = [...check.fileDiagnostics.entries()]
     .map(([file, ds]) => ({
@@ -508,13 +645,14 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     written: mayWrite,
     outputs,
     counts: {
-      species: ordered.length,
+      species: ordered.length + check.invalid.length,
       ok: ordered.length - failedSpecies.length,
-      failed: failedSpecies.length,
+      failed: failedSpecies.length + check.invalid.length,
       cache_hits: summarySpecies.filter((s) => s.cache_hit).length,
       files: check.files.length,
       files_failed: check.failedFiles.size,
     },
+    warnings,
     settings_diagnostics: check.diagnostics.filter((d) => path.basename(d.file) === 'qforge.yaml').map(formatDiagnostic),
     species: summarySpecies,
     files: summaryFiles,
@@ -527,15 +665,28 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     },
   };
 
+  let replaced = false;
   if (mayWrite) {
     (summary.timings_ms as Record<string, number>).total = ms(performance.now() - t0);
     validateSummaryJson(summary);
     files.set('summary.json', jsonText(summary));
-    await publishDirectory(opts.out, files, opts.hooks);
+    replaced = (await publishDirectory(opts.out, files, opts.hooks)).replaced;
   } else {
     (summary.timings_ms as Record<string, number>).total = ms(performance.now() - t0);
   }
-  return { exitCode: anyError ? 1 : 0, written: mayWrite, summary, diagnostics: allDiagnostics, notes };
+  const report: BuildReport = {
+    exitCode: anyError ? 1 : 0,
+    written: mayWrite,
+    replaced,
+    summary,
+    diagnostics: allDiagnostics,
+    notes,
+    warnings,
+    failed: failedLabels,
+  };
+  if (notWrittenReason !== undefined && !mayWrite) report.notWrittenReason = notWrittenReason;
+  if (check.settingsFile !== undefined) report.settingsFile = check.settingsFile;
+  return report;
 }
 
 function isCacheHit(o: SpeciesOutcome): boolean {

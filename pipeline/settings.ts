@@ -116,6 +116,11 @@ export interface SettingsResult {
   diagnostics: Diagnostic[];
   /** Line and column of a settings field (e.g. ['references', 'known_deviations', 0]), when known. */
   locate?: (segments: Array<string | number>) => { line?: number; column?: number };
+  /**
+   * Where the file sets exactly this field (e.g. ['tolerances', 'cp']); undefined when the file does not
+   * set it (the default applies) or there is no file.
+   */
+  setAt?: (segments: Array<string | number>) => { line: number; column: number } | undefined;
 }
 
 /** Cross-field rules the schema cannot express; all problems at once. */
@@ -129,8 +134,12 @@ export function checkSettingsRules(s: DatabaseSettings, file: string, doc?: Load
   if (!(low < mid && mid < high)) {
     push(['temperature_ranges'], 'temperature ranges out of order', { low, mid, high }, 'low < mid < high');
   }
-  if (!(low <= T_REF && T_REF <= mid)) {
+  // Point at the bound that is on the wrong side of 298.15 K (both, when both are).
+  if (!(low <= T_REF)) {
     push(['temperature_ranges', 'low'], `the low range must contain ${T_REF} K (H and S are anchored there)`, low, `low ≤ ${T_REF} ≤ mid`);
+  }
+  if (!(T_REF <= mid)) {
+    push(['temperature_ranges', 'mid'], `the low range must contain ${T_REF} K (H and S are anchored there)`, mid, `low ≤ ${T_REF} ≤ mid`);
   }
   const om = s.fit.optimise_mid;
   if (om !== false) {
@@ -246,5 +255,14 @@ export async function loadSettings(dir: string, displayDir = dir): Promise<Setti
   const rules = checkSettingsRules(settings, display, doc);
   diagnostics.push(...rules);
   if (rules.length) return { settings: withDefaults({}), file: display, diagnostics };
-  return { settings, file: display, diagnostics, locate: (segments) => locate(doc, segments) };
+  const setAt = (segments: Array<string | number>) => {
+    let v: unknown = doc.value;
+    for (const k of segments) {
+      if (v === null || typeof v !== 'object' || !Object.prototype.hasOwnProperty.call(v, k)) return undefined;
+      v = (v as Record<string | number, unknown>)[k];
+    }
+    const loc = doc.locate(segments);
+    return loc ? { line: loc.line, column: loc.column } : undefined;
+  };
+  return { settings, file: display, diagnostics, locate: (segments) => locate(doc, segments), setAt };
 }

@@ -2,6 +2,7 @@
  * `qforge table FILE`: one species' standard properties straight from its partition functions (no fit).
  * CSV header (exact): T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol],H [kJ/mol],G [kJ/mol]
  */
+import { stat } from 'node:fs/promises';
 import { STANDARD_PRESSURE_ATM, STANDARD_PRESSURE_BAR } from '../src/constants.js';
 import type { StandardProperties } from '../src/model.js';
 import { createThermoEvaluator } from '../src/thermo/evaluator.js';
@@ -86,6 +87,20 @@ export async function tableCommand(
     io.stderr.write(`qforge: error: ${(e as Error).message}\n`);
     return 2;
   }
+  // A FILE that is not there (or is a folder) is a bad path argument: usage, exit 2, like diff and compare.
+  try {
+    if ((await stat(file)).isDirectory()) {
+      io.stderr.write(`qforge: error: ${fileLabel} is a folder, not a species file\n`);
+      return 2;
+    }
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    if (code === 'ENOENT' || code === 'ENOTDIR') {
+      io.stderr.write(`qforge: error: ${fileLabel}: no such file\n`);
+      return 2;
+    }
+    // Other problems (permissions, …) are reported by the loader with the OS reason.
+  }
   const loaded = await loadYamlFile(file, fileLabel);
   const diagnostics = [...loaded.diagnostics];
   if (hasErrors(diagnostics)) {
@@ -97,8 +112,9 @@ export async function tableCommand(
   if (o.name !== undefined) {
     doc = loaded.documents.find((_, i) => names[i] === o.name);
     if (!doc) {
+      // A usage error like a missing --name: the command line names something the file does not hold.
       io.stderr.write(`qforge: error: no species named '${o.name}' in ${fileLabel} (it holds: ${names.map(String).join(', ') || 'none'})\n`);
-      return 1;
+      return 2;
     }
   } else if (loaded.documents.length > 1) {
     io.stderr.write(`qforge: error: ${fileLabel} holds ${loaded.documents.length} species (${names.map(String).join(', ')}); choose one with --name\n`);

@@ -4,7 +4,7 @@
  * (hash of the output folder before and after). Species data in the cases are invented for the tests
  * unless a source is named.
  */
-import { mkdir, readFile, symlink, writeFile } from 'node:fs/promises';
+import { cp, mkdir, readFile, symlink, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { hashFolder, runCli, tempWorkspace } from './helpers.js';
@@ -187,7 +187,31 @@ const CASES: BadCase[] = [
     name: 'settings: fit tolerance tighter than the form allows (fit check fails the species)',
     setup: editSettings('tolerances: {cp: 0.1,', 'tolerances: {cp: 0.000001,'),
     code: 1,
-    expect: [/N2\.yaml:\d+:\d+: error: \[N2\] fit\.cp/, /Cp\/R fit error/, /exceeds the tolerance/],
+    // Reported at the species (its name line), naming the setting that set the limit and where.
+    expect: [
+      /N2\.yaml:2:7: error: \[N2\] fit check: Cp\/R fit error [\d.]+ at \d+ K \((low|high) range [\d–]+ K\) exceeds the tolerance 1\.000e-6/,
+      /limit set by tolerances\.cp in db\/qforge\.yaml:11:\d+/,
+      // Ar's Cp is exactly 5/2 R (NIST-JANAF 4th ed. Ar-001), so its fit meets any tolerance.
+      /build failed \(4 species failed: CO, H2O, N2, O\)/,
+    ],
+  },
+  {
+    name: '--keep-going with no good species: the previous database is kept, not replaced by an empty one',
+    setup: async (ws) => {
+      for (const f of ['Ar', 'CO', 'H2O', 'N2', 'O']) {
+        const p = path.join(ws.db, `${f}.yaml`);
+        await writeFile(p, (await readFile(p, 'utf8')).replace('sources:', 'sourcez:'));
+      }
+    },
+    argv: ['build', 'db', '--out', 'out', '--keep-going'],
+    code: 1,
+    expect: [/5 species failed: Ar, CO, H2O, N2, O/, /no species succeeded, so --keep-going wrote nothing/, /out left unchanged/],
+  },
+  {
+    name: 'settings: midpoint below 298.15 K points at mid, not low',
+    setup: editSettings('mid: 1000', 'mid: 250'),
+    code: 1,
+    expect: [/qforge\.yaml:5:\d+: error: temperature_ranges\.mid: the low range must contain 298\.15 K/, /got 250/, /1 error\(s\) in the settings file db\/qforge\.yaml/],
   },
   // references.known_deviations (fixture qforge.yaml: the entry starts on line 17). A settings error stops
   // the build and compare alike; the species and tolerances are those of the fixture (NIST-JANAF 4th ed.
@@ -264,11 +288,41 @@ const CASES: BadCase[] = [
     expect: [/no-such-db: no such folder/],
   },
   {
+    name: 'usage: database folder inside the output folder (would be deleted by the swap)',
+    setup: async (ws) => cp(ws.db, path.join(ws.out, 'db'), { recursive: true }),
+    argv: ['build', 'out/db', '--out', 'out'],
+    code: 2,
+    expect: [/the database folder out\/db is inside the output folder out/, /choose an --out outside/],
+  },
+  {
+    name: 'usage: output folder that lies below a regular file (ENOTDIR, no stack trace)',
+    setup: async (ws) => writeFile(path.join(ws.root, 'plain.txt'), 'a file'),
+    argv: ['build', 'db', '--out', 'plain.txt/x'],
+    code: 2,
+    expect: [/qforge: error: cannot use the output folder plain\.txt\/x: \w+ '.*plain\.txt.*': ENOTDIR \(not a directory\)/],
+  },
+  {
+    name: 'usage: a file the user put into a qforge output folder',
+    setup: async (ws) => writeFile(path.join(ws.out, 'my-notes.txt'), 'keep me'),
+    code: 2,
+    expect: [/output folder out holds an entry qforge did not write \(my-notes\.txt\)/, /move it elsewhere/],
+  },
+  {
     name: 'usage: output folder not written by qforge',
+    setup: async (ws) => {
+      await mkdir(path.join(ws.root, 'mine'));
+      await writeFile(path.join(ws.root, 'mine', 'precious.txt'), 'keep me');
+    },
+    argv: ['build', 'db', '--out', 'mine'],
+    code: 2,
+    expect: [/output folder mine is not empty and was not written by qforge/],
+  },
+  {
+    name: 'usage: the output folder is the parent of the database folder',
     setup: async (ws) => writeFile(path.join(ws.root, 'precious.txt'), 'keep me'),
     argv: ['build', 'db', '--out', '.'],
     code: 2,
-    expect: [/not written by qforge/],
+    expect: [/the database folder db is inside the output folder \./],
   },
 ];
 
@@ -291,14 +345,16 @@ describe('bad inputs: exit code, located message, outputs untouched', () => {
       try {
         const first = await runCli(['build', 'db', '--out', 'out', '--quiet'], ws.root);
         expect(first.code, first.stderr).toBe(0);
-        const before = await hashFolder(ws.out);
+        // After the setup: some cases put something into out/ themselves (a user's file, a database).
         await c.setup(ws);
+        const before = await hashFolder(ws.out);
         const r = await runCli(c.argv ?? ['build', 'db', '--out', 'out'], ws.root);
         expect(r.code, r.stderr).toBe(c.code);
         for (const e of c.expect) expect(r.stderr).toMatch(e);
         expect(r.stderr).not.toMatch(/internal error/);
         expect(await hashFolder(ws.out)).toBe(before);
         if (c.argv?.includes('.')) expect(await readFile(path.join(ws.root, 'precious.txt'), 'utf8')).toBe('keep me');
+        if (c.argv?.includes('mine')) expect(await readFile(path.join(ws.root, 'mine', 'precious.txt'), 'utf8')).toBe('keep me');
       } finally {
         await ws.cleanup();
       }

@@ -2,7 +2,9 @@
  * A build killed at any moment leaves either the previous complete outputs or the new complete ones
  * (pipeline/atomic-write.ts). The CLI is spawned as a real process (dist/, built by `npm test`) and
  * killed at test hooks placed right before the folder swap and between its two renames, and at an
- * arbitrary point mid-way through the species. Holds no reference values (no source to name).
+ * arbitrary point mid-way through the species. The hooks are test-only: they need QFORGE_TEST=1 as well
+ * as QFORGE_TEST_PAUSE (pipeline/cli.ts), which the last test checks. Holds no reference values (no
+ * source to name).
  */
 import { spawn } from 'node:child_process';
 import { execFileSync } from 'node:child_process';
@@ -52,7 +54,7 @@ describe('interrupted builds', () => {
         expect((await runCli(['build', 'db', '--out', 'out', '--quiet'], ws.root)).code).toBe(0);
         const before = await hashFolder(ws.out);
         await changeOneSpecies(ws.db);
-        const r = await killedBuild(ws.root, { QFORGE_TEST_PAUSE: 'before-swap' }, /test pause before-swap/, signal);
+        const r = await killedBuild(ws.root, { QFORGE_TEST: '1', QFORGE_TEST_PAUSE: 'before-swap' }, /test pause before-swap/, signal);
         expect(r.stderr).toMatch(/test pause before-swap/);
         expect(r.code === 0).toBe(false);
         if (signal !== 'SIGKILL') expect(r.stderr).toMatch(new RegExp(`${signal}: build interrupted`));
@@ -76,7 +78,7 @@ describe('interrupted builds', () => {
       expect((await runCli(['build', 'db', '--out', 'out', '--quiet'], ws.root)).code).toBe(0);
       const before = await hashFolder(ws.out);
       await changeOneSpecies(ws.db);
-      const r = await killedBuild(ws.root, { QFORGE_TEST_PAUSE: 'mid-swap' }, /test pause mid-swap/, 'SIGKILL');
+      const r = await killedBuild(ws.root, { QFORGE_TEST: '1', QFORGE_TEST_PAUSE: 'mid-swap' }, /test pause mid-swap/, 'SIGKILL');
       expect(r.signal).toBe('SIGKILL');
       expect(existsSync(ws.out)).toBe(false);
       expect(await hashFolder(path.join(ws.root, '.out.qforge-old'))).toBe(before);
@@ -87,6 +89,20 @@ describe('interrupted builds', () => {
       const notes = await recoverOutputDir(ws.out);
       expect(notes.join('\n')).toMatch(/restored the previous outputs/);
       expect(await hashFolder(ws.out)).toBe(before);
+    } finally {
+      await ws.cleanup();
+    }
+  });
+
+  it('QFORGE_TEST_PAUSE alone (without QFORGE_TEST=1) never pauses a build', async () => {
+    const ws = await tempWorkspace();
+    try {
+      const r = await runCli(['build', 'db', '--out', 'out'], ws.root, { QFORGE_TEST_PAUSE: 'before-swap' });
+      expect(r.code, r.stderr).toBe(0);
+      expect(r.stderr).not.toMatch(/test pause/);
+      const m = await runCli(['build', 'db', '--out', 'out'], ws.root, { QFORGE_TEST: '0', QFORGE_TEST_PAUSE: 'mid-swap' });
+      expect(m.code, m.stderr).toBe(0);
+      expect(m.stderr).not.toMatch(/test pause/);
     } finally {
       await ws.cleanup();
     }

@@ -5,7 +5,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { TABLE_CSV_HEADER, tableTemperatures } from '../../pipeline/table.js';
-import { FIXTURE_DB, runCli } from './helpers.js';
+import path from 'node:path';
+import { FIXTURE_DB, REPO, runCli } from './helpers.js';
 
 describe('qforge table', () => {
   it('prints the exact CSV header and JANAF-grade N2 values', async () => {
@@ -40,13 +41,22 @@ describe('qforge table', () => {
     expect(tableTemperatures('1000,200', '200:200:1')).toEqual([200, 1000]);
   });
 
-  it('usage errors exit 2, input errors exit 1', async () => {
+  it('usage errors exit 2 (bad options, a wrong --name, a missing FILE), input errors exit 1', async () => {
     expect((await runCli(['table', 'N2.yaml', '--range', '200:100'], FIXTURE_DB)).code).toBe(2);
     expect((await runCli(['table', 'N2.yaml', '--at', '-5'], FIXTURE_DB)).code).toBe(2);
     expect((await runCli(['table', 'N2.yaml', '--format', 'xml'], FIXTURE_DB)).code).toBe(2);
-    const missing = await runCli(['table', 'N2.yaml', '--name', 'O2'], FIXTURE_DB);
-    expect(missing.code).toBe(1);
-    expect(missing.stderr).toMatch(/no species named 'O2'/);
-    expect((await runCli(['table', 'nope.yaml'], FIXTURE_DB)).stderr).toMatch(/nope\.yaml: error: file not found/);
+    const wrongName = await runCli(['table', 'N2.yaml', '--name', 'O2'], FIXTURE_DB);
+    expect(wrongName.code).toBe(2);
+    expect(wrongName.stderr).toMatch(/no species named 'O2'/);
+    const multi = path.join(REPO, 'test/fixtures/input/multi.yaml');
+    expect((await runCli(['table', multi], FIXTURE_DB)).code).toBe(2);
+    expect((await runCli(['table', multi, '--name', 'Xe'], FIXTURE_DB)).code).toBe(2);
+    const missing = await runCli(['table', 'nope.yaml'], FIXTURE_DB);
+    expect(missing.code).toBe(2);
+    expect(missing.stderr).toMatch(/nope\.yaml: no such file/);
+    expect((await runCli(['table', 'reference'], FIXTURE_DB)).code).toBe(2);
+    // An input error in an existing file stays 1.
+    const bad = await runCli(['table', 'qforge.yaml'], FIXTURE_DB);
+    expect(bad.code).toBe(1);
   });
 });

@@ -8,7 +8,11 @@
  *     accepted units: Cp and S in J/(mol K) or cal/(mol K); H-H298 in kJ/mol, J/mol or kcal/mol; T in K;
  *   - an optional `species` column; without it, the file name without `.csv` is the species name
  *     (so `N2.csv` holds N2), which lets published tables be dropped in one per file;
- *   - lines starting with '#' are comments (name the source there); empty cells mean "no value".
+ *   - lines starting with '#' are comments (name the source there); empty cells mean "no value";
+ *   - every header cell must be one of these: an unrecognised one (`Cp (J/mol/K)`, `Cv [J/(mol K)]`, an
+ *     empty cell), a property without a unit in brackets, or a header with no property column at all is an
+ *     error naming the file, the header line and the column, with what is accepted. Units are never guessed;
+ *   - messages give the line of the file (comment and blank lines counted), e.g. `N2.csv:5: ...`.
  * 80-column files: every record whose name is in the build is compared on a 100 K grid (plus 298.15 K
  * and the ends) over the common temperature range.
  *
@@ -25,13 +29,21 @@
  * plain check. Entries naming a species absent from the build, covering no compared value, or no longer
  * needed (all their values within the normal tolerance) are warnings, so stale exceptions get removed.
  */
-import { readFile, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { parseString } from 'fast-csv';
 import { T_REF } from '../src/constants.js';
 import type { CliIo } from './cli.js';
 import { formatDiagnostic } from './diagnostics.js';
-import { polynomialProperties, readPolynomialSet, ReadBuildError, ReadBuildUsageError, type PolynomialSet } from './read-build.js';
+import {
+  formatFixed,
+  formatSigned,
+  polynomialProperties,
+  polynomialSetFromText,
+  readInputFile,
+  readPolynomialSet,
+  ReadBuildError,
+  type PolynomialSet,
+} from './read-build.js';
 import { DEFAULT_SETTINGS, loadSettings, type KnownDeviation, type QuantityTriple } from './settings.js';
 import { displayPath } from './display-path.js';
 
@@ -63,80 +75,147 @@ export class ReferenceError extends Error {
   }
 }
 
-type Column = { kind: 'T' } | { kind: 'species' } | { kind: RefQuantity; factor: number } | { kind: 'ignore' };
+type Column = { kind: 'T' } | { kind: 'species' } | { kind: RefQuantity; factor: number };
 
-function parseHeaderCell(cell: string, file: string): Column {
+const PROPERTY_NAMES: Record<string, RefQuantity> = { Cp: 'cp', S: 's', 'H-H298': 'h', 'H-H(298.15)': 'h', 'H-H298.15': 'h' };
+const ACCEPTED_HEADERS =
+  `accepted headers: 'T [K]'; 'Cp [unit]' and 'S [unit]' with unit ${Object.keys(ENTROPY_UNITS).join(' | ')}; ` +
+  `'H-H298 [unit]' with unit ${Object.keys(ENTHALPY_UNITS).join(' | ')}; optional 'species' (or 'name')`;
+const EXAMPLE_HEADER = 'T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol]';
+
+/**
+ * One header cell → its column, or a message saying why it is refused. Every cell must be recognised: a
+ * column we silently skipped could be the one the user meant to check (`Cp (J/mol/K)` once meant a Cp
+ * column nobody compared). Units are never guessed.
+ */
+function parseHeaderCell(cell: string): Column | string {
   const c = cell.trim();
+  if (c === '') return `empty header; every column needs one (${ACCEPTED_HEADERS})`;
   if (/^(species|name)$/i.test(c)) return { kind: 'species' };
-  const m = /^(T|Cp|S|H-H298|H-H\(298\.15\)|H-H298\.15)\s*\[(.+)\]$/.exec(c);
-  if (!m) {
-    if (/^(T|Cp|S|H-H298)$/.test(c)) throw new ReferenceError(`${file}: column '${c}' has no unit; expected e.g. '${c} [${c === 'T' ? 'K' : c === 'H-H298' ? 'kJ/mol' : 'J/(mol K)'}]'`);
-    return { kind: 'ignore' };
+  const m = /^(\S+?)\s*\[(.*)\]$/.exec(c);
+  const what = m ? m[1]! : c;
+  const unit = m ? m[2]!.trim() : undefined;
+  const q = PROPERTY_NAMES[what];
+  const paren = /^(\S+?)\s*\((.*)\)$/.exec(c);
+  if (!m && paren && (paren[1] === 'T' || PROPERTY_NAMES[paren[1]!] !== undefined)) {
+    const name = paren[1]!;
+    return `header '${c}' has no unit in square brackets (a unit in parentheses is not read); units are never guessed: write e.g. '${name} [${name === 'T' ? 'K' : PROPERTY_NAMES[name] === 'h' ? 'kJ/mol' : 'J/(mol K)'}]'`;
   }
-  const what = m[1]!;
-  const unit = m[2]!.trim();
-  if (what === 'T') {
-    if (unit !== 'K') throw new ReferenceError(`${file}: column '${c}': temperatures must be in K`);
-    return { kind: 'T' };
+  if (what !== 'T' && q === undefined) {
+    const looksLike = /^(t|cp|s|h)\b/i.test(c);
+    return `header '${c}' is not recognised${looksLike ? ' (names are case-sensitive and units go in square brackets)' : ''}; ${ACCEPTED_HEADERS}`;
   }
-  if (what === 'Cp' || what === 'S') {
-    const f = ENTROPY_UNITS[unit];
-    if (f === undefined) throw new ReferenceError(`${file}: column '${c}': unknown unit '${unit}'; expected one of ${Object.keys(ENTROPY_UNITS).join(', ')}`);
-    return { kind: what === 'Cp' ? 'cp' : 's', factor: f };
+  if (unit === undefined) {
+    return `header '${c}' has no unit; units are never guessed: write e.g. '${what} [${what === 'T' ? 'K' : q === 'h' ? 'kJ/mol' : 'J/(mol K)'}]'`;
   }
-  const f = ENTHALPY_UNITS[unit];
-  if (f === undefined) throw new ReferenceError(`${file}: column '${c}': unknown unit '${unit}'; expected one of ${Object.keys(ENTHALPY_UNITS).join(', ')}`);
-  return { kind: 'h', factor: f };
+  if (what === 'T') return unit === 'K' ? { kind: 'T' } : `header '${c}': temperatures must be in K, as 'T [K]'`;
+  const units = q === 'h' ? ENTHALPY_UNITS : ENTROPY_UNITS;
+  const f = units[unit];
+  if (f === undefined) return `header '${c}': unknown unit '${unit}'; expected one of ${Object.keys(units).join(', ')}`;
+  return { kind: q!, factor: f };
 }
 
 async function csvRows(text: string): Promise<string[][]> {
   return new Promise((resolve, reject) => {
     const rows: string[][] = [];
-    parseString(text, { headers: false, comment: '#', ignoreEmpty: true, trim: true })
+    parseString(text, { headers: false, ignoreEmpty: false, trim: true })
       .on('error', reject)
       .on('data', (r: string[]) => rows.push(r))
       .on('end', () => resolve(rows));
   });
 }
 
-/** Parses a reference CSV table (see the module comment for the layout). */
+const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+/** At most this many bad rows are listed in one error (the count says how many there were). */
+const MAX_LISTED_ROW_ERRORS = 20;
+
+/**
+ * Parses a reference CSV table (see the module comment for the layout). Messages carry the FILE line
+ * (`N2.csv:5: ...`, counting comment and blank lines); all header problems, and up to 20 bad data rows,
+ * are reported at once.
+ */
 export async function parseReferenceCsv(text: string, file: string): Promise<ReferenceTable> {
+  // Comment and blank lines are dropped here rather than by the CSV reader, so every row keeps its line.
+  const lines: Array<{ no: number; text: string }> = [];
+  text
+    .replace(/^\uFEFF/, '')
+    .split(/\r\n|\n|\r/)
+    .forEach((t, i) => {
+      if (t.trim() !== '' && !t.trimStart().startsWith('#')) lines.push({ no: i + 1, text: t });
+    });
   let rows: string[][];
   try {
-    rows = await csvRows(text);
+    rows = await csvRows(lines.map((l) => l.text).join('\n'));
   } catch (e) {
     throw new ReferenceError(`${file}: not a readable CSV file (${(e as Error).message})`);
   }
-  const header = rows[0];
-  if (!header) throw new ReferenceError(`${file}: no header row; expected e.g. 'T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol]'`);
-  const cols = header.map((h) => parseHeaderCell(h, file));
-  const tCol = cols.findIndex((c) => c.kind === 'T');
-  if (tCol < 0) throw new ReferenceError(`${file}: no 'T [K]' column in the header`);
-  if (!cols.some((c) => c.kind === 'cp' || c.kind === 's' || c.kind === 'h')) {
-    throw new ReferenceError(`${file}: no Cp, S or H-H298 column in the header`);
+  if (rows.length !== lines.length) {
+    throw new ReferenceError(`${file}: a quoted cell spans several lines; reference tables take one row per line`);
   }
-  const sCol = cols.findIndex((c) => c.kind === 'species');
+  const header = rows[0];
+  const headerLine = lines[0]?.no ?? 1;
+  if (!header) throw new ReferenceError(`${file}:1: no header row; expected e.g. '${EXAMPLE_HEADER}'`);
+  const parsed = header.map((h) => parseHeaderCell(h));
+  const problems: string[] = [];
+  parsed.forEach((c, j) => {
+    if (typeof c === 'string') problems.push(`${file}:${headerLine}: column ${j + 1}: ${c}`);
+  });
+  const cols = parsed.map((c) => (typeof c === 'string' ? undefined : c));
+  const kinds = cols.map((c) => c?.kind);
+  kinds.forEach((k, j) => {
+    if (k !== undefined && kinds.indexOf(k) !== j) problems.push(`${file}:${headerLine}: column ${j + 1}: header '${header[j]}' repeats column ${kinds.indexOf(k) + 1} (each quantity once)`);
+  });
+  if (problems.length === 0) {
+    if (!kinds.includes('T')) problems.push(`${file}:${headerLine}: no 'T [K]' column in the header; expected e.g. '${EXAMPLE_HEADER}'`);
+    if (!kinds.some((k) => k === 'cp' || k === 's' || k === 'h')) {
+      problems.push(`${file}:${headerLine}: no property column (Cp, S or H-H298 with a unit) in the header, so nothing can be compared; expected e.g. '${EXAMPLE_HEADER}'`);
+    }
+  }
+  if (problems.length) throw new ReferenceError(problems.join('\n'));
+
+  const tCol = kinds.indexOf('T');
+  const sCol = kinds.indexOf('species');
   const fallbackName = path.basename(file).replace(/\.csv$/i, '');
   const species = new Map<string, ReferenceRow[]>();
+  const rowErrors: string[] = [];
   rows.slice(1).forEach((r, i) => {
-    const lineNo = i + 2;
-    const T = Number(r[tCol]);
-    if (!(Number.isFinite(T) && T > 0)) throw new ReferenceError(`${file}: data row ${lineNo}: T = '${r[tCol] ?? ''}' is not a temperature in K`);
+    const where = `${file}:${lines[i + 1]!.no}`;
+    if (r.every((cell) => cell.trim() === '')) return;
+    if (r.length > header.length && r.slice(header.length).some((cell) => cell.trim() !== '')) {
+      rowErrors.push(`${where}: ${r.length} cells but the header has ${header.length} columns`);
+      return;
+    }
+    const tText = (r[tCol] ?? '').trim();
+    const T = DECIMAL.test(tText) ? Number(tText) : NaN;
+    if (!(Number.isFinite(T) && T > 0)) {
+      rowErrors.push(`${where}: T = '${tText}' is not a temperature in K`);
+      return;
+    }
     const name = sCol >= 0 ? (r[sCol] ?? '').trim() : fallbackName;
-    if (!name) throw new ReferenceError(`${file}: data row ${lineNo}: empty species name`);
+    if (!name) {
+      rowErrors.push(`${where}: empty species name`);
+      return;
+    }
     const row: ReferenceRow = { T };
     cols.forEach((c, j) => {
-      if (c.kind !== 'cp' && c.kind !== 's' && c.kind !== 'h') return;
+      if (!c || (c.kind !== 'cp' && c.kind !== 's' && c.kind !== 'h')) return;
       const cell = (r[j] ?? '').trim();
       if (cell === '') return;
-      const v = Number(cell);
-      if (!Number.isFinite(v)) throw new ReferenceError(`${file}: data row ${lineNo}: ${header[j]} = '${cell}' is not a number`);
+      const v = DECIMAL.test(cell) ? Number(cell) : NaN;
+      if (!Number.isFinite(v)) {
+        rowErrors.push(`${where}: ${header[j]} = '${cell}' is not a number`);
+        return;
+      }
       row[c.kind] = v * c.factor;
     });
     const list = species.get(name) ?? [];
     list.push(row);
     species.set(name, list);
   });
+  if (rowErrors.length) {
+    const more = rowErrors.length > MAX_LISTED_ROW_ERRORS ? `\n(${rowErrors.length - MAX_LISTED_ROW_ERRORS} more bad row(s) not listed)` : '';
+    throw new ReferenceError(rowErrors.slice(0, MAX_LISTED_ROW_ERRORS).join('\n') + more);
+  }
   return { file, species };
 }
 
@@ -365,10 +444,10 @@ function limitsText(t: Partial<QuantityTriple>): string {
     .join(', ');
 }
 
-const signed = (x: number, d: number) => `${x >= 0 ? '+' : ''}${x.toFixed(d)}`;
+const signed = formatSigned;
 
 export function describeBreach(d: Deviation, report?: CompareReport): string {
-  const head = `${d.species} ${LABEL[d.quantity]} at ${d.T} K: build ${d.buildValue.toFixed(4)} vs reference ${d.referenceValue.toFixed(4)} ${UNIT[d.quantity]} (${d.reference}): deviation ${signed(d.deviation, 4)}`;
+  const head = `${d.species} ${LABEL[d.quantity]} at ${d.T} K: build ${formatFixed(d.buildValue, 4)} vs reference ${formatFixed(d.referenceValue, 4)} ${UNIT[d.quantity]} (${d.reference}): deviation ${signed(d.deviation, 4)}`;
   const k = d.knownDeviation !== undefined ? report?.knownDeviations[d.knownDeviation] : undefined;
   if (k && d.widenedTolerance !== undefined && !within(d.deviation, d.widenedTolerance)) {
     return `${head} exceeds even the widened tolerance ${d.widenedTolerance} ${UNIT[d.quantity]} of the known deviation at ${k.recordedAt}`;
@@ -418,7 +497,7 @@ export function renderCompareText(r: CompareReport): string {
               : '  <-- beyond tolerance'
             : '';
       lines.push(
-        `  ${String(d.T).padStart(10)}   ${LABEL[d.quantity].padEnd(8)} ${d.referenceValue.toFixed(4).padStart(10)} ${d.buildValue.toFixed(4).padStart(10)} ${signed(d.deviation, 4).padStart(10)}${mark}`,
+        `  ${String(d.T).padStart(10)}   ${LABEL[d.quantity].padEnd(8)} ${formatFixed(d.referenceValue, 4).padStart(10)} ${formatFixed(d.buildValue, 4).padStart(10)} ${signed(d.deviation, 4).padStart(10)}${mark}`,
       );
     }
   }
@@ -443,13 +522,10 @@ export function compareSummaryLine(r: CompareReport): string {
 }
 
 async function loadReference(p: { path: string; label: string }, build: PolynomialSet): Promise<ReferenceTable> {
-  try {
-    if (!(await stat(p.path)).isFile()) throw new Error();
-  } catch {
-    throw new ReadBuildUsageError(`reference ${p.label}: no such file`);
-  }
-  if (/\.csv$/i.test(p.path)) return parseReferenceCsv(await readFile(p.path, 'utf8'), p.label);
-  return referenceFromPolynomials(await readPolynomialSet(p.path, p.label), build);
+  // Missing, a folder, unreadable, too large: readInputFile's clean errors (exit 2 or 1).
+  const text = await readInputFile(p.path, p.label, 'reference');
+  if (/\.csv$/i.test(p.path)) return parseReferenceCsv(text, p.label);
+  return referenceFromPolynomials(polynomialSetFromText(text, p.label), build);
 }
 
 export async function compareCommand(

@@ -8,13 +8,26 @@
  * coefficients moved" (e.g. a refit that lands on an equivalent polynomial, or the E15.8 rounding of an
  * 80-column file against full-precision JSON). The thresholds sit far below any tolerance a thermo table
  * is quoted to (NIST-JANAF prints 0.001) and far above the rounding of the 80-column layout (8 digits).
+ *
+ * Like with like: when one side is an 80-column file and the other a build folder, the folder's nasa7.txt
+ * is read instead of its thermo.json, so a build compared with its own nasa7.txt shows no change (the
+ * thermo.json coefficients are full precision, the records hold 9 digits: every species would otherwise
+ * count as changed). When that is impossible (a thermo.json given as a file, or a folder without
+ * nasa7.txt) the comparison is "mixed precision": a species with the same ranges whose Cp, H and S agree
+ * within ROUNDING_TOLERANCE everywhere on the grid counts as unchanged, and the report says so in `notes`.
  */
 import { T_REF } from '../src/constants.js';
 import type { Nasa7Polynomial } from '../src/nasa7/types.js';
 import type { CliIo } from './cli.js';
-import { polynomialProperties, readPolynomialSet, ReadBuildError, type PolynomialSet, type Properties } from './read-build.js';
+import { formatFixed, polynomialProperties, readPolynomialSet, ReadBuildError, type PolynomialSet, type Properties } from './read-build.js';
 
 export const PROPERTY_CHANGE_THRESHOLDS = Object.freeze({ cp: 1e-3, h: 1e-3, s: 1e-3 });
+/**
+ * Largest property difference (J/(mol K); kJ/mol for H) that 9-digit rounding of the coefficients can
+ * cause: about 1e-8 relative in Cp/R, H/RT, S/R (see src/nasa7/round.ts), i.e. < 1e-6 J/(mol K) and
+ * < 1e-6 kJ/mol at 6000 K; 1e-5 leaves a margin and is still 100 times below PROPERTY_CHANGE_THRESHOLDS.
+ */
+export const ROUNDING_TOLERANCE = 1e-5;
 export const DIFF_GRID_STEP = 10;
 
 type Q = 'cp' | 'h' | 's';
@@ -46,6 +59,16 @@ export interface DiffReport {
   removed: string[];
   unchanged: string[];
   changed: SpeciesChange[];
+  /** How the two sides were read when that matters (e.g. a folder's nasa7.txt instead of its thermo.json). */
+  notes: string[];
+}
+
+export interface DiffOptions {
+  /**
+   * One side holds full-precision coefficients and the other 9-digit records: same ranges and properties
+   * within ROUNDING_TOLERANCE count as unchanged.
+   */
+  mixedPrecision?: boolean;
 }
 
 const sameNumbers = (a: readonly number[], b: readonly number[]) => a.length === b.length && a.every((x, i) => Object.is(x, b[i]) || x === b[i]);
@@ -94,7 +117,17 @@ export function compareSpecies(name: string, a: Nasa7Polynomial, b: Nasa7Polynom
   return change;
 }
 
-export function diffSets(a: PolynomialSet, b: PolynomialSet): DiffReport {
+/** Same ranges, and Cp, H, S within ROUNDING_TOLERANCE at every grid point. */
+function sameWithinRounding(a: Nasa7Polynomial, b: Nasa7Polynomial): boolean {
+  if (a.tLow !== b.tLow || a.tMid !== b.tMid || a.tHigh !== b.tHigh) return false;
+  return diffGrid(a.tLow, a.tHigh).every((T) => {
+    const pa = polynomialProperties(a, T);
+    const pb = polynomialProperties(b, T);
+    return QS.every((q) => Math.abs(pb[q] - pa[q]) <= ROUNDING_TOLERANCE);
+  });
+}
+
+export function diffSets(a: PolynomialSet, b: PolynomialSet, options: DiffOptions = {}): DiffReport {
   const names = (s: PolynomialSet) => [...s.species.keys()];
   const sort = (xs: string[]) => xs.sort((x, y) => (x < y ? -1 : x > y ? 1 : 0));
   const report: DiffReport = {
@@ -104,23 +137,27 @@ export function diffSets(a: PolynomialSet, b: PolynomialSet): DiffReport {
     removed: sort(names(a).filter((n) => !b.species.has(n))),
     unchanged: [],
     changed: [],
+    notes: [],
   };
   for (const name of sort(names(a).filter((n) => b.species.has(n)))) {
     const x = a.species.get(name)!;
     const y = b.species.get(name)!;
-    if (samePolynomial(x.polynomial, y.polynomial)) report.unchanged.push(name);
+    const same = options.mixedPrecision ? sameWithinRounding(x.polynomial, y.polynomial) : samePolynomial(x.polynomial, y.polynomial);
+    if (same) report.unchanged.push(name);
     else report.changed.push(compareSpecies(name, x.polynomial, y.polynomial, [x.inputHash, y.inputHash]));
   }
   return report;
 }
 
-const num = (x: number, d = 4) => (Number.isFinite(x) ? x.toFixed(d) : String(x));
-const sci = (x: number) => (x === 0 ? '0' : x < 1e-3 ? x.toExponential(2) : x.toFixed(4));
+const num = (x: number, d = 4) => formatFixed(x, d);
+// Magnitudes (never negative): tiny ones in exponent form so a 1e-7 change does not print as 0.0000.
+const sci = (x: number) => (x === 0 ? '0' : x < 1e-3 ? x.toExponential(2) : formatFixed(x, 4));
 
 export function renderDiffText(r: DiffReport): string {
   const lines: string[] = [
     `qforge diff ${r.old} -> ${r.new}: ${r.added.length} added, ${r.removed.length} removed, ${r.changed.length} changed, ${r.unchanged.length} unchanged`,
   ];
+  for (const n of r.notes) lines.push(`note: ${n}`);
   for (const n of r.added) lines.push(`+ ${n}  (added)`);
   for (const n of r.removed) lines.push(`- ${n}  (removed)`);
   for (const c of r.changed) {
@@ -166,15 +203,42 @@ export function gateBreaches(r: DiffReport, limits: { cp?: number; h?: number; s
   return [...new Set(out)];
 }
 
+/**
+ * Reads both sides and diffs them like with like: a build folder facing an 80-column file is read from its
+ * nasa7.txt; when only full precision is available on one side the comparison is mixed precision.
+ */
+export async function readAndDiff(paths: { old: string; new: string; oldLabel: string; newLabel: string }): Promise<DiffReport> {
+  let [a, b] = await Promise.all([readPolynomialSet(paths.old, paths.oldLabel), readPolynomialSet(paths.new, paths.newLabel)]);
+  const notes: string[] = [];
+  if (a.format !== b.format) {
+    const reread = async (s: PolynomialSet, p: string): Promise<PolynomialSet> => {
+      if (!s.fromFolder || s.format !== 'thermo.json') return s;
+      const n = await readPolynomialSet(p, s.label, { preferNasa7: true });
+      if (n.format === 'nasa7') notes.push(`${s.label} is compared through ${n.origin} (the other side is an 80-column file), not its full-precision thermo.json`);
+      return n;
+    };
+    [a, b] = await Promise.all([reread(a, paths.old), reread(b, paths.new)]);
+  }
+  const mixedPrecision = a.format !== b.format;
+  const report = diffSets(a, b, { mixedPrecision });
+  if (mixedPrecision) {
+    const [full, records] = a.format === 'thermo.json' ? [a, b] : [b, a];
+    notes.push(
+      `${full.origin} (full precision) against ${records.origin} (80-column records, 9 digits): a species whose Cp, H and S agree within ${ROUNDING_TOLERANCE} (rounding) counts as unchanged`,
+    );
+  }
+  report.notes = notes;
+  return report;
+}
+
 export async function diffCommand(
   io: CliIo,
   paths: { old: string; new: string; oldLabel: string; newLabel: string },
   o: { failAbove?: { cp?: number; h?: number; s?: number }; failOnRemoved?: boolean; json?: boolean },
 ): Promise<number> {
-  let a: PolynomialSet;
-  let b: PolynomialSet;
+  let report: DiffReport;
   try {
-    [a, b] = await Promise.all([readPolynomialSet(paths.old, paths.oldLabel), readPolynomialSet(paths.new, paths.newLabel)]);
+    report = await readAndDiff(paths);
   } catch (e) {
     if (e instanceof ReadBuildError) {
       io.stderr.write(`qforge: error: ${e.message}\n`);
@@ -182,7 +246,6 @@ export async function diffCommand(
     }
     throw e;
   }
-  const report = diffSets(a, b);
   const breaches = gateBreaches(report, o.failAbove ?? {}, !!o.failOnRemoved);
   if (o.json) io.stdout.write(`${JSON.stringify({ ...report, gate: { limits: o.failAbove ?? {}, breaches } }, null, 2)}\n`);
   else io.stdout.write(renderDiffText(report));

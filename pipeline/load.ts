@@ -12,6 +12,13 @@
  *   silently turned into a string;
  * - duplicate keys in a mapping are errors (the second value would otherwise silently win).
  *
+ * All errors at once: a document whose only YAML-level problems are duplicate keys or unknown tags is
+ * structurally sound, so it is still read (the FIRST value of a duplicated key is kept; a tagged node
+ * becomes null, i.e. invalid) and returned in `recoveredDocuments`, never in `documents`. Consumers
+ * validate it to report the rest of its mistakes in the same run, and must never build from it (its YAML
+ * error stays in `diagnostics` and in the document's `yamlErrors`). A syntax error, an alias bomb or a
+ * nesting overflow makes the document unreadable: nothing of it is returned.
+ *
  * Symlink policy of `discoverSpeciesFiles`: a symlinked file or folder whose real path lies inside the
  * database folder is followed (each real file is read once); one that resolves OUTSIDE the database folder is
  * refused with an error diagnostic, as is a broken link. Entries whose name starts with '.' are skipped.
@@ -26,6 +33,8 @@ import {
   isScalar,
   isSeq,
   parseAllDocuments,
+  Scalar,
+  visit,
   type Document,
   type Node as YamlNode,
 } from 'yaml';
@@ -65,11 +74,22 @@ export interface LoadedDocument {
    * last segment instead of its value (where an unknown key is written).
    */
   locate(path: ReadonlyArray<string | number>, opts?: { key?: boolean }): SourcePosition | undefined;
+  /**
+   * Only on a recovered document: the YAML-level errors (duplicate key, unknown tag) found in it. They are
+   * also in LoadResult.diagnostics; a document carrying them must never be built.
+   */
+  yamlErrors?: readonly Diagnostic[];
 }
 
 export interface LoadResult {
   file: string;
+  /** Documents without any YAML-level error. */
   documents: LoadedDocument[];
+  /**
+   * Documents whose only YAML-level errors are duplicate keys or unknown tags (see the module comment):
+   * for validation diagnostics only, never to be built. Each carries `yamlErrors`.
+   */
+  recoveredDocuments: LoadedDocument[];
   diagnostics: Diagnostic[];
   text: string;
 }
@@ -114,6 +134,48 @@ const YAML_MESSAGES: Readonly<Record<string, (m: string) => string>> = {
   TAG_RESOLVE_FAILED: (m) =>
     `${m}; only plain YAML values are accepted (no tags that construct objects or run code)`,
 };
+
+/** YAML-level problems after which the rest of the document can still be read and checked. */
+const RECOVERABLE = new Set(['DUPLICATE_KEY', 'TAG_RESOLVE_FAILED']);
+
+/** The YAML 1.2 core-schema tags; any other tag on a node is unresolved (refused). */
+const CORE_TAGS = new Set(['str', 'int', 'float', 'bool', 'null', 'map', 'seq'].map((t) => `tag:yaml.org,2002:${t}`));
+
+/**
+ * Makes a document with duplicate keys or unknown tags readable for checking: the later pairs of a
+ * duplicated scalar key are dropped (the first value is kept, which is also the one `locate` points at),
+ * and a node with an unresolved tag becomes null, so the checks report it as invalid rather than using
+ * the text behind the tag. Returns, per duplicate key offset, the line of the kept first key.
+ */
+function recoverDocument(doc: Document.Parsed, lc: LineCounter): Map<number, { key: string; firstLine: number }> {
+  const dropped = new Map<number, { key: string; firstLine: number }>();
+  visit(doc, {
+    // One visitor for every node: yaml calls a Map-specific visitor instead of Node, which would skip tags.
+    Node(_key, node) {
+      if (node.tag !== undefined && !CORE_TAGS.has(node.tag)) {
+        const nul = new Scalar(null);
+        nul.range = node.range;
+        return nul;
+      }
+      if (!isMap(node)) return undefined;
+      const first = new Map<string, number>();
+      node.items = node.items.filter((pair) => {
+        if (!isScalar(pair.key)) return true;
+        const k = String(pair.key.value);
+        const start = nodeStart(pair.key) ?? 0;
+        const seen = first.get(k);
+        if (seen === undefined) {
+          first.set(k, start);
+          return true;
+        }
+        dropped.set(start, { key: k, firstLine: positionOf(lc, seen).line });
+        return false;
+      });
+      return undefined;
+    },
+  });
+  return dropped;
+}
 
 function positionOf(lc: LineCounter, offset: number): SourcePosition {
   const p = lc.linePos(offset);
@@ -220,12 +282,14 @@ function isExcessiveAliasError(e: unknown): boolean {
  * Parses YAML text (one or more `---` documents) into species documents. Pure: no disk access. Syntax
  * errors, duplicate keys, unknown tags, alias bombs and oversized text become error diagnostics with line
  * and column; the documents without errors are still returned, so one bad document does not hide the others.
+ * Documents (or items of a top-level list) whose only errors are duplicate keys or unknown tags are returned
+ * in `recoveredDocuments` for checking, never in `documents`.
  */
 export function parseYamlText(text: string, displayPath: string, opts: ParseOptions = {}): LoadResult {
   const maxBytes = opts.maxBytes ?? DEFAULT_MAX_BYTES;
   const maxAliasCount = opts.maxAliasCount ?? DEFAULT_MAX_ALIAS_COUNT;
   const split = opts.split ?? 'species';
-  const result: LoadResult = { file: displayPath, documents: [], diagnostics: [], text };
+  const result: LoadResult = { file: displayPath, documents: [], recoveredDocuments: [], diagnostics: [], text };
   const size = Buffer.byteLength(text, 'utf8');
   if (size > maxBytes) {
     result.diagnostics.push(sizeDiagnostic(displayPath, size, maxBytes));
@@ -272,11 +336,19 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
   let index = 0;
   for (const doc of docs) {
     const problems = [...doc.errors, ...doc.warnings.filter((w) => w.code === 'TAG_RESOLVE_FAILED')];
+    const recoverable = problems.length > 0 && problems.every((e) => RECOVERABLE.has(e.code));
+    const dropped = recoverable ? recoverDocument(doc, lc) : new Map<number, { key: string; firstLine: number }>();
+    const yamlErrors: Diagnostic[] = [];
     for (const e of problems) {
       const pos = positionOf(lc, e.pos[0]);
       const plain = plainYamlMessage(e.message);
-      const message = YAML_MESSAGES[e.code]?.(plain) ?? `YAML syntax error: ${plain}`;
-      result.diagnostics.push(err(displayPath, message, { line: pos.line, column: pos.column }));
+      let message = YAML_MESSAGES[e.code]?.(plain) ?? `YAML syntax error: ${plain}`;
+      const dup = e.code === 'DUPLICATE_KEY' ? dropped.get(e.pos[0]) : undefined;
+      if (dup) message = `duplicate key '${dup.key}' in a mapping (each key may appear only once; first given on line ${dup.firstLine}); the rest of the document was checked with the first value, this one is ignored`;
+      else if (recoverable && e.code === 'TAG_RESOLVE_FAILED') message += '; the value is treated as invalid and the rest of the document was checked';
+      const d = err(displayPath, message, { line: pos.line, column: pos.column });
+      yamlErrors.push(d);
+      result.diagnostics.push(d);
     }
     for (const w of doc.warnings) {
       if (w.code === 'TAG_RESOLVE_FAILED') continue;
@@ -290,7 +362,11 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
         message: `YAML: ${plainYamlMessage(w.message)}`,
       });
     }
-    if (problems.length > 0) continue;
+    // A duplicate key the recovery did not find (e.g. a non-scalar key) leaves the document ambiguous.
+    const unmatched = doc.errors.some((e) => e.code === 'DUPLICATE_KEY' && !dropped.has(e.pos[0]));
+    if (problems.length > 0 && (!recoverable || unmatched)) continue;
+    const target = problems.length > 0 ? result.recoveredDocuments : result.documents;
+    const extra = problems.length > 0 ? { yamlErrors } : {};
 
     let value: unknown;
     try {
@@ -321,19 +397,26 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
     if (split === 'species' && Array.isArray(value) && isSeq(contents)) {
       value.forEach((item, i) => {
         const itemNode = contents.items[i];
-        result.documents.push({
+        // A list item spans from the end of the previous one (its tag, if any, comes before its range).
+        const from = i === 0 ? 0 : ((contents.items[i - 1] as { range?: number[] } | undefined)?.range?.[2] ?? 0);
+        const to = (itemNode as { range?: number[] } | undefined)?.range?.[2] ?? Infinity;
+        const own = yamlErrors.filter((_d, k) => problems[k]!.pos[0] >= from && problems[k]!.pos[0] < to);
+        const entry = {
           file: displayPath,
           index: index++,
           value: item,
-          locate: (p, o) => locateIn(doc, itemNode, p, lc, o?.key ?? false),
-        });
+          locate: (p: ReadonlyArray<string | number>, o?: { key?: boolean }) => locateIn(doc, itemNode, p, lc, o?.key ?? false),
+        };
+        if (own.length) result.recoveredDocuments.push({ ...entry, yamlErrors: own });
+        else result.documents.push(entry);
       });
     } else {
-      result.documents.push({
+      target.push({
         file: displayPath,
         index: index++,
         value,
         locate: (p, o) => locateIn(doc, contents, p, lc, o?.key ?? false),
+        ...extra,
       });
     }
   }
@@ -350,7 +433,7 @@ export async function loadYamlFile(
   opts: ParseOptions = {},
 ): Promise<LoadResult> {
   const maxBytes = opts.maxBytes ?? DEFAULT_MAX_BYTES;
-  const empty: LoadResult = { file: displayPath, documents: [], diagnostics: [], text: '' };
+  const empty: LoadResult = { file: displayPath, documents: [], recoveredDocuments: [], diagnostics: [], text: '' };
   try {
     const info = await stat(filePath);
     if (!info.isFile()) {

@@ -2,8 +2,13 @@
  * Readers for `diff` and `compare`: a build folder (thermo.json, or nasa7.txt when the build wrote no
  * JSON) or any file in the 80-column layout, as one set of named polynomials. A build folder is read
  * through `resolveReadableBuild`, so a swap interrupted half-way still yields the previous complete set.
+ *
+ * Every file goes through `readInputFile`: a missing path, a folder where a file is expected, a device or
+ * FIFO, or a file we may not read is a usage error (exit 2, like a missing path); a file over
+ * MAX_INPUT_BYTES (64 MiB; a 1000-species nasa7.txt is about 330 kB) or one the system fails to read
+ * (e.g. EIO) is an input failure (exit 1). Never a stack trace.
  */
-import { readFile, stat } from 'node:fs/promises';
+import { open, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { GAS_CONSTANT, T_REF } from '../src/constants.js';
 import { evaluateNasa7 } from '../src/nasa7/evaluate.js';
@@ -23,6 +28,10 @@ export interface PolynomialSet {
   label: string;
   /** What was read, e.g. `build/thermo.json`. */
   origin: string;
+  /** The layout that was read: full-precision JSON or the 80-column records (9 significant digits). */
+  format: 'thermo.json' | 'nasa7';
+  /** True when `label` named a build folder (so its other file can be read instead, see `preferNasa7`). */
+  fromFolder: boolean;
   species: Map<string, NamedPolynomial>;
   /** Build settings, when the set came from thermo.json. */
   settings?: DatabaseSettings;
@@ -44,15 +53,73 @@ export class ReadBuildError extends Error {
   }
 }
 
-async function isFile(p: string): Promise<boolean> {
+/** Largest file `diff`/`compare` read (thermo.json, 80-column files, reference tables): 64 MiB. */
+export const MAX_INPUT_BYTES = 64 * 1024 * 1024;
+
+const errnoOf = (e: unknown) => (e as NodeJS.ErrnoException | undefined)?.code;
+
+/**
+ * Reads a whole text file for diff/compare with clean errors (see the module comment). `what` names the
+ * role in messages ("reference", "build file"). Reads at most maxBytes + 1 bytes, so a file whose size
+ * `stat` misreports (/proc, a growing log) cannot exhaust memory either.
+ */
+export async function readInputFile(p: string, label: string, what = 'file', maxBytes = MAX_INPUT_BYTES): Promise<string> {
+  let info;
   try {
-    return (await stat(p)).isFile();
-  } catch {
-    return false;
+    info = await stat(p);
+  } catch (e) {
+    const code = errnoOf(e);
+    if (code === 'ENOENT' || code === 'ENOTDIR') throw new ReadBuildUsageError(`${what} ${label}: no such file`);
+    if (code === 'EACCES' || code === 'EPERM') throw new ReadBuildUsageError(`${what} ${label}: permission denied (cannot look it up)`);
+    throw new ReadBuildError(`${what} ${label}: cannot read it (${code ?? String(e)})`);
+  }
+  if (info.isDirectory()) throw new ReadBuildUsageError(`${what} ${label} is a folder; expected a file`);
+  if (!info.isFile()) throw new ReadBuildUsageError(`${what} ${label} is not a regular file (a device, FIFO or socket); expected a file`);
+  const tooLarge = (n: string) =>
+    new ReadBuildError(`${what} ${label} is too large (${n}); the limit is ${maxBytes / (1024 * 1024)} MiB, far above any thermo file`);
+  if (info.size > maxBytes) throw tooLarge(`${(info.size / (1024 * 1024)).toFixed(1)} MiB`);
+  let handle;
+  try {
+    handle = await open(p, 'r');
+  } catch (e) {
+    const code = errnoOf(e);
+    if (code === 'EACCES' || code === 'EPERM') throw new ReadBuildUsageError(`${what} ${label}: permission denied (cannot read it)`);
+    throw new ReadBuildError(`${what} ${label}: cannot read it (${code ?? String(e)})`);
+  }
+  try {
+    const chunks: Buffer[] = [];
+    let total = 0;
+    for (;;) {
+      const buf = Buffer.alloc(Math.min(1024 * 1024, maxBytes + 1 - total));
+      const { bytesRead } = await handle.read(buf, 0, buf.length, null);
+      if (bytesRead === 0) break;
+      chunks.push(buf.subarray(0, bytesRead));
+      total += bytesRead;
+      if (total > maxBytes) throw tooLarge(`more than ${maxBytes / (1024 * 1024)} MiB`);
+    }
+    return Buffer.concat(chunks).toString('utf8');
+  } catch (e) {
+    if (e instanceof ReadBuildError) throw e;
+    throw new ReadBuildError(`${what} ${label}: cannot read it (${errnoOf(e) ?? String(e)})`);
+  } finally {
+    await handle.close();
   }
 }
 
-function fromThermoJson(text: string, origin: string, label: string): PolynomialSet {
+/** Whether `p` exists; errors other than "not there" (EACCES, EIO) are reported, not taken for absence. */
+async function present(p: string, label: string): Promise<boolean> {
+  try {
+    await stat(p);
+    return true;
+  } catch (e) {
+    const code = errnoOf(e);
+    if (code === 'ENOENT' || code === 'ENOTDIR') return false;
+    if (code === 'EACCES' || code === 'EPERM') throw new ReadBuildUsageError(`${label}: permission denied`);
+    throw new ReadBuildError(`${label}: cannot read it (${code ?? String(e)})`);
+  }
+}
+
+function fromThermoJson(text: string, origin: string, label: string, fromFolder: boolean): PolynomialSet {
   let db: unknown;
   try {
     db = JSON.parse(text);
@@ -77,12 +144,12 @@ function fromThermoJson(text: string, origin: string, label: string): Polynomial
     if (s.input_hash) entry.inputHash = s.input_hash;
     species.set(s.name, entry);
   });
-  const set: PolynomialSet = { label, origin, species };
+  const set: PolynomialSet = { label, origin, format: 'thermo.json', fromFolder, species };
   if (d.build_settings) set.settings = d.build_settings;
   return set;
 }
 
-function fromNasa7(text: string, origin: string, label: string): PolynomialSet {
+function fromNasa7(text: string, origin: string, label: string, fromFolder: boolean): PolynomialSet {
   const parsed = parseNasa7File(text, origin);
   if (parsed.errors.length) {
     throw new ReadBuildError(parsed.errors.map((e) => `${origin}:${e.line}: ${e.message}`).join('\n'));
@@ -92,26 +159,62 @@ function fromNasa7(text: string, origin: string, label: string): PolynomialSet {
     if (species.has(r.name)) throw new ReadBuildError(`${origin}: record ${JSON.stringify(r.name)} appears twice`);
     species.set(r.name, { name: r.name, polynomial: r.polynomial });
   }
-  return { label, origin, species };
+  return { label, origin, format: 'nasa7', fromFolder, species };
 }
 
-/** Reads a build folder or an 80-column file. */
-export async function readPolynomialSet(p: string, label: string): Promise<PolynomialSet> {
-  if (await isFile(p)) {
-    const text = await readFile(p, 'utf8');
-    return p.endsWith('.json') ? fromThermoJson(text, label, label) : fromNasa7(text, label, label);
-  }
+/** An 80-column file already read (e.g. a reference): its records as a set. */
+export function polynomialSetFromText(text: string, label: string): PolynomialSet {
+  return fromNasa7(text, label, label, false);
+}
+
+export interface ReadOptions {
+  /**
+   * For a build folder: read nasa7.txt even when thermo.json is there (diff against an 80-column file
+   * compares like with like: the same 9-digit records on both sides).
+   */
+  preferNasa7?: boolean;
+}
+
+/** Reads a build folder or an 80-column file (or a thermo.json given as a file). */
+export async function readPolynomialSet(p: string, label: string, opts: ReadOptions = {}): Promise<PolynomialSet> {
   const dir = await resolveReadableBuild(p);
+  let info;
   try {
-    if (!(await stat(dir)).isDirectory()) throw new Error();
-  } catch {
-    throw new ReadBuildUsageError(`${label}: no such build folder or file`);
+    info = await stat(dir);
+  } catch (e) {
+    const code = errnoOf(e);
+    if (code === 'ENOENT' || code === 'ENOTDIR') throw new ReadBuildUsageError(`${label}: no such build folder or file`);
+    if (code === 'EACCES' || code === 'EPERM') throw new ReadBuildUsageError(`${label}: permission denied`);
+    throw new ReadBuildError(`${label}: cannot read it (${code ?? String(e)})`);
+  }
+  if (!info.isDirectory()) {
+    const text = await readInputFile(dir, label, 'build file');
+    return p.endsWith('.json') ? fromThermoJson(text, label, label, false) : fromNasa7(text, label, label, false);
   }
   const json = path.join(dir, 'thermo.json');
-  if (await isFile(json)) return fromThermoJson(await readFile(json, 'utf8'), path.join(label, 'thermo.json'), label);
   const nasa = path.join(dir, 'nasa7.txt');
-  if (await isFile(nasa)) return fromNasa7(await readFile(nasa, 'utf8'), path.join(label, 'nasa7.txt'), label);
+  const jsonLabel = path.join(label, 'thermo.json');
+  const nasaLabel = path.join(label, 'nasa7.txt');
+  if (opts.preferNasa7 && (await present(nasa, nasaLabel))) return fromNasa7(await readInputFile(nasa, nasaLabel, 'build file'), nasaLabel, label, true);
+  if (await present(json, jsonLabel)) return fromThermoJson(await readInputFile(json, jsonLabel, 'build file'), jsonLabel, label, true);
+  if (await present(nasa, nasaLabel)) return fromNasa7(await readInputFile(nasa, nasaLabel, 'build file'), nasaLabel, label, true);
   throw new ReadBuildUsageError(`${label}: folder holds neither thermo.json nor nasa7.txt`);
+}
+
+/**
+ * x.toFixed(digits), but never "-0.0000": a value that rounds to zero prints without a sign. Use it for
+ * every number in a diff/compare table.
+ */
+export function formatFixed(x: number, digits: number): string {
+  if (!Number.isFinite(x)) return String(x);
+  const s = x.toFixed(digits);
+  return /^-0(\.0*)?$/.test(s) ? s.slice(1) : s;
+}
+
+/** Signed fixed-point ("+0.0012", "-0.1748"); zero, and anything rounding to it, prints as "+0.0000". */
+export function formatSigned(x: number, digits: number): string {
+  const s = formatFixed(x, digits);
+  return s.startsWith('-') || !Number.isFinite(x) ? s : `+${s}`;
 }
 
 export interface Properties {

@@ -61,7 +61,8 @@ describe('qforge compare against NIST-JANAF 4th ed.', () => {
     await writeFile(path.join(workspace().root, 'bad.csv'), 'T,Cp\n300,29\n');
     const bad = await runCli(['compare', 'out', '--reference', 'bad.csv'], workspace().root);
     expect(bad.code).toBe(1);
-    expect(bad.stderr).toMatch(/bad\.csv: column 'T' has no unit/);
+    expect(bad.stderr).toMatch(/bad\.csv:1: column 1: header 'T' has no unit/);
+    expect(bad.stderr).toMatch(/bad\.csv:1: column 2: header 'Cp' has no unit; units are never guessed/);
     const missing = await runCli(['compare', 'out', '--reference', 'nope.csv'], workspace().root);
     expect(missing.code).toBe(2);
     expect(missing.stderr).toMatch(/nope\.csv: no such file/);

@@ -59,6 +59,19 @@ export const MAX_INPUT_BYTES = 64 * 1024 * 1024;
 const errnoOf = (e: unknown) => (e as NodeJS.ErrnoException | undefined)?.code;
 
 /**
+ * The error for a failed stat/open/read of an input: not there → usage error "no such file"; not
+ * permitted → usage error "permission denied" (both exit 2, like any bad path argument); anything else
+ * (EIO, ELOOP, ...) → input failure naming the code (exit 1).
+ */
+export function inputReadError(e: unknown, what: string, label: string, missing = 'no such file'): ReadBuildUsageError | ReadBuildError {
+  const code = errnoOf(e);
+  const name = what ? `${what} ${label}` : label;
+  if (code === 'ENOENT' || code === 'ENOTDIR') return new ReadBuildUsageError(`${name}: ${missing}`);
+  if (code === 'EACCES' || code === 'EPERM') return new ReadBuildUsageError(`${name}: permission denied (${code})`);
+  return new ReadBuildError(`${name}: cannot read it (${code ?? String(e)})`);
+}
+
+/**
  * Reads a whole text file for diff/compare with clean errors (see the module comment). `what` names the
  * role in messages ("reference", "build file"). Reads at most maxBytes + 1 bytes, so a file whose size
  * `stat` misreports (/proc, a growing log) cannot exhaust memory either.
@@ -68,10 +81,7 @@ export async function readInputFile(p: string, label: string, what = 'file', max
   try {
     info = await stat(p);
   } catch (e) {
-    const code = errnoOf(e);
-    if (code === 'ENOENT' || code === 'ENOTDIR') throw new ReadBuildUsageError(`${what} ${label}: no such file`);
-    if (code === 'EACCES' || code === 'EPERM') throw new ReadBuildUsageError(`${what} ${label}: permission denied (cannot look it up)`);
-    throw new ReadBuildError(`${what} ${label}: cannot read it (${code ?? String(e)})`);
+    throw inputReadError(e, what, label);
   }
   if (info.isDirectory()) throw new ReadBuildUsageError(`${what} ${label} is a folder; expected a file`);
   if (!info.isFile()) throw new ReadBuildUsageError(`${what} ${label} is not a regular file (a device, FIFO or socket); expected a file`);
@@ -82,9 +92,7 @@ export async function readInputFile(p: string, label: string, what = 'file', max
   try {
     handle = await open(p, 'r');
   } catch (e) {
-    const code = errnoOf(e);
-    if (code === 'EACCES' || code === 'EPERM') throw new ReadBuildUsageError(`${what} ${label}: permission denied (cannot read it)`);
-    throw new ReadBuildError(`${what} ${label}: cannot read it (${code ?? String(e)})`);
+    throw inputReadError(e, what, label);
   }
   try {
     const chunks: Buffer[] = [];
@@ -100,7 +108,7 @@ export async function readInputFile(p: string, label: string, what = 'file', max
     return Buffer.concat(chunks).toString('utf8');
   } catch (e) {
     if (e instanceof ReadBuildError) throw e;
-    throw new ReadBuildError(`${what} ${label}: cannot read it (${errnoOf(e) ?? String(e)})`);
+    throw inputReadError(e, what, label);
   } finally {
     await handle.close();
   }
@@ -114,8 +122,7 @@ async function present(p: string, label: string): Promise<boolean> {
   } catch (e) {
     const code = errnoOf(e);
     if (code === 'ENOENT' || code === 'ENOTDIR') return false;
-    if (code === 'EACCES' || code === 'EPERM') throw new ReadBuildUsageError(`${label}: permission denied`);
-    throw new ReadBuildError(`${label}: cannot read it (${code ?? String(e)})`);
+    throw inputReadError(e, '', label);
   }
 }
 
@@ -182,10 +189,7 @@ export async function readPolynomialSet(p: string, label: string, opts: ReadOpti
   try {
     info = await stat(dir);
   } catch (e) {
-    const code = errnoOf(e);
-    if (code === 'ENOENT' || code === 'ENOTDIR') throw new ReadBuildUsageError(`${label}: no such build folder or file`);
-    if (code === 'EACCES' || code === 'EPERM') throw new ReadBuildUsageError(`${label}: permission denied`);
-    throw new ReadBuildError(`${label}: cannot read it (${code ?? String(e)})`);
+    throw inputReadError(e, '', label, 'no such build folder or file');
   }
   if (!info.isDirectory()) {
     const text = await readInputFile(dir, label, 'build file');

@@ -15,6 +15,7 @@ import {
   loadYamlFile,
   parseYamlText,
 } from '../../pipeline/load.js';
+import { validateSpecies } from '../../pipeline/validate.js';
 
 const fixture = (name: string) => readFileSync(new URL(`../fixtures/input/${name}`, import.meta.url), 'utf8');
 const temps: string[] = [];
@@ -67,6 +68,69 @@ describe('parseYamlText', () => {
     expect(r.diagnostics).toEqual([
       expect.objectContaining({ severity: 'error', file: 'd.yaml', line: 3, column: 1, message: expect.stringContaining('duplicate key') }),
     ]);
+    // Still readable for checking (never for building): the FIRST value is kept, and the message says so.
+    expect(r.diagnostics[0]!.message).toBe(
+      "duplicate key 'symmetry_number' in a mapping (each key may appear only once; first given on line 2); the rest of the document was checked with the first value, this one is ignored",
+    );
+    expect(r.recoveredDocuments.map((d) => d.value)).toEqual([{ name: 'A', symmetry_number: 1 }]);
+    expect(r.recoveredDocuments[0]!.yamlErrors).toEqual([r.diagnostics[0]]);
+    expect(r.recoveredDocuments[0]!.locate(['symmetry_number'])).toEqual({ line: 2, column: 18 });
+  });
+
+  it('a duplicate key and three other mistakes in one document are all reported in one run', () => {
+    // Argon: a single 1S0 level (NIST ASD, Ar I); the mistakes are invented.
+    const text = [
+      'name: Ar',
+      'composition: {Ar: 1}',
+      'charge: 0.5', // mistake 2: not a whole number
+      'enthalpy_of_formation: 0',
+      'sources: []', // mistake 3: empty
+      'structure: atomic', // mistake 4: not an accepted structure
+      'name: Ar2', // mistake 1: duplicate key
+      '',
+    ].join('\n');
+    const r = parseYamlText(text, 'ar.yaml');
+    expect(r.documents).toEqual([]);
+    const all = [...r.diagnostics, ...r.recoveredDocuments.flatMap((d) => validateSpecies(d).diagnostics)];
+    const errors = all.filter((d) => d.severity === 'error').map((d) => [d.line, d.path, d.message]);
+    expect(errors).toEqual([
+      [7, '', expect.stringContaining("duplicate key 'name'")],
+      [3, 'charge', expect.stringContaining('wrong type')],
+      [5, 'sources', expect.stringContaining('too few items')],
+      [6, 'structure', expect.stringContaining("did you mean 'atom'")],
+    ]);
+    // The kept name is the first one.
+    expect(all.filter((d) => d.species !== undefined).every((d) => d.species === 'Ar')).toBe(true);
+  });
+
+  it('an unknown tag makes its node invalid (null) but the rest of the document is still checked', () => {
+    const r = parseYamlText('name: Ar\ncharge: !custom 1\nstructure: atomic\n', 't.yaml');
+    expect(r.documents).toEqual([]);
+    expect(r.recoveredDocuments.map((d) => d.value)).toEqual([{ name: 'Ar', charge: null, structure: 'atomic' }]);
+    expect(r.diagnostics[0]!.message).toMatch(/Unresolved tag: !custom; .*the value is treated as invalid and the rest of the document was checked/);
+    const v = validateSpecies(r.recoveredDocuments[0]!).diagnostics.map((d) => d.path);
+    expect(v).toEqual(expect.arrayContaining(['structure', 'charge']));
+  });
+
+  it('in a top-level list only the item holding the YAML error is held back', () => {
+    const r = parseYamlText('- name: A\n  x: 1\n  x: 2\n- name: B\n- !foo {name: C}\n', 'l.yaml');
+    expect(r.documents.map((d) => d.value)).toEqual([{ name: 'B' }]);
+    expect(r.recoveredDocuments.map((d) => [d.index, d.value, d.yamlErrors!.map((e) => e.line)])).toEqual([
+      [0, { name: 'A', x: 1 }, [3]],
+      [2, null, [5]],
+    ]);
+  });
+
+  it('a syntax error or an alias bomb still stops the document: nothing is recovered', () => {
+    const syntax = parseYamlText('name: A\nname: B\nx: [1\n', 's.yaml');
+    expect(syntax.documents).toEqual([]);
+    expect(syntax.recoveredDocuments).toEqual([]);
+    const rows = ['a: &a [x, x, x, x, x, x, x, x, x]', 'name: A'];
+    for (const [p, q] of ['ab', 'bc', 'cd', 'de']) rows.push(`${q}: &${q} [${Array(9).fill(`*${p}`).join(',')}]`);
+    rows.push('name: B');
+    const bomb = parseYamlText(rows.join('\n') + '\n', 'bomb.yaml');
+    expect(bomb.recoveredDocuments).toEqual([]);
+    expect(bomb.diagnostics.map((d) => d.message)).toEqual(expect.arrayContaining([expect.stringContaining('alias')]));
   });
 
   it.each([

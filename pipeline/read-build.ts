@@ -169,9 +169,9 @@ function fromNasa7(text: string, origin: string, label: string, fromFolder: bool
   return { label, origin, format: 'nasa7', fromFolder, species };
 }
 
-/** An 80-column file already read (e.g. a reference): its records as a set. */
+/** A file already read (e.g. a reference): a thermo.json when it ends in .json, else 80-column records. */
 export function polynomialSetFromText(text: string, label: string): PolynomialSet {
-  return fromNasa7(text, label, label, false);
+  return /\.json$/i.test(label) ? fromThermoJson(text, label, label, false) : fromNasa7(text, label, label, false);
 }
 
 export interface ReadOptions {

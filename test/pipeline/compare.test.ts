@@ -57,6 +57,14 @@ describe('qforge compare against NIST-JANAF 4th ed.', () => {
     expect(JSON.parse(r.stdout).deviations.length).toBeGreaterThan(100);
   });
 
+  it('accepts a thermo.json file as the reference (the build against itself: every deviation 0)', async () => {
+    const r = await runCli(['compare', 'out', '--reference', 'out/thermo.json', '--tolerance', 'cp=1e-9,s=1e-9,h=1e-9', '--json'], workspace().root);
+    expect(r.code, r.stderr).toBe(0);
+    const report = JSON.parse(r.stdout);
+    expect(report.deviations.length).toBeGreaterThan(100);
+    expect(report.deviations.every((d: { deviation: number }) => d.deviation === 0)).toBe(true);
+  });
+
   it('reports malformed reference tables and missing files clearly', async () => {
     await writeFile(path.join(workspace().root, 'bad.csv'), 'T,Cp\n300,29\n');
     const bad = await runCli(['compare', 'out', '--reference', 'bad.csv'], workspace().root);

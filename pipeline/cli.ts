@@ -43,7 +43,7 @@ Examples:
   qforge build                         build species/ into build/
   qforge build mydb --out mydb-build   build another database folder
   qforge build --keep-going --json     write the good species, print the summary
-  qforge build --no-cache --jobs 1     recompute everything, one species at a time
+  qforge build --no-cache --jobs 1     recompute everything, one at a time
 
 Outputs (in OUT): thermo.json, nasa7.txt, tables/<name>.csv, summary.json
 (summary.json holds timings; the other files are byte-identical for identical
@@ -80,7 +80,7 @@ A species counts as "properties changed" when any of |dCp|, |dS| exceeds
 Examples:
   qforge compare build --reference janaf/n2.csv janaf/o2.csv
   qforge compare build --reference tables.csv --tolerance cp=0.1,s=0.05,h=0.02
-  qforge compare build --database species      use references.files of species/qforge.yaml
+  qforge compare build --database species    references of species/qforge.yaml
   qforge compare build --database species --strict   ignore known deviations
 
 Reference CSV: one row per temperature; header names with units, e.g.
@@ -249,6 +249,8 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
   } catch (e) {
     if (e instanceof CommanderError) {
       if (e.code === 'commander.helpDisplayed' || e.code === 'commander.version') return 0;
+      // `qforge help [cmd]` asks for help (0); help shown because no command was given is usage (2).
+      if (e.code === 'commander.help') return e.exitCode === 0 ? 0 : 2;
       return 2;
     }
     if ((e as Error)?.name === 'BuildLockedError') {

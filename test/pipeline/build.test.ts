@@ -230,28 +230,68 @@ describe('qforge build of the fixture database', () => {
     const corrupt = summary.species.filter((s: { cache: { fit: string } }) => s.cache.fit === 'corrupt');
     expect(corrupt.length).toBe(3);
     expect(corrupt.flatMap((s: { warnings: string[] }) => s.warnings).join('\n')).toMatch(/not valid JSON|checksum mismatch|different key/);
+    // Also on the terminal (even with --quiet): one line per rejected entry, naming the species.
+    const lines = r.stderr.split('\n').filter((l) => /^qforge: warning: \w+: cache entry for fit rejected \(.+\); recomputed$/.test(l));
+    expect(lines).toHaveLength(3);
+    for (const c of corrupt) expect(r.stderr).toContain(`warning: ${c.name}: cache entry for fit rejected`);
+    expect(summary.warnings).toHaveLength(3);
     expect(await deterministicOutputs(ws.out)).toEqual(good);
     // Rewritten: the next build hits everywhere.
     const again = JSON.parse((await build('--json', '--quiet')).stdout);
     expect(again.counts.cache_hits).toBe(5);
   });
 
-  it('--keep-going writes the good species, lists the failed one and still exits 1', async () => {
-    await writeFile(path.join(ws.db, 'bad.yaml'), 'name: Bad\ncomposition: {Xx: 1}\nenthalpy_of_formation: 0\nsources: ["invented for a test"]\nstructure: atom\n');
+  it('--keep-going writes the good species, lists the failed ones (summary and CLI) and still exits 1', async () => {
+    // Two invented documents: one with a name and an unknown element, one without a name.
+    await writeFile(
+      path.join(ws.db, 'bad.yaml'),
+      'name: Bad\ncomposition: {Xx: 1}\nenthalpy_of_formation: 0\nsources: ["invented for a test"]\nstructure: atom\n---\ncomposition: {He: 1}\n',
+    );
     const r = await build('--keep-going');
     expect(r.code).toBe(1);
     expect(r.stderr).toMatch(/bad\.yaml:2/);
+    expect(r.stderr).toMatch(/wrote 5 species into out; FAILED: Bad, bad\.yaml#2; 1 file\(s\) with errors/);
+    expect(r.stderr).not.toMatch(/\(none\)/);
     const db = await readJson(path.join(ws.out, 'thermo.json'));
     expect(db.species.map((s: { name: string }) => s.name)).toEqual(SPECIES);
     const summary = await readJson(path.join(ws.out, 'summary.json'));
+    const ajv = new Ajv2020({ allErrors: true, strict: false });
+    expect(ajv.validate(summarySchema, summary), JSON.stringify(ajv.errors)).toBe(true);
     expect(summary.status).toBe('partial');
+    expect(summary.counts).toMatchObject({ species: 7, ok: 5, failed: 2 });
+    const failed = summary.species.filter((s: { status: string }) => s.status === 'failed');
+    expect(failed.map((s: { name?: string; file: string; document: number }) => [s.name, s.file, s.document])).toEqual([
+      ['Bad', 'bad.yaml', 1],
+      [undefined, 'bad.yaml', 2],
+    ]);
+    expect(failed[0].errors.join('\n')).toMatch(/bad\.yaml:2:\d+: error: \[Bad\] composition\.Xx/);
+    expect(failed[1].errors.join('\n')).toMatch(/missing required field 'name'/);
     expect(summary.files.map((f: { file: string }) => path.basename(f.file))).toEqual(['bad.yaml']);
-    // A duplicate name: the second definition fails and is reported with its file in the summary.
+    // A duplicate name: the second definition fails, with its file, in species[] and files[].
     await writeFile(path.join(ws.db, 'zz.yaml'), await readFile(path.join(ws.db, 'Ar.yaml'), 'utf8'));
-    const dup = JSON.parse((await build('--keep-going', '--json', '--quiet')).stdout);
-    expect(dup.species.filter((s: { name: string }) => s.name === 'Ar')).toHaveLength(1);
+    const dupRun = await build('--keep-going', '--json', '--quiet');
+    const dup = JSON.parse(dupRun.stdout);
+    const ars = dup.species.filter((s: { name: string }) => s.name === 'Ar');
+    expect(ars.map((s: { status: string; file: string }) => [s.status, s.file])).toEqual([
+      ['ok', 'Ar.yaml'],
+      ['failed', 'zz.yaml'],
+    ]);
+    expect(ars[1].errors.join('\n')).toMatch(/duplicate species name 'Ar'/);
+    expect(dupRun.stderr).toMatch(/FAILED: Ar, Bad, bad\.yaml#2/);
     const zz = dup.files.find((f: { file: string }) => f.file.endsWith('zz.yaml'));
     expect(zz.errors.join('\n')).toMatch(/duplicate species name 'Ar'/);
+  });
+
+  it('a cache that cannot be written is reported once per build (stderr and summary.json), the build still succeeds', async () => {
+    await writeFile(path.join(ws.root, 'plain.txt'), 'a regular file, so nothing can be created below it');
+    const r = await build('--cache-dir', 'plain.txt/cache', '--json', '--quiet');
+    expect(r.code, r.stderr).toBe(0);
+    const lines = r.stderr.split('\n').filter((l) => l.includes('cache: not writable'));
+    expect(lines).toHaveLength(1);
+    expect(lines[0]).toMatch(/^qforge: warning: cache: not writable: .*plain\.txt\/cache: mkdir '.*plain\.txt.*': ENOTDIR \(not a directory\); every species is recomputed/);
+    const summary = JSON.parse(r.stdout);
+    expect(summary.warnings).toEqual([lines[0]!.replace('qforge: warning: ', '')]);
+    expect(summary.counts.ok).toBe(5);
   });
 
   it('a species named ".." writes its table inside tables/ (names never escape the output folder)', async () => {

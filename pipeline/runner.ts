@@ -159,7 +159,10 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
           validateTotal += ms;
           return { doc, r, ms };
         });
-        return { file: f, loaded, results, loadMs };
+        // Documents with only a duplicate key or an unknown tag are checked too, so the user sees every
+        // error of the file in one run; they are never built (one of their values is a guess).
+        const recovered = (loaded.recoveredDocuments ?? []).map((doc: LoadedDocument) => validateSpecies(doc).diagnostics);
+        return { file: f, loaded, results, recovered, loadMs };
       }),
     ),
   );
@@ -177,9 +180,13 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     if (n !== undefined) e.name = n;
     return e;
   };
-  for (const { file, loaded, results, loadMs } of perFile) {
+  for (const { file, loaded, results, recovered, loadMs } of perFile) {
     loaded.diagnostics.forEach(addFileDiag);
     diagnostics.push(...loaded.diagnostics);
+    for (const ds of recovered) {
+      diagnostics.push(...ds);
+      ds.forEach(addFileDiag);
+    }
     if (loaded.documents.length === 0 && !hasErrors(loaded.diagnostics)) {
       const d: Diagnostic = { severity: 'warning', file, path: '', message: 'file holds no species' };
       diagnostics.push(d);

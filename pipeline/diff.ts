@@ -208,7 +208,14 @@ export function gateBreaches(r: DiffReport, limits: { cp?: number; h?: number; s
  * nasa7.txt; when only full precision is available on one side the comparison is mixed precision.
  */
 export async function readAndDiff(paths: { old: string; new: string; oldLabel: string; newLabel: string }): Promise<DiffReport> {
-  let [a, b] = await Promise.all([readPolynomialSet(paths.old, paths.oldLabel), readPolynomialSet(paths.new, paths.newLabel)]);
+  // Both read at once, but a failure is reported for OLD before NEW whatever finishes first, so the same
+  // mistake always gives the same message.
+  const settled = await Promise.allSettled([
+    readPolynomialSet(paths.old, paths.oldLabel),
+    readPolynomialSet(paths.new, paths.newLabel),
+  ]);
+  for (const r of settled) if (r.status === 'rejected') throw r.reason;
+  let [a, b] = settled.map((r) => (r as PromiseFulfilledResult<PolynomialSet>).value) as [PolynomialSet, PolynomialSet];
   const notes: string[] = [];
   if (a.format !== b.format) {
     const reread = async (s: PolynomialSet, p: string): Promise<PolynomialSet> => {
@@ -217,7 +224,9 @@ export async function readAndDiff(paths: { old: string; new: string; oldLabel: s
       if (n.format === 'nasa7') notes.push(`${s.label} is compared through ${n.origin} (the other side is an 80-column file), not its full-precision thermo.json`);
       return n;
     };
-    [a, b] = await Promise.all([reread(a, paths.old), reread(b, paths.new)]);
+    // One after the other: each may add a note, and notes keep OLD-then-NEW order.
+    a = await reread(a, paths.old);
+    b = await reread(b, paths.new);
   }
   const mixedPrecision = a.format !== b.format;
   const report = diffSets(a, b, { mixedPrecision });

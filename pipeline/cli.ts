@@ -447,7 +447,9 @@ async function checkCommand(io: CliIo, dir: string, o: { json?: boolean }): Prom
   const errors = report.diagnostics.filter((d) => d.severity === 'error').length;
   const warnings = report.diagnostics.length - errors;
   io.stderr.write(
-    `qforge: checked ${report.species.length} species in ${report.files.length} file(s): ` +
+    `qforge: checked ${report.species.length + report.invalid.length} species in ${report.files.length} file(s)` +
+      (report.invalid.length ? ` (${report.invalid.length} invalid)` : '') +
+      ': ' +
       (errors ? `${errors} error(s), ${warnings} warning(s)\n` : `no errors${warnings ? `, ${warnings} warning(s)` : ''}\n`),
   );
   if (o.json) {

@@ -161,7 +161,10 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
         });
         // Documents with only a duplicate key or an unknown tag are checked too, so the user sees every
         // error of the file in one run; they are never built (one of their values is a guess).
-        const recovered = (loaded.recoveredDocuments ?? []).map((doc: LoadedDocument) => validateSpecies(doc).diagnostics);
+        const recovered = (loaded.recoveredDocuments ?? []).map((doc: LoadedDocument) => ({
+          doc,
+          diagnostics: validateSpecies(doc).diagnostics,
+        }));
         return { file: f, loaded, results, recovered, loadMs };
       }),
     ),
@@ -183,9 +186,11 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   for (const { file, loaded, results, recovered, loadMs } of perFile) {
     loaded.diagnostics.forEach(addFileDiag);
     diagnostics.push(...loaded.diagnostics);
-    for (const ds of recovered) {
+    for (const { doc, diagnostics: ds } of recovered) {
       diagnostics.push(...ds);
       ds.forEach(addFileDiag);
+      // It failed for its own YAML errors plus whatever validation found.
+      invalid.push({ doc, entry: invalidEntry(doc, file, [...(doc.yamlErrors ?? []), ...ds]) });
     }
     if (loaded.documents.length === 0 && !hasErrors(loaded.diagnostics)) {
       const d: Diagnostic = { severity: 'warning', file, path: '', message: 'file holds no species' };
@@ -216,7 +221,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     }
   }
   // Names must be unique across the database: the later duplicates fail (validate.ts names the first use).
-  const dup = checkUniqueNames(perFile.flatMap((p) => p.results.map((x) => x.doc)));
+  const dup = checkUniqueNames(perFile.flatMap((p) => [...p.results.map((x) => x.doc), ...p.recovered.map((x) => x.doc)]));
   diagnostics.push(...dup);
   dup.forEach(addFileDiag);
   const isDuplicate = (doc: LoadedDocument, name: string) =>

@@ -2,11 +2,11 @@
  * `qforge check` reports every error of a file in one run, even when the YAML itself has a duplicate key
  * (issue 2: "all errors of a file are reported at once"). Holds no reference values (no source to name).
  */
-import { mkdtemp, rm, writeFile } from 'node:fs/promises';
+import { cp, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { runCli } from './helpers.js';
+import { REPO, runCli } from './helpers.js';
 
 describe('qforge check', () => {
   it('a duplicate key does not hide the other mistakes of the document, and the document is not built', async () => {
@@ -25,9 +25,21 @@ describe('qforge check', () => {
       expect(r.stderr).toMatch(/a\.yaml:6:10: error: \[Ar\] sources:/);
       expect(r.stderr).toMatch(/a\.yaml:7:12: error: \[Ar\] structure: .*did you mean 'atom'/);
 
+      expect(r.stderr).toMatch(/checked 1 species in 1 file\(s\) \(1 invalid\): 4 error\(s\)/);
+
       const b = await runCli(['build', '.', '--out', 'out', '--keep-going', '--quiet'], root);
       expect(b.code).toBe(1);
       expect(b.stderr).toMatch(/no species succeeded/);
+
+      // Beside a good species, --keep-going builds the good one and lists the recovered one as failed.
+      await cp(path.join(REPO, 'test/fixtures/db/Ar.yaml'), path.join(root, 'good.yaml'));
+      await writeFile(path.join(root, 'a.yaml'), (await readFile(path.join(root, 'a.yaml'), 'utf8')).replace(/Ar/g, 'Xe'));
+      const k = await runCli(['build', '.', '--out', 'out', '--keep-going', '--json', '--quiet'], root);
+      expect(k.code).toBe(1);
+      const summary = JSON.parse(k.stdout);
+      expect(summary.counts.failed).toBe(1);
+      expect(summary.species.find((x: { name?: string }) => x.name === 'Xe')?.status).toBe('failed');
+      expect(summary.species.find((x: { name?: string }) => x.name === 'Ar')?.status).toBe('ok');
     } finally {
       await rm(root, { recursive: true, force: true });
     }

@@ -388,6 +388,9 @@ export function compareWithReferences(
       }
     }
   }
+  // An entry can only be judged against the references given this time: a species they do not cover says
+  // nothing about whether its entry is still needed (e.g. `--reference N2.csv` against a whole database).
+  const referenced = new Set(refs.flatMap((r) => [...r.species.keys()]));
   report.knownDeviations.forEach((k, i) => {
     const given = QS.filter((q) => k.tolerances[q] !== undefined);
     const where = `known deviation for ${k.species} (${k.recordedAt}${windowText(k) ? `, ${windowText(k)}` : ''})`;
@@ -395,6 +398,7 @@ export function compareWithReferences(
       report.warnings.push(`${where}: ${k.species} is not in the build ${build.label}; fix the name or remove the entry`);
       return;
     }
+    if (!referenced.has(k.species)) return;
     if (k.covered === 0) {
       report.warnings.push(`${where}: no reference value of ${k.species} in its window; nothing was compared against it`);
       return;

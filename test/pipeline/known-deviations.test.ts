@@ -175,4 +175,18 @@ describe('known deviations in qforge compare (NIST-JANAF 4th ed. N-023, C-093)',
       await built.cleanup();
     }
   });
+
+  it('does not warn about entries for species the given references do not cover', async () => {
+    // NIST-JANAF 4th ed. N-023 rows only (the fixture table, filtered to N2): the CO entry cannot be judged.
+    await writeSettings(workspace(), ACCEPTING);
+    const all = await readFile(path.join(workspace().db, 'reference/janaf-4th-ed.csv'), 'utf8');
+    const n2Only = all
+      .split('\n')
+      .filter((l, i, lines) => l.startsWith('#') || l === '' || i === lines.findIndex((x) => !x.startsWith('#')) || l.startsWith('N2,'))
+      .join('\n');
+    await writeFile(path.join(workspace().root, 'n2-only.csv'), n2Only);
+    const r = await runCli(['compare', 'out', '--database', 'db', '--reference', 'n2-only.csv'], workspace().root);
+    expect(r.code, r.stderr).toBe(0);
+    expect(r.stderr).not.toMatch(/known deviation for CO/);
+  });
 });

@@ -78,7 +78,7 @@ A species counts as "properties changed" when any of |dCp|, |dS| exceeds
 (10 K grid); otherwise only its coefficients moved.`,
   compare: `
 Examples:
-  qforge compare build --reference janaf/n2.csv janaf/o2.csv
+  qforge compare build --reference janaf/N2.csv janaf/O2.csv
   qforge compare build --reference tables.csv --tolerance cp=0.1,s=0.05,h=0.02
   qforge compare build --database species    references of species/qforge.yaml
   qforge compare build --database species --strict   ignore known deviations

@@ -32,6 +32,35 @@ export const CAUTION =
   'before use, and defer to qualified review and the applicable codes and standards for any ' +
   'safety-relevant design decision.';
 
+/**
+ * tables/README.txt: what the CSV columns are, and the caution. The caution cannot go inside the CSV files
+ * without breaking readers that expect the header on the first line, so it travels beside them.
+ */
+export function renderTablesReadme(settings: { title: string; standard_pressure: string }): string {
+  const paragraphs = [
+    `${settings.title}: property tables written by qforge.`,
+    `One file per species, ideal gas at ${settings.standard_pressure}. For Cp and S in J/(mol K) and for H-H298, H ` +
+      'and G in kJ/mol there are three columns each: "computed" from the partition functions, "fitted" from the ' +
+      'NASA 7-coefficient polynomial in thermo.json and nasa7.txt, and "fitted-computed", their difference. H is ' +
+      'the absolute standard enthalpy (formation enthalpy at 298.15 K plus H-H298); G = H - T S.',
+    CAUTION,
+  ];
+  return `${paragraphs.map((p) => wrapWords(p, 78).join('\n')).join('\n\n')}\n`;
+}
+
+function wrapWords(text: string, width: number): string[] {
+  const lines: string[] = [];
+  let line = '';
+  for (const w of text.split(/\s+/)) {
+    if (line && line.length + 1 + w.length > width) {
+      lines.push(line);
+      line = w;
+    } else line = line ? `${line} ${w}` : w;
+  }
+  if (line) lines.push(line);
+  return lines;
+}
+
 /** Everything emit needs about one successfully built species. */
 export interface BuiltSpecies {
   name: string;
@@ -202,18 +231,8 @@ export function nasa7Record(b: BuiltSpecies, identifier: string): Nasa7Record {
 
 /** '!' comment lines written above the records. */
 export function nasa7CautionLines(settings: DatabaseSettings): string[] {
-  const words = `${settings.title} -- written by ${TOOL_NAME} ${TOOL_VERSION} (${CONSTANTS_EDITION}, standard pressure ${settings.standard_pressure}). ${CAUTION}`.split(/\s+/);
-  const lines: string[] = [];
-  let line = '!';
-  for (const w of words) {
-    if (line.length + 1 + w.length > 79 && line !== '!') {
-      lines.push(line);
-      line = '!';
-    }
-    line += ` ${w}`;
-  }
-  if (line !== '!') lines.push(line);
-  return lines;
+  const text = `${settings.title} -- written by ${TOOL_NAME} ${TOOL_VERSION} (${CONSTANTS_EDITION}, standard pressure ${settings.standard_pressure}). ${CAUTION}`;
+  return wrapWords(text, 77).map((l) => `! ${l}`);
 }
 
 /** The whole nasa7.txt: caution lines, then the formatter's header, records and terminator. */

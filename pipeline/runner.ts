@@ -21,6 +21,7 @@ import {
   jsonText,
   renderNasa7,
   renderTable,
+  renderTablesReadme,
   tableFileNames,
   validateDatabaseJson,
   validateSummaryJson,
@@ -565,6 +566,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     }
     if (settings.outputs.nasa7) files.set('nasa7.txt', nasa7Text);
     if (settings.outputs.tables) {
+      files.set('tables/README.txt', renderTablesReadme(settings));
       const names = tableFileNames(good.map((g) => g.name), (s) => sha256Hex(s));
       for (const g of good) {
         const te = performance.now();

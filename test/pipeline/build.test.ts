@@ -33,7 +33,9 @@ describe('qforge build of the fixture database', () => {
     expect(r.code).toBe(0);
     const names = (await readdir(ws.out)).sort();
     expect(names).toEqual(['.qforge-build', 'nasa7.txt', 'summary.json', 'tables', 'thermo.json']);
-    expect((await readdir(path.join(ws.out, 'tables'))).sort()).toEqual(SPECIES.map((s) => `${s}.csv`));
+    expect((await readdir(path.join(ws.out, 'tables'))).sort()).toEqual([...SPECIES.map((s) => `${s}.csv`), 'README.txt']);
+    // The tables carry the caution beside them (inside a CSV it would break the header line).
+    expect(await readFile(path.join(ws.out, 'tables/README.txt'), 'utf8')).toMatch(/CAUTION: these polynomials are valid only inside/);
 
     const ajv = new Ajv2020({ allErrors: true, strict: false });
     ajv.addSchema(settingsSchema);

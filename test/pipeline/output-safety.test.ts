@@ -85,7 +85,13 @@ describe('OUT holds only what qforge wrote', () => {
     expect((await build(['db', '--out', 'out', '--quiet'])).code).toBe(0);
     const marker = await readFile(path.join(ws.out, BUILD_MARKER), 'utf8');
     expect(marker).toBe(
-      markerText(['thermo.json', 'nasa7.txt', 'summary.json', ...['Ar', 'CO', 'H2O', 'N2', 'O'].map((n) => `tables/${n}.csv`)]),
+      markerText([
+        'thermo.json',
+        'nasa7.txt',
+        'summary.json',
+        'tables/README.txt',
+        ...['Ar', 'CO', 'H2O', 'N2', 'O'].map((n) => `tables/${n}.csv`),
+      ]),
     );
     expect(marker.split('\n').slice(2, 4)).toEqual(['nasa7.txt', 'summary.json']);
     expect((await build(['db', '--out', 'out', '--quiet', '--no-cache'])).code).toBe(0);

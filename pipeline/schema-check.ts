@@ -192,6 +192,16 @@ function typeWords(t: unknown): string {
   return list.map((x) => TYPE_WORDS[String(x)] ?? String(x)).join(' or ');
 }
 
+/** "expected ..." text for a field's schema: its title, its accepted values, or its type. */
+function expectationOf(prop: unknown): string | undefined {
+  if (!prop || typeof prop !== 'object') return undefined;
+  const s = prop as JsonObject;
+  if (titleOf(s)) return titleOf(s);
+  if (Array.isArray(s.enum)) return `one of ${s.enum.map((x) => (typeof x === 'string' ? x : JSON.stringify(x))).join(', ')}`;
+  if ('const' in s) return JSON.stringify(s.const);
+  return s.type !== undefined ? typeWords(s.type) : undefined;
+}
+
 function branchSummary(root: unknown, branches: unknown): string | undefined {
   if (!Array.isArray(branches)) return undefined;
   const parts = branches.map((b) => {
@@ -217,7 +227,7 @@ const MISMATCH_KEYWORDS = new Set(['type', 'const', 'enum', 'false schema']);
  * the branch that fits the value's type, or by the combinator error alone when no branch fits. Processing in
  * emission order handles nesting: an inner combinator is collapsed before the outer one sees it.
  */
-function collapseCombinators(errors: readonly ErrorObject[]): ErrorObject[] {
+function collapseCombinators(root: unknown, errors: readonly ErrorObject[]): ErrorObject[] {
   const out: ErrorObject[] = [];
   for (const e of errors) {
     if (e.keyword !== 'anyOf' && e.keyword !== 'oneOf') {
@@ -226,12 +236,20 @@ function collapseCombinators(errors: readonly ErrorObject[]): ErrorObject[] {
     }
     const popped: ErrorObject[] = [];
     while (out.length > 0 && isWithin(out[out.length - 1]!.instancePath, e.instancePath)) popped.unshift(out.pop()!);
+    const byKeys = collapseByKeys(root, e, popped);
+    if (byKeys) {
+      out.push(...byKeys);
+      continue;
+    }
     const multipleMatched = e.keyword === 'oneOf' && Array.isArray((e.params as { passingSchemas?: unknown }).passingSchemas);
     const kept = multipleMatched
       ? []
       : popped.filter((x) => !(x.instancePath === e.instancePath && MISMATCH_KEYWORDS.has(x.keyword)));
     if (kept.length === 0) {
-      out.push(e);
+      // No branch takes a value of this type at all (a text where numbers and mappings are accepted).
+      const atItem = popped.filter((x) => x.instancePath === e.instancePath);
+      const onlyTypes = !multipleMatched && atItem.length > 0 && atItem.every((x) => x.keyword === 'type');
+      out.push(onlyTypes ? { ...e, params: { ...e.params, noTypeFits: true } } : e);
       continue;
     }
     // Several branches fit the type: report the branch with the fewest complaints (the likely intent).
@@ -249,6 +267,81 @@ function collapseCombinators(errors: readonly ErrorObject[]): ErrorObject[] {
     } else {
       out.push(...kept);
     }
+  }
+  return out;
+}
+
+const SHAPE_KEYWORDS = new Set(['required', 'additionalProperties']);
+
+/** The object branches of a combinator (refs resolved), or undefined when a branch is not a plain object schema. */
+function objectBranches(root: unknown, branches: unknown): JsonObject[] {
+  if (!Array.isArray(branches)) return [];
+  return branches
+    .map((b) => deref(root, b))
+    .filter((s): s is JsonObject => {
+      if (!s || typeof s !== 'object') return false;
+      const t = (s as JsonObject).type;
+      return t === 'object' || (Array.isArray(t) && t.includes('object'));
+    });
+}
+
+/**
+ * A mapping given to a combinator with several mapping forms (a vibration is `{value, unit}` or
+ * `{wavenumber, degeneracy}`): the form is recognised from the keys, not from ajv's per-branch error counts
+ * (ajv's schema paths inside `$ref` branches cannot be told apart reliably). When exactly one form has every
+ * key of the mapping and all its required keys, only the errors inside that form's fields are kept (the
+ * other forms' "missing"/"unknown key" complaints are noise); when none does, the combinator error alone is
+ * reported, once, at the mapping, with the combinator's title as the expectation. Returns undefined when
+ * the rule does not apply (not a mapping, or fewer than two mapping forms).
+ */
+function collapseByKeys(root: unknown, e: ErrorObject, popped: readonly ErrorObject[]): ErrorObject[] | undefined {
+  const data = e.data;
+  if (data === null || typeof data !== 'object' || Array.isArray(data)) return undefined;
+  const forms = objectBranches(root, e.schema);
+  if (forms.length < 2) return undefined;
+  const keys = Object.keys(data as JsonObject);
+  const fits = forms.filter((s) => {
+    const props = s.properties && typeof s.properties === 'object' ? (s.properties as JsonObject) : {};
+    const required = Array.isArray(s.required) ? (s.required as string[]) : [];
+    return keys.every((k) => k in props) && required.every((k) => keys.includes(k));
+  });
+  if (fits.length !== 1) return [e];
+  const props = fits[0]!.properties as JsonObject;
+  const inner = popped.filter((x) => {
+    if (x.instancePath === e.instancePath) return false;
+    const below = decodePointer(x.instancePath.slice(e.instancePath.length))[0];
+    return below !== undefined && below in props;
+  });
+  return inner.length > 0 ? inner : [e];
+}
+
+/**
+ * Several "missing field" / "unknown key" complaints about one quantity mapping (`{B: 0.39}` for a
+ * rotational constant) are one mistake — the wrong form — so they become one error at the mapping.
+ */
+function mergeQuantityShapeErrors(errors: readonly ErrorObject[]): ErrorObject[] {
+  const isQuantityShape = (x: ErrorObject) => {
+    const t = (x.parentSchema as JsonObject | undefined)?.type;
+    return SHAPE_KEYWORDS.has(x.keyword) && Array.isArray(t) && t.includes('object') && t.length > 1;
+  };
+  const count = new Map<string, number>();
+  for (const x of errors) if (isQuantityShape(x)) count.set(x.instancePath, (count.get(x.instancePath) ?? 0) + 1);
+  const out: ErrorObject[] = [];
+  const merged = new Map<string, ErrorObject>();
+  for (const x of errors) {
+    if (!isQuantityShape(x) || (count.get(x.instancePath) ?? 0) < 2) {
+      out.push(x);
+      continue;
+    }
+    let m = merged.get(x.instancePath);
+    if (!m) {
+      m = { ...x, keyword: 'quantityForm', params: { missing: [] as string[], unknown: [] as string[] } };
+      merged.set(x.instancePath, m);
+      out.push(m);
+    }
+    const p = m.params as { missing: string[]; unknown: string[] };
+    if (x.keyword === 'required') p.missing.push(String((x.params as { missingProperty?: unknown }).missingProperty));
+    else p.unknown.push(String((x.params as { additionalProperty?: unknown }).additionalProperty));
   }
   return out;
 }
@@ -288,7 +381,7 @@ export function checkAgainstSchema(
       : undefined);
 
   const raw = (validate.errors ?? []).filter((e) => e.keyword !== 'if' && e.keyword !== 'propertyNames');
-  const errors = collapseCombinators(raw);
+  const errors = mergeQuantityShapeErrors(collapseCombinators(root, raw));
   const out: Diagnostic[] = [];
   const seen = new Set<string>();
 
@@ -327,10 +420,11 @@ export function checkAgainstSchema(
       case 'required': {
         const missing = String(params.missingProperty);
         const condition = conditionTitle(root, e.schemaPath);
-        const prop = propertySchema(root, e.schemaPath, missing);
+        const own = parentSchema && typeof parentSchema.properties === 'object' ? (parentSchema.properties as JsonObject)[missing] : undefined;
+        const prop = own !== undefined ? deref(root, own) : propertySchema(root, e.schemaPath, missing);
         emit([...at, missing], doc.locate(at), {
           message: `missing required field '${missing}'${condition ? ` (required for ${condition})` : ''}`,
-          expected: titleOf(prop) ?? (prop && typeof prop === 'object' ? typeWords((prop as JsonObject).type) || undefined : undefined),
+          expected: expectationOf(prop),
         });
         break;
       }
@@ -419,11 +513,31 @@ export function checkAgainstSchema(
           expected: `at least ${plural(Number(params.limit), 'entry')}${title ? ` (${title})` : ''}`,
         });
         break;
+      case 'quantityForm': {
+        const p = params as { missing: string[]; unknown: string[] };
+        const known = parentSchema && typeof parentSchema.properties === 'object' ? Object.keys(parentSchema.properties as object) : [];
+        const parts: string[] = [];
+        if (p.missing.length) parts.push(`missing ${p.missing.map((k) => `'${k}'`).join(', ')}`);
+        for (const k of p.unknown) {
+          const suggestion = nearestKey(k, known);
+          parts.push(`unknown key '${k}'${suggestion ? ` (did you mean '${suggestion}'?)` : ''}`);
+        }
+        emit(at, doc.locate(at), {
+          message: `not an accepted form: ${parts.join('; ')}`,
+          value: e.data,
+          expected: title ?? `one of ${known.join(', ')}`,
+        });
+        break;
+      }
       case 'anyOf':
       case 'oneOf': {
         const multiple = Array.isArray(params.passingSchemas);
         emit(at, doc.locate(at), {
-          message: multiple ? 'matches more than one accepted form' : 'not an accepted form',
+          message: multiple
+            ? 'matches more than one accepted form'
+            : params.noTypeFits === true
+              ? `wrong type: ${jsonTypeName(e.data)}`
+              : 'not an accepted form',
           value: e.data,
           expected: title ?? branchSummary(root, e.schema) ?? 'one of the accepted forms',
         });

@@ -458,9 +458,9 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
   if (Array.isArray(raw)) {
     const vs: Vibration[] = [];
     raw.forEach((item, i) => {
-      const wn = isObj(item) ? energy(item.wavenumber) : energy(item);
-      const g = isObj(item) ? (item.degeneracy ?? 1) : 1;
-      if (wn === undefined || !(wn > 0) || !isPositiveInteger(g)) return;
+      const read = readVibration(item);
+      if (!read) return;
+      const { wavenumber: wn, degeneracy: g } = read;
       if (wn > 5000) {
         f.warn(['vibrations', i], `wavenumber ${fmt(wn)} cm-1 is above any fundamental (H2: about 4160 cm-1); check the unit`, {
           value: item,
@@ -483,6 +483,25 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
     }
   }
   return { rotationalConstants, vibrations };
+}
+
+/**
+ * One vibration in any of its three forms — a bare wavenumber (cm⁻¹), a quantity `{value, unit}` (both
+ * degeneracy 1), or `{wavenumber, degeneracy?}` with the wavenumber itself bare or `{value, unit}` — or
+ * undefined when the item has none of these shapes exactly (the schema reports why).
+ */
+function readVibration(item: unknown): Vibration | undefined {
+  const keys = isObj(item) ? Object.keys(item) : [];
+  let wn: number | undefined;
+  let g: unknown = 1;
+  if (!isObj(item)) wn = energy(item);
+  else if (keys.includes('wavenumber')) {
+    if (!keys.every((k) => k === 'wavenumber' || k === 'degeneracy')) return undefined;
+    wn = isObj(item.wavenumber) && Object.keys(item.wavenumber).length !== 2 ? undefined : energy(item.wavenumber);
+    g = item.degeneracy ?? 1;
+  } else if (keys.length === 2) wn = energy(item);
+  if (wn === undefined || !(wn > 0) || !isPositiveInteger(g)) return undefined;
+  return { wavenumber: wn, degeneracy: g };
 }
 
 function readDiatomicState(raw: unknown): DiatomicState | undefined {

@@ -54,13 +54,28 @@ export type MomentOfInertia =
       unit: "amu*angstrom^2" | "kg*m^2" | "g*cm^2";
     };
 /**
- * One harmonic vibration: a bare fundamental wavenumber in cm-1 (degeneracy 1), or {wavenumber, degeneracy}.
+ * One harmonic vibration: a fundamental wavenumber (a bare number in cm-1, or {value, unit}; degeneracy 1), or {wavenumber, degeneracy} with the wavenumber itself a bare number in cm-1 or {value, unit}.
  */
 export type Vibration =
+  | Wavenumber
+  | {
+      wavenumber: Wavenumber;
+      degeneracy?: PositiveInteger;
+    };
+/**
+ * A vibrational wavenumber, strictly positive. A bare number is in cm-1; or {value, unit} with unit one of cm-1, eV, K, J/mol, kJ/mol, kcal/mol (per particle for cm-1, eV, K; per mole for the molar units).
+ */
+export type Wavenumber =
   | number
   | {
-      wavenumber: PositiveEnergy;
-      degeneracy?: PositiveInteger;
+      /**
+       * Numeric value in `unit`.
+       */
+      value: number;
+      /**
+       * Unit of `value`.
+       */
+      unit: "cm-1" | "eV" | "K" | "J/mol" | "kJ/mol" | "kcal/mol";
     };
 /**
  * An energy or wavenumber, strictly positive. A bare number is in cm-1; or {value, unit} with unit one of cm-1, eV, K, J/mol, kJ/mol, kcal/mol (per particle for cm-1, eV, K; per mole for the molar units).
@@ -198,7 +213,7 @@ export interface SpeciesInput {
   moments_of_inertia?:
     [MomentOfInertia] | [MomentOfInertia, MomentOfInertia] | [MomentOfInertia, MomentOfInertia, MomentOfInertia];
   /**
-   * Harmonic vibrations (linear, nonlinear): bare wavenumbers in cm-1 or {wavenumber, degeneracy}. 3N-5 (linear) or 3N-6 (nonlinear) modes counting degeneracy.
+   * Harmonic vibrations (linear, nonlinear): each a wavenumber (bare number in cm-1, or {value, unit}) or {wavenumber, degeneracy}. 3N-5 (linear) or 3N-6 (nonlinear) modes counting degeneracy.
    *
    * @minItems 1
    */

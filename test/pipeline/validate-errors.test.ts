@@ -431,3 +431,69 @@ describe('all errors at once', () => {
     expect(loaded.documents.map((d) => (d.value as { name: string }).name)).toEqual(['O2x']);
   });
 });
+
+describe('a malformed quantity or vibration item gives one error at the item', () => {
+  // CO2 constants from memory (Herzberg, Infrared and Raman Spectra, 1945): B = 0.39021 cm-1, sigma = 2,
+  // 1333, 667 (x2), 2349 cm-1. Only line 8 (vibrations) or 7 (rotational constants) is varied.
+  const CO2 = [
+    'name: CO2',
+    'composition: {C: 1, O: 2}',
+    'enthalpy_of_formation: -393.51',
+    'sources: ["Herzberg (1945), from memory"]',
+    'structure: linear',
+    'symmetry_number: 2',
+    'rotational_constants: [0.39021]',
+    'vibrations: [1333, {wavenumber: 667, degeneracy: 2}, 2349]',
+  ];
+  const VIBRATION_FORMS = 'a wavenumber > 0 in cm-1, {value, unit}, or {wavenumber, degeneracy}';
+  const bad: Array<{ item: string; path: string; contains: string[] }> = [
+    { item: '{value: 1333}', path: 'vibrations[0]', contains: ['not an accepted form', VIBRATION_FORMS] },
+    { item: '{value: 1333, unit: cm-1, degeneracy: 1}', path: 'vibrations[0]', contains: ['not an accepted form', VIBRATION_FORMS, '{wavenumber: {value: 667, unit: cm-1}, degeneracy: 2}'] },
+    { item: '{wavenumber: 1333, unit: cm-1}', path: 'vibrations[0]', contains: ['not an accepted form', VIBRATION_FORMS] },
+    { item: '{}', path: 'vibrations[0]', contains: ['not an accepted form', VIBRATION_FORMS] },
+    { item: '[1333]', path: 'vibrations[0]', contains: ['wrong type: a list', VIBRATION_FORMS] },
+    { item: '{value: 1333, unit: cm1}', path: 'vibrations[0].unit', contains: ["unknown unit (did you mean 'cm-1'?)"] },
+    { item: '{value: 0, unit: cm-1}', path: 'vibrations[0].value', contains: ['must be positive'] },
+    { item: '{wavenumber: {value: 1333}}', path: 'vibrations[0].wavenumber.unit', contains: ["missing required field 'unit'", 'expected one of cm-1, eV'] },
+    { item: '{wavenumber: {value: 1333, unit: cm-1}, degeneracy: 0}', path: 'vibrations[0].degeneracy', contains: ['too small'] },
+    { item: '{wavenumber: {value: 1333, unt: cm-1}}', path: 'vibrations[0].wavenumber', contains: ["not an accepted form: missing 'unit'; unknown key 'unt' (did you mean 'unit'?)"] },
+  ];
+  it.each(bad.map((c) => [c.item, c] as const))('vibration %s', (_item, c) => {
+    const yaml = edit(CO2, { 8: `vibrations: [${c.item}, {wavenumber: 667, degeneracy: 2}, 2349]` });
+    const errors = diagnosticsOf(yaml).filter((d) => d.severity === 'error');
+    expect(errors.map(formatDiagnostic)).toHaveLength(1);
+    const [e] = errors;
+    expect(e!.path).toBe(c.path);
+    expect(e!.line).toBe(8);
+    for (const s of c.contains) expect(formatDiagnostic(e!)).toContain(s);
+  });
+
+  it.each([
+    ['rotational_constants', 7, 'rotational_constants: [{B: 0.39021}]', 'rotational_constants[0]', "missing 'value', 'unit'; unknown key 'B'"],
+    ['moments_of_inertia', 7, 'moments_of_inertia: [{value: 43.1, units: amu*angstrom^2}]', 'moments_of_inertia[0]', "missing 'unit'; unknown key 'units' (did you mean 'unit'?)"],
+    ['electronic level energy', 9, 'electronic_levels: [{energy: {val: 0, units: cm-1}, degeneracy: 1}]', 'electronic_levels[0].energy', "missing 'value', 'unit'"],
+  ] as const)('%s item in a wrong form', (_what, line, text, path, contains) => {
+    const yaml = line === 9 ? edit(CO2, {}, [text]) : edit(CO2, { 7: text });
+    const errors = diagnosticsOf(yaml).filter((d) => d.severity === 'error');
+    expect(errors.map(formatDiagnostic)).toHaveLength(1);
+    expect(errors[0]!.path).toBe(path);
+    expect(errors[0]!.line).toBe(line);
+    expect(formatDiagnostic(errors[0]!)).toContain(contains);
+    expect(formatDiagnostic(errors[0]!)).toContain('not an accepted form');
+  });
+
+  it('a diatomic constant in a wrong form: one error at the constant', () => {
+    const yaml = edit(DIATOMIC, { 9: '  - {term: X, energy: 0, degeneracy: 1, we: {val: 2358.57, u: cm-1}, wexe: 14.324, Be: 1.99824, alphae: 0.017318}' });
+    const errors = diagnosticsOf(yaml).filter((d) => d.severity === 'error');
+    expect(errors.map(formatDiagnostic)).toHaveLength(1);
+    expect(errors[0]!.path).toBe('electronic_states[0].we');
+    expect(formatDiagnostic(errors[0]!)).toContain("missing 'value', 'unit'");
+  });
+
+  it('a quantity missing only its unit names the accepted units', () => {
+    const yaml = edit(CO2, { 7: 'rotational_constants: [{value: 0.39021}]' });
+    const errors = diagnosticsOf(yaml).filter((d) => d.severity === 'error');
+    expect(errors).toHaveLength(1);
+    expect(formatDiagnostic(errors[0]!)).toContain("missing required field 'unit' (expected one of cm-1, eV, K, J/mol, kJ/mol, kcal/mol, MHz, GHz)");
+  });
+});

@@ -240,3 +240,49 @@ describe('names across a database', () => {
     expect(all[0]).toMatchObject({ severity: 'warning', line: 2 });
   });
 });
+
+describe('vibration forms', () => {
+  // CO2 from memory (Herzberg, Infrared and Raman Spectra, 1945): B = 0.39021 cm-1, sigma = 2,
+  // fundamentals 1333, 667 (doubly degenerate), 2349 cm-1.
+  const co2 = (vibrations: string) =>
+    [
+      'name: CO2',
+      'composition: {C: 1, O: 2}',
+      'enthalpy_of_formation: -393.51',
+      'sources: ["Herzberg (1945), from memory"]',
+      'structure: linear',
+      'symmetry_number: 2',
+      'rotational_constants: [0.39021]',
+      `vibrations: ${vibrations}`,
+    ].join('\n');
+  const normalised = (vibrations: string) => {
+    const r = validateSpecies(parseYamlText(co2(vibrations), 'co2.yaml').documents[0]!);
+    expect(r.diagnostics).toEqual([]);
+    return r;
+  };
+  const EXPECTED = [
+    { wavenumber: 1333, degeneracy: 1 },
+    { wavenumber: 667, degeneracy: 2 },
+    { wavenumber: 2349, degeneracy: 1 },
+  ];
+
+  it('bare, {value, unit} and {wavenumber, degeneracy} give the same normalised species', () => {
+    const forms = [
+      '[1333, {wavenumber: 667, degeneracy: 2}, 2349]',
+      '[{value: 1333, unit: cm-1}, {wavenumber: {value: 667, unit: cm-1}, degeneracy: 2}, {value: 2349, unit: cm-1}]',
+      '[{wavenumber: 1333}, {wavenumber: 667, degeneracy: 2}, {wavenumber: {value: 2349, unit: cm-1}, degeneracy: 1}]',
+      '[{wavenumber: {value: 1333, unit: cm-1}}, {degeneracy: 2, wavenumber: 667}, {unit: cm-1, value: 2349}]',
+    ];
+    const results = forms.map(normalised);
+    for (const r of results) expect((r.species as LinearSpecies).vibrations).toEqual(EXPECTED);
+    // Same canonical form, so the same cache hash whatever the spelling.
+    for (const r of results) expect(JSON.stringify(r.normalisedInput)).toBe(JSON.stringify(results[0]!.normalisedInput));
+  });
+
+  it('a {value, unit} vibration in another unit is converted (CODATA 2018 factors typed above)', () => {
+    const r = normalised(`[{value: ${1333 / EV_CM1}, unit: eV}, {wavenumber: {value: ${667 / K_CM1}, unit: K}, degeneracy: 2}, {value: ${2349 / KJMOL_CM1}, unit: kJ/mol}]`);
+    const vs = (r.species as LinearSpecies).vibrations;
+    expect(vs.map((v) => v.degeneracy)).toEqual([1, 2, 1]);
+    vs.forEach((v, i) => expect(v.wavenumber).toBeCloseTo(EXPECTED[i]!.wavenumber, 6));
+  });
+});

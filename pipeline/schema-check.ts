@@ -499,13 +499,16 @@ export function checkAgainstSchema(
         break;
       }
       case 'minLength':
-      case 'maxLength':
+      case 'maxLength': {
+        const n = typeof e.data === 'string' ? [...e.data].length : 0;
+        const limit = `${e.keyword === 'minLength' ? 'at least' : 'at most'} ${plural(Number(params.limit), 'character')}`;
         emit(at, doc.locate(at), {
-          message: e.keyword === 'minLength' ? 'too short' : 'too long',
+          message: `${e.keyword === 'minLength' ? 'too short' : 'too long'}: ${plural(n, 'character')}`,
           value: e.data,
-          expected: `${e.keyword === 'minLength' ? 'at least' : 'at most'} ${plural(Number(params.limit), 'character')}`,
+          expected: title ? `${limit}: ${title}` : limit,
         });
         break;
+      }
       case 'minProperties':
         emit(at, doc.locate(at), {
           message: 'too few entries',

@@ -143,7 +143,7 @@ export type NonNegativeRotationalTerm =
  */
 export interface SpeciesInput {
   /**
-   * Record name of the species, 1-16 characters of [A-Za-z0-9()+*,._-]; unique in a database.
+   * Record name of the species, 1-16 characters (the name field of the 80-column record) of [A-Za-z0-9()+*,._-]; unique in a database.
    */
   name: string;
   /**

@@ -202,9 +202,20 @@ const ERRORS: Case[] = [
     contains: ['wrong form', 'got "O atom!"', '1-16 characters'],
   },
   {
+    // A 16-character name with a bad character: only the character-set message, no length complaint.
+    kind: 'invalid record name of the right length', yaml: edit(ATOM, { 1: 'name: "ABCDEFGHIJKLMNO!"' }), line: 1, at: '"ABC', path: 'name',
+    contains: ['wrong form', 'from A-Z a-z 0-9'],
+  },
+  {
     kind: 'name that is a keyword of the 80-column file', yaml: edit(ATOM, { 1: 'name: end' }), line: 1, at: 'end', path: 'name',
     contains: ["'end' is a keyword of the 80-column thermo file"],
   },
+  {
+    // 17 characters: one more than the name field (columns 1-16) of the NASA published 80-column record.
+    kind: 'record name too long', yaml: edit(ATOM, { 1: 'name: ABCDEFGHIJKLMNOPQ' }), line: 1, at: 'ABCDEFGHIJKLMNOPQ', path: 'name',
+    contains: ['too long: 17 characters', 'got "ABCDEFGHIJKLMNOPQ"', 'at most 16 characters', '1-16 characters', '80-column record'],
+  },
+  { kind: 'empty record name', yaml: edit(ATOM, { 1: 'name: ""' }), line: 1, at: '""', path: 'name', contains: ['too short: 0 characters'] },
   { kind: 'name of dots only', yaml: edit(ATOM, { 1: 'name: ".."' }), line: 1, at: '".."', path: 'name', contains: ['only of dots'] },
   {
     kind: 'misspelt structure', yaml: edit(ATOM, { 5: 'structure: atomic' }), line: 5, at: 'atomic', path: 'structure',
@@ -495,5 +506,14 @@ describe('a malformed quantity or vibration item gives one error at the item', (
     const errors = diagnosticsOf(yaml).filter((d) => d.severity === 'error');
     expect(errors).toHaveLength(1);
     expect(formatDiagnostic(errors[0]!)).toContain("missing required field 'unit' (expected one of cm-1, eV, K, J/mol, kJ/mol, kcal/mol, MHz, GHz)");
+  });
+});
+
+describe('record name length', () => {
+  it('a 17-character name of accepted characters gets the length message only', () => {
+    const errors = diagnosticsOf(edit(ATOM, { 1: 'name: ABCDEFGHIJKLMNOPQ' })).filter((d) => d.severity === 'error');
+    expect(errors.map(formatDiagnostic)).toEqual([
+      'species/bad.yaml:1:7: error: [ABCDEFGHIJKLMNOPQ] name: too long: 17 characters (got "ABCDEFGHIJKLMNOPQ"; expected at most 16 characters: 1-16 characters from A-Z a-z 0-9 ( ) + * , . _ - (the name field of the 80-column record))',
+    ]);
   });
 });

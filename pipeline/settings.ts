@@ -12,6 +12,9 @@ import { STANDARD_PRESSURE_ATM, STANDARD_PRESSURE_BAR, T_REF } from '../src/cons
 import type { Diagnostic } from './diagnostics.js';
 import { SETTINGS_FILE_NAME, loadYamlFile, type LoadedDocument } from './load.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath } from './schema-check.js';
+import { MAX_END_GAP_FRACTION, MAX_INNER_GAP_FRACTION, MIN_DISTINCT_TEMPERATURES } from '../src/nasa7/samples.js';
+// plan.ts imports this module too; only functions cross the cycle, and only at call time.
+import { temperatureGrid } from './plan.js';
 
 export { SETTINGS_FILE_NAME };
 
@@ -155,11 +158,135 @@ export function checkSettingsRules(s: DatabaseSettings, file: string, doc?: Load
   }
   if ((high - low) / s.fit.sampling_step > 100_000) {
     push(['fit', 'sampling_step'], 'sampling grid has too many points', s.fit.sampling_step, 'at most 100000 points');
+  } else if (low < mid && mid < high && low <= T_REF && T_REF <= mid) {
+    // Only once the ranges themselves are sound: a misplaced mid is one mistake, reported above.
+    const step = s.fit.sampling_step;
+    const shortfall = samplingShortfall({ low, mid, high }, step);
+    if (shortfall) {
+      const setHere = isSetIn(doc, ['fit', 'sampling_step']);
+      const largest = largestSamplingStep({ low, mid, high });
+      out.push({
+        severity: 'error',
+        file,
+        ...at(setHere ? ['fit', 'sampling_step'] : ['temperature_ranges']),
+        path: 'fit.sampling_step',
+        message: `fit.sampling_step = ${step} K${setHere ? '' : ' (the default)'} is too coarse for the temperature ranges ${low}/${mid}/${high} K: ${shortfall}`,
+        value: step,
+        expected: `fit.sampling_step <= ${largest} K for these ranges (the largest accepted value)`,
+      });
+    }
   }
   const ref = s.references.files;
   if (new Set(ref).size !== ref.length) push(['references', 'files'], 'a reference file is listed twice', ref, 'distinct files');
   checkKnownDeviations(s.references, push);
   return out;
+}
+
+export interface FitRanges {
+  low: number;
+  mid: number;
+  high: number;
+}
+
+/**
+ * Why the sampling grid of `step` K cannot support a two-range fit over `ranges`, or undefined when it can.
+ * The grid is the one plan.ts builds (low, low+step, …, high, plus mid and 298.15 K); the rules are those
+ * the fit itself enforces (src/nasa7/samples.ts): at least MIN_DISTINCT_TEMPERATURES distinct temperatures
+ * per range, no inner gap wider than MAX_INNER_GAP_FRACTION of the range, and samples near both ends.
+ * Checking here lets a too-coarse step be reported once, at the setting, instead of as a fit failure of
+ * every species.
+ */
+export function samplingShortfall(ranges: FitRanges, step: number): string | undefined {
+  const { low, mid, high } = ranges;
+  const grid = temperatureGrid(low, high, step, [mid, T_REF]);
+  for (const [name, from, to] of [['low', low, mid], ['high', mid, high]] as const) {
+    // A sample at exactly mid belongs to both ranges, as in the fit.
+    const d = grid.filter((t) => (name === 'low' ? t <= mid : t >= mid));
+    const width = to - from;
+    if (d.length < MIN_DISTINCT_TEMPERATURES) {
+      return `the ${name} range [${from}, ${to}] K gets ${d.length} distinct sample temperatures; the fit needs at least ${MIN_DISTINCT_TEMPERATURES}`;
+    }
+    if (d[0]! - from > MAX_END_GAP_FRACTION * width || to - d[d.length - 1]! > MAX_END_GAP_FRACTION * width) {
+      return `the ${name} range [${from}, ${to}] K is not sampled near its ends`;
+    }
+    for (let i = 1; i < d.length; i++) {
+      const gap = d[i]! - d[i - 1]!;
+      if (gap > MAX_INNER_GAP_FRACTION * width) {
+        return `the ${name} range [${from}, ${to}] K has no sample between ${d[i - 1]} and ${d[i]} K (a gap of ${Number(gap.toPrecision(6))} K); the fit accepts gaps up to ${MAX_INNER_GAP_FRACTION * 100} % of the range, ${MAX_INNER_GAP_FRACTION * width} K`;
+      }
+    }
+  }
+  return undefined;
+}
+
+/** Resolution of `largestSamplingStep`, K: the schema's smallest accepted step. */
+const SAMPLING_STEP_RESOLUTION = 0.5;
+
+/**
+ * The largest step (a multiple of 0.5 K, at most the schema's 500 K) such that it and every smaller
+ * multiple of 0.5 K pass `samplingShortfall` for `ranges`: a value that is safe to suggest. 0 when even
+ * 0.5 K fails (ranges too narrow for any grid).
+ */
+export function largestSamplingStep(ranges: FitRanges): number {
+  const max = (schema.properties.fit.properties.sampling_step as { maximum: number }).maximum;
+  let ok = 0;
+  for (let k = 1; k * SAMPLING_STEP_RESOLUTION <= max; k++) {
+    if (samplingShortfall(ranges, k * SAMPLING_STEP_RESOLUTION) !== undefined) break;
+    ok = k * SAMPLING_STEP_RESOLUTION;
+  }
+  return ok;
+}
+
+/**
+ * For a species that overrides `temperature_ranges`: an error when the database's fit.sampling_step is too
+ * coarse for that species' ranges (the database's own ranges are checked with the settings). Names both the
+ * species' temperature_ranges (file:line:col of the species) and fit.sampling_step (where the settings file
+ * sets it, or "the default"). Undefined when the step suits the ranges, or the ranges are not in order
+ * (validation reports that).
+ */
+export function checkSpeciesSampling(opts: {
+  /** The species' effective ranges (its overrides merged over the settings). */
+  ranges: FitRanges;
+  settings: DatabaseSettings;
+  /** Species file and the position of its `temperature_ranges`. */
+  file: string;
+  species: string;
+  line?: number;
+  column?: number;
+  /** Settings file, and where it sets fit.sampling_step (SettingsResult.setAt(['fit', 'sampling_step'])). */
+  settingsFile?: string;
+  stepSetAt?: { line: number; column: number };
+}): Diagnostic | undefined {
+  const { ranges, settings } = opts;
+  if (!(ranges.low < ranges.mid && ranges.mid < ranges.high)) return undefined;
+  const step = settings.fit.sampling_step;
+  const shortfall = samplingShortfall(ranges, step);
+  if (!shortfall) return undefined;
+  const stepWhere =
+    opts.stepSetAt && opts.settingsFile
+      ? `set in ${opts.settingsFile}:${opts.stepSetAt.line}:${opts.stepSetAt.column}`
+      : 'the default';
+  const d: Diagnostic = {
+    severity: 'error',
+    file: opts.file,
+    species: opts.species,
+    path: 'temperature_ranges',
+    message: `temperature_ranges ${ranges.low}/${ranges.mid}/${ranges.high} K are too narrow for fit.sampling_step = ${step} K (${stepWhere}): ${shortfall}`,
+    value: { ...ranges },
+    expected: `fit.sampling_step <= ${largestSamplingStep(ranges)} K for these ranges, or wider temperature_ranges`,
+  };
+  if (opts.line !== undefined) d.line = opts.line;
+  if (opts.column !== undefined) d.column = opts.column;
+  return d;
+}
+
+function isSetIn(doc: LoadedDocument | undefined, segments: string[]): boolean {
+  let v: unknown = doc?.value;
+  for (const k of segments) {
+    if (!isObject(v) || !Object.hasOwn(v, k)) return false;
+    v = v[k];
+  }
+  return true;
 }
 
 const PLACEHOLDER_REASON = /^\s*(todo|tbd|tba|fixme|xxx|n\/?a|none|unknown|known)\b/i;

@@ -7,6 +7,9 @@
 import { cp, mkdir, readFile, symlink, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { formatDiagnostic } from '../../pipeline/diagnostics.js';
+import { parseYamlText } from '../../pipeline/load.js';
+import { checkSettingsRules, checkSpeciesSampling, largestSamplingStep, samplingShortfall, withDefaults } from '../../pipeline/settings.js';
 import { hashFolder, runCli, tempWorkspace } from './helpers.js';
 
 type Ws = Awaited<ReturnType<typeof tempWorkspace>>;
@@ -164,6 +167,17 @@ const CASES: BadCase[] = [
     setup: editSettings('mid: 1000', 'mid: 7000'),
     code: 1,
     expect: [/qforge\.yaml:5:\d+: error/, /temperature_ranges/, /low < mid < high/],
+  },
+  {
+    // 500 K leaves the low range [200, 1000] K 4 distinct temperatures; the fit needs 7 (src/nasa7/samples.ts).
+    name: 'settings: sampling step too coarse for the fit ranges',
+    setup: editSettings('sampling_step: 20', 'sampling_step: 500'),
+    code: 1,
+    expect: [
+      /qforge\.yaml:10:18: error: fit\.sampling_step: fit\.sampling_step = 500 K is too coarse for the temperature ranges 200\/1000\/6000 K/,
+      /low range \[200, 1000\] K gets 4 distinct sample temperatures; the fit needs at least 7/,
+      /got 500; expected fit\.sampling_step <= 199\.5 K/,
+    ],
   },
   {
     name: 'settings: unknown standard pressure',
@@ -375,5 +389,71 @@ describe('bad inputs: exit code, located message, outputs untouched', () => {
     } finally {
       await ws.cleanup();
     }
+  });
+});
+
+describe('fit.sampling_step against the fit ranges (rules of src/nasa7/samples.ts: >= 7 distinct T per range, gaps <= 25 %)', () => {
+  const settingsDoc = (text: string) => parseYamlText(text, 'db/qforge.yaml', { split: 'single' }).documents[0]!;
+
+  it('is blamed once, on the setting, not on every species', async () => {
+    const ws = await tempWorkspace();
+    try {
+      await editSettings('sampling_step: 20', 'sampling_step: 500')(ws);
+      const r = await runCli(['check', 'db'], ws.root);
+      expect(r.code).toBe(1);
+      expect(r.stderr.match(/fit\.sampling_step/g)?.length).toBeGreaterThanOrEqual(1);
+      expect(r.stderr).not.toMatch(/the fit failed/);
+      expect(r.stderr.split('\n').filter((l) => / error: /.test(l))).toHaveLength(1);
+    } finally {
+      await ws.cleanup();
+    }
+  });
+
+  it('the largest accepted step for the default ranges 200/1000/6000 K', () => {
+    // Low range: 200, 200+s, …, 1000 plus 298.15 K: 7 distinct temperatures while 4s < 800 K.
+    expect(largestSamplingStep({ low: 200, mid: 1000, high: 6000 })).toBe(199.5);
+    expect(samplingShortfall({ low: 200, mid: 1000, high: 6000 }, 199.5)).toBeUndefined();
+    expect(samplingShortfall({ low: 200, mid: 1000, high: 6000 }, 200)).toMatch(/low range \[200, 1000\] K gets 6 distinct/);
+    expect(samplingShortfall({ low: 200, mid: 1000, high: 6000 }, 10)).toBeUndefined();
+  });
+
+  it('names the gap when the count is enough but the grid leaves a hole', () => {
+    // High range [1000, 1100]: with step 30 from 200 the samples are 1000 (mid), 1010, 1040, 1070, 1100 (end): 5 distinct.
+    expect(samplingShortfall({ low: 200, mid: 1000, high: 1100 }, 30)).toMatch(/high range \[1000, 1100\] K gets 5 distinct/);
+    // 7 points but one 40 % hole: step 40 over [300, 400] gives 300, 340, 380, 400 + … → count fails first; use a wide step with extras.
+    const s = samplingShortfall({ low: 250, mid: 300, high: 6000 }, 8);
+    // 250, 258, …, 298, 298.15, 300: 9 distinct, gaps <= 8 K: accepted.
+    expect(s).toBeUndefined();
+  });
+
+  it('a too-coarse default step is reported at temperature_ranges and says it is the default', () => {
+    const doc = settingsDoc('title: t\ntemperature_ranges: {low: 260, mid: 300, high: 6000}\n');
+    const ds = checkSettingsRules(withDefaults(doc.value), 'db/qforge.yaml', doc);
+    expect(ds).toHaveLength(1);
+    expect(ds[0]).toMatchObject({ path: 'fit.sampling_step', line: 2, value: 10 });
+    expect(ds[0]!.message).toContain('fit.sampling_step = 10 K (the default) is too coarse');
+    expect(ds[0]!.expected).toContain('<= 9.5 K');
+  });
+
+  it('a species whose own temperature_ranges are too narrow for the step names both', () => {
+    const settingsText = 'fit:\n  sampling_step: 50\n';
+    const doc = settingsDoc(settingsText);
+    const settings = withDefaults(doc.value);
+    expect(checkSettingsRules(settings, 'db/qforge.yaml', doc)).toEqual([]);
+    const d = checkSpeciesSampling({
+      ranges: { low: 200, mid: 400, high: 6000 },
+      settings,
+      file: 'db/He.yaml',
+      species: 'He',
+      line: 6,
+      column: 21,
+      settingsFile: 'db/qforge.yaml',
+      stepSetAt: doc.locate(['fit', 'sampling_step']),
+    });
+    expect(d).toBeDefined();
+    expect(formatDiagnostic(d!)).toBe(
+      'db/He.yaml:6:21: error: [He] temperature_ranges: temperature_ranges 200/400/6000 K are too narrow for fit.sampling_step = 50 K (set in db/qforge.yaml:2:18): the low range [200, 400] K gets 6 distinct sample temperatures; the fit needs at least 7 (got {"low":200,"mid":400,"high":6000}; expected fit.sampling_step <= 49.5 K for these ranges, or wider temperature_ranges)',
+    );
+    expect(checkSpeciesSampling({ ranges: { low: 200, mid: 1000, high: 6000 }, settings, file: 'db/He.yaml', species: 'He' })).toBeUndefined();
   });
 });

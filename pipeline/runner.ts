@@ -31,7 +31,7 @@ import { fitOptionsFor, fitSpecies } from './fit.js';
 import { canonicalJson, hashParts, sha256Hex } from './hash.js';
 import { discoverSpeciesFiles, loadYamlFile, type LoadedDocument } from './load.js';
 import { planSpecies, type SpeciesPlan } from './plan.js';
-import { loadSettings, type DatabaseSettings, type QuantityTriple } from './settings.js';
+import { checkSpeciesSampling, loadSettings, type DatabaseSettings, type QuantityTriple } from './settings.js';
 import { checkUniqueNames, validateSpecies } from './validate.js';
 import { verifySpecies } from './verify.js';
 import { codeFingerprint } from './code-fingerprint.js';
@@ -350,6 +350,24 @@ export async function buildOneSpecies(
   };
 
   const plan = planSpecies(v.species, settings);
+  // A species' own ranges can be too narrow for the database's sampling step: say so, naming both settings,
+  // rather than letting the fit fail with a message about sample counts.
+  if (v.species.temperatureRanges) {
+    const stepSetAt = limitSource.settingsSetAt?.(['fit', 'sampling_step']);
+    const coarse = checkSpeciesSampling({
+      ranges: plan.ranges,
+      settings,
+      file: v.displayFile,
+      species: v.name,
+      ...(v.positions.temperature_ranges ?? v.positions.name ?? {}),
+      ...(limitSource.settingsFile ? { settingsFile: limitSource.settingsFile } : {}),
+      ...(stepSetAt ? { stepSetAt } : {}),
+    });
+    if (coarse) {
+      out.diagnostics.push(coarse);
+      return out;
+    }
+  }
   let fitOptions: FitOptions;
   try {
     fitOptions = fitOptionsFor(plan.fitOptions);

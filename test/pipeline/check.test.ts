@@ -6,7 +6,7 @@ import { cp, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { REPO, runCli } from './helpers.js';
+import { REPO, runCli, tempWorkspace } from './helpers.js';
 
 describe('qforge check', () => {
   it('a duplicate key does not hide the other mistakes of the document, and the document is not built', async () => {
@@ -42,6 +42,23 @@ describe('qforge check', () => {
       expect(summary.species.find((x: { name?: string }) => x.name === 'Ar')?.status).toBe('ok');
     } finally {
       await rm(root, { recursive: true, force: true });
+    }
+  });
+});
+
+describe('a species whose own temperature_ranges are too narrow for fit.sampling_step', () => {
+  it('fails with one error naming both settings, not "the fit failed"', async () => {
+    // Fit needs >= 7 distinct temperatures per range (common practice, src/nasa7 sample checks).
+    const ws = await tempWorkspace();
+    try {
+      const ar = path.join(ws.db, 'Ar.yaml');
+      await writeFile(ar, `${await readFile(ar, 'utf8')}temperature_ranges: {low: 250, mid: 300, high: 6000}\n`);
+      const r = await runCli(['build', 'db', '--out', 'out'], ws.root);
+      expect(r.code).toBe(1);
+      expect(r.stderr).toMatch(/Ar\.yaml:\d+:\d+: error: \[Ar\] temperature_ranges: .*too narrow for fit\.sampling_step = 20 K \(set in db\/qforge\.yaml:10:18\)/);
+      expect(r.stderr).not.toMatch(/the fit failed/);
+    } finally {
+      await ws.cleanup();
     }
   });
 });

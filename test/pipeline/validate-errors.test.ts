@@ -9,6 +9,7 @@ import { describe, expect, it } from 'vitest';
 import { formatDiagnostic, type Diagnostic } from '../../pipeline/diagnostics.js';
 import { parseYamlText } from '../../pipeline/load.js';
 import { validateSpecies } from '../../pipeline/validate.js';
+import { CO2_LINES } from '../fixtures/input/co2.js';
 
 type Edit = Record<number, string | null>;
 
@@ -444,18 +445,8 @@ describe('all errors at once', () => {
 });
 
 describe('a malformed quantity or vibration item gives one error at the item', () => {
-  // CO2 constants from memory (Herzberg, Infrared and Raman Spectra, 1945): B = 0.39021 cm-1, sigma = 2,
-  // 1333, 667 (x2), 2349 cm-1. Only line 8 (vibrations) or 7 (rotational constants) is varied.
-  const CO2 = [
-    'name: CO2',
-    'composition: {C: 1, O: 2}',
-    'enthalpy_of_formation: -393.51',
-    'sources: ["Herzberg (1945), from memory"]',
-    'structure: linear',
-    'symmetry_number: 2',
-    'rotational_constants: [0.39021]',
-    'vibrations: [1333, {wavenumber: 667, degeneracy: 2}, 2349]',
-  ];
+  // CO2 (test/fixtures/input/co2.ts). Only line 8 (vibrations) or 7 (rotational constants) is varied.
+  const CO2 = [...CO2_LINES];
   const VIBRATION_FORMS = 'a wavenumber > 0 in cm-1, {value, unit}, or {wavenumber, degeneracy}';
   const bad: Array<{ item: string; path: string; contains: string[] }> = [
     { item: '{value: 1333}', path: 'vibrations[0]', contains: ['not an accepted form', VIBRATION_FORMS] },

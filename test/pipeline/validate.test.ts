@@ -15,6 +15,7 @@ import { describe, expect, it } from 'vitest';
 import { parseYamlText } from '../../pipeline/load.js';
 import { checkUniqueNames, findDuplicateNames, validateSpecies, validateSpeciesSet } from '../../pipeline/validate.js';
 import type { AtomSpecies, DiatomicSpecies, LinearSpecies, NonlinearSpecies } from '../../src/model.js';
+import { CO2_LINES } from '../fixtures/input/co2.js';
 
 const EV_CM1 = 8065.543937349212;
 const K_CM1 = 0.6950348004861275;
@@ -242,19 +243,8 @@ describe('names across a database', () => {
 });
 
 describe('vibration forms', () => {
-  // CO2 from memory (Herzberg, Infrared and Raman Spectra, 1945): B = 0.39021 cm-1, sigma = 2,
-  // fundamentals 1333, 667 (doubly degenerate), 2349 cm-1.
-  const co2 = (vibrations: string) =>
-    [
-      'name: CO2',
-      'composition: {C: 1, O: 2}',
-      'enthalpy_of_formation: -393.51',
-      'sources: ["Herzberg (1945), from memory"]',
-      'structure: linear',
-      'symmetry_number: 2',
-      'rotational_constants: [0.39021]',
-      `vibrations: ${vibrations}`,
-    ].join('\n');
+  // CO2 (test/fixtures/input/co2.ts) with its vibrations line replaced.
+  const co2 = (vibrations: string) => [...CO2_LINES.slice(0, 7), `vibrations: ${vibrations}`].join('\n');
   const normalised = (vibrations: string) => {
     const r = validateSpecies(parseYamlText(co2(vibrations), 'co2.yaml').documents[0]!);
     expect(r.diagnostics).toEqual([]);

@@ -15,10 +15,12 @@ import { elementsObject } from 'chemical-elements';
 import schema from '../schemas/species.schema.json' with { type: 'json' };
 import { isKnownElement, molarMass } from '../src/elements.js';
 import { centrifugalConstantOf, rotationalConstantOf, vibrationalTerm } from '../src/partition/diatomic.js';
+import { hinderedRotorBasisSize, MAX_HINDERED_ROTOR_BASIS, smallestHinderedRotorConstant } from '../src/partition/hindered-rotor.js';
 import { DEFAULT_NUCLEAR_SPIN_MIXTURE } from '../src/partition/spin-mixture.js';
 import type {
   DiatomicState,
   ElectronicLevel,
+  InternalRotor,
   NuclearSpinMixture,
   NuclearSpinWeights,
   Species,
@@ -474,15 +476,104 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
       if (c && c.known && (structure === 'linear' || structure === 'nonlinear')) {
         const expected = 3 * c.atoms - (structure === 'linear' ? 5 : 6);
         const modes = vs.reduce((n, v) => n + v.degeneracy, 0);
-        if (expected > 0 && modes !== expected) {
+        const rotors = Array.isArray(input.internal_rotors) ? input.internal_rotors.length : 0;
+        if (rotors === 0 && expected > 0 && modes !== expected) {
           f.warn(['vibrations'], `${modes} vibrational mode${modes === 1 ? '' : 's'} (counting degeneracy), but a ${structure} molecule of ${c.atoms} atoms has ${expected} (3N-${structure === 'linear' ? 5 : 6})`, {
             expected: `${expected} modes counting degeneracy`,
+          });
+        } else if (rotors > 0 && expected > 0 && modes + rotors !== expected) {
+          // Each internal rotor replaces one torsional vibration; a torsion left in `vibrations` is counted twice.
+          f.warn(['vibrations'], `${modes} vibrational mode${modes === 1 ? '' : 's'} (counting degeneracy) plus ${rotors} internal rotor${rotors === 1 ? '' : 's'} make ${modes + rotors} modes, but a ${structure} molecule of ${c.atoms} atoms has ${expected} (3N-${structure === 'linear' ? 5 : 6})`, {
+            expected: `${expected} modes counting each internal rotor as one (remove a torsion treated as an internal rotor from vibrations)`,
           });
         }
       }
     }
   }
   return { rotationalConstants, vibrations };
+}
+
+/** A reduced rotational constant above this is larger than any torsion's (an OH top: about 20-40 cm⁻¹). */
+const LARGEST_TORSION_ROTATIONAL_CONSTANT = 100;
+
+/**
+ * The optional `internal_rotors` of a polyatomic, normalised (cm⁻¹; foldedness defaulting to the rotor
+ * symmetry number), or undefined when absent or when any item is unusable (the schema or a check below
+ * reports why). Signs and integer ranges are the schema's; here: exactly one of moment_of_inertia and
+ * rotational_constant, a basis the level sum can diagonalise, and warnings for a rotor on a linear molecule,
+ * a symmetry number that does not divide the foldedness and an implausibly large rotational constant.
+ */
+function readInternalRotors(ctx: Ctx): { rotors?: InternalRotor[]; ok: boolean } {
+  const { f, input, structure } = ctx;
+  const raw = input.internal_rotors;
+  if (raw === undefined) return { ok: true };
+  if (!Array.isArray(raw) || raw.length === 0) return { ok: false };
+  if (structure === 'linear') {
+    f.warn(['internal_rotors'], 'internal rotors on a linear molecule: a linear molecule has no torsion about a bond axis', {
+      key: true,
+      expected: "structure 'nonlinear' for a molecule with a torsion, or no internal_rotors",
+    });
+  }
+  const rotors: InternalRotor[] = [];
+  let ok = true;
+  raw.forEach((item, i) => {
+    if (!isObj(item)) {
+      ok = false;
+      return;
+    }
+    const at = (field?: string): Segment[] => (field === undefined ? ['internal_rotors', i] : ['internal_rotors', i, field]);
+    const hasI = item.moment_of_inertia !== undefined;
+    const hasB = item.rotational_constant !== undefined;
+    if (hasI && hasB) {
+      f.error(at('moment_of_inertia'), 'give either moment_of_inertia or rotational_constant of an internal rotor, not both', {
+        key: true,
+        expected: 'exactly one of moment_of_inertia (amu*angstrom^2), rotational_constant (cm-1)',
+      });
+      ok = false;
+      return;
+    }
+    if (!hasI && !hasB) {
+      f.error(at(), "an internal rotor needs 'moment_of_inertia' or 'rotational_constant'", {
+        value: item,
+        expected: 'the reduced moment of inertia (amu*angstrom^2) or the reduced rotational constant (cm-1) of the torsion',
+      });
+      ok = false;
+      return;
+    }
+    const b = hasB ? rotational(item.rotational_constant) : rotationalFromInertia(item.moment_of_inertia);
+    const v0 = energy(item.barrier);
+    const sigma = item.symmetry_number;
+    const n = item.foldedness ?? sigma;
+    if (b === undefined || !(b > 0) || v0 === undefined || !(v0 >= 0) || !isPositiveInteger(sigma) || !isPositiveInteger(n)) {
+      ok = false;
+      return;
+    }
+    const field = hasB ? 'rotational_constant' : 'moment_of_inertia';
+    const rotor: InternalRotor = { barrier: v0, foldedness: n, symmetryNumber: sigma, rotationalConstant: b };
+    const basis = hinderedRotorBasisSize(rotor);
+    if (basis > MAX_HINDERED_ROTOR_BASIS) {
+      f.error(at(field), `reduced rotational constant ${fmt(b)} cm-1 is too small for the level sum: ${basis} free-rotor basis functions, more than ${MAX_HINDERED_ROTOR_BASIS}`, {
+        value: item[field],
+        expected: `the reduced constant of a real torsion, at least ${fmt(smallestHinderedRotorConstant(rotor))} cm-1 (check the unit: a bare moment_of_inertia is in amu*angstrom^2)`,
+      });
+      ok = false;
+      return;
+    }
+    if (b > LARGEST_TORSION_ROTATIONAL_CONSTANT) {
+      f.warn(at(field), `reduced rotational constant of ${fmt(b)} cm-1 is larger than that of any torsion (an OH top: about 20-40 cm-1); check the unit`, {
+        value: item[field],
+        expected: 'a value in cm-1, or a moment of inertia in amu*angstrom^2',
+      });
+    }
+    if (n % sigma !== 0) {
+      f.warn(at('symmetry_number'), `rotor symmetry number ${sigma} does not divide the foldedness ${n}: a rotation that maps the top onto itself must also map the potential onto itself`, {
+        value: sigma,
+        expected: `a divisor of ${n} (usually ${n} for a symmetric top, 1 for an asymmetric one)`,
+      });
+    }
+    rotors.push(rotor);
+  });
+  return ok ? { rotors, ok } : { ok: false };
 }
 
 /**
@@ -841,9 +932,12 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
     if (sigma !== undefined) checkSymmetryNumber(ctx, sigma, false);
     const electronicLevels = readElectronicLevels(ctx);
     const { rotationalConstants, vibrations } = readPolyatomic(ctx);
-    if (canBuild && electronicLevels && rotationalConstants && vibrations && sigma !== undefined) {
+    const internal = readInternalRotors(ctx);
+    if (canBuild && electronicLevels && rotationalConstants && vibrations && sigma !== undefined && internal.ok) {
       const rc = structure === 'nonlinear' ? rotationalConstants.slice().sort((a, b) => b - a) : rotationalConstants;
-      species = { ...common(), structure, symmetryNumber: sigma, electronicLevels, rotationalConstants: rc, vibrations } as Species;
+      // The key only when rotors are given: every species without them keeps its normalised form and hash.
+      const rotors = internal.rotors ? { internalRotors: internal.rotors } : {};
+      species = { ...common(), structure, symmetryNumber: sigma, electronicLevels, rotationalConstants: rc, vibrations, ...rotors } as Species;
     }
   } else if (structure === 'diatomic') {
     const { states, d0, spin, mixture } = readDiatomic(ctx);

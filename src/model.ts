@@ -26,6 +26,21 @@ export interface Vibration {
 }
 
 /**
+ * One-dimensional hindered internal rotor (torsion) with potential V(φ) = (V0/2)(1 − cos nφ); see
+ * src/partition/hindered-rotor.ts. Replaces the torsion's harmonic vibration.
+ */
+export interface InternalRotor {
+  /** Barrier height V0, cm⁻¹ (≥ 0). */
+  barrier: number;
+  /** Foldedness n: minima (and maxima) of the potential per full turn. */
+  foldedness: number;
+  /** Rotor symmetry number σ: the levels of the full 2π period are divided by it. */
+  symmetryNumber: number;
+  /** Reduced rotational constant B = h/(8π² c I_red), cm⁻¹. */
+  rotationalConstant: number;
+}
+
+/**
  * One electronic state of a diatomic molecule with its Dunham-type constants (Huber & Herzberg notation).
  * All in cm⁻¹.
  */
@@ -103,6 +118,8 @@ export interface LinearSpecies extends SpeciesBase {
   /** [B] in cm⁻¹. */
   rotationalConstants: [number];
   vibrations: Vibration[];
+  /** Hindered internal rotors (absent when the input has none, so the normalised form is unchanged). */
+  internalRotors?: InternalRotor[];
 }
 
 export interface NonlinearSpecies extends SpeciesBase {
@@ -112,6 +129,8 @@ export interface NonlinearSpecies extends SpeciesBase {
   /** [A, B, C] in cm⁻¹. */
   rotationalConstants: [number, number, number];
   vibrations: Vibration[];
+  /** Hindered internal rotors (absent when the input has none, so the normalised form is unchanged). */
+  internalRotors?: InternalRotor[];
 }
 
 export interface DiatomicSpecies extends SpeciesBase {

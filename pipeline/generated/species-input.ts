@@ -213,11 +213,17 @@ export interface SpeciesInput {
   moments_of_inertia?:
     [MomentOfInertia] | [MomentOfInertia, MomentOfInertia] | [MomentOfInertia, MomentOfInertia, MomentOfInertia];
   /**
-   * Harmonic vibrations (linear, nonlinear): each a wavenumber (bare number in cm-1, or {value, unit}) or {wavenumber, degeneracy}. 3N-5 (linear) or 3N-6 (nonlinear) modes counting degeneracy.
+   * Harmonic vibrations (linear, nonlinear): each a wavenumber (bare number in cm-1, or {value, unit}) or {wavenumber, degeneracy}. 3N-5 (linear) or 3N-6 (nonlinear) modes counting degeneracy (internal_rotors count as modes).
    *
    * @minItems 1
    */
   vibrations?: [Vibration, ...Vibration[]];
+  /**
+   * Optional (linear, nonlinear): torsions treated as one-dimensional hindered internal rotors with potential V(phi) = (V0/2)(1 - cos n phi), summed over their quantum levels, instead of harmonic vibrations. A torsion listed here must be removed from vibrations (each rotor counts as one of the 3N-6 modes).
+   *
+   * @minItems 1
+   */
+  internal_rotors?: [InternalRotor, ...InternalRotor[]];
   dissociation_energy?: PositiveEnergy;
   /**
    * Homonuclear diatomic only, optional: statistical weights of even-J and odd-J rotational levels. When given they replace the symmetry number.
@@ -270,6 +276,16 @@ export interface ElectronicLevel {
    * Optional term symbol or label, e.g. '3P2'; for documentation only.
    */
   term?: string;
+}
+/**
+ * One torsion as a one-dimensional hindered rotor: H = B(-d^2/dphi^2) + (V0/2)(1 - cos n phi) with B = h/(8 pi^2 c I_red), levels from a direct diagonalisation in the free-rotor basis. Give exactly one of moment_of_inertia and rotational_constant.
+ */
+export interface InternalRotor {
+  barrier: NonNegativeEnergy;
+  symmetry_number: PositiveInteger;
+  foldedness?: PositiveInteger;
+  moment_of_inertia?: MomentOfInertia;
+  rotational_constant?: RotationalConstant;
 }
 /**
  * One electronic state of a diatomic molecule with its spectroscopic constants (Huber & Herzberg notation). Term values E(v,J) = Te + G(v) + B_v x - D_v x^2 + H_v x^3 with x = J(J+1), G(v) = we(v+1/2) - wexe(v+1/2)^2 + weye(v+1/2)^3 + weze(v+1/2)^4, B_v = Be - alphae(v+1/2) + gammae(v+1/2)^2, D_v = De + betae(v+1/2), H_v = He; the higher-order constants weze, gammae, betae, He are optional (0 when absent).

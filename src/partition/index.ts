@@ -15,6 +15,20 @@ export { linearRotorMoments, linearRotorClassicalLimit, linearRotorMulholland } 
 export { nonlinearRotorMoments } from './rigid-rotor-nonlinear.js';
 export { harmonicMoments } from './harmonic.js';
 export {
+  freeRotorClassicalMoments,
+  hinderedRotorBasisLimit,
+  hinderedRotorBasisSize,
+  hinderedRotorEnergyCeiling,
+  hinderedRotorHarmonicWavenumber,
+  hinderedRotorLevels,
+  hinderedRotorMoments,
+  smallestHinderedRotorConstant,
+  symmetricTridiagonalEigenvalues,
+  HINDERED_ROTOR_CEILING_TEMPERATURE,
+  MAX_HINDERED_ROTOR_BASIS,
+  type HinderedRotorLevels,
+} from './hindered-rotor.js';
+export {
   diatomicLevels,
   diatomicMoments,
   diatomicSpinManifolds,

@@ -15,6 +15,7 @@ import type {
 import { diatomicLevels, diatomicSpinManifolds, higherOrderTermsOf, type DiatomicStateLevels } from '../partition/diatomic.js';
 import { electronicLevelList } from '../partition/electronic.js';
 import { harmonicMoments } from '../partition/harmonic.js';
+import { hinderedRotorLevels, hinderedRotorMoments } from '../partition/hindered-rotor.js';
 import { levelSumMoments, type LevelList } from '../partition/level-sum.js';
 import {
   addContributions,
@@ -78,7 +79,21 @@ function polyatomicInternal(
     `harmonic oscillators (${vib.reduce((n, v) => n + v.degeneracy, 0)} modes)`,
     `electronic level sum (${species.electronicLevels.length} levels)`,
   );
-  return (T) => addMoments([rotor(T), harmonicMoments(vib, T), levelSumMoments(el, T)]);
+  const rotors = species.internalRotors;
+  if (rotors === undefined || rotors.length === 0) {
+    return (T) => addMoments([rotor(T), harmonicMoments(vib, T), levelSumMoments(el, T)]);
+  }
+  // Each torsion is one more independent factor (its levels built here, once); species without rotors keep
+  // the three-factor sum above, bit for bit.
+  const torsions = rotors.map((r) => {
+    const levels = hinderedRotorLevels(r);
+    contributions.push(
+      `hindered internal rotor, direct level sum (V0 = ${r.barrier} cm-1, n = ${r.foldedness}, sigma = ${r.symmetryNumber}, B = ${r.rotationalConstant} cm-1, ${levels.energies.length} levels, |m| <= ${levels.basisLimit})`,
+    );
+    return levels;
+  });
+  return (T) =>
+    addMoments([rotor(T), harmonicMoments(vib, T), levelSumMoments(el, T), ...torsions.map((l) => hinderedRotorMoments(l, T))]);
 }
 
 /**
@@ -88,6 +103,7 @@ function polyatomicInternal(
  *   atom       q = q_trans · q_el
  *   linear     q = q_trans · q_rot(direct J sum) · q_vib(harmonic) · q_el
  *   nonlinear  q = q_trans · q_rot(classical)    · q_vib(harmonic) · q_el
+ *   (linear and nonlinear also · Π q_torsion(hindered rotor, direct level sum) when internal rotors are given)
  *   diatomic   q = q_trans · q_rovibronic (explicit sum over all bound levels of all states)
  * Then Cp/R = Σ varU, (H − H0)/RT = Σ meanU, S/R = Σ (lnQ + meanU), exactly from the moments.
  * A diatomic with nuclear spin weights and `nuclearSpinMixture: 'frozen'` has no single q_rovibronic: its

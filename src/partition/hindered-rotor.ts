@@ -1,0 +1,209 @@
+/**
+ * One-dimensional hindered internal rotor (a torsion) by a direct sum over its quantum levels.
+ */
+import { C2_CM_K } from '../constants.js';
+import type { InternalRotor } from '../model.js';
+import { createLevelList, levelSumMoments, type LevelList } from './level-sum.js';
+import { LevelSumError, type PartitionMoments } from './moments.js';
+
+/**
+ * The level list is complete (every omitted level below 1e-17 of q) up to this temperature: the highest
+ * temperature the settings accept for a fit range (schemas/settings.schema.json). Above it the list
+ * undercounts the high levels and Cp falls towards 0.
+ */
+export const HINDERED_ROTOR_CEILING_TEMPERATURE = 20000;
+/** Levels are kept up to u = E/kT = 50 at the ceiling temperature: e^{−50}(1 + 50²) ≈ 5e-19. */
+const KEPT_U_AT_CEILING = 50;
+/**
+ * Largest free-rotor basis (2M + 1 functions). A rotor needing more has a rotational constant below about
+ * 0.06 cm⁻¹ (I_red above about 270 amu·Å², heavier than a CF3 top): a units mistake, or a torsion better
+ * treated classically. The validator reports it before the physics. (Diagonalising a block of this size
+ * takes a few seconds; an H2O2 or CH3 rotor needs a few hundred functions and milliseconds.)
+ */
+export const MAX_HINDERED_ROTOR_BASIS = 10001;
+/** QL iterations allowed per eigenvalue before giving up (2–3 are typical; EISPACK allows 30). */
+const MAX_QL_ITERATIONS = 30;
+
+/** Highest level kept, cm⁻¹ above the lowest. */
+export function hinderedRotorEnergyCeiling(): number {
+  return (KEPT_U_AT_CEILING * HINDERED_ROTOR_CEILING_TEMPERATURE) / C2_CM_K;
+}
+
+/**
+ * Largest |m| of the free-rotor basis e^{imφ} that converges every kept level: B·M² ≥ 2.25 (E_keep + V0),
+ * so each kept eigenvector decays by at least a factor (V0/4)/(1.25 E) per coupling step before the basis
+ * ends (variational: truncation can only raise an eigenvalue, and the test suite checks that doubling M
+ * changes nothing). Plus 2n so every Floquet block holds several functions above the kept energy.
+ */
+export function hinderedRotorBasisLimit(rotor: Pick<InternalRotor, 'barrier' | 'rotationalConstant' | 'foldedness'>): number {
+  const need = 2.25 * (hinderedRotorEnergyCeiling() + rotor.barrier);
+  return Math.ceil(Math.sqrt(need / rotor.rotationalConstant)) + 2 * rotor.foldedness;
+}
+
+/** Smallest rotational constant (cm⁻¹) whose basis stays within MAX_HINDERED_ROTOR_BASIS, for messages. */
+export function smallestHinderedRotorConstant(rotor: Pick<InternalRotor, 'barrier' | 'foldedness'>): number {
+  const m = (MAX_HINDERED_ROTOR_BASIS - 1) / 2 - 2 * rotor.foldedness - 1;
+  return (2.25 * (hinderedRotorEnergyCeiling() + rotor.barrier)) / (m * m);
+}
+
+/** Number of basis functions 2M + 1 the rotor needs. */
+export function hinderedRotorBasisSize(rotor: Pick<InternalRotor, 'barrier' | 'rotationalConstant' | 'foldedness'>): number {
+  return 2 * hinderedRotorBasisLimit(rotor) + 1;
+}
+
+/**
+ * Eigenvalues of a real symmetric tridiagonal matrix: implicit QL with Wilkinson-type shifts, eigenvalues only
+ * (the tql1 procedure of EISPACK; Bowdler, Martin, Reinsch & Wilkinson, Numer. Math. 11, 293 (1968)), O(n²).
+ * Accuracy: about 1e-15 of the largest |entry| in absolute terms (for a rotor basis reaching B·M² ≈ 1.6e6
+ * cm⁻¹, ~1e-8 cm⁻¹ per level — far below anything thermodynamic; the tests compare it with ml-matrix).
+ * `diagonal` is overwritten with the eigenvalues in ascending order; `offDiagonal[i]` couples i and i+1
+ * (length n, last entry ignored) and is destroyed.
+ */
+export function symmetricTridiagonalEigenvalues(diagonal: Float64Array, offDiagonal: Float64Array): Float64Array {
+  const n = diagonal.length;
+  const d = diagonal;
+  const e = offDiagonal;
+  if (n === 0) return d;
+  e[n - 1] = 0;
+  let f = 0;
+  let tst1 = 0;
+  const eps = 2 ** -52;
+  for (let l = 0; l < n; l++) {
+    tst1 = Math.max(tst1, Math.abs(d[l]!) + Math.abs(e[l]!));
+    let m = l;
+    while (m < n - 1 && Math.abs(e[m]!) > eps * tst1) m++;
+    if (m > l) {
+      let iterations = 0;
+      do {
+        if (++iterations > MAX_QL_ITERATIONS) throw new LevelSumError('hindered rotor: the QL eigenvalue iteration did not converge');
+        let g = d[l]!;
+        let p = (d[l + 1]! - g) / (2 * e[l]!);
+        let r = Math.hypot(p, 1);
+        if (p < 0) r = -r;
+        d[l] = e[l]! / (p + r);
+        d[l + 1] = e[l]! * (p + r);
+        const dl1 = d[l + 1]!;
+        let h = g - d[l]!;
+        for (let i = l + 2; i < n; i++) d[i]! -= h;
+        f += h;
+        p = d[m]!;
+        let c = 1;
+        let c2 = c;
+        let c3 = c;
+        const el1 = e[l + 1]!;
+        let s = 0;
+        let s2 = 0;
+        for (let i = m - 1; i >= l; i--) {
+          c3 = c2;
+          c2 = c;
+          s2 = s;
+          g = c * e[i]!;
+          h = c * p;
+          r = Math.hypot(p, e[i]!);
+          e[i + 1] = s * r;
+          s = e[i]! / r;
+          c = p / r;
+          p = c * d[i]! - s * g;
+          d[i + 1] = h + s * (c * g + s * d[i]!);
+        }
+        p = (-s * s2 * c3 * el1 * e[l]!) / dl1;
+        e[l] = s * p;
+        d[l] = c * p;
+      } while (Math.abs(e[l]!) > eps * tst1);
+    }
+    d[l] = d[l]! + f;
+    e[l] = 0;
+  }
+  d.sort();
+  return d;
+}
+
+/** The levels of one hindered rotor, built once. */
+export interface HinderedRotorLevels {
+  /** Energies above the lowest level, cm⁻¹, ascending, all 2π-periodic levels (before dividing by σ). */
+  readonly energies: Float64Array;
+  /** The level list summed by `hinderedRotorMoments`: every level with weight 1/σ. */
+  readonly list: LevelList;
+  /** Largest |m| of the free-rotor basis used. */
+  readonly basisLimit: number;
+  /** Energy of the lowest level above the potential minimum, cm⁻¹ (the torsional zero-point energy). */
+  readonly zeroPointEnergy: number;
+}
+
+/**
+ * Levels of H = B·(−d²/dφ²) + (V0/2)(1 − cos nφ) on 0 ≤ φ < 2π.
+ *
+ * Formula: in the free-rotor basis e^{imφ}/√(2π), |m| ≤ M, the matrix elements are
+ *   ⟨m|H|m⟩ = B m² + V0/2,   ⟨m|H|m ± n⟩ = −V0/4   (⟨m|cos nφ|m ± n⟩ = ½),
+ * so H splits into n tridiagonal blocks m ≡ r (mod n), each diagonalised exactly (QL). All eigenvalues up
+ * to `hinderedRotorEnergyCeiling()` above the lowest are kept, each with weight 1/σ: the levels of the full
+ * 2π period are counted once and the rotor symmetry number σ removes the configurations that are the same
+ * (σ = n for a symmetric top such as CH3; σ = 1 with n = 2 for a two-well torsion of distinguishable wells).
+ * Units: B (reduced rotational constant ħ²/(2 I_red hc)) and V0 in cm⁻¹. Valid for a torsion separable
+ * from the other modes, with a constant reduced moment and a pure n-fold cosine potential; complete up to
+ * HINDERED_ROTOR_CEILING_TEMPERATURE. Limits: V0 → 0 gives the free rotor (levels B m²), V0 ≫ kT the
+ * n-fold harmonic oscillator of wavenumber n·√(V0·B).
+ * Sources: Pitzer & Gwinn, J. Chem. Phys. 10, 428 (1942) (hindered-rotor thermodynamic functions); Pitzer,
+ * J. Chem. Phys. 14, 239 (1946) (reduced moments); McClurg, Flagan & Goddard, J. Chem. Phys. 106, 6675
+ * (1997) (direct level summation of the hindered-rotor Hamiltonian in the free-rotor basis).
+ */
+export function hinderedRotorLevels(rotor: InternalRotor, options: { basisLimit?: number } = {}): HinderedRotorLevels {
+  const { barrier: v0, foldedness: n, symmetryNumber: sigma, rotationalConstant: b } = rotor;
+  if (!(Number.isFinite(v0) && v0 >= 0)) throw new LevelSumError(`hindered rotor: barrier ${v0} cm-1; expected >= 0`);
+  if (!(Number.isInteger(n) && n >= 1)) throw new LevelSumError(`hindered rotor: foldedness ${n}; expected a whole number >= 1`);
+  if (!(Number.isInteger(sigma) && sigma >= 1)) throw new LevelSumError(`hindered rotor: symmetry number ${sigma}; expected a whole number >= 1`);
+  if (!(Number.isFinite(b) && b > 0)) throw new LevelSumError(`hindered rotor: rotational constant ${b} cm-1; expected > 0`);
+  // `basisLimit` (a larger |m| than needed) exists for the convergence tests only.
+  const mMax = Math.max(hinderedRotorBasisLimit(rotor), options.basisLimit ?? 0);
+  if (2 * mMax + 1 > MAX_HINDERED_ROTOR_BASIS) {
+    throw new LevelSumError(
+      `hindered rotor: rotational constant ${b} cm-1 needs ${2 * mMax + 1} basis functions, more than ${MAX_HINDERED_ROTOR_BASIS}`,
+    );
+  }
+  const all: number[] = [];
+  for (let r = 0; r < n; r++) {
+    // Block m = m0, m0 + n, ... ≤ mMax with m0 the smallest m ≥ −mMax in the residue class r.
+    const m0 = -mMax + ((((r + mMax) % n) + n) % n);
+    const size = Math.floor((mMax - m0) / n) + 1;
+    const d = new Float64Array(size);
+    const e = new Float64Array(size);
+    for (let k = 0; k < size; k++) {
+      const m = m0 + k * n;
+      d[k] = b * m * m + v0 / 2;
+      e[k] = -v0 / 4;
+    }
+    for (const x of symmetricTridiagonalEigenvalues(d, e)) all.push(x);
+  }
+  all.sort((x, y) => x - y);
+  const lowest = all[0]!;
+  const ceiling = hinderedRotorEnergyCeiling();
+  const kept = all.map((x) => x - lowest).filter((x) => x <= ceiling);
+  const energies = Float64Array.from(kept);
+  const list = createLevelList(energies, new Float64Array(energies.length).fill(1 / sigma), C2_CM_K);
+  return { energies, list, basisLimit: mMax, zeroPointEnergy: lowest };
+}
+
+/** Moments of one hindered rotor at T (K), energies from its lowest level (see `hinderedRotorLevels`). */
+export function hinderedRotorMoments(levels: HinderedRotorLevels, T: number): PartitionMoments {
+  return levelSumMoments(levels.list, T);
+}
+
+/**
+ * Classical free internal rotor, for tests and comparison only.
+ * Formula: q = (1/σ)·√(π T/θ), θ = c2·B, the integral of Σ_m e^{−θm²/T} over m; meanU = varU = ½.
+ * Units: B in cm⁻¹, T in K. Valid for T ≫ θ; energies from the m = 0 level.
+ * Source: Pitzer & Gwinn, J. Chem. Phys. 10, 428 (1942) (the free-rotor limit of their tables).
+ */
+export function freeRotorClassicalMoments(rotationalConstant: number, symmetryNumber: number, T: number): PartitionMoments {
+  const theta = C2_CM_K * rotationalConstant;
+  return { lnQ: 0.5 * Math.log((Math.PI * T) / theta) - Math.log(symmetryNumber), meanU: 0.5, varU: 0.5 };
+}
+
+/**
+ * Harmonic wavenumber of the torsion in one well of the hindered rotor: ω = n·√(V0·B), cm⁻¹, from
+ * V ≈ V0 n² φ²/4 near a minimum (Pitzer & Gwinn 1942). The low-T limit of the rotor is n/σ harmonic
+ * oscillators of this wavenumber; the fundamental is lowered by the quartic term by about n²B/4.
+ */
+export function hinderedRotorHarmonicWavenumber(rotor: Pick<InternalRotor, 'barrier' | 'rotationalConstant' | 'foldedness'>): number {
+  return rotor.foldedness * Math.sqrt(rotor.barrier * rotor.rotationalConstant);
+}

@@ -12,8 +12,8 @@ import {
   ROTATIONAL_UNITS_TO_CM1,
   UnknownUnitError,
 } from '../../src/units.js';
+import { rel } from '../support/relative.js';
 
-const rel = (a: number, b: number) => Math.abs(a / b - 1);
 
 describe('energy units (CODATA 2018 conversion factors)', () => {
   it('1 eV = 8065.543937 cm-1 (CODATA 2018, exact in the 2019 SI)', () => {

@@ -16,8 +16,8 @@ import { harmonicMoments } from '../../../src/partition/harmonic.js';
 import { addMoments, LevelSumError } from '../../../src/partition/moments.js';
 import { linearRotorMoments } from '../../../src/partition/rigid-rotor-linear.js';
 import { HYDROGEN, N2_X, NITROGEN, OXYGEN } from '../../fixtures/physics-species.js';
+import { rel } from '../../support/relative.js';
 
-const rel = (a: number, b: number) => Math.abs(a / b - 1);
 
 const separable: DiatomicState = {
   term: 'X',

@@ -19,8 +19,8 @@ import {
 import { LevelSumError } from '../../../src/partition/moments.js';
 import type { InternalRotor } from '../../../src/model.js';
 import { MATHIEU_A0, mathieuA0Series } from '../../fixtures/hindered-rotor.js';
+import { rel } from '../../support/relative.js';
 
-const rel = (a: number, b: number) => Math.abs(a / b - 1);
 
 describe('symmetric tridiagonal eigenvalues (QL)', () => {
   it('agree with ml-matrix EigenvalueDecomposition on random matrices', () => {

@@ -11,8 +11,8 @@ import {
   linearRotorMulholland,
 } from '../../../src/partition/rigid-rotor-linear.js';
 import { LevelSumError } from '../../../src/partition/moments.js';
+import { rel } from '../../support/relative.js';
 
-const rel = (a: number, b: number) => Math.abs(a / b - 1);
 
 describe('linear rigid rotor, direct sum over J', () => {
   it.each([

@@ -10,8 +10,8 @@ import { createLevelList, levelSumMoments } from '../../../src/partition/level-s
 import { addMoments, LevelSumError } from '../../../src/partition/moments.js';
 import { nonlinearRotorMoments } from '../../../src/partition/rigid-rotor-nonlinear.js';
 import { translationalMoments } from '../../../src/partition/translational.js';
+import { rel } from '../../support/relative.js';
 
-const rel = (a: number, b: number) => Math.abs(a / b - 1);
 
 describe('translational (Sackur-Tetrode)', () => {
   it('gives Cp/R = H/RT = 5/2 and the published Ar entropy (CODATA key value 154.846 J/(mol K))', () => {

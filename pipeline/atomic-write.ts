@@ -21,6 +21,7 @@
 import { randomBytes } from 'node:crypto';
 import { lstat, mkdir, open, readdir, readFile, rename, rm, stat } from 'node:fs/promises';
 import path from 'node:path';
+import { compareText } from './text.js';
 
 /** Marker file that identifies a folder as a qforge build output; it lists the files written (sorted). */
 export const BUILD_MARKER = '.qforge-build';
@@ -29,7 +30,7 @@ const MARKER_LIST_LINE = 'Files written by qforge (any other entry here stops th
 
 /** Deterministic marker text for a set of output files (relative paths, '/' separators). */
 export function markerText(files: Iterable<string>): string {
-  const list = [...files].filter((f) => f !== BUILD_MARKER).sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
+  const list = [...files].filter((f) => f !== BUILD_MARKER).sort(compareText);
   return `${MARKER_HEADER}${MARKER_LIST_LINE}${list.map((f) => `${f}\n`).join('')}`;
 }
 
@@ -216,7 +217,7 @@ async function unlistedEntries(dir: string, listed: ReadonlySet<string>): Promis
   for (const f of listed) for (let d = path.posix.dirname(f); d !== '.'; d = path.posix.dirname(d)) folders.add(d);
   const out: string[] = [];
   const walk = async (abs: string, rel: string): Promise<void> => {
-    const entries = (await readdir(abs, { withFileTypes: true })).sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));
+    const entries = (await readdir(abs, { withFileTypes: true })).sort((a, b) => compareText(a.name, b.name));
     for (const e of entries) {
       const r = rel ? `${rel}/${e.name}` : e.name;
       if (r === BUILD_MARKER) continue;
@@ -306,7 +307,7 @@ export async function publishDirectory(
     const all = new Map(files);
     all.set(BUILD_MARKER, markerText(files.keys()));
     const dirs = new Set<string>([tmp]);
-    for (const [rel, data] of [...all].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))) {
+    for (const [rel, data] of [...all].sort(([a], [b]) => compareText(a, b))) {
       const target = safeJoin(tmp, rel);
       const dir = path.dirname(target);
       if (!dirs.has(dir)) {

@@ -10,6 +10,7 @@ import { createHash } from 'node:crypto';
 import { readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { compareText } from './text.js';
 
 const CODE_FILE = /\.(?:js|ts|json)$/;
 
@@ -23,7 +24,7 @@ export function fingerprintFolders(dirs: readonly string[]): string {
     } catch {
       return;
     }
-    entries.sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));
+    entries.sort((a, b) => compareText(a.name, b.name));
     for (const e of entries) {
       const p = path.join(dir, e.name);
       const r = `${rel}/${e.name}`;

@@ -46,6 +46,7 @@ import {
 } from './read-build.js';
 import { DEFAULT_SETTINGS, loadSettings, type KnownDeviation, type QuantityTriple } from './settings.js';
 import { displayPath } from './display-path.js';
+import { compareText } from './text.js';
 
 export type RefQuantity = 'cp' | 's' | 'h';
 const QS: readonly RefQuantity[] = ['cp', 's', 'h'];
@@ -337,7 +338,7 @@ export function compareWithReferences(
   };
   const neededBy = report.knownDeviations.map(() => new Set<RefQuantity>());
   for (const ref of refs) {
-    for (const [name, rows] of [...ref.species].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))) {
+    for (const [name, rows] of [...ref.species].sort(([a], [b]) => compareText(a, b))) {
       const b = build.species.get(name);
       if (!b) {
         report.missing.push({ species: name, reference: ref.file });

@@ -2,6 +2,7 @@
  * Diagnostics: the one shape for every input problem, from YAML syntax to physics checks. Stages collect
  * them and return them all at once; only the CLI prints them and decides the exit code.
  */
+import { compareText } from './text.js';
 
 export type Severity = 'error' | 'warning';
 
@@ -47,10 +48,6 @@ export function formatDiagnostic(d: Diagnostic): string {
   return `${where}: ${d.severity}: ${who}${field}${d.message}${tail}`;
 }
 
-/** Code-unit order of two strings: unlike localeCompare it cannot depend on the machine's locale. */
-export function compareText(a: string, b: string): number {
-  return a < b ? -1 : a > b ? 1 : 0;
-}
 
 /** Stable order: file, line, column, then message; so reports depend neither on completion order nor locale. */
 export function compareDiagnostics(a: Diagnostic, b: Diagnostic): number {

@@ -20,6 +20,7 @@ import { T_REF } from '../src/constants.js';
 import type { Nasa7Polynomial } from '../src/nasa7/types.js';
 import type { CliIo } from './cli.js';
 import { formatFixed, polynomialProperties, readPolynomialSet, ReadBuildError, type PolynomialSet, type Properties } from './read-build.js';
+import { compareText } from './text.js';
 
 export const PROPERTY_CHANGE_THRESHOLDS = Object.freeze({ cp: 1e-3, h: 1e-3, s: 1e-3 });
 /**
@@ -129,7 +130,7 @@ function sameWithinRounding(a: Nasa7Polynomial, b: Nasa7Polynomial): boolean {
 
 export function diffSets(a: PolynomialSet, b: PolynomialSet, options: DiffOptions = {}): DiffReport {
   const names = (s: PolynomialSet) => [...s.species.keys()];
-  const sort = (xs: string[]) => xs.sort((x, y) => (x < y ? -1 : x > y ? 1 : 0));
+  const sort = (xs: string[]) => xs.sort(compareText);
   const report: DiffReport = {
     old: a.label,
     new: b.label,

@@ -24,6 +24,7 @@ import type { ComputedSpecies } from './compute.js';
 import type { DatabaseSettings } from './settings.js';
 import { standardPressurePa } from './settings.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './version.js';
+import { compareText } from './text.js';
 
 export const CAUTION =
   'CAUTION: these polynomials are valid only inside the temperature range they were fitted on; outside it ' +
@@ -76,7 +77,7 @@ export interface BuiltSpecies {
 }
 
 /** Code-point order (not locale order), so that the output never depends on the machine's locale. */
-export const byName = (a: { name: string }, b: { name: string }): number => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0);
+export const byName = (a: { name: string }, b: { name: string }): number => compareText(a.name, b.name);
 
 // ---------------------------------------------------------------------------------------------------------
 // File names

@@ -39,6 +39,7 @@ import {
   type Node as YamlNode,
 } from 'yaml';
 import type { Diagnostic } from './diagnostics.js';
+import { compareText, errorText } from './text.js';
 
 /** Default size limit of one YAML file: 1 MiB (a large species file is a few kB). */
 export const DEFAULT_MAX_BYTES = 1024 * 1024;
@@ -327,7 +328,7 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
       strict: true,
     }) as Document.Parsed[];
   } catch (e) {
-    result.diagnostics.push(err(displayPath, `could not parse YAML: ${e instanceof Error ? e.message : String(e)}`));
+    result.diagnostics.push(err(displayPath, `could not parse YAML: ${errorText(e)}`));
     return result;
   }
   // parseAllDocuments returns an EmptyStream (array-like, empty) for text without documents.
@@ -385,7 +386,7 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
         result.diagnostics.push(err(displayPath, 'YAML nesting is too deep to read', where));
       } else {
         result.diagnostics.push(
-          err(displayPath, `could not read YAML document: ${e instanceof Error ? e.message : String(e)}`, where),
+          err(displayPath, `could not read YAML document: ${errorText(e)}`, where),
         );
       }
       continue;
@@ -509,7 +510,7 @@ export async function discoverSpeciesFiles(
       diagnostics.push(err(relDir === '' ? dir : path.join(dir, relDir), `cannot read folder (${(e as NodeJS.ErrnoException).code ?? e})`));
       return;
     }
-    entries.sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));
+    entries.sort((a, b) => compareText(a.name, b.name));
     for (const entry of entries) {
       if (entry.name.startsWith('.')) continue;
       const rel = relDir === '' ? entry.name : `${relDir}/${entry.name}`;
@@ -557,12 +558,12 @@ export async function discoverSpeciesFiles(
 
   await walk(rootReal, '', false);
   while (links.length > 0) {
-    links.sort((a, b) => (a.rel < b.rel ? -1 : a.rel > b.rel ? 1 : 0));
+    links.sort((a, b) => compareText(a.rel, b.rel));
     await followLink(links.shift()!);
   }
 
   // One entry per real file: the one reached without links, else the first by path.
-  const byPreference = found.slice().sort((a, b) => Number(a.viaLink) - Number(b.viaLink) || (a.rel < b.rel ? -1 : a.rel > b.rel ? 1 : 0));
+  const byPreference = found.slice().sort((a, b) => Number(a.viaLink) - Number(b.viaLink) || compareText(a.rel, b.rel));
   const kept = new Map<string, string>();
   const skipped: { rel: string; first: string }[] = [];
   for (const f of byPreference) {

@@ -37,6 +37,7 @@ import { verifySpecies } from './verify.js';
 import { codeFingerprint } from './code-fingerprint.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './version.js';
 import { displayPath } from './display-path.js';
+import { compareText, errorText } from './text.js';
 
 export type StageName = 'load' | 'validate' | 'compute' | 'fit' | 'verify' | 'emit';
 
@@ -258,7 +259,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   diagnostics.sort(compareDiagnostics);
   const invalidDocs = invalid
     .map(({ entry }) => entry)
-    .sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : a.document - b.document));
+    .sort((a, b) => compareText(a.file, b.file) || a.document - b.document);
   for (const e of invalidDocs) e.diagnostics.sort(compareDiagnostics);
   const report: CheckReport = {
     settings: settingsResult.settings,
@@ -298,7 +299,6 @@ export function stageKeys(inputHash: string, species: Species, plan: SpeciesPlan
   };
 }
 
-const errorText = (e: unknown): string => (e instanceof Error ? e.message : String(e));
 
 /** Where a fit check's limit came from, for the message: the settings file (file:line) or a default. */
 export interface LimitSource {
@@ -642,8 +642,8 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   const nameKey = (x: SummarySpecies) => (x.name === undefined ? '\uffff' : x.name);
   summarySpecies.sort(
     (a, b) =>
-      (nameKey(a) < nameKey(b) ? -1 : nameKey(a) > nameKey(b) ? 1 : 0) ||
-      (a.file < b.file ? -1 : a.file > b.file ? 1 : 0) ||
+      compareText(nameKey(a), nameKey(b)) ||
+      compareText(a.file, b.file) ||
       (a.document ?? 0) - (b.document ?? 0),
   );
   const failedLabels = summarySpecies
@@ -662,7 +662,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
       ds: ds.filter((d) => !(d.severity === 'warning' && d.species && validKeys.has(speciesKey(d.file, d.species)))),
     }))
     .filter(({ ds }) => ds.length > 0)
-    .sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : 0))
+    .sort((a, b) => compareText(a.file, b.file))
     .map(({ file, ds }) => ({
       file,
       errors: ds.filter((d) => d.severity === 'error').map(formatDiagnostic),

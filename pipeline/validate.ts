@@ -37,6 +37,7 @@ import {
 import { compareDiagnostics, type Diagnostic } from './diagnostics.js';
 import type { LoadedDocument } from './load.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from './schema-check.js';
+import { compareText } from './text.js';
 
 type Segment = string | number;
 type Obj = Record<string, unknown>;
@@ -985,7 +986,7 @@ export function findDuplicateNames(docs: readonly LoadedDocument[]): Diagnostic[
 
 function nameFindings(docs: readonly LoadedDocument[], withCaseWarnings: boolean): Diagnostic[] {
   const out: Diagnostic[] = [];
-  const sorted = docs.slice().sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : a.index - b.index));
+  const sorted = docs.slice().sort((a, b) => compareText(a.file, b.file) || a.index - b.index);
   const exact = new Map<string, { doc: LoadedDocument; line?: number }>();
   const folded = new Map<string, { doc: LoadedDocument; line?: number; name: string }>();
   for (const doc of sorted) {

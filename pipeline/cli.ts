@@ -15,19 +15,12 @@
  */
 import path from 'node:path';
 import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
-import type { Diagnostic } from './diagnostics.js';
-import type { TextSink } from './progress.js';
-import { displayPath } from './display-path.js';
+import type { Diagnostic } from './core/diagnostics.js';
+import type { CliIo } from './commands/io.js';
+import { displayPath } from './core/display-path.js';
 
-export interface CliIo {
-  stdout: TextSink;
-  stderr: TextSink;
-  /** Folder relative paths are resolved against. */
-  cwd: string;
-  /** Whether stderr is a terminal (progress bar vs plain lines). */
-  isTTY: boolean;
-  env: Record<string, string | undefined>;
-}
+export type { CliIo } from './commands/io.js';
+
 
 /** A usage problem found after parsing (e.g. a folder that does not exist): exit 2. */
 export class UsageError extends Error {
@@ -149,7 +142,7 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
   let exitCode = 0;
 
   const program = new Command();
-  const { TOOL_VERSION } = await import('./version.js');
+  const { TOOL_VERSION } = await import('./core/version.js');
   program
     .name('qforge')
     .description('Build checked ideal-gas thermochemistry databases (NASA 7-coefficient polynomials) from partition functions.')
@@ -200,7 +193,7 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .addOption(new Option('--pressure <p>', 'standard pressure').choices(['bar', 'atm']).default('bar'))
     .addHelpText('after', EXAMPLES.table)
     .action(async (file: string, o: { name?: string; at?: string; range?: string; format: 'text' | 'csv'; pressure: 'bar' | 'atm' }) => {
-      const { tableCommand } = await import('./table.js');
+      const { tableCommand } = await import('./commands/table.js');
       exitCode = await tableCommand(io, abs(file), file, o);
     });
 
@@ -214,7 +207,7 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('--json', 'print the report as JSON on stdout')
     .addHelpText('after', EXAMPLES.diff)
     .action(async (oldPath: string, newPath: string, o: { failAbove?: { cp?: number; h?: number; s?: number }; failOnRemoved?: boolean; json?: boolean }) => {
-      const { diffCommand } = await import('./diff.js');
+      const { diffCommand } = await import('./commands/diff.js');
       exitCode = await diffCommand(io, { old: abs(oldPath), new: abs(newPath), oldLabel: oldPath, newLabel: newPath }, o);
     });
 
@@ -229,7 +222,7 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('--json', 'print the report as JSON on stdout')
     .addHelpText('after', EXAMPLES.compare)
     .action(async (build: string, o: { reference?: string[]; database?: string; tolerance?: { cp?: number; h?: number; s?: number }; strict?: boolean; json?: boolean }) => {
-      const { compareCommand } = await import('./compare.js');
+      const { compareCommand } = await import('./commands/compare.js');
       exitCode = await compareCommand(io, abs(build), build, {
         ...o,
         reference: o.reference?.map((r) => ({ path: abs(r), label: r })),
@@ -263,7 +256,7 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     }
     // Any file-system error that escaped a command (a disk that filled, a folder that vanished, a
     // permission): the path and the OS reason, not a stack trace.
-    const { describeFsError } = await import('./atomic-write.js');
+    const { describeFsError } = await import('./storage/atomic-write.js');
     const fs = describeFsError(e);
     if (fs) {
       io.stderr.write(`qforge: error: ${fs}\n`);
@@ -318,7 +311,7 @@ export async function assertSafeBuildPaths(p: {
         `${why} the species files: choose an --out outside ${p.dirLabel}`,
     );
   }
-  const { SETTINGS_FILE_NAME } = await import('./load.js');
+  const { SETTINGS_FILE_NAME } = await import('./stages/load.js');
   const settings = await realpathLoose(path.join(p.dir, SETTINGS_FILE_NAME));
   if (within(settings, out)) {
     throw new UsageError(`the settings file ${path.join(p.dirLabel, SETTINGS_FILE_NAME)} resolves into the output folder ${p.outLabel}; ${why} it`);
@@ -355,10 +348,10 @@ async function buildCommand(
   await assertFolder(dir, `database folder ${dirLabel}`);
   const [{ runBuild }, { formatDiagnostic }, { createProgressReporter }, { assertReplaceable }, { CACHE_DIR_NAME }] = await Promise.all([
     import('./runner.js'),
-    import('./diagnostics.js'),
-    import('./progress.js'),
-    import('./atomic-write.js'),
-    import('./cache.js'),
+    import('./core/diagnostics.js'),
+    import('./commands/progress.js'),
+    import('./storage/atomic-write.js'),
+    import('./storage/cache.js'),
   ]);
   const cacheDir = o.cache === false ? null : o.cacheDir ? path.resolve(io.cwd, o.cacheDir) : undefined;
   await assertSafeBuildPaths({
@@ -441,7 +434,7 @@ async function buildCommand(
 
 async function checkCommand(io: CliIo, dir: string, o: { json?: boolean }): Promise<number> {
   await assertFolder(dir, `database folder ${displayPath(io.cwd, dir)}`);
-  const [{ checkDatabase }, { formatDiagnostic, hasErrors }] = await Promise.all([import('./runner.js'), import('./diagnostics.js')]);
+  const [{ checkDatabase }, { formatDiagnostic, hasErrors }] = await Promise.all([import('./runner.js'), import('./core/diagnostics.js')]);
   const report = await checkDatabase({ dir, displayBase: io.cwd });
   printDiagnostics(io, report.diagnostics, formatDiagnostic);
   const errors = report.diagnostics.filter((d) => d.severity === 'error').length;

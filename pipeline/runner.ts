@@ -11,10 +11,10 @@ import pLimit from 'p-limit';
 import type { Species, StandardProperties } from '../src/model.js';
 import { Nasa7FormatError } from '../src/nasa7/errors.js';
 import type { FitOptions, FitResult } from '../src/nasa7/types.js';
-import { acquireOutputLock, recoverOutputDir, publishDirectory, type PublishHooks } from './atomic-write.js';
-import { cached, StageCache, type CacheKind, type CacheOutcome } from './cache.js';
-import { computeSamples, computeTable, type ComputedSpecies } from './compute.js';
-import { compareDiagnostics, formatDiagnostic, hasErrors, type Diagnostic } from './diagnostics.js';
+import { acquireOutputLock, recoverOutputDir, publishDirectory, type PublishHooks } from './storage/atomic-write.js';
+import { cached, StageCache, type CacheKind, type CacheOutcome } from './storage/cache.js';
+import { computeSamples, computeTable, type ComputedSpecies } from './stages/compute.js';
+import { compareDiagnostics, formatDiagnostic, hasErrors, type Diagnostic } from './core/diagnostics.js';
 import {
   byName,
   databaseJson,
@@ -26,18 +26,18 @@ import {
   validateDatabaseJson,
   validateSummaryJson,
   type BuiltSpecies,
-} from './emit.js';
-import { fitOptionsFor, fitSpecies } from './fit.js';
-import { canonicalJson, hashParts, sha256Hex } from './hash.js';
-import { discoverSpeciesFiles, loadYamlFile, type LoadedDocument } from './load.js';
-import { planSpecies, type SpeciesPlan } from './plan.js';
-import { checkSpeciesSampling, loadSettings, type DatabaseSettings, type QuantityTriple } from './settings.js';
-import { checkUniqueNames, validateSpecies } from './validate.js';
-import { verifySpecies } from './verify.js';
-import { codeFingerprint } from './code-fingerprint.js';
-import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './version.js';
-import { displayPath } from './display-path.js';
-import { compareText, errorText } from './text.js';
+} from './stages/emit.js';
+import { fitOptionsFor, fitSpecies } from './stages/fit.js';
+import { canonicalJson, hashParts, sha256Hex } from './storage/hash.js';
+import { discoverSpeciesFiles, loadYamlFile, type LoadedDocument } from './stages/load.js';
+import { planSpecies, type SpeciesPlan } from './core/plan.js';
+import { checkSpeciesSampling, loadSettings, type DatabaseSettings, type QuantityTriple } from './core/settings.js';
+import { checkUniqueNames, validateSpecies } from './stages/validate.js';
+import { verifySpecies } from './stages/verify.js';
+import { codeFingerprint } from './storage/code-fingerprint.js';
+import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './core/version.js';
+import { displayPath } from './core/display-path.js';
+import { compareText, errorText } from './core/text.js';
 
 export type StageName = 'load' | 'validate' | 'compute' | 'fit' | 'verify' | 'emit';
 

@@ -7,9 +7,9 @@
 import { cp, mkdir, readFile, symlink, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { formatDiagnostic } from '../../pipeline/diagnostics.js';
-import { parseYamlText } from '../../pipeline/load.js';
-import { checkSettingsRules, checkSpeciesSampling, largestSamplingStep, samplingShortfall, withDefaults } from '../../pipeline/settings.js';
+import { formatDiagnostic } from '../../pipeline/core/diagnostics.js';
+import { parseYamlText } from '../../pipeline/stages/load.js';
+import { checkSettingsRules, checkSpeciesSampling, largestSamplingStep, samplingShortfall, withDefaults } from '../../pipeline/core/settings.js';
 import { hashFolder, runCli, tempWorkspace } from './helpers.js';
 
 type Ws = Awaited<ReturnType<typeof tempWorkspace>>;

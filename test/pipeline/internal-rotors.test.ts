@@ -7,10 +7,10 @@
  * CODATA 2018: 1 kJ/mol = 83.593472291 cm-1, h/(8π²c·u·Å²) = 16.857629192 cm-1.
  */
 import { describe, expect, it } from 'vitest';
-import { formatDiagnostic, type Diagnostic } from '../../pipeline/diagnostics.js';
-import { canonicalJson, sha256Hex } from '../../pipeline/hash.js';
-import { loadYamlFile, parseYamlText } from '../../pipeline/load.js';
-import { validateSpecies } from '../../pipeline/validate.js';
+import { formatDiagnostic, type Diagnostic } from '../../pipeline/core/diagnostics.js';
+import { canonicalJson, sha256Hex } from '../../pipeline/storage/hash.js';
+import { loadYamlFile, parseYamlText } from '../../pipeline/stages/load.js';
+import { validateSpecies } from '../../pipeline/stages/validate.js';
 import type { NonlinearSpecies } from '../../src/model.js';
 
 const FILE = 'species/bad.yaml';

@@ -12,7 +12,7 @@ import { existsSync } from 'node:fs';
 import { readdir, readFile, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { recoverOutputDir } from '../../pipeline/atomic-write.js';
+import { recoverOutputDir } from '../../pipeline/storage/atomic-write.js';
 import { hashFolder, REPO, runCli, tempWorkspace } from './helpers.js';
 
 const BIN = path.join(REPO, 'bin/qforge.js');

@@ -9,7 +9,7 @@ import { cp, mkdir, readdir, readFile, symlink, writeFile } from 'node:fs/promis
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { BUILD_MARKER, describeFsError, markerText } from '../../pipeline/atomic-write.js';
+import { BUILD_MARKER, describeFsError, markerText } from '../../pipeline/storage/atomic-write.js';
 import { HELP_WIDTH } from '../../pipeline/cli.js';
 import { deterministicOutputs, hashFolder, readJson, REPO, runCli, tempWorkspace } from './helpers.js';
 

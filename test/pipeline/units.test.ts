@@ -8,12 +8,12 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import settingsSchema from '../../schemas/settings.schema.json' with { type: 'json' };
-import { OutputFolderError, publishDirectory, safeJoin } from '../../pipeline/atomic-write.js';
-import { StageCache } from '../../pipeline/cache.js';
-import { recordElements, speciesFileStem, tableFileNames } from '../../pipeline/emit.js';
-import { sha256Hex } from '../../pipeline/hash.js';
-import { temperatureGrid } from '../../pipeline/plan.js';
-import { DEFAULT_SETTINGS, withDefaults } from '../../pipeline/settings.js';
+import { OutputFolderError, publishDirectory, safeJoin } from '../../pipeline/storage/atomic-write.js';
+import { StageCache } from '../../pipeline/storage/cache.js';
+import { recordElements, speciesFileStem, tableFileNames } from '../../pipeline/stages/emit.js';
+import { sha256Hex } from '../../pipeline/storage/hash.js';
+import { temperatureGrid } from '../../pipeline/core/grid.js';
+import { DEFAULT_SETTINGS, withDefaults } from '../../pipeline/core/settings.js';
 import { parseTriple } from '../../pipeline/cli.js';
 import { FIXTURE_DB, runCli } from './helpers.js';
 

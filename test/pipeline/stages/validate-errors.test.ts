@@ -6,10 +6,10 @@
  * the NIST Atomic Spectra Database; H2O constants from memory (NIST CCCBDB). The mistakes are invented.
  */
 import { describe, expect, it } from 'vitest';
-import { formatDiagnostic, type Diagnostic } from '../../pipeline/diagnostics.js';
-import { parseYamlText } from '../../pipeline/load.js';
-import { validateSpecies } from '../../pipeline/validate.js';
-import { CO2_LINES } from '../fixtures/input/co2.js';
+import { formatDiagnostic, type Diagnostic } from '../../../pipeline/core/diagnostics.js';
+import { parseYamlText } from '../../../pipeline/stages/load.js';
+import { validateSpecies } from '../../../pipeline/stages/validate.js';
+import { CO2_LINES } from '../../fixtures/input/co2.js';
 
 type Edit = Record<number, string | null>;
 

@@ -2,10 +2,10 @@
  * Stage "verify": checks a fit against the tolerances of the database (src/nasa7/quality) and turns every
  * violation into a diagnostic that says which quantity, where and by how much.
  */
-import { assessFit } from '../src/nasa7/quality.js';
-import type { FitResult, FitSample } from '../src/nasa7/types.js';
-import type { Diagnostic } from './diagnostics.js';
-import type { QuantityTriple } from './settings.js';
+import { assessFit } from '../../src/nasa7/quality.js';
+import type { FitResult, FitSample } from '../../src/nasa7/types.js';
+import type { Diagnostic } from '../core/diagnostics.js';
+import type { QuantityTriple } from '../core/settings.js';
 
 export function verifySpecies(
   fit: FitResult,

@@ -21,7 +21,7 @@
 import { randomBytes } from 'node:crypto';
 import { lstat, mkdir, open, readdir, readFile, rename, rm, stat } from 'node:fs/promises';
 import path from 'node:path';
-import { compareText } from './text.js';
+import { compareText } from '../core/text.js';
 
 /** Marker file that identifies a folder as a qforge build output; it lists the files written (sorted). */
 export const BUILD_MARKER = '.qforge-build';

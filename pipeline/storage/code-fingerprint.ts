@@ -10,7 +10,7 @@ import { createHash } from 'node:crypto';
 import { readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { compareText } from './text.js';
+import { compareText } from '../core/text.js';
 
 const CODE_FILE = /\.(?:js|ts|json)$/;
 
@@ -45,7 +45,7 @@ let memo: string | undefined;
 /** Fingerprint of this installation's src/ and pipeline/ (computed once per process). */
 export function codeFingerprint(): string {
   if (memo === undefined) {
-    const pipelineDir = path.dirname(fileURLToPath(import.meta.url));
+    const pipelineDir = path.join(path.dirname(fileURLToPath(import.meta.url)), '..');
     memo = fingerprintFolders([path.join(pipelineDir, '..', 'src'), pipelineDir]);
   }
   return memo;

@@ -12,10 +12,10 @@
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { parseYamlText } from '../../pipeline/load.js';
-import { checkUniqueNames, findDuplicateNames, validateSpecies, validateSpeciesSet } from '../../pipeline/validate.js';
-import type { AtomSpecies, DiatomicSpecies, LinearSpecies, NonlinearSpecies } from '../../src/model.js';
-import { CO2_LINES } from '../fixtures/input/co2.js';
+import { parseYamlText } from '../../../pipeline/stages/load.js';
+import { checkUniqueNames, findDuplicateNames, validateSpecies, validateSpeciesSet } from '../../../pipeline/stages/validate.js';
+import type { AtomSpecies, DiatomicSpecies, LinearSpecies, NonlinearSpecies } from '../../../src/model.js';
+import { CO2_LINES } from '../../fixtures/input/co2.js';
 
 const EV_CM1 = 8065.543937349212;
 const K_CM1 = 0.6950348004861275;
@@ -23,7 +23,7 @@ const KJMOL_CM1 = 83.59347229111778;
 const GHZ_CM1 = 0.03335640951981521;
 const INERTIA_B = 16.85762919164018;
 
-const fixture = (name: string) => readFileSync(new URL(`../fixtures/input/${name}`, import.meta.url), 'utf8');
+const fixture = (name: string) => readFileSync(new URL(`../../fixtures/input/${name}`, import.meta.url), 'utf8');
 
 function validateFixture(name: string) {
   const loaded = parseYamlText(fixture(name), name);

@@ -4,9 +4,9 @@
  * excerpt; tolerances as in issue 2 (0.03 J/(mol K) Cp, 0.02 J/(mol K) S, 0.01 kJ/mol H-H298).
  */
 import { describe, expect, it } from 'vitest';
-import { TABLE_CSV_HEADER, tableTemperatures } from '../../pipeline/table.js';
+import { TABLE_CSV_HEADER, tableTemperatures } from '../../../pipeline/commands/table.js';
 import path from 'node:path';
-import { FIXTURE_DB, REPO, runCli } from './helpers.js';
+import { FIXTURE_DB, REPO, runCli } from '../helpers.js';
 
 describe('qforge table', () => {
   it('prints the exact CSV header and JANAF-grade N2 values', async () => {

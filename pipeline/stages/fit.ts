@@ -2,9 +2,9 @@
  * Stage "fit": the two-range NASA 7-coefficient fit of one species' computed points (src/nasa7). Pure:
  * a function of the computed samples and the fit options only.
  */
-import { fitNasa7 } from '../src/nasa7/fit.js';
-import { normaliseFitOptions, type PartialFitOptions } from '../src/nasa7/options.js';
-import type { FitOptions, FitResult } from '../src/nasa7/types.js';
+import { fitNasa7 } from '../../src/nasa7/fit.js';
+import { normaliseFitOptions, type PartialFitOptions } from '../../src/nasa7/options.js';
+import type { FitOptions, FitResult } from '../../src/nasa7/types.js';
 import type { ComputedSpecies } from './compute.js';
 
 /** Normalised fit options of a plan (throws FitError listing every bad option). */

@@ -11,20 +11,20 @@
  */
 import { Ajv2020 } from 'ajv/dist/2020.js';
 import { writeToString } from 'fast-csv';
-import databaseSchema from '../schemas/database.schema.json' with { type: 'json' };
-import settingsSchema from '../schemas/settings.schema.json' with { type: 'json' };
-import summarySchema from '../schemas/summary.schema.json' with { type: 'json' };
-import { GAS_CONSTANT, T_REF } from '../src/constants.js';
-import type { Species, StandardProperties } from '../src/model.js';
-import { evaluateNasa7 } from '../src/nasa7/evaluate.js';
-import { formatNasa7File } from '../src/nasa7/format.js';
-import { roundForRecord } from '../src/nasa7/round.js';
-import type { FitMetrics, FitResult, Nasa7Polynomial, Nasa7Record, RangeMetrics } from '../src/nasa7/types.js';
+import databaseSchema from '../../schemas/database.schema.json' with { type: 'json' };
+import settingsSchema from '../../schemas/settings.schema.json' with { type: 'json' };
+import summarySchema from '../../schemas/summary.schema.json' with { type: 'json' };
+import { GAS_CONSTANT, T_REF } from '../../src/constants.js';
+import type { Species, StandardProperties } from '../../src/model.js';
+import { evaluateNasa7 } from '../../src/nasa7/evaluate.js';
+import { formatNasa7File } from '../../src/nasa7/format.js';
+import { roundForRecord } from '../../src/nasa7/round.js';
+import type { FitMetrics, FitResult, Nasa7Polynomial, Nasa7Record, RangeMetrics } from '../../src/nasa7/types.js';
 import type { ComputedSpecies } from './compute.js';
-import type { DatabaseSettings } from './settings.js';
-import { standardPressurePa } from './settings.js';
-import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './version.js';
-import { compareText } from './text.js';
+import type { DatabaseSettings } from '../core/settings.js';
+import { standardPressurePa } from '../core/settings.js';
+import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from '../core/version.js';
+import { compareText } from '../core/text.js';
 
 export const CAUTION =
   'CAUTION: these polynomials are valid only inside the temperature range they were fitted on; outside it ' +

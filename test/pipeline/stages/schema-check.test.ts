@@ -6,12 +6,12 @@
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import schema from '../../schemas/species.schema.json' with { type: 'json' };
-import { formatDiagnostic } from '../../pipeline/diagnostics.js';
-import { parseYamlText } from '../../pipeline/load.js';
-import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from '../../pipeline/schema-check.js';
-import { ENERGY_UNITS_TO_CM1, ENTHALPY_UNITS_TO_J_PER_MOL, INERTIA_UNITS_TO_KG_M2, ROTATIONAL_UNITS_TO_CM1 } from '../../src/units.js';
-import { OUTPUT_PATH, generateSpeciesInputTypes } from '../../scripts/generate-types.mjs';
+import schema from '../../../schemas/species.schema.json' with { type: 'json' };
+import { formatDiagnostic } from '../../../pipeline/core/diagnostics.js';
+import { parseYamlText } from '../../../pipeline/stages/load.js';
+import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from '../../../pipeline/stages/schema-check.js';
+import { ENERGY_UNITS_TO_CM1, ENTHALPY_UNITS_TO_J_PER_MOL, INERTIA_UNITS_TO_KG_M2, ROTATIONAL_UNITS_TO_CM1 } from '../../../src/units.js';
+import { OUTPUT_PATH, generateSpeciesInputTypes } from '../../../scripts/generate-types.mjs';
 
 type Obj = Record<string, unknown>;
 const defs = (schema as unknown as { $defs: Record<string, Obj> }).$defs;

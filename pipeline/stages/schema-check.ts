@@ -13,8 +13,8 @@
  */
 import { Ajv2020 } from 'ajv/dist/2020.js';
 import type { ErrorObject, ValidateFunction } from 'ajv';
-import type { Diagnostic } from './diagnostics.js';
-import { compareText } from './text.js';
+import type { Diagnostic } from '../core/diagnostics.js';
+import { compareText } from '../core/text.js';
 import type { LoadedDocument, SourcePosition } from './load.js';
 
 /** The ajv options every qforge schema is compiled with (the messages below rely on `verbose`). */

@@ -7,14 +7,14 @@
  */
 import { access } from 'node:fs/promises';
 import path from 'node:path';
-import schema from '../schemas/settings.schema.json' with { type: 'json' };
-import { STANDARD_PRESSURE_ATM, STANDARD_PRESSURE_BAR, T_REF } from '../src/constants.js';
+import schema from '../../schemas/settings.schema.json' with { type: 'json' };
+import { STANDARD_PRESSURE_ATM, STANDARD_PRESSURE_BAR, T_REF } from '../../src/constants.js';
 import type { Diagnostic } from './diagnostics.js';
-import { SETTINGS_FILE_NAME, loadYamlFile, type LoadedDocument } from './load.js';
-import { checkAgainstSchema, createSchemaValidator, formatFieldPath } from './schema-check.js';
-import { MAX_END_GAP_FRACTION, MAX_INNER_GAP_FRACTION, MIN_DISTINCT_TEMPERATURES } from '../src/nasa7/samples.js';
+import { SETTINGS_FILE_NAME, loadYamlFile, type LoadedDocument } from '../stages/load.js';
+import { checkAgainstSchema, createSchemaValidator, formatFieldPath } from '../stages/schema-check.js';
+import { MAX_END_GAP_FRACTION, MAX_INNER_GAP_FRACTION, MIN_DISTINCT_TEMPERATURES } from '../../src/nasa7/samples.js';
 // plan.ts imports this module too; only functions cross the cycle, and only at call time.
-import { temperatureGrid } from './plan.js';
+import { temperatureGrid } from './grid.js';
 
 export { SETTINGS_FILE_NAME };
 

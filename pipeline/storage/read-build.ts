@@ -10,12 +10,12 @@
  */
 import { open, stat } from 'node:fs/promises';
 import path from 'node:path';
-import { GAS_CONSTANT, T_REF } from '../src/constants.js';
-import { evaluateNasa7 } from '../src/nasa7/evaluate.js';
-import { parseNasa7File } from '../src/nasa7/parse.js';
-import type { Nasa7Polynomial } from '../src/nasa7/types.js';
+import { GAS_CONSTANT, T_REF } from '../../src/constants.js';
+import { evaluateNasa7 } from '../../src/nasa7/evaluate.js';
+import { parseNasa7File } from '../../src/nasa7/parse.js';
+import type { Nasa7Polynomial } from '../../src/nasa7/types.js';
 import { resolveReadableBuild } from './atomic-write.js';
-import type { DatabaseSettings } from './settings.js';
+import type { DatabaseSettings } from '../core/settings.js';
 
 export interface NamedPolynomial {
   name: string;

@@ -12,11 +12,11 @@
  * Warnings flag legal but suspicious input and never stop a species.
  */
 import { elementsObject } from 'chemical-elements';
-import schema from '../schemas/species.schema.json' with { type: 'json' };
-import { isKnownElement, molarMass } from '../src/elements.js';
-import { centrifugalConstantOf, rotationalConstantOf, vibrationalTerm } from '../src/partition/diatomic.js';
-import { hinderedRotorBasisSize, MAX_HINDERED_ROTOR_BASIS, smallestHinderedRotorConstant } from '../src/partition/hindered-rotor.js';
-import { DEFAULT_NUCLEAR_SPIN_MIXTURE } from '../src/partition/spin-mixture.js';
+import schema from '../../schemas/species.schema.json' with { type: 'json' };
+import { isKnownElement, molarMass } from '../../src/elements.js';
+import { centrifugalConstantOf, rotationalConstantOf, vibrationalTerm } from '../../src/partition/diatomic.js';
+import { hinderedRotorBasisSize, MAX_HINDERED_ROTOR_BASIS, smallestHinderedRotorConstant } from '../../src/partition/hindered-rotor.js';
+import { DEFAULT_NUCLEAR_SPIN_MIXTURE } from '../../src/partition/spin-mixture.js';
 import type {
   DiatomicState,
   ElectronicLevel,
@@ -26,18 +26,18 @@ import type {
   Species,
   Structure,
   Vibration,
-} from '../src/model.js';
+} from '../../src/model.js';
 import {
   ENERGY_UNITS_TO_CM1,
   ENTHALPY_UNITS_TO_J_PER_MOL,
   INERTIA_UNITS_TO_KG_M2,
   ROTATIONAL_UNITS_TO_CM1,
   rotationalConstantFromInertia,
-} from '../src/units.js';
-import { compareDiagnostics, type Diagnostic } from './diagnostics.js';
+} from '../../src/units.js';
+import { compareDiagnostics, type Diagnostic } from '../core/diagnostics.js';
 import type { LoadedDocument } from './load.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from './schema-check.js';
-import { compareText } from './text.js';
+import { compareText } from '../core/text.js';
 
 type Segment = string | number;
 type Obj = Record<string, unknown>;

@@ -2,7 +2,7 @@
  * Progress display of a build on stderr: a cli-progress bar when stderr is a terminal, plain lines
  * otherwise (CI logs), nothing with --quiet.
  */
-import type { ProgressEvent } from './runner.js';
+import type { ProgressEvent } from '../runner.js';
 
 export interface TextSink {
   write(text: string): unknown;

@@ -31,9 +31,9 @@
  */
 import path from 'node:path';
 import { parseString } from 'fast-csv';
-import { T_REF } from '../src/constants.js';
-import type { CliIo } from './cli.js';
-import { formatDiagnostic } from './diagnostics.js';
+import { T_REF } from '../../src/constants.js';
+import type { CliIo } from './io.js';
+import { formatDiagnostic } from '../core/diagnostics.js';
 import {
   formatFixed,
   formatSigned,
@@ -43,10 +43,10 @@ import {
   readPolynomialSet,
   ReadBuildError,
   type PolynomialSet,
-} from './read-build.js';
-import { DEFAULT_SETTINGS, loadSettings, type KnownDeviation, type QuantityTriple } from './settings.js';
-import { displayPath } from './display-path.js';
-import { compareText } from './text.js';
+} from '../storage/read-build.js';
+import { DEFAULT_SETTINGS, loadSettings, type KnownDeviation, type QuantityTriple } from '../core/settings.js';
+import { displayPath } from '../core/display-path.js';
+import { compareText } from '../core/text.js';
 
 export type RefQuantity = 'cp' | 's' | 'h';
 const QS: readonly RefQuantity[] = ['cp', 's', 'h'];

@@ -6,7 +6,7 @@ import { mkdtemp, mkdir, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
-import { codeFingerprint, fingerprintFolders } from '../../pipeline/code-fingerprint.js';
+import { codeFingerprint, fingerprintFolders } from '../../../pipeline/storage/code-fingerprint.js';
 
 let root: string | undefined;
 afterEach(async () => {

@@ -3,11 +3,11 @@
  * or on the table grid (for tables/<name>.csv). Pure: a function of the species and its plan only, no
  * shared state, so a worker pool can run it later.
  */
-import { T_REF } from '../src/constants.js';
-import type { ModelSummary, PhysicsOptions, Species, StandardProperties } from '../src/model.js';
-import type { FitSample } from '../src/nasa7/types.js';
-import { createThermoEvaluator } from '../src/thermo/evaluator.js';
-import { standardProperties } from '../src/thermo/properties.js';
+import { T_REF } from '../../src/constants.js';
+import type { ModelSummary, PhysicsOptions, Species, StandardProperties } from '../../src/model.js';
+import type { FitSample } from '../../src/nasa7/types.js';
+import { createThermoEvaluator } from '../../src/thermo/evaluator.js';
+import { standardProperties } from '../../src/thermo/properties.js';
 
 export interface ComputedSpecies {
   /** Cp/R, H/RT (absolute), S/R on the sampling grid, ascending T. */

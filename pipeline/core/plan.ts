@@ -7,11 +7,12 @@
  *   table   ← input, physics options, table grid
  *   verify  ← tolerances (cheap; never cached)
  */
-import { T_REF } from '../src/constants.js';
-import type { PhysicsOptions, Species } from '../src/model.js';
-import type { PartialFitOptions } from '../src/nasa7/options.js';
+import { T_REF } from '../../src/constants.js';
+import type { PhysicsOptions, Species } from '../../src/model.js';
+import type { PartialFitOptions } from '../../src/nasa7/options.js';
 import type { DatabaseSettings, QuantityTriple } from './settings.js';
 import { standardPressurePa } from './settings.js';
+import { temperatureGrid, tidy } from './grid.js';
 
 export interface SpeciesPlan {
   ranges: { low: number; mid: number; high: number };
@@ -22,19 +23,6 @@ export interface SpeciesPlan {
   tolerances: QuantityTriple;
   /** Temperatures (K) of tables/<name>.csv, inside the species' range, ascending. */
   tableTemperatures: number[];
-}
-
-/** Rounded to 1e-6 K so that low + k·step does not carry binary noise into keys or tables. */
-const tidy = (t: number): number => Math.round(t * 1e6) / 1e6;
-
-/** low, low+step, …, high, plus the extras, inside [low, high], ascending, distinct. */
-export function temperatureGrid(low: number, high: number, step: number, extra: readonly number[] = []): number[] {
-  const set = new Set<number>();
-  const n = Math.floor((high - low) / step + 1e-9);
-  for (let k = 0; k <= n; k++) set.add(tidy(low + k * step));
-  set.add(tidy(high));
-  for (const t of extra) if (t >= low && t <= high) set.add(tidy(t));
-  return [...set].filter((t) => t >= low && t <= high).sort((a, b) => a - b);
 }
 
 export function planSpecies(species: Species, settings: DatabaseSettings): SpeciesPlan {

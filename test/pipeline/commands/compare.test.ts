@@ -5,8 +5,8 @@
 import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { parseReferenceCsv } from '../../pipeline/compare.js';
-import { runCli, sharedBuiltWorkspace } from './helpers.js';
+import { parseReferenceCsv } from '../../../pipeline/commands/compare.js';
+import { runCli, sharedBuiltWorkspace } from '../helpers.js';
 
 const workspace = sharedBuiltWorkspace();
 

@@ -14,10 +14,10 @@ import {
   discoverSpeciesFiles,
   loadYamlFile,
   parseYamlText,
-} from '../../pipeline/load.js';
-import { validateSpecies } from '../../pipeline/validate.js';
+} from '../../../pipeline/stages/load.js';
+import { validateSpecies } from '../../../pipeline/stages/validate.js';
 
-const fixture = (name: string) => readFileSync(new URL(`../fixtures/input/${name}`, import.meta.url), 'utf8');
+const fixture = (name: string) => readFileSync(new URL(`../../fixtures/input/${name}`, import.meta.url), 'utf8');
 const temps: string[] = [];
 function tempDir(): string {
   const d = mkdtempSync(path.join(tmpdir(), 'qforge-load-'));

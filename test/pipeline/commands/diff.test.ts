@@ -7,11 +7,11 @@
 import { chmod, copyFile, mkdir, truncate, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { compareWithReferences, renderCompareText } from '../../pipeline/compare.js';
-import { diffSets, renderDiffText } from '../../pipeline/diff.js';
-import { inputReadError, MAX_INPUT_BYTES, ReadBuildError, ReadBuildUsageError, readInputFile, type PolynomialSet } from '../../pipeline/read-build.js';
-import type { Nasa7Polynomial } from '../../src/nasa7/types.js';
-import { runCli, sharedBuiltWorkspace } from './helpers.js';
+import { compareWithReferences, renderCompareText } from '../../../pipeline/commands/compare.js';
+import { diffSets, renderDiffText } from '../../../pipeline/commands/diff.js';
+import { inputReadError, MAX_INPUT_BYTES, ReadBuildError, ReadBuildUsageError, readInputFile, type PolynomialSet } from '../../../pipeline/storage/read-build.js';
+import type { Nasa7Polynomial } from '../../../src/nasa7/types.js';
+import { runCli, sharedBuiltWorkspace } from '../helpers.js';
 
 const workspace = sharedBuiltWorkspace();
 

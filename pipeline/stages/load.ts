@@ -38,8 +38,8 @@ import {
   type Document,
   type Node as YamlNode,
 } from 'yaml';
-import type { Diagnostic } from './diagnostics.js';
-import { compareText, errorText } from './text.js';
+import type { Diagnostic } from '../core/diagnostics.js';
+import { compareText, errorText } from '../core/text.js';
 
 /** Default size limit of one YAML file: 1 MiB (a large species file is a few kB). */
 export const DEFAULT_MAX_BYTES = 1024 * 1024;

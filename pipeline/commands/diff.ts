@@ -16,11 +16,11 @@
  * nasa7.txt) the comparison is "mixed precision": a species with the same ranges whose Cp, H and S agree
  * within ROUNDING_TOLERANCE everywhere on the grid counts as unchanged, and the report says so in `notes`.
  */
-import { T_REF } from '../src/constants.js';
-import type { Nasa7Polynomial } from '../src/nasa7/types.js';
-import type { CliIo } from './cli.js';
-import { formatFixed, polynomialProperties, readPolynomialSet, ReadBuildError, type PolynomialSet, type Properties } from './read-build.js';
-import { compareText } from './text.js';
+import { T_REF } from '../../src/constants.js';
+import type { Nasa7Polynomial } from '../../src/nasa7/types.js';
+import type { CliIo } from './io.js';
+import { formatFixed, polynomialProperties, readPolynomialSet, ReadBuildError, type PolynomialSet, type Properties } from '../storage/read-build.js';
+import { compareText } from '../core/text.js';
 
 export const PROPERTY_CHANGE_THRESHOLDS = Object.freeze({ cp: 1e-3, h: 1e-3, s: 1e-3 });
 /**

@@ -3,15 +3,15 @@
  * CSV header (exact): T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol],H [kJ/mol],G [kJ/mol]
  */
 import { stat } from 'node:fs/promises';
-import { STANDARD_PRESSURE_ATM, STANDARD_PRESSURE_BAR } from '../src/constants.js';
-import type { StandardProperties } from '../src/model.js';
-import { createThermoEvaluator } from '../src/thermo/evaluator.js';
-import { standardProperties } from '../src/thermo/properties.js';
-import type { CliIo } from './cli.js';
-import { formatDiagnostic, hasErrors } from './diagnostics.js';
-import { fixed } from './emit.js';
-import { loadYamlFile } from './load.js';
-import { validateSpecies } from './validate.js';
+import { STANDARD_PRESSURE_ATM, STANDARD_PRESSURE_BAR } from '../../src/constants.js';
+import type { StandardProperties } from '../../src/model.js';
+import { createThermoEvaluator } from '../../src/thermo/evaluator.js';
+import { standardProperties } from '../../src/thermo/properties.js';
+import type { CliIo } from './io.js';
+import { formatDiagnostic, hasErrors } from '../core/diagnostics.js';
+import { fixed } from '../stages/emit.js';
+import { loadYamlFile } from '../stages/load.js';
+import { validateSpecies } from '../stages/validate.js';
 
 export const TABLE_CSV_HEADER = 'T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol],H [kJ/mol],G [kJ/mol]';
 

@@ -23,6 +23,11 @@ export interface Diagnostic {
   value?: unknown;
   /** What was expected instead. */
   expected?: string;
+  /**
+   * Stable identifier of the kind of problem, lower kebab-case (e.g. `rotor-axis-not-bonded`), the same in
+   * text and JSON outputs and the key of `accepted_warnings`. Never reworded once released.
+   */
+  code?: string;
 }
 
 function showValue(v: unknown): string {

@@ -39,6 +39,7 @@ import { createWarningPolicy } from './core/strict.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './core/version.js';
 import { displayPath } from './core/display-path.js';
 import { compareText, errorText } from './core/text.js';
+import { ReportWriter, type ReportRequest } from './report/build-report.js';
 
 export type StageName = 'load' | 'validate' | 'compute' | 'fit' | 'verify' | 'emit';
 
@@ -66,6 +67,8 @@ export interface BuildOptions extends CheckOptions {
   keepGoing?: boolean;
   onProgress?: (e: ProgressEvent) => void;
   hooks?: PublishHooks;
+  /** Write report.html (also when the settings' outputs.report is true); see pipeline/report/. */
+  report?: ReportRequest;
 }
 
 /** One species document that passed validation. */
@@ -524,6 +527,9 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   const cacheDir =
     opts.cacheDir === null ? undefined : (opts.cacheDir ?? path.join(path.dirname(path.resolve(opts.out)), '.qforge-cache'));
   const cache = new StageCache(cacheDir);
+  // Opened before the species run so that a missing --report-against build fails at once.
+  const reportWriter =
+    check.settingsOk && (opts.report || settings.outputs.report) ? await ReportWriter.open(opts.report ?? {}, settings, opts.dir, opts.displayBase) : undefined;
 
   const limit = pLimit(Math.max(1, opts.jobs ?? 8));
   const total = check.species.length;
@@ -651,6 +657,24 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
       };
     }
     summarySpecies.push(s);
+    if (mayWrite) {
+      reportWriter?.add({
+        name: o.valid.name,
+        file: o.valid.file,
+        status: s.status,
+        species: o.valid.species,
+        ...(o.built ? { computed: o.built.computed, fit: o.built.fit } : {}),
+        warnings: s.warnings,
+        errors: s.errors,
+        cacheHit: s.cache_hit,
+      });
+    }
+  }
+  if (mayWrite && reportWriter) {
+    const report = reportWriter.finish(status, check.invalid.map((i) => `${i.file}#${i.document}: ${i.diagnostics.find((d) => d.severity === 'error')?.message ?? 'invalid'}`));
+    files.set('report.html', report.main);
+    for (const [page, html] of report.pages) files.set(page, html);
+    outputs.splice(0, outputs.length, ...[...files.keys()].sort(), 'summary.json');
   }
   for (const inv of check.invalid) {
     const s: SummarySpecies = {

@@ -54,7 +54,7 @@ export interface DatabaseSettings {
   };
   /** Dimensionless: |ΔCp/R|, |ΔH/RT|, |ΔS/R|. */
   tolerances: QuantityTriple;
-  outputs: { thermo_json: boolean; nasa7: boolean; tables: boolean };
+  outputs: { thermo_json: boolean; nasa7: boolean; tables: boolean; report: boolean };
   tables: { from: number; to: number; step: number; extra: number[] };
   references: {
     files: string[];
@@ -86,7 +86,7 @@ export const DEFAULT_SETTINGS: Readonly<DatabaseSettings> = Object.freeze({
     sampling_step: 10,
   },
   tolerances: { cp: 0.1, h: 0.02, s: 0.02 },
-  outputs: { thermo_json: true, nasa7: true, tables: true },
+  outputs: { thermo_json: true, nasa7: true, tables: true, report: false },
   tables: { from: 200, to: 6000, step: 100, extra: [298.15] },
   references: { files: [], tolerances: { cp: 0.5, h: 0.5, s: 0.5 }, known_deviations: [] },
   strict: false,

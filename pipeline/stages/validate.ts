@@ -47,6 +47,7 @@ import {
   readVibrationScaleFactor,
 } from './validate-anharmonic.js';
 import { checkConformerSet } from './validate-conformers.js';
+import { checkElectron } from './validate-electron.js';
 import { compareText } from '../core/text.js';
 
 type Segment = string | number;
@@ -1051,6 +1052,7 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
   ctx.composition = readComposition(input.composition, f);
   checkName(ctx);
   checkComposition(ctx);
+  checkElectron(ctx.f, ctx.composition, input.charge, structure, input.electronic_levels);
   checkSources(ctx);
   const enthalpy = readEnthalpy(ctx);
   const temperatureRanges = readTemperatureRanges(ctx);

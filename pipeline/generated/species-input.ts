@@ -183,6 +183,12 @@ export interface SpeciesInput {
         temperature?: 298.15 | 0;
       };
   /**
+   * Warnings of this species accepted in writing: each names the stable code of one warning (as printed in [brackets]) and why it is acceptable. An accepted warning is neither printed nor turned into an error by --strict; an entry that matches no warning is itself warned about (stale-accepted-warning). Never part of the normalised input (no effect on the numbers or the cache).
+   *
+   * @minItems 1
+   */
+  accepted_warnings?: [AcceptedWarning, ...AcceptedWarning[]];
+  /**
    * Where every number comes from (free text, one entry per source). Required and non-empty.
    *
    * @minItems 1
@@ -281,6 +287,19 @@ export interface SpeciesInput {
      */
     high?: number;
   };
+}
+/**
+ * One accepted warning: its stable code and the reason a person accepts it.
+ */
+export interface AcceptedWarning {
+  /**
+   * Stable code of the accepted warning, as printed in [brackets] after the message.
+   */
+  code: string;
+  /**
+   * Why a person accepts this warning for this species; a placeholder (todo, n/a, ...) is an error.
+   */
+  reason: string;
 }
 /**
  * One electronic level of an atom or polyatomic molecule.

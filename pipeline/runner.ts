@@ -198,7 +198,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
       invalid.push({ doc, entry: invalidEntry(doc, file, [...(doc.yamlErrors ?? []), ...ds]) });
     }
     if (loaded.documents.length === 0 && !hasErrors(loaded.diagnostics)) {
-      const d: Diagnostic = { severity: 'warning', file, path: '', message: 'file holds no species' };
+      const d: Diagnostic = { severity: 'warning', code: 'file-holds-no-species', file, path: '', message: 'file holds no species' };
       diagnostics.push(d);
       addFileDiag(d);
     }
@@ -251,6 +251,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   if (discovered.files.length === 0 && !hasErrors(discovered.diagnostics)) {
     diagnostics.push({
       severity: 'error',
+      code: 'no-species-files',
       file: dir,
       path: '',
       message: 'no species files (*.yaml, *.yml) in the database folder',
@@ -343,9 +344,9 @@ export async function buildOneSpecies(
     timings: { load: v.loadMs, validate: v.validateMs },
   };
   const where = { file: v.displayFile, species: v.name, ...(v.positions.name ?? {}) };
-  const fail = (pathText: string, message: string) => {
+  const fail = (code: string, pathText: string, message: string) => {
     const pos = (pathText === 'temperature_ranges' ? v.positions.temperature_ranges : undefined) ?? v.positions.name;
-    out.diagnostics.push({ severity: 'error', ...where, ...(pos ?? {}), path: pathText, message });
+    out.diagnostics.push({ severity: 'error', code, ...where, ...(pos ?? {}), path: pathText, message });
   };
   const note = (kind: CacheKind, r: { outcome: CacheOutcome; reason?: string }) => {
     out.cache[kind] = r.outcome;
@@ -375,7 +376,7 @@ export async function buildOneSpecies(
   try {
     fitOptions = fitOptionsFor(plan.fitOptions);
   } catch (e) {
-    fail(v.species.temperatureRanges ? 'temperature_ranges' : '', `fit options: ${errorText(e)}`);
+    fail('fit-options', v.species.temperatureRanges ? 'temperature_ranges' : '', `fit options: ${errorText(e)}`);
     return out;
   }
   const inputHash = `sha256:${sha256Hex(canonicalJson(v.normalisedInput))}`;
@@ -395,7 +396,7 @@ export async function buildOneSpecies(
       out.timings[kind === 'samples' ? 'compute' : kind] = r.ms;
       return r.value;
     } catch (e) {
-      fail(failPath, `${what} failed: ${errorText(e)}`);
+      fail(kind === 'samples' ? 'compute-failed' : `${kind}-failed`, failPath, `${what} failed: ${errorText(e)}`);
       return undefined;
     }
   };
@@ -545,6 +546,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
         const o = outcomes.get(e.record)!;
         o.diagnostics.push({
           severity: 'error',
+          code: 'record-not-writable',
           file: o.valid.displayFile,
           species: o.valid.name,
           ...((e.field.startsWith('elements') ? o.valid.positions.composition : o.valid.positions.name) ?? {}),
@@ -567,6 +569,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     if (!hasErrors(allDiagnostics)) {
       allDiagnostics.push({
         severity: 'error',
+        code: 'database-empty',
         file: opts.displayBase ? displayPath(opts.displayBase, opts.dir) : opts.dir,
         path: '',
         message: 'the database holds no species',

@@ -38,6 +38,7 @@ import { compareDiagnostics, type Diagnostic } from '../core/diagnostics.js';
 import type { LoadedDocument } from './load.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from './schema-check.js';
 import { compareText } from '../core/text.js';
+import { readUncertainties } from './uncertainty-input.js';
 
 type Segment = string | number;
 type Obj = Record<string, unknown>;
@@ -1014,6 +1015,10 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
     }
   }
 
+  if (species && input.uncertainties !== undefined) {
+    const u = readUncertainties(input.uncertainties, species, (sev, at, message, extra) => f.add(sev, ['uncertainties', ...at], message, extra));
+    if (u) species.uncertainties = u;
+  }
   const diagnostics = [...schemaDiagnostics, ...f.diagnostics].sort(compareDiagnostics);
   const failed = diagnostics.some((d) => d.severity === 'error');
   if (failed || !species) {

@@ -282,7 +282,13 @@ export interface SpeciesInput {
     enthalpy_of_formation?:
       | number
       | {
+          /**
+           * Standard uncertainty in `unit`.
+           */
           value: number;
+          /**
+           * Unit of `value`. Default kJ/mol.
+           */
           unit?: "J/mol" | "kJ/mol" | "kcal/mol";
         };
     /**

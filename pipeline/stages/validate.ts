@@ -50,6 +50,7 @@ import {
 import { checkConformerSet } from './validate-conformers.js';
 import { checkElectron } from './validate-electron.js';
 import { compareText } from '../core/text.js';
+import { readUncertainties } from './uncertainty-input.js';
 
 type Segment = string | number;
 type Obj = Record<string, unknown>;
@@ -1087,6 +1088,10 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
     }
   }
 
+  if (species && input.uncertainties !== undefined) {
+    const u = readUncertainties(input.uncertainties, species, (sev, at, message, extra) => f.add(sev, ['uncertainties', ...at], message, extra));
+    if (u) species.uncertainties = u;
+  }
   const diagnostics = [...schemaDiagnostics, ...f.diagnostics].sort(compareDiagnostics);
   const failed = diagnostics.some((d) => d.severity === 'error');
   if (failed || !species) {

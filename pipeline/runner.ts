@@ -36,6 +36,7 @@ import { checkUniqueNames, validateSpecies } from './stages/validate.js';
 import { verifySpecies } from './stages/verify.js';
 import { codeFingerprint } from './storage/code-fingerprint.js';
 import { createWarningPolicy } from './core/strict.js';
+import { markPartialNasa7, partialMark } from './stages/partial.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './core/version.js';
 import { displayPath } from './core/display-path.js';
 import { compareText, errorText } from './core/text.js';
@@ -610,13 +611,22 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   const files = new Map<string, string>();
   const outputs: string[] = [];
   const emitTimes = new Map<string, number>();
+  // A partial database says so in its headers, naming what is missing (stages/partial.ts).
+  const mark =
+    status === 'partial'
+      ? partialMark(
+          [...failedSpecies.map((o) => o.valid.name), ...check.invalid.flatMap((e) => (e.name === undefined ? [] : [e.name]))],
+          [...check.failedFiles].map((f) => (opts.displayBase && path.isAbsolute(f) ? displayPath(opts.displayBase, f) : f)),
+        )
+      : undefined;
   if (mayWrite) {
     if (settings.outputs.thermo_json) {
       const db = databaseJson(good, settings);
+      if (mark) Object.assign(db, { partial: mark });
       validateDatabaseJson(db);
       files.set('thermo.json', jsonText(db));
     }
-    if (settings.outputs.nasa7) files.set('nasa7.txt', nasa7Text);
+    if (settings.outputs.nasa7) files.set('nasa7.txt', mark ? markPartialNasa7(nasa7Text, mark) : nasa7Text);
     if (settings.outputs.tables) {
       files.set('tables/README.txt', renderTablesReadme(settings));
       const names = tableFileNames(good.map((g) => g.name), (s) => sha256Hex(s));

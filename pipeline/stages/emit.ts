@@ -49,7 +49,7 @@ export function renderTablesReadme(settings: { title: string; standard_pressure:
   return `${paragraphs.map((p) => wrapWords(p, 78).join('\n')).join('\n\n')}\n`;
 }
 
-function wrapWords(text: string, width: number): string[] {
+export function wrapWords(text: string, width: number): string[] {
   const lines: string[] = [];
   let line = '';
   for (const w of text.split(/\s+/)) {

@@ -183,6 +183,12 @@ export interface SpeciesInput {
         temperature?: 298.15 | 0;
       };
   /**
+   * Warnings of this species accepted in writing: each names the stable code of one warning (as printed in [brackets]) and why it is acceptable. An accepted warning is neither printed nor turned into an error by --strict; an entry that matches no warning is itself warned about (stale-accepted-warning). Never part of the normalised input (no effect on the numbers or the cache).
+   *
+   * @minItems 1
+   */
+  accepted_warnings?: [AcceptedWarning, ...AcceptedWarning[]];
+  /**
    * Where every number comes from (free text, one entry per source). Required and non-empty.
    *
    * @minItems 1
@@ -265,6 +271,54 @@ export interface SpeciesInput {
    */
   electronic_states?: [ElectronicState, ...ElectronicState[]];
   /**
+   * Optional standard uncertainties (one standard deviation) of the model inputs, propagated linearly to u(Cp), u(S), u(H-H298) and u(H) at 298.15, 1000 and 2000 K (thermo.json, report.html). Every key is optional; a missing key means that input is taken as exact (u = 0), and a species without `uncertainties` reports zero uncertainties. Relative figures are fractions (0.01 = 1 %). Inputs are treated as independent, except `scale_factor`, which moves all vibrations together.
+   */
+  uncertainties?: {
+    /**
+     * Uncertainty of each vibration wavenumber (independent per entry): one relative figure for all entries, or a list of absolute uncertainties in cm-1, one per entry of `vibrations` (a degenerate entry moves as one). Diatomics: applies to we of every electronic state.
+     */
+    vibrations?: number | number[];
+    /**
+     * Relative uncertainty of the vibrational scale factor: all wavenumbers move together by this fraction (fully correlated).
+     */
+    scale_factor?: number;
+    /**
+     * Relative uncertainty of each rotational constant (independent per constant). With moments of inertia or a geometry as input, state the uncertainty of the rotational constants derived from them. Diatomics: Be of every electronic state.
+     */
+    rotational_constants?: number;
+    /**
+     * Uncertainty of each excited electronic level energy (or diatomic state Te), cm-1, independent per level.
+     */
+    electronic_energies?: number;
+    /**
+     * Relative uncertainty of each hindered-rotor barrier V0 (independent per rotor).
+     */
+    barriers?: number;
+    /**
+     * Relative uncertainty of each anharmonic constant x_ij (polyatomics with `anharmonicity`) or wexe (diatomics), independent per constant.
+     */
+    anharmonic_constants?: number;
+    /**
+     * Standard uncertainty of the enthalpy of formation: a number in kJ/mol or {value, unit} with unit J/mol, kJ/mol, kcal/mol.
+     */
+    enthalpy_of_formation?:
+      | number
+      | {
+          /**
+           * Standard uncertainty in `unit`.
+           */
+          value: number;
+          /**
+           * Unit of `value`. Default kJ/mol.
+           */
+          unit?: "J/mol" | "kJ/mol" | "kcal/mol";
+        };
+    /**
+     * Relative uncertainty of the molar mass (rarely needed: atomic weights are known to better than 1e-4; isotopic mixtures).
+     */
+    molar_mass?: number;
+  };
+  /**
    * Optional per-species override of the fit ranges [low, mid] and [mid, high], K. Missing keys come from the database settings.
    */
   temperature_ranges?: {
@@ -281,6 +335,19 @@ export interface SpeciesInput {
      */
     high?: number;
   };
+}
+/**
+ * One accepted warning: its stable code and the reason a person accepts it.
+ */
+export interface AcceptedWarning {
+  /**
+   * Stable code of the accepted warning, as printed in [brackets] after the message.
+   */
+  code: string;
+  /**
+   * Why a person accepts this warning for this species; a placeholder (todo, n/a, ...) is an error.
+   */
+  reason: string;
 }
 /**
  * One electronic level of an atom or polyatomic molecule.

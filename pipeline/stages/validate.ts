@@ -38,6 +38,7 @@ import {
 } from '../../src/units.js';
 import { compareDiagnostics, type Diagnostic } from '../core/diagnostics.js';
 import type { LoadedDocument } from './load.js';
+import { checkPlausibility } from './plausibility.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from './schema-check.js';
 import {
   checkAnharmonicModel,
@@ -49,6 +50,7 @@ import {
 import { checkConformerSet } from './validate-conformers.js';
 import { checkElectron } from './validate-electron.js';
 import { compareText } from '../core/text.js';
+import { readUncertainties } from './uncertainty-input.js';
 
 type Segment = string | number;
 type Obj = Record<string, unknown>;
@@ -561,15 +563,6 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
               expected: 'the conventional order (the product, and so the thermochemistry, is unaffected)',
             });
           }
-          values.forEach((b, i) => {
-            if (b > 100) {
-              f.warn([field, i], `rotational constant of ${fmt(b)} cm-1 is larger than that of any molecule (H2: about 60 cm-1); check the unit`, {
-                code: 'rotational-constant-too-large',
-                value: list[i],
-                expected: 'a value in cm-1 (or {value, unit})',
-              });
-            }
-          });
         }
       }
     }
@@ -583,13 +576,6 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
       const read = readVibration(item);
       if (!read) return;
       const { wavenumber: wn, degeneracy: g } = read;
-      if (wn > 5000) {
-        f.warn(['vibrations', i], `wavenumber ${fmt(wn)} cm-1 is above any fundamental (H2: about 4160 cm-1); check the unit`, {
-          code: 'wavenumber-too-large',
-          value: item,
-          expected: 'a wavenumber in cm-1 (or {value, unit})',
-        });
-      }
       vs.push({ wavenumber: wn, degeneracy: g });
     });
     if (vs.length === raw.length) {
@@ -604,9 +590,10 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
             expected: `${expected} modes counting degeneracy`,
           });
         } else if (rotors > 0 && expected > 0 && modes + rotors !== expected) {
-          // Each internal rotor replaces one torsional vibration; a torsion left in `vibrations` is counted twice.
-          f.warn(['vibrations'], `${modes} vibrational mode${modes === 1 ? '' : 's'} (counting degeneracy) plus ${rotors} internal rotor${rotors === 1 ? '' : 's'} make ${modes + rotors} modes, but a ${structure} molecule of ${c.atoms} atoms has ${expected} (3N-${structure === 'linear' ? 5 : 6})`, {
-            code: 'mode-count-with-rotors',
+          // Each internal rotor replaces one torsional vibration; a torsion left in `vibrations` is counted
+          // twice, which is an error (more modes than the molecule has); fewer modes stay a warning.
+          f.add(modes + rotors > expected ? 'error' : 'warning', ['vibrations'], `${modes} vibrational mode${modes === 1 ? '' : 's'} (counting degeneracy) plus ${rotors} internal rotor${rotors === 1 ? '' : 's'} make ${modes + rotors} modes, but a ${structure} molecule of ${c.atoms} atoms has ${expected} (3N-${structure === 'linear' ? 5 : 6})`, {
+            code: modes + rotors > expected ? 'torsion-counted-twice' : 'mode-count-with-rotors',
             expected: `${expected} modes counting each internal rotor as one (remove a torsion treated as an internal rotor from vibrations)`,
           });
         }
@@ -1045,6 +1032,10 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
   const name = isObj(input) && typeof input.name === 'string' ? input.name : undefined;
   const schemaDiagnostics = checkAgainstSchema(validateAgainstSpeciesSchema, doc, name === undefined ? {} : { species: name });
   if (!isObj(input)) return { diagnostics: schemaDiagnostics };
+  // A field the schema already rejected is not reported again by the bounds.
+  const rejected = schemaDiagnostics.map((d) => d.path);
+  const under = (p: string, q: string) => p === q || (p.startsWith(q) && (p[q.length] === '.' || p[q.length] === '['));
+  schemaDiagnostics.push(...checkPlausibility(doc, name).filter((d) => !rejected.some((q) => under(d.path, q))));
 
   const f = new Findings(doc, name);
   const structure = (['atom', 'diatomic', 'linear', 'nonlinear'] as const).find((s) => s === input.structure);
@@ -1097,6 +1088,10 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
     }
   }
 
+  if (species && input.uncertainties !== undefined) {
+    const u = readUncertainties(input.uncertainties, species, (sev, at, message, extra) => f.add(sev, ['uncertainties', ...at], message, extra));
+    if (u) species.uncertainties = u;
+  }
   const diagnostics = [...schemaDiagnostics, ...f.diagnostics].sort(compareDiagnostics);
   const failed = diagnostics.some((d) => d.severity === 'error');
   if (failed || !species) {

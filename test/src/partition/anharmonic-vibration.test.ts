@@ -122,8 +122,9 @@ describe('moments are the exact derivatives of lnQ (central differences)', () =>
       const lnQ = (t: number) => anharmonicMoments(model, t).lnQ;
       const tMean = (t: number) => t * anharmonicMoments(model, t).meanU;
       const m = anharmonicMoments(model, T);
-      expect(rel((T * (lnQ(T + h) - lnQ(T - h))) / (2 * h), m.meanU)).toBeLessThan(1e-6);
-      expect(rel((tMean(T + h) - tMean(T - h)) / (2 * h), m.varU)).toBeLessThan(1e-6);
+      // Measured ~1e-8 (the O(h²) error of the central difference); an inexact curvature term shows at 1e-6.
+      expect(rel((T * (lnQ(T + h) - lnQ(T - h))) / (2 * h), m.meanU)).toBeLessThan(1e-7);
+      expect(rel((tMean(T + h) - tMean(T - h)) / (2 * h), m.varU)).toBeLessThan(1e-7);
     }
   });
 });

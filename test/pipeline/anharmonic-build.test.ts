@@ -1,12 +1,14 @@
 /**
  * End to end: a database holding an anharmonic CO2 (Chedin 1979 constants, from memory), a two-conformer
  * species (hand-written test data) and the free electron builds, fits within the default tolerances, and
- * carries the new models in the model summary of thermo.json. Species files written by hand here.
+ * carries the new models in the model summary of thermo.json. CO2 is the bench input (bench/anharmonic.ts);
+ * the other species files are written by hand here.
  */
 import { mkdir, mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { CO2_ANHARMONIC_YAML } from '../../bench/anharmonic.js';
 import { readJson, runCli, type CliRun } from './helpers.js';
 
 const FILES: Record<string, string> = {
@@ -14,21 +16,7 @@ const FILES: Record<string, string> = {
   'qforge.yaml': `fit: {sampling_step: 50}
 tables: {from: 200, to: 6000, step: 1000}
 `,
-  'CO2.yaml': `name: CO2
-composition: {C: 1, O: 2}
-enthalpy_of_formation: -393.51
-sources: ["Chedin (1979), from memory"]
-structure: linear
-symmetry_number: 2
-rotational_constants: [0.39022]
-vibrations: [1354.31, {wavenumber: 672.85, degeneracy: 2}, 2396.32]
-anharmonicity:
-  x: [[1, 1, -2.93], [1, 2, -4.61], [1, 3, -19.82], [2, 2, 1.35], [2, 3, -12.31], [3, 3, -12.47]]
-  g: [[2, 2, -0.97]]
-  alpha: [[0.00120], [-0.00072], [0.00309]]
-centrifugal_distortion: {DJ: 1.333e-7}
-dissociation_energy: 43980
-`,
+  'CO2.yaml': CO2_ANHARMONIC_YAML,
   'pair.yaml': `name: HOX-pair
 composition: {H: 2, O: 1}
 enthalpy_of_formation: -241.826

@@ -39,6 +39,7 @@ import {
 import { compareDiagnostics, type Diagnostic } from '../core/diagnostics.js';
 import type { LoadedDocument } from './load.js';
 import { checkPlausibility } from './plausibility.js';
+import { checkBareUnits } from './bare-units.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from './schema-check.js';
 import {
   checkAnharmonicModel,
@@ -1035,7 +1036,7 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
   // A field the schema already rejected is not reported again by the bounds.
   const rejected = schemaDiagnostics.map((d) => d.path);
   const under = (p: string, q: string) => p === q || (p.startsWith(q) && (p[q.length] === '.' || p[q.length] === '['));
-  schemaDiagnostics.push(...checkPlausibility(doc, name).filter((d) => !rejected.some((q) => under(d.path, q))));
+  schemaDiagnostics.push(...[...checkPlausibility(doc, name), ...checkBareUnits(doc, name)].filter((d) => !rejected.some((q) => under(d.path, q))));
 
   const f = new Findings(doc, name);
   const structure = (['atom', 'diatomic', 'linear', 'nonlinear'] as const).find((s) => s === input.structure);

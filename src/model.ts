@@ -38,6 +38,19 @@ export interface InternalRotor {
   symmetryNumber: number;
   /** Reduced rotational constant B = h/(8π² c I_red), cm⁻¹. */
   rotationalConstant: number;
+  /**
+   * A general torsional potential, replacing the single cosine when present (src/partition/fourier-rotor.ts):
+   * V(φ) = Σ cos·(1 − cos nφ)/2 + sin·sin(nφ)/2, cm⁻¹. `barrier` then holds max V − min V and `foldedness`
+   * the largest n (they size the basis).
+   */
+  fourier?: FourierTerm[];
+}
+
+/** One term of a torsional Fourier potential: V_cos (1 − cos nφ)/2 + V_sin sin(nφ)/2, cm⁻¹. */
+export interface FourierTerm {
+  n: number;
+  cos: number;
+  sin: number;
 }
 
 /**

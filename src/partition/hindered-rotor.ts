@@ -5,6 +5,10 @@ import { C2_CM_K } from '../constants.js';
 import type { InternalRotor } from '../model.js';
 import { createLevelList, levelSumMoments, type LevelList } from './level-sum.js';
 import { LevelSumError, type PartitionMoments } from './moments.js';
+import { fourierRotorEigenvalues } from './fourier-rotor.js';
+import { symmetricTridiagonalEigenvalues } from './tridiagonal-eigenvalues.js';
+
+export { symmetricTridiagonalEigenvalues };
 
 /**
  * The level list is complete (every omitted level below 1e-17 of q) up to this temperature: the highest
@@ -21,7 +25,6 @@ const KEPT_U_AT_CEILING = 50;
  * takes a few seconds; an H2O2 or CH3 rotor needs a few hundred functions and milliseconds.)
  */
 export const MAX_HINDERED_ROTOR_BASIS = 10001;
-/** QL iterations allowed per eigenvalue before giving up (2–3 are typical; EISPACK allows 30). */
 const MAX_QL_ITERATIONS = 30;
 
 /** Highest level kept, cm⁻¹ above the lowest. */
@@ -49,73 +52,6 @@ export function smallestHinderedRotorConstant(rotor: Pick<InternalRotor, 'barrie
 /** Number of basis functions 2M + 1 the rotor needs. */
 export function hinderedRotorBasisSize(rotor: Pick<InternalRotor, 'barrier' | 'rotationalConstant' | 'foldedness'>): number {
   return 2 * hinderedRotorBasisLimit(rotor) + 1;
-}
-
-/**
- * Eigenvalues of a real symmetric tridiagonal matrix: implicit QL with Wilkinson-type shifts, eigenvalues only
- * (the tql1 procedure of EISPACK; Bowdler, Martin, Reinsch & Wilkinson, Numer. Math. 11, 293 (1968)), O(n²).
- * Accuracy: about 1e-15 of the largest |entry| in absolute terms (for a rotor basis reaching B·M² ≈ 1.6e6
- * cm⁻¹, ~1e-8 cm⁻¹ per level — far below anything thermodynamic; the tests compare it with ml-matrix).
- * `diagonal` is overwritten with the eigenvalues in ascending order; `offDiagonal[i]` couples i and i+1
- * (length n, last entry ignored) and is destroyed.
- */
-export function symmetricTridiagonalEigenvalues(diagonal: Float64Array, offDiagonal: Float64Array): Float64Array {
-  const n = diagonal.length;
-  const d = diagonal;
-  const e = offDiagonal;
-  if (n === 0) return d;
-  e[n - 1] = 0;
-  let f = 0;
-  let tst1 = 0;
-  const eps = 2 ** -52;
-  for (let l = 0; l < n; l++) {
-    tst1 = Math.max(tst1, Math.abs(d[l]!) + Math.abs(e[l]!));
-    let m = l;
-    while (m < n - 1 && Math.abs(e[m]!) > eps * tst1) m++;
-    if (m > l) {
-      let iterations = 0;
-      do {
-        if (++iterations > MAX_QL_ITERATIONS) throw new LevelSumError('hindered rotor: the QL eigenvalue iteration did not converge');
-        let g = d[l]!;
-        let p = (d[l + 1]! - g) / (2 * e[l]!);
-        let r = Math.hypot(p, 1);
-        if (p < 0) r = -r;
-        d[l] = e[l]! / (p + r);
-        d[l + 1] = e[l]! * (p + r);
-        const dl1 = d[l + 1]!;
-        let h = g - d[l]!;
-        for (let i = l + 2; i < n; i++) d[i]! -= h;
-        f += h;
-        p = d[m]!;
-        let c = 1;
-        let c2 = c;
-        let c3 = c;
-        const el1 = e[l + 1]!;
-        let s = 0;
-        let s2 = 0;
-        for (let i = m - 1; i >= l; i--) {
-          c3 = c2;
-          c2 = c;
-          s2 = s;
-          g = c * e[i]!;
-          h = c * p;
-          r = Math.hypot(p, e[i]!);
-          e[i + 1] = s * r;
-          s = e[i]! / r;
-          c = p / r;
-          p = c * d[i]! - s * g;
-          d[i + 1] = h + s * (c * g + s * d[i]!);
-        }
-        p = (-s * s2 * c3 * el1 * e[l]!) / dl1;
-        e[l] = s * p;
-        d[l] = c * p;
-      } while (Math.abs(e[l]!) > eps * tst1);
-    }
-    d[l] = d[l]! + f;
-    e[l] = 0;
-  }
-  d.sort();
-  return d;
 }
 
 /** The levels of one hindered rotor, built once. */
@@ -161,18 +97,22 @@ export function hinderedRotorLevels(rotor: InternalRotor, options: { basisLimit?
     );
   }
   const all: number[] = [];
-  for (let r = 0; r < n; r++) {
-    // Block m = m0, m0 + n, ... ≤ mMax with m0 the smallest m ≥ −mMax in the residue class r.
-    const m0 = -mMax + ((((r + mMax) % n) + n) % n);
-    const size = Math.floor((mMax - m0) / n) + 1;
-    const d = new Float64Array(size);
-    const e = new Float64Array(size);
-    for (let k = 0; k < size; k++) {
-      const m = m0 + k * n;
-      d[k] = b * m * m + v0 / 2;
-      e[k] = -v0 / 4;
+  if (rotor.fourier !== undefined) {
+    for (const x of fourierRotorEigenvalues(rotor.fourier, b, mMax)) all.push(x);
+  } else {
+    for (let r = 0; r < n; r++) {
+      // Block m = m0, m0 + n, ... ≤ mMax with m0 the smallest m ≥ −mMax in the residue class r.
+      const m0 = -mMax + ((((r + mMax) % n) + n) % n);
+      const size = Math.floor((mMax - m0) / n) + 1;
+      const d = new Float64Array(size);
+      const e = new Float64Array(size);
+      for (let k = 0; k < size; k++) {
+        const m = m0 + k * n;
+        d[k] = b * m * m + v0 / 2;
+        e[k] = -v0 / 4;
+      }
+      for (const x of symmetricTridiagonalEigenvalues(d, e)) all.push(x);
     }
-    for (const x of symmetricTridiagonalEigenvalues(d, e)) all.push(x);
   }
   all.sort((x, y) => x - y);
   const lowest = all[0]!;

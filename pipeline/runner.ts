@@ -38,6 +38,7 @@ import { codeFingerprint } from './storage/code-fingerprint.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './core/version.js';
 import { displayPath } from './core/display-path.js';
 import { compareText, errorText } from './core/text.js';
+import { ReportWriter, type ReportRequest } from './report/build-report.js';
 
 export type StageName = 'load' | 'validate' | 'compute' | 'fit' | 'verify' | 'emit';
 
@@ -63,6 +64,8 @@ export interface BuildOptions extends CheckOptions {
   keepGoing?: boolean;
   onProgress?: (e: ProgressEvent) => void;
   hooks?: PublishHooks;
+  /** Write report.html (also when the settings' outputs.report is true); see pipeline/report/. */
+  report?: ReportRequest;
 }
 
 /** One species document that passed validation. */
@@ -195,7 +198,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
       invalid.push({ doc, entry: invalidEntry(doc, file, [...(doc.yamlErrors ?? []), ...ds]) });
     }
     if (loaded.documents.length === 0 && !hasErrors(loaded.diagnostics)) {
-      const d: Diagnostic = { severity: 'warning', file, path: '', message: 'file holds no species' };
+      const d: Diagnostic = { severity: 'warning', code: 'file-holds-no-species', file, path: '', message: 'file holds no species' };
       diagnostics.push(d);
       addFileDiag(d);
     }
@@ -248,6 +251,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   if (discovered.files.length === 0 && !hasErrors(discovered.diagnostics)) {
     diagnostics.push({
       severity: 'error',
+      code: 'no-species-files',
       file: dir,
       path: '',
       message: 'no species files (*.yaml, *.yml) in the database folder',
@@ -340,9 +344,9 @@ export async function buildOneSpecies(
     timings: { load: v.loadMs, validate: v.validateMs },
   };
   const where = { file: v.displayFile, species: v.name, ...(v.positions.name ?? {}) };
-  const fail = (pathText: string, message: string) => {
+  const fail = (code: string, pathText: string, message: string) => {
     const pos = (pathText === 'temperature_ranges' ? v.positions.temperature_ranges : undefined) ?? v.positions.name;
-    out.diagnostics.push({ severity: 'error', ...where, ...(pos ?? {}), path: pathText, message });
+    out.diagnostics.push({ severity: 'error', code, ...where, ...(pos ?? {}), path: pathText, message });
   };
   const note = (kind: CacheKind, r: { outcome: CacheOutcome; reason?: string }) => {
     out.cache[kind] = r.outcome;
@@ -372,7 +376,7 @@ export async function buildOneSpecies(
   try {
     fitOptions = fitOptionsFor(plan.fitOptions);
   } catch (e) {
-    fail(v.species.temperatureRanges ? 'temperature_ranges' : '', `fit options: ${errorText(e)}`);
+    fail('fit-options', v.species.temperatureRanges ? 'temperature_ranges' : '', `fit options: ${errorText(e)}`);
     return out;
   }
   const inputHash = `sha256:${sha256Hex(canonicalJson(v.normalisedInput))}`;
@@ -392,7 +396,7 @@ export async function buildOneSpecies(
       out.timings[kind === 'samples' ? 'compute' : kind] = r.ms;
       return r.value;
     } catch (e) {
-      fail(failPath, `${what} failed: ${errorText(e)}`);
+      fail(kind === 'samples' ? 'compute-failed' : `${kind}-failed`, failPath, `${what} failed: ${errorText(e)}`);
       return undefined;
     }
   };
@@ -498,6 +502,9 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   const cacheDir =
     opts.cacheDir === null ? undefined : (opts.cacheDir ?? path.join(path.dirname(path.resolve(opts.out)), '.qforge-cache'));
   const cache = new StageCache(cacheDir);
+  // Opened before the species run so that a missing --report-against build fails at once.
+  const reportWriter =
+    check.settingsOk && (opts.report || settings.outputs.report) ? await ReportWriter.open(opts.report ?? {}, settings, opts.dir, opts.displayBase) : undefined;
 
   const limit = pLimit(Math.max(1, opts.jobs ?? 8));
   const total = check.species.length;
@@ -539,6 +546,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
         const o = outcomes.get(e.record)!;
         o.diagnostics.push({
           severity: 'error',
+          code: 'record-not-writable',
           file: o.valid.displayFile,
           species: o.valid.name,
           ...((e.field.startsWith('elements') ? o.valid.positions.composition : o.valid.positions.name) ?? {}),
@@ -561,6 +569,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     if (!hasErrors(allDiagnostics)) {
       allDiagnostics.push({
         severity: 'error',
+        code: 'database-empty',
         file: opts.displayBase ? displayPath(opts.displayBase, opts.dir) : opts.dir,
         path: '',
         message: 'the database holds no species',
@@ -623,6 +632,24 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
       };
     }
     summarySpecies.push(s);
+    if (mayWrite) {
+      reportWriter?.add({
+        name: o.valid.name,
+        file: o.valid.file,
+        status: s.status,
+        species: o.valid.species,
+        ...(o.built ? { computed: o.built.computed, fit: o.built.fit } : {}),
+        warnings: s.warnings,
+        errors: s.errors,
+        cacheHit: s.cache_hit,
+      });
+    }
+  }
+  if (mayWrite && reportWriter) {
+    const report = reportWriter.finish(status, check.invalid.map((i) => `${i.file}#${i.document}: ${i.diagnostics.find((d) => d.severity === 'error')?.message ?? 'invalid'}`));
+    files.set('report.html', report.main);
+    for (const [page, html] of report.pages) files.set(page, html);
+    outputs.splice(0, outputs.length, ...[...files.keys()].sort(), 'summary.json');
   }
   for (const inv of check.invalid) {
     const s: SummarySpecies = {

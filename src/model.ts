@@ -44,6 +44,8 @@ export interface InternalRotor {
    * the largest n (they size the basis).
    */
   fourier?: FourierTerm[];
+  /** When `fourier` was fitted to a scan: its size and fit residuals (cm⁻¹), for the model summary. */
+  scanFit?: { points: number; terms: number; rmsResidual: number; maxResidual: number };
 }
 
 /** One term of a torsional Fourier potential: V_cos (1 − cos nφ)/2 + V_sin sin(nφ)/2, cm⁻¹. */
@@ -175,6 +177,8 @@ interface PolyatomicExtensions {
   centrifugalDistortion?: CentrifugalDistortion;
   dissociationEnergy?: number;
   vibrationScaleFactor?: { value: number; source: string };
+  /** Number of optical isomers (2 for a chiral molecule): S/R += ln(opticalIsomers). Absent = 1. */
+  opticalIsomers?: number;
   /** When present the partition function is the Boltzmann-weighted sum over these (src/thermo/conformers.ts). */
   conformers?: Conformer[];
 }

@@ -123,6 +123,16 @@ export function hinderedRotorLevels(rotor: InternalRotor, options: { basisLimit?
   return { energies, list, basisLimit: mMax, zeroPointEnergy: lowest };
 }
 
+/** The rotor's potential in words, for the model summary: V0 and n, or the Fourier terms (and scan fit). */
+export function describeTorsionPotential(rotor: InternalRotor): string {
+  if (rotor.fourier === undefined) return `V0 = ${rotor.barrier} cm-1, n = ${rotor.foldedness}`;
+  const terms = rotor.fourier.map((t) => `[${t.n}, ${t.cos}, ${t.sin}]`).join(', ');
+  const fit = rotor.scanFit
+    ? `; fitted to a scan of ${rotor.scanFit.points} points, residual rms ${rotor.scanFit.rmsResidual.toPrecision(3)} cm-1, max ${rotor.scanFit.maxResidual.toPrecision(3)} cm-1`
+    : '';
+  return `Fourier potential [n, V_cos, V_sin] = ${terms} cm-1, max - min ${rotor.barrier} cm-1${fit}`;
+}
+
 /** Moments of one hindered rotor at T (K), energies from its lowest level (see `hinderedRotorLevels`). */
 export function hinderedRotorMoments(levels: HinderedRotorLevels, T: number): PartitionMoments {
   return levelSumMoments(levels.list, T);

@@ -82,8 +82,11 @@ export interface LoadedDocument {
    * also in LoadResult.diagnostics; a document carrying them must never be built.
    */
   yamlErrors?: readonly Diagnostic[];
-  /** The XYZ file named by `geometry_file`, read by `loadYamlFile` (absent when not named or not loaded from disk). */
-  geometryFile?: LoadedGeometryFile;
+  /**
+   * The XYZ files named by `geometry_file` (of the species or of a conformer), by name as written, read by
+   * `loadYamlFile` (absent when none is named or the document was not loaded from disk).
+   */
+  geometryFiles?: Record<string, LoadedGeometryFile>;
 }
 
 /** A geometry file as read: its rows and their lines, or the problems that stopped it (located in it). */
@@ -510,39 +513,39 @@ export async function loadYamlFile(
  * become diagnostics of the geometry file, which the validator reports with the species.
  */
 async function attachGeometryFiles(docs: LoadedDocument[], filePath: string, displayPath: string, maxBytes: number): Promise<void> {
+  const folder = path.dirname(filePath);
   for (const doc of docs) {
-    const name = (doc.value as { geometry_file?: unknown } | null)?.geometry_file;
-    if (typeof name !== 'string' || name === '') continue;
-    const display = path.join(path.dirname(displayPath), name);
-    const fail = (code: string, message: string, expected: string): void => {
-      doc.geometryFile = { file: display, rows: [], lines: [], diagnostics: [err(display, code, message, { expected })] };
-    };
-    const folder = path.dirname(filePath);
-    const target = path.resolve(folder, name);
-    if (path.isAbsolute(name) || !isInside(folder, target)) {
-      fail('geometry-file-outside', 'a geometry file must lie in the folder of its species file or below it', 'a relative name without ..');
-      continue;
+    const value = doc.value as { geometry_file?: unknown; conformers?: unknown } | null;
+    const conformers = Array.isArray(value?.conformers) ? (value.conformers as Array<{ geometry_file?: unknown } | null>) : [];
+    const names = [value?.geometry_file, ...conformers.map((c) => c?.geometry_file)].filter((n): n is string => typeof n === 'string' && n !== '');
+    for (const name of names) {
+      doc.geometryFiles ??= {};
+      doc.geometryFiles[name] ??= await readGeometryFile(folder, name, path.join(path.dirname(displayPath), name), maxBytes);
     }
-    try {
-      const info = await stat(target);
-      if (!info.isFile()) {
-        fail('not-a-file', 'not a regular file', 'an XYZ file');
-        continue;
-      }
-      if (info.size > maxBytes) {
-        doc.geometryFile = { file: display, rows: [], lines: [], diagnostics: [sizeDiagnostic(display, info.size, maxBytes)] };
-        continue;
-      }
-      const text = decodeUtf8Text(await readFile(target));
-      if (text === undefined) {
-        fail('not-utf8-text', 'not UTF-8 text', 'a UTF-8 encoded XYZ text file');
-        continue;
-      }
-      doc.geometryFile = { file: display, ...parseXyz(text, display) };
-    } catch (e) {
-      const code = (e as NodeJS.ErrnoException).code;
-      fail(code === 'ENOENT' ? 'file-not-found' : 'file-unreadable', code === 'ENOENT' ? 'geometry file not found' : `cannot read file (${code ?? String(e)})`, 'an XYZ file next to the species file');
-    }
+  }
+}
+
+async function readGeometryFile(folder: string, name: string, display: string, maxBytes: number): Promise<LoadedGeometryFile> {
+  const fail = (code: string, message: string, expected: string): LoadedGeometryFile => ({
+    file: display,
+    rows: [],
+    lines: [],
+    diagnostics: [err(display, code, message, { expected })],
+  });
+  const target = path.resolve(folder, name);
+  if (path.isAbsolute(name) || !isInside(folder, target)) {
+    return fail('geometry-file-outside', 'a geometry file must lie in the folder of its species file or below it', 'a relative name without ..');
+  }
+  try {
+    const info = await stat(target);
+    if (!info.isFile()) return fail('not-a-file', 'not a regular file', 'an XYZ file');
+    if (info.size > maxBytes) return { file: display, rows: [], lines: [], diagnostics: [sizeDiagnostic(display, info.size, maxBytes)] };
+    const text = decodeUtf8Text(await readFile(target));
+    if (text === undefined) return fail('not-utf8-text', 'not UTF-8 text', 'a UTF-8 encoded XYZ text file');
+    return { file: display, ...parseXyz(text, display) };
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    return fail(code === 'ENOENT' ? 'file-not-found' : 'file-unreadable', code === 'ENOENT' ? 'geometry file not found' : `cannot read file (${code ?? String(e)})`, 'an XYZ file next to the species file');
   }
 }
 

@@ -33,8 +33,8 @@ export interface MoleculeContext {
   structure: 'linear' | 'nonlinear';
   /** Element counts of `composition`, when it is known and valid. */
   composition?: Readonly<Record<string, number>>;
-  /** The XYZ file of `geometry_file`, as load.ts read it. */
-  geometryFile?: LoadedGeometryFile;
+  /** The XYZ files named by `geometry_file` fields, as load.ts read them, by name. */
+  geometryFiles?: Readonly<Record<string, LoadedGeometryFile>>;
 }
 
 export interface MolecularPart {
@@ -92,7 +92,7 @@ function readGeometry(input: Obj, at: Segment[], report: Reporter, context: Mole
     }
   } else {
     const where = [...at, 'geometry_file'];
-    const loaded = context.geometryFile;
+    const loaded = typeof file === 'string' ? context.geometryFiles?.[file] : undefined;
     reading = {
       given: true,
       at: where,
@@ -180,15 +180,6 @@ function readGivenRotation(input: Obj, at: Segment[], report: Reporter, structur
               expected: 'the conventional order (the product, and so the thermochemistry, is unaffected)',
             });
           }
-          values.forEach((b, i) => {
-            if (b > 100) {
-              report.warn([...at, field, i], `rotational constant of ${fmt(b)} cm-1 is larger than that of any molecule (H2: about 60 cm-1); check the unit`, {
-                code: 'rotational-constant-too-large',
-                value: list[i],
-                expected: 'a value in cm-1 (or {value, unit})',
-              });
-            }
-          });
         }
       }
     }

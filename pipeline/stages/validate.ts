@@ -17,10 +17,12 @@ import { isKnownElement, molarMass } from '../../src/elements.js';
 import { centrifugalConstantOf, rotationalConstantOf, vibrationalTerm } from '../../src/partition/diatomic.js';
 import { DEFAULT_NUCLEAR_SPIN_MIXTURE } from '../../src/partition/spin-mixture.js';
 import type {
+  Conformer,
   DiatomicState,
   ElectronicLevel,
   NuclearSpinMixture,
   NuclearSpinWeights,
+  PolyatomicMolecularPart,
   Species,
   Structure,
   Vibration,
@@ -28,10 +30,21 @@ import type {
 import { ENTHALPY_UNITS_TO_J_PER_MOL } from '../../src/units.js';
 import { compareDiagnostics, type Diagnostic } from '../core/diagnostics.js';
 import type { LoadedDocument } from './load.js';
+import { checkPlausibility } from './plausibility.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from './schema-check.js';
+import {
+  checkAnharmonicModel,
+  checkPolyatomicCut,
+  readAnharmonicity,
+  readCentrifugalDistortion,
+  readVibrationScaleFactor,
+} from './validate-anharmonic.js';
+import { checkConformerSet } from './validate-conformers.js';
+import { checkElectron } from './validate-electron.js';
 import { compareText } from '../core/text.js';
 import { normaliseMolecularPart } from './validate-molecule.js';
 import { energy, fmt, isFiniteNumber, isObj, isPositiveInteger, rotational, type FindingExtra, type Obj, type Segment } from './validate-values.js';
+import { readUncertainties } from './uncertainty-input.js';
 
 
 export interface SpeciesValidation {
@@ -64,18 +77,26 @@ const ALL_SYMBOLS: readonly string[] = [...Object.keys(elementsObject as object)
 
 /** Every finding carries its stable code (FindingExtra, pipeline/core/diagnostics.ts). */
 class Findings {
-  readonly diagnostics: Diagnostic[] = [];
   constructor(
     private readonly doc: LoadedDocument,
     private readonly species: string | undefined,
+    /** Path of the nested part these findings are about (a conformer), prepended to every path. */
+    private readonly prefix: Segment[] = [],
+    readonly diagnostics: Diagnostic[] = [],
   ) {}
+
+  /** Findings about a nested part (e.g. `conformers[1]`), reported into the same list. */
+  within(prefix: Segment[]): Findings {
+    return new Findings(this.doc, this.species, [...this.prefix, ...prefix], this.diagnostics);
+  }
 
   add(
     severity: Diagnostic['severity'],
-    at: Segment[],
+    relative: Segment[],
     message: string,
     extra: FindingExtra,
   ): void {
+    const at = [...this.prefix, ...relative];
     const where = this.doc.locate(at, { key: extra.key ?? false });
     const d: Diagnostic = { severity, file: this.doc.file, path: formatFieldPath(at), message, code: extra.code };
     if (where) {
@@ -181,6 +202,8 @@ interface Ctx {
   input: Obj;
   structure: Structure | undefined;
   composition: CompositionView | undefined;
+  /** The XYZ files named by geometry_file fields, as load.ts read them. */
+  geometryFiles?: LoadedDocument['geometryFiles'];
 }
 
 function checkName(ctx: Ctx): void {
@@ -393,6 +416,83 @@ function checkSymmetryNumber(ctx: Ctx, sigma: number, hasSpinWeights: boolean): 
   }
 }
 
+/**
+ * The molecular fields of a linear or nonlinear species, or of one of its conformers (the same checks and
+ * normalisation for both; a conformer's ctx has its own input object and prefixed findings). Optional keys
+ * appear only when given, so every species without them keeps its normalised form and hash.
+ */
+function readMolecularPart(ctx: Ctx): PolyatomicMolecularPart | undefined {
+  const { f, input, structure } = ctx;
+  if (isPositiveInteger(input.symmetry_number)) checkSymmetryNumber(ctx, input.symmetry_number, false);
+  const electronicLevels = readElectronicLevels(ctx);
+  // Geometry or constants, symmetry number (given, or from the geometry), rotors: validate-molecule.ts.
+  const molecule = normaliseMolecularPart(input, [], f, {
+    structure: structure as 'linear' | 'nonlinear',
+    ...(ctx.composition?.known ? { composition: ctx.composition.counts } : {}),
+    ...(ctx.geometryFiles ? { geometryFiles: ctx.geometryFiles } : {}),
+  });
+  f.diagnostics.push(...molecule.external);
+  const { rotationalConstants, symmetryNumber: sigma } = molecule;
+  const internal = { rotors: molecule.internalRotors, ok: molecule.rotorsOk };
+  const { vibrations: given } = readPolyatomic(ctx);
+  const scale = readVibrationScaleFactor(f, input);
+  const vibrations = given && scale ? given.map((v) => ({ ...v, wavenumber: v.wavenumber * scale.value })) : given;
+  const anh = readAnharmonicity(f, input, structure, vibrations);
+  const cd = readCentrifugalDistortion(f, input, structure);
+  const cutOk = checkPolyatomicCut(f, input);
+  const d0 = input.anharmonicity !== undefined && input.dissociation_energy !== undefined ? energy(input.dissociation_energy) : undefined;
+  if (!(electronicLevels && rotationalConstants && vibrations && sigma !== undefined && internal.ok && scale !== null && anh.ok && cd.ok && cutOk)) return undefined;
+  // Nonlinear constants are kept as A >= B >= C; per-axis alpha follow the same order.
+  const order = rotationalConstants.map((_, k) => k);
+  if (structure === 'nonlinear') order.sort((a, b) => rotationalConstants[b]! - rotationalConstants[a]! || a - b);
+  const anharmonicity = anh.anharmonicity?.alpha
+    ? { ...anh.anharmonicity, alpha: anh.anharmonicity.alpha.map((row) => order.map((k) => row[k]!)) }
+    : anh.anharmonicity;
+  const part: PolyatomicMolecularPart = {
+    symmetryNumber: sigma,
+    electronicLevels,
+    rotationalConstants: order.map((k) => rotationalConstants[k]!),
+    vibrations,
+    ...(internal.rotors ? { internalRotors: internal.rotors } : {}),
+    ...(molecule.opticalIsomers ? { opticalIsomers: molecule.opticalIsomers } : {}),
+    ...(scale ? { vibrationScaleFactor: scale } : {}),
+    ...(anharmonicity ? { anharmonicity } : {}),
+    ...(cd.centrifugal ? { centrifugalDistortion: cd.centrifugal } : {}),
+    ...(d0 !== undefined ? { dissociationEnergy: d0 } : {}),
+  };
+  return checkAnharmonicModel(f, part) ? part : undefined;
+}
+
+/** Each conformer through readMolecularPart (paths under `conformers[i]`), then the cross-conformer checks. */
+function readConformerParts(ctx: Ctx): Conformer[] | undefined {
+  const raw = ctx.input.conformers;
+  if (!Array.isArray(raw)) return undefined;
+  const out: Conformer[] = [];
+  let ok = true;
+  raw.forEach((item, i) => {
+    if (!isObj(item)) {
+      ok = false;
+      return;
+    }
+    const part = readMolecularPart({ ...ctx, f: ctx.f.within(['conformers', i]), input: item });
+    const e = energy(item.energy);
+    if (!part || e === undefined || typeof item.name !== 'string') {
+      ok = false;
+      return;
+    }
+    out.push({ label: item.name, energy: e, ...part });
+  });
+  return ok && checkConformerSet(ctx.f, out, raw) ? out : undefined;
+}
+
+/** The molecular part of the lowest conformer (energy 0), without its label and energy. */
+function lowestConformerPart(conformers: Conformer[] | undefined): PolyatomicMolecularPart | undefined {
+  const lowest = conformers?.find((c) => c.energy === 0);
+  if (!lowest) return undefined;
+  const { label: _label, energy: _energy, ...part } = lowest;
+  return part;
+}
+
 function readPolyatomic(ctx: Ctx): { vibrations?: Vibration[] } {
   const { f, input, structure, composition: c } = ctx;
   let vibrations: Vibration[] | undefined;
@@ -403,13 +503,6 @@ function readPolyatomic(ctx: Ctx): { vibrations?: Vibration[] } {
       const read = readVibration(item);
       if (!read) return;
       const { wavenumber: wn, degeneracy: g } = read;
-      if (wn > 5000) {
-        f.warn(['vibrations', i], `wavenumber ${fmt(wn)} cm-1 is above any fundamental (H2: about 4160 cm-1); check the unit`, {
-          code: 'wavenumber-too-large',
-          value: item,
-          expected: 'a wavenumber in cm-1 (or {value, unit})',
-        });
-      }
       vs.push({ wavenumber: wn, degeneracy: g });
     });
     if (vs.length === raw.length) {
@@ -424,9 +517,10 @@ function readPolyatomic(ctx: Ctx): { vibrations?: Vibration[] } {
             expected: `${expected} modes counting degeneracy`,
           });
         } else if (rotors > 0 && expected > 0 && modes + rotors !== expected) {
-          // Each internal rotor replaces one torsional vibration; a torsion left in `vibrations` is counted twice.
-          f.warn(['vibrations'], `${modes} vibrational mode${modes === 1 ? '' : 's'} (counting degeneracy) plus ${rotors} internal rotor${rotors === 1 ? '' : 's'} make ${modes + rotors} modes, but a ${structure} molecule of ${c.atoms} atoms has ${expected} (3N-${structure === 'linear' ? 5 : 6})`, {
-            code: 'mode-count-with-rotors',
+          // Each internal rotor replaces one torsional vibration; a torsion left in `vibrations` is counted
+          // twice, which is an error (more modes than the molecule has); fewer modes stay a warning.
+          f.add(modes + rotors > expected ? 'error' : 'warning', ['vibrations'], `${modes} vibrational mode${modes === 1 ? '' : 's'} (counting degeneracy) plus ${rotors} internal rotor${rotors === 1 ? '' : 's'} make ${modes + rotors} modes, but a ${structure} molecule of ${c.atoms} atoms has ${expected} (3N-${structure === 'linear' ? 5 : 6})`, {
+            code: modes + rotors > expected ? 'torsion-counted-twice' : 'mode-count-with-rotors',
             expected: `${expected} modes counting each internal rotor as one (remove a torsion treated as an internal rotor from vibrations)`,
           });
         }
@@ -776,13 +870,18 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
   const name = isObj(input) && typeof input.name === 'string' ? input.name : undefined;
   const schemaDiagnostics = checkAgainstSchema(validateAgainstSpeciesSchema, doc, name === undefined ? {} : { species: name });
   if (!isObj(input)) return { diagnostics: schemaDiagnostics };
+  // A field the schema already rejected is not reported again by the bounds.
+  const rejected = schemaDiagnostics.map((d) => d.path);
+  const under = (p: string, q: string) => p === q || (p.startsWith(q) && (p[q.length] === '.' || p[q.length] === '['));
+  schemaDiagnostics.push(...checkPlausibility(doc, name).filter((d) => !rejected.some((q) => under(d.path, q))));
 
   const f = new Findings(doc, name);
   const structure = (['atom', 'diatomic', 'linear', 'nonlinear'] as const).find((s) => s === input.structure);
-  const ctx: Ctx = { f, input, structure, composition: undefined };
+  const ctx: Ctx = { f, input, structure, composition: undefined, ...(doc.geometryFiles ? { geometryFiles: doc.geometryFiles } : {}) };
   ctx.composition = readComposition(input.composition, f);
   checkName(ctx);
   checkComposition(ctx);
+  checkElectron(ctx.f, ctx.composition, input.charge, structure, input.electronic_levels);
   checkSources(ctx);
   const enthalpy = readEnthalpy(ctx);
   const temperatureRanges = readTemperatureRanges(ctx);
@@ -810,24 +909,10 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
     const electronicLevels = readElectronicLevels(ctx);
     if (canBuild && electronicLevels) species = { ...common(), structure, electronicLevels } as Species;
   } else if (structure === 'linear' || structure === 'nonlinear') {
-    if (sigma !== undefined) checkSymmetryNumber(ctx, sigma, false);
-    const electronicLevels = readElectronicLevels(ctx);
-    // Geometry or constants, symmetry number (given, or from the geometry), rotors: validate-molecule.ts.
-    const molecule = normaliseMolecularPart(input, [], f, {
-      structure,
-      ...(ctx.composition?.known ? { composition: ctx.composition.counts } : {}),
-      ...(doc.geometryFile ? { geometryFile: doc.geometryFile } : {}),
-    });
-    f.diagnostics.push(...molecule.external);
-    const { rotationalConstants, symmetryNumber } = molecule;
-    const { vibrations } = readPolyatomic(ctx);
-    if (canBuild && electronicLevels && rotationalConstants && vibrations && symmetryNumber !== undefined && molecule.rotorsOk) {
-      const rc = structure === 'nonlinear' ? rotationalConstants.slice().sort((a, b) => b - a) : rotationalConstants;
-      // Keys only when given: every species without them keeps its normalised form and hash.
-      const rotors = molecule.internalRotors ? { internalRotors: molecule.internalRotors } : {};
-      const optical = molecule.opticalIsomers ? { opticalIsomers: molecule.opticalIsomers } : {};
-      species = { ...common(), structure, symmetryNumber, electronicLevels, rotationalConstants: rc, vibrations, ...rotors, ...optical } as Species;
-    }
+    // With conformers the species-level molecular fields are those of the lowest conformer.
+    const conformers = input.conformers !== undefined ? readConformerParts(ctx) : undefined;
+    const part = input.conformers !== undefined ? lowestConformerPart(conformers) : readMolecularPart(ctx);
+    if (canBuild && part) species = { ...common(), structure, ...part, ...(conformers ? { conformers } : {}) } as Species;
   } else if (structure === 'diatomic') {
     const { states, d0, spin, mixture } = readDiatomic(ctx);
     if (sigma !== undefined) checkSymmetryNumber(ctx, sigma, spin !== undefined);
@@ -841,6 +926,10 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
     }
   }
 
+  if (species && input.uncertainties !== undefined) {
+    const u = readUncertainties(input.uncertainties, species, (sev, at, message, extra) => f.add(sev, ['uncertainties', ...at], message, extra));
+    if (u) species.uncertainties = u;
+  }
   const diagnostics = [...schemaDiagnostics, ...f.diagnostics].sort(compareDiagnostics);
   const failed = diagnostics.some((d) => d.severity === 'error');
   if (failed || !species) {

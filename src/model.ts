@@ -104,6 +104,16 @@ interface SpeciesBase {
   structure: Structure;
   /** Optional per-species temperature ranges for the fit; pipeline settings supply the default. */
   temperatureRanges?: { low?: number; mid?: number; high?: number };
+  /** Optional per-species fit limits (same meaning as the settings' tolerances); settings supply the rest. */
+  fitLimits?: SpeciesFitLimits;
+}
+
+/** Absolute parts and multiples of Cp/R of the fit limits of one species (dimensionless). */
+export interface SpeciesFitLimits {
+  cp?: number;
+  h?: number;
+  s?: number;
+  relativeToCp?: { cp?: number; h?: number; s?: number };
 }
 
 export interface AtomSpecies extends SpeciesBase {

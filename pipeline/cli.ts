@@ -38,7 +38,8 @@ Examples:
   qforge build --keep-going --json     write the good species, print the summary
   qforge build --no-cache --jobs 1     recompute everything, one at a time
 
-Outputs (in OUT): thermo.json, nasa7.txt, tables/<name>.csv, summary.json
+Outputs (in OUT): thermo.json, nasa7.txt, tables/<name>.csv, summary.json,
+and with --report (or outputs.report in qforge.yaml) report.html
 (summary.json holds timings; the other files are byte-identical for identical
 inputs). The cache lives in .qforge-cache/ next to OUT.
 
@@ -167,8 +168,11 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('-j, --jobs <n>', 'species processed concurrently', positiveInt, 4)
     .option('-q, --quiet', 'no progress output')
     .option('--json', 'print the build summary as JSON on stdout')
+    .option('--strict', 'every warning not accepted in writing (accepted_warnings) is an error')
+    .option('--report', 'also write report.html (overview and charts of every species)')
+    .option('--report-against <old>', 'report: compare with this earlier build folder (implies --report)')
     .addHelpText('after', EXAMPLES.build)
-    .action(async (dir: string, o: { out: string; cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean }) => {
+    .action(async (dir: string, o: { out: string; cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; strict?: boolean; report?: boolean; reportAgainst?: string }) => {
       exitCode = await buildCommand(io, abs(dir), dir, abs(o.out), o.out, o);
     });
 
@@ -177,8 +181,9 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .description('load and validate only: report every problem of every file at once')
     .argument('[dir]', 'database folder', 'species')
     .option('--json', 'print the diagnostics as JSON on stdout')
+    .option('--strict', 'every warning not accepted in writing (accepted_warnings) is an error')
     .addHelpText('after', EXAMPLES.check)
-    .action(async (dir: string, o: { json?: boolean }) => {
+    .action(async (dir: string, o: { json?: boolean; strict?: boolean }) => {
       exitCode = await checkCommand(io, abs(dir), o);
     });
 
@@ -246,7 +251,8 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
       if (e.code === 'commander.help') return e.exitCode === 0 ? 0 : 2;
       return 2;
     }
-    if ((e as Error)?.name === 'BuildLockedError') {
+    // A malformed --report-against build or reference table is bad data (exit 1), like in diff/compare.
+    if (['BuildLockedError', 'ReadBuildError', 'ReferenceError'].includes((e as Error)?.name)) {
       io.stderr.write(`qforge: error: ${(e as Error).message}\n`);
       return 1;
     }
@@ -343,7 +349,7 @@ async function buildCommand(
   dirLabel: string,
   out: string,
   outLabel: string,
-  o: { cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean },
+  o: { cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; strict?: boolean; report?: boolean; reportAgainst?: string },
 ): Promise<number> {
   await assertFolder(dir, `database folder ${dirLabel}`);
   const [{ runBuild }, { formatDiagnostic }, { createProgressReporter }, { assertReplaceable }, { CACHE_DIR_NAME }] = await Promise.all([
@@ -382,7 +388,11 @@ async function buildCommand(
       displayBase: io.cwd,
       jobs: o.jobs,
       keepGoing: !!o.keepGoing,
+      strict: !!o.strict,
       cacheDir,
+      ...(o.report || o.reportAgainst !== undefined
+        ? { report: o.reportAgainst !== undefined ? { against: { path: path.resolve(io.cwd, o.reportAgainst), label: o.reportAgainst } } : {} }
+        : {}),
       onProgress: (e) => reporter.onProgress(e),
       hooks: {
         beforeSwap: () => waitForTestPause(io, 'before-swap'),
@@ -432,10 +442,10 @@ async function buildCommand(
   return report.exitCode;
 }
 
-async function checkCommand(io: CliIo, dir: string, o: { json?: boolean }): Promise<number> {
+async function checkCommand(io: CliIo, dir: string, o: { json?: boolean; strict?: boolean }): Promise<number> {
   await assertFolder(dir, `database folder ${displayPath(io.cwd, dir)}`);
   const [{ checkDatabase }, { formatDiagnostic, hasErrors }] = await Promise.all([import('./runner.js'), import('./core/diagnostics.js')]);
-  const report = await checkDatabase({ dir, displayBase: io.cwd });
+  const report = await checkDatabase({ dir, displayBase: io.cwd, strict: !!o.strict });
   printDiagnostics(io, report.diagnostics, formatDiagnostic);
   const errors = report.diagnostics.filter((d) => d.severity === 'error').length;
   const warnings = report.diagnostics.length - errors;

@@ -36,9 +36,11 @@ import { checkUniqueNames, validateSpecies } from './stages/validate.js';
 import { verifySpecies } from './stages/verify.js';
 import { fitLimitOrigin, toleranceKeyPositions } from './stages/limit-origin.js';
 import { codeFingerprint } from './storage/code-fingerprint.js';
+import { createWarningPolicy } from './core/strict.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './core/version.js';
 import { displayPath } from './core/display-path.js';
 import { compareText, errorText } from './core/text.js';
+import { ReportWriter, type ReportRequest } from './report/build-report.js';
 
 export type StageName = 'load' | 'validate' | 'compute' | 'fit' | 'verify' | 'emit';
 
@@ -55,6 +57,8 @@ export interface CheckOptions {
   displayBase?: string;
   /** Concurrency of file loading (default 8). */
   jobs?: number;
+  /** Warnings are errors (also `strict: true` in the settings); see core/strict.ts. */
+  strict?: boolean;
 }
 
 export interface BuildOptions extends CheckOptions {
@@ -64,6 +68,8 @@ export interface BuildOptions extends CheckOptions {
   keepGoing?: boolean;
   onProgress?: (e: ProgressEvent) => void;
   hooks?: PublishHooks;
+  /** Write report.html (also when the settings' outputs.report is true); see pipeline/report/. */
+  report?: ReportRequest;
 }
 
 /** One species document that passed validation. */
@@ -136,6 +142,25 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   const t0 = performance.now();
   const settingsResult = await loadSettings(dir, dir);
   const discovered = await discoverSpeciesFiles(dir);
+  const policy = createWarningPolicy({
+    strict: opts.strict === true || settingsResult.settings.strict,
+    accepted: settingsResult.settings.accepted_warnings,
+    ...(settingsResult.file !== undefined ? { settingsFile: settingsResult.file } : {}),
+    ...(settingsResult.locate ? { settingsLocate: settingsResult.locate } : {}),
+  });
+  discovered.diagnostics = policy.applyOther(discovered.diagnostics);
+  settingsResult.diagnostics = policy.applyOther(settingsResult.diagnostics);
+  const validateWithPolicy = (doc: LoadedDocument) => {
+    const r = validateSpecies(doc);
+    const name = doc.value && typeof doc.value === 'object' ? (doc.value as { name?: unknown }).name : undefined;
+    r.diagnostics = policy.applySpecies(r.diagnostics, {
+      raw: doc.value,
+      file: doc.file,
+      ...(typeof name === 'string' ? { name } : {}),
+      locate: (at) => doc.locate(at),
+    });
+    return r;
+  };
   const diagnostics: Diagnostic[] = [...settingsResult.diagnostics, ...discovered.diagnostics];
   const fileDiagnostics = new Map<string, Diagnostic[]>();
   const failedFiles = new Set<string>();
@@ -155,10 +180,11 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
       limit(async () => {
         const tl = performance.now();
         const loaded = await loadYamlFile(f, f);
+        loaded.diagnostics = policy.applyOther(loaded.diagnostics);
         const loadMs = performance.now() - tl;
         const results = loaded.documents.map((doc: LoadedDocument) => {
           const tv = performance.now();
-          const r = validateSpecies(doc);
+          const r = validateWithPolicy(doc);
           const ms = performance.now() - tv;
           validateTotal += ms;
           return { doc, r, ms };
@@ -167,7 +193,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
         // error of the file in one run; they are never built (one of their values is a guess).
         const recovered = (loaded.recoveredDocuments ?? []).map((doc: LoadedDocument) => ({
           doc,
-          diagnostics: validateSpecies(doc).diagnostics,
+          diagnostics: validateWithPolicy(doc).diagnostics,
         }));
         return { file: f, loaded, results, recovered, loadMs };
       }),
@@ -197,9 +223,10 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
       invalid.push({ doc, entry: invalidEntry(doc, file, [...(doc.yamlErrors ?? []), ...ds]) });
     }
     if (loaded.documents.length === 0 && !hasErrors(loaded.diagnostics)) {
-      const d: Diagnostic = { severity: 'warning', file, path: '', message: 'file holds no species' };
-      diagnostics.push(d);
-      addFileDiag(d);
+      for (const d of policy.applyOther([{ severity: 'warning', code: 'file-holds-no-species', file, path: '', message: 'file holds no species' }])) {
+        diagnostics.push(d);
+        addFileDiag(d);
+      }
     }
     const n = Math.max(1, results.length);
     for (const { doc, r, ms: vms } of results) {
@@ -225,7 +252,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     }
   }
   // Names must be unique across the database: the later duplicates fail (validate.ts names the first use).
-  const dup = checkUniqueNames(perFile.flatMap((p) => [...p.results.map((x) => x.doc), ...p.recovered.map((x) => x.doc)]));
+  const dup = policy.applyOther(checkUniqueNames(perFile.flatMap((p) => [...p.results.map((x) => x.doc), ...p.recovered.map((x) => x.doc)])));
   diagnostics.push(...dup);
   dup.forEach(addFileDiag);
   const isDuplicate = (doc: LoadedDocument, name: string) =>
@@ -250,12 +277,14 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   if (discovered.files.length === 0 && !hasErrors(discovered.diagnostics)) {
     diagnostics.push({
       severity: 'error',
+      code: 'no-species-files',
       file: dir,
       path: '',
       message: 'no species files (*.yaml, *.yml) in the database folder',
       expected: 'at least one species file',
     });
   }
+  diagnostics.push(...policy.staleSettingsEntries());
   species.sort(byName);
   for (const d of diagnostics) d.file = show(d.file);
   diagnostics.sort(compareDiagnostics);
@@ -332,9 +361,9 @@ export async function buildOneSpecies(
     timings: { load: v.loadMs, validate: v.validateMs },
   };
   const where = { file: v.displayFile, species: v.name, ...(v.positions.name ?? {}) };
-  const fail = (pathText: string, message: string) => {
+  const fail = (code: string, pathText: string, message: string) => {
     const pos = (pathText === 'temperature_ranges' ? v.positions.temperature_ranges : undefined) ?? v.positions.name;
-    out.diagnostics.push({ severity: 'error', ...where, ...(pos ?? {}), path: pathText, message });
+    out.diagnostics.push({ severity: 'error', code, ...where, ...(pos ?? {}), path: pathText, message });
   };
   const note = (kind: CacheKind, r: { outcome: CacheOutcome; reason?: string }) => {
     out.cache[kind] = r.outcome;
@@ -364,7 +393,7 @@ export async function buildOneSpecies(
   try {
     fitOptions = fitOptionsFor(plan.fitOptions);
   } catch (e) {
-    fail(v.species.temperatureRanges ? 'temperature_ranges' : '', `fit options: ${errorText(e)}`);
+    fail('fit-options', v.species.temperatureRanges ? 'temperature_ranges' : '', `fit options: ${errorText(e)}`);
     return out;
   }
   const inputHash = `sha256:${sha256Hex(canonicalJson(v.normalisedInput))}`;
@@ -384,7 +413,7 @@ export async function buildOneSpecies(
       out.timings[kind === 'samples' ? 'compute' : kind] = r.ms;
       return r.value;
     } catch (e) {
-      fail(failPath, `${what} failed: ${errorText(e)}`);
+      fail(kind === 'samples' ? 'compute-failed' : `${kind}-failed`, failPath, `${what} failed: ${errorText(e)}`);
       return undefined;
     }
   };
@@ -490,6 +519,9 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   const cacheDir =
     opts.cacheDir === null ? undefined : (opts.cacheDir ?? path.join(path.dirname(path.resolve(opts.out)), '.qforge-cache'));
   const cache = new StageCache(cacheDir);
+  // Opened before the species run so that a missing --report-against build fails at once.
+  const reportWriter =
+    check.settingsOk && (opts.report || settings.outputs.report) ? await ReportWriter.open(opts.report ?? {}, settings, opts.dir, opts.displayBase) : undefined;
 
   const limit = pLimit(Math.max(1, opts.jobs ?? 8));
   const total = check.species.length;
@@ -531,6 +563,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
         const o = outcomes.get(e.record)!;
         o.diagnostics.push({
           severity: 'error',
+          code: 'record-not-writable',
           file: o.valid.displayFile,
           species: o.valid.name,
           ...((e.field.startsWith('elements') ? o.valid.positions.composition : o.valid.positions.name) ?? {}),
@@ -553,6 +586,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     if (!hasErrors(allDiagnostics)) {
       allDiagnostics.push({
         severity: 'error',
+        code: 'database-empty',
         file: opts.displayBase ? displayPath(opts.displayBase, opts.dir) : opts.dir,
         path: '',
         message: 'the database holds no species',
@@ -615,6 +649,24 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
       };
     }
     summarySpecies.push(s);
+    if (mayWrite) {
+      reportWriter?.add({
+        name: o.valid.name,
+        file: o.valid.file,
+        status: s.status,
+        species: o.valid.species,
+        ...(o.built ? { computed: o.built.computed, fit: o.built.fit } : {}),
+        warnings: s.warnings,
+        errors: s.errors,
+        cacheHit: s.cache_hit,
+      });
+    }
+  }
+  if (mayWrite && reportWriter) {
+    const report = reportWriter.finish(status, check.invalid.map((i) => `${i.file}#${i.document}: ${i.diagnostics.find((d) => d.severity === 'error')?.message ?? 'invalid'}`));
+    files.set('report.html', report.main);
+    for (const [page, html] of report.pages) files.set(page, html);
+    outputs.splice(0, outputs.length, ...[...files.keys()].sort(), 'summary.json');
   }
   for (const inv of check.invalid) {
     const s: SummarySpecies = {

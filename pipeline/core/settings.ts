@@ -61,7 +61,7 @@ export interface DatabaseSettings {
   };
   /** Dimensionless: |ΔCp/R|, |ΔH/RT|, |ΔS/R| (absolute parts) and multiples of Cp/R (relative_to_cp). */
   tolerances: FitTolerancesSetting;
-  outputs: { thermo_json: boolean; nasa7: boolean; tables: boolean };
+  outputs: { thermo_json: boolean; nasa7: boolean; tables: boolean; report: boolean };
   tables: { from: number; to: number; step: number; extra: number[] };
   references: {
     files: string[];
@@ -69,6 +69,16 @@ export interface DatabaseSettings {
     tolerances: QuantityTriple;
     known_deviations: KnownDeviation[];
   };
+  /** Warnings are errors (pipeline/core/strict.ts), except the accepted ones. */
+  strict: boolean;
+  accepted_warnings: AcceptedWarning[];
+}
+
+/** A warning accepted in writing (settings or species `accepted_warnings`). */
+export interface AcceptedWarning {
+  code: string;
+  species?: string;
+  reason: string;
 }
 
 export const DEFAULT_SETTINGS: Readonly<DatabaseSettings> = Object.freeze({
@@ -84,9 +94,11 @@ export const DEFAULT_SETTINGS: Readonly<DatabaseSettings> = Object.freeze({
     sampling_step: 10,
   },
   tolerances: { cp: 0.1, h: 0.02, s: 0.02, relative_to_cp: { cp: 0.015, h: 0.003, s: 0.003 } },
-  outputs: { thermo_json: true, nasa7: true, tables: true },
+  outputs: { thermo_json: true, nasa7: true, tables: true, report: false },
   tables: { from: 200, to: 6000, step: 100, extra: [298.15] },
   references: { files: [], tolerances: { cp: 0.5, h: 0.5, s: 0.5 }, known_deviations: [] },
+  strict: false,
+  accepted_warnings: [],
 } satisfies DatabaseSettings);
 
 /** Standard pressure in Pa for a settings label. */
@@ -138,17 +150,18 @@ export interface SettingsResult {
 export function checkSettingsRules(s: DatabaseSettings, file: string, doc?: LoadedDocument): Diagnostic[] {
   const out: Diagnostic[] = [];
   const at = (segments: Array<string | number>) => locate(doc, segments);
-  const push = (segments: Array<string | number>, message: string, value: unknown, expected: string) =>
-    out.push({ severity: 'error', file, ...at(segments), path: formatFieldPath(segments), message, value, expected });
+  const push = (code: string, segments: Array<string | number>, message: string, value: unknown, expected: string) =>
+    out.push({ severity: 'error', code, file, ...at(segments), path: formatFieldPath(segments), message, value, expected });
 
   const { low, mid, high } = s.temperature_ranges;
   if (!(low < mid && mid < high)) {
-    push(['temperature_ranges'], 'temperature ranges out of order', { low, mid, high }, 'low < mid < high');
+    push('settings-range-order', ['temperature_ranges'], 'temperature ranges out of order', { low, mid, high }, 'low < mid < high');
   }
   // Point at the bound that is on the wrong side of 298.15 K (both, when both are). The low range may
   // start up to MAX_ANCHOR_EXTRAPOLATION above it (e.g. 300 K): the low set is extrapolated to the anchor.
   if (!(low <= T_REF + MAX_ANCHOR_EXTRAPOLATION)) {
     push(
+      'settings-range-excludes-298',
       ['temperature_ranges', 'low'],
       `the low range must start at most ${MAX_ANCHOR_EXTRAPOLATION} K above ${T_REF} K (H and S are anchored there, on the low polynomial)`,
       low,
@@ -156,23 +169,23 @@ export function checkSettingsRules(s: DatabaseSettings, file: string, doc?: Load
     );
   }
   if (!(T_REF <= mid)) {
-    push(['temperature_ranges', 'mid'], `the low range must contain ${T_REF} K (H and S are anchored there)`, mid, `low ≤ ${T_REF} ≤ mid`);
+    push('settings-range-excludes-298', ['temperature_ranges', 'mid'], `the low range must contain ${T_REF} K (H and S are anchored there)`, mid, `low ≤ ${T_REF} ≤ mid`);
   }
   const om = s.fit.optimise_mid;
   // The default search interval is clipped to each species' ranges (plan.ts); only a written one is checked.
   if (om !== false && isSetIn(doc, ['fit', 'optimise_mid'])) {
-    if (!(om.min < om.max)) push(['fit', 'optimise_mid'], 'midpoint search interval is empty', om, 'min < max');
+    if (!(om.min < om.max)) push('settings-mid-interval-empty', ['fit', 'optimise_mid'], 'midpoint search interval is empty', om, 'min < max');
     if (!(om.min > low && om.max < high)) {
-      push(['fit', 'optimise_mid'], 'midpoint search interval must lie inside the temperature ranges', om, `${low} < min < max < ${high}`);
+      push('settings-mid-interval-outside', ['fit', 'optimise_mid'], 'midpoint search interval must lie inside the temperature ranges', om, `${low} < min < max < ${high}`);
     }
-    if (om.min < T_REF) push(['fit', 'optimise_mid', 'min'], `midpoint may not fall below ${T_REF} K`, om.min, `min ≥ ${T_REF}`);
+    if (om.min < T_REF) push('settings-mid-below-298', ['fit', 'optimise_mid', 'min'], `midpoint may not fall below ${T_REF} K`, om.min, `min ≥ ${T_REF}`);
   }
-  if (!(s.tables.from < s.tables.to)) push(['tables'], 'table grid is empty', { from: s.tables.from, to: s.tables.to }, 'from < to');
+  if (!(s.tables.from < s.tables.to)) push('settings-table-grid-empty', ['tables'], 'table grid is empty', { from: s.tables.from, to: s.tables.to }, 'from < to');
   else if ((s.tables.to - s.tables.from) / s.tables.step > 100_000) {
-    push(['tables', 'step'], 'table grid has too many rows', s.tables.step, 'at most 100000 rows');
+    push('settings-table-grid-too-large', ['tables', 'step'], 'table grid has too many rows', s.tables.step, 'at most 100000 rows');
   }
   if ((high - low) / s.fit.sampling_step > 100_000) {
-    push(['fit', 'sampling_step'], 'sampling grid has too many points', s.fit.sampling_step, 'at most 100000 points');
+    push('settings-sampling-grid-too-large', ['fit', 'sampling_step'], 'sampling grid has too many points', s.fit.sampling_step, 'at most 100000 points');
   } else if (low < mid && mid < high && low <= T_REF + MAX_ANCHOR_EXTRAPOLATION && T_REF <= mid) {
     // Only once the ranges themselves are sound: a misplaced mid is one mistake, reported above.
     const step = s.fit.sampling_step;
@@ -182,6 +195,7 @@ export function checkSettingsRules(s: DatabaseSettings, file: string, doc?: Load
       const largest = largestSamplingStep({ low, mid, high });
       out.push({
         severity: 'error',
+        code: 'sampling-step-too-coarse',
         file,
         ...at(setHere ? ['fit', 'sampling_step'] : ['temperature_ranges']),
         path: 'fit.sampling_step',
@@ -192,7 +206,7 @@ export function checkSettingsRules(s: DatabaseSettings, file: string, doc?: Load
     }
   }
   const ref = s.references.files;
-  if (new Set(ref).size !== ref.length) push(['references', 'files'], 'a reference file is listed twice', ref, 'distinct files');
+  if (new Set(ref).size !== ref.length) push('settings-reference-listed-twice', ['references', 'files'], 'a reference file is listed twice', ref, 'distinct files');
   checkKnownDeviations(s.references, push);
   return out;
 }
@@ -283,6 +297,7 @@ export function checkSpeciesSampling(opts: {
       : 'the default';
   const d: Diagnostic = {
     severity: 'error',
+    code: 'sampling-step-too-coarse',
     file: opts.file,
     species: opts.species,
     path: 'temperature_ranges',
@@ -309,18 +324,19 @@ const PLACEHOLDER_REASON = /^\s*(todo|tbd|tba|fixme|xxx|n\/?a|none|unknown|known
 /** Windows, widened limits and reasons of references.known_deviations (all problems at once). */
 function checkKnownDeviations(
   refs: DatabaseSettings['references'],
-  push: (segments: Array<string | number>, message: string, value: unknown, expected: string) => void,
+  push: (code: string, segments: Array<string | number>, message: string, value: unknown, expected: string) => void,
 ): void {
   const list = refs.known_deviations;
   list.forEach((k, i) => {
     const at = ['references', 'known_deviations', i];
     if (k.from !== undefined && k.to !== undefined && !(k.from <= k.to)) {
-      push([...at, 'to'], 'known deviation: empty temperature window', { from: k.from, to: k.to }, 'from ≤ to');
+      push('known-deviation-window-empty', [...at, 'to'], 'known deviation: empty temperature window', { from: k.from, to: k.to }, 'from ≤ to');
     }
     for (const q of ['cp', 's', 'h'] as const) {
       const widened = k.tolerances[q];
       if (widened !== undefined && !(widened > refs.tolerances[q])) {
         push(
+          'known-deviation-not-wider',
           [...at, 'tolerances', q],
           `known deviation: the limit does not widen references.tolerances.${q} (${refs.tolerances[q]})`,
           widened,
@@ -329,7 +345,7 @@ function checkKnownDeviations(
       }
     }
     if (PLACEHOLDER_REASON.test(k.reason)) {
-      push([...at, 'reason'], 'known deviation: the reason is a placeholder', k.reason, 'why the deviation is accepted, e.g. the model limit and where it is documented');
+      push('known-deviation-placeholder-reason', [...at, 'reason'], 'known deviation: the reason is a placeholder', k.reason, 'why the deviation is accepted, e.g. the model limit and where it is documented');
     }
     // Two entries covering the same species, quantity and temperature would make the limit ambiguous.
     for (let j = 0; j < i; j++) {
@@ -339,6 +355,7 @@ function checkKnownDeviations(
       const shared = (['cp', 's', 'h'] as const).filter((q) => o.tolerances[q] !== undefined && k.tolerances[q] !== undefined);
       if (overlap && shared.length) {
         push(
+          'known-deviation-overlap',
           at,
           `known deviation overlaps references.known_deviations[${j}] for ${k.species} ${shared.join(', ')}`,
           { species: k.species, from: k.from, to: k.to },
@@ -375,6 +392,7 @@ export async function loadSettings(dir: string, displayDir = dir): Promise<Setti
   if (loaded.documents.length > 1) {
     diagnostics.push({
       severity: 'error',
+      code: 'settings-several-documents',
       file: display,
       path: '',
       message: `${SETTINGS_FILE_NAME} holds ${loaded.documents.length} YAML documents`,

@@ -18,11 +18,13 @@ import { centrifugalConstantOf, rotationalConstantOf, vibrationalTerm } from '..
 import { hinderedRotorBasisSize, MAX_HINDERED_ROTOR_BASIS, smallestHinderedRotorConstant } from '../../src/partition/hindered-rotor.js';
 import { DEFAULT_NUCLEAR_SPIN_MIXTURE } from '../../src/partition/spin-mixture.js';
 import type {
+  Conformer,
   DiatomicState,
   ElectronicLevel,
   InternalRotor,
   NuclearSpinMixture,
   NuclearSpinWeights,
+  PolyatomicMolecularPart,
   Species,
   Structure,
   Vibration,
@@ -37,8 +39,19 @@ import {
 } from '../../src/units.js';
 import { compareDiagnostics, type Diagnostic } from '../core/diagnostics.js';
 import type { LoadedDocument } from './load.js';
+import { checkPlausibility } from './plausibility.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from './schema-check.js';
+import {
+  checkAnharmonicModel,
+  checkPolyatomicCut,
+  readAnharmonicity,
+  readCentrifugalDistortion,
+  readVibrationScaleFactor,
+} from './validate-anharmonic.js';
+import { checkConformerSet } from './validate-conformers.js';
+import { checkElectron } from './validate-electron.js';
 import { compareText } from '../core/text.js';
+import { readUncertainties } from './uncertainty-input.js';
 
 type Segment = string | number;
 type Obj = Record<string, unknown>;
@@ -96,21 +109,37 @@ function atomicNumber(symbol: string): number | undefined {
 
 const ALL_SYMBOLS: readonly string[] = [...Object.keys(elementsObject as object), 'D', 'T'].filter(isKnownElement);
 
+/** Every finding carries its stable code (pipeline/core/diagnostics.ts). */
+interface FindingExtra {
+  code: string;
+  value?: unknown;
+  expected?: string;
+  key?: boolean;
+}
+
 class Findings {
-  readonly diagnostics: Diagnostic[] = [];
   constructor(
     private readonly doc: LoadedDocument,
     private readonly species: string | undefined,
+    /** Path of the nested part these findings are about (a conformer), prepended to every path. */
+    private readonly prefix: Segment[] = [],
+    readonly diagnostics: Diagnostic[] = [],
   ) {}
+
+  /** Findings about a nested part (e.g. `conformers[1]`), reported into the same list. */
+  within(prefix: Segment[]): Findings {
+    return new Findings(this.doc, this.species, [...this.prefix, ...prefix], this.diagnostics);
+  }
 
   add(
     severity: Diagnostic['severity'],
-    at: Segment[],
+    relative: Segment[],
     message: string,
-    extra: { value?: unknown; expected?: string; key?: boolean } = {},
+    extra: FindingExtra,
   ): void {
+    const at = [...this.prefix, ...relative];
     const where = this.doc.locate(at, { key: extra.key ?? false });
-    const d: Diagnostic = { severity, file: this.doc.file, path: formatFieldPath(at), message };
+    const d: Diagnostic = { severity, file: this.doc.file, path: formatFieldPath(at), message, code: extra.code };
     if (where) {
       d.line = where.line;
       d.column = where.column;
@@ -120,10 +149,10 @@ class Findings {
     if (extra.expected !== undefined) d.expected = extra.expected;
     this.diagnostics.push(d);
   }
-  error(at: Segment[], message: string, extra?: { value?: unknown; expected?: string; key?: boolean }): void {
+  error(at: Segment[], message: string, extra: FindingExtra): void {
     this.add('error', at, message, extra);
   }
-  warn(at: Segment[], message: string, extra?: { value?: unknown; expected?: string; key?: boolean }): void {
+  warn(at: Segment[], message: string, extra: FindingExtra): void {
     this.add('warning', at, message, extra);
   }
 }
@@ -184,6 +213,7 @@ function readComposition(raw: unknown, f: Findings): CompositionView | undefined
       const caseFix = ALL_SYMBOLS.find((s) => s.toLowerCase() === symbol.toLowerCase());
       const suggestion = caseFix ?? nearestKey(symbol, ALL_SYMBOLS);
       f.error(['composition', symbol], `unknown element symbol '${symbol}'${suggestion ? ` (did you mean '${suggestion}'?)` : ''}`, {
+        code: 'unknown-element',
         key: true,
         expected: 'an IUPAC element symbol with a standard atomic weight (or D, T for 2H, 3H)',
       });
@@ -221,17 +251,20 @@ function checkName(ctx: Ctx): void {
   // The 80-column file is framed by THERMO ... END lines; readers would take a record of that name for framing.
   if (/^(END|THERMO)$/i.test(name)) {
     ctx.f.error(['name'], `'${name}' is a keyword of the 80-column thermo file and cannot name a record`, {
+      code: 'name-is-keyword',
       value: name,
       expected: 'another name (e.g. with a suffix)',
     });
   } else if (/^END/i.test(name)) {
     ctx.f.warn(['name'], `a name starting with '${name.slice(0, 3)}' may be read as the END line by some readers of the 80-column file`, {
+      code: 'name-reads-as-end',
       value: name,
       expected: 'a name that does not start with END',
     });
   }
   if (/^\.+$/.test(name)) {
     ctx.f.error(['name'], 'a name made only of dots cannot name a record or an output file', {
+      code: 'name-only-dots',
       value: name,
       expected: 'a name with at least one letter, digit or symbol other than "."',
     });
@@ -243,24 +276,28 @@ function checkComposition(ctx: Ctx): void {
   if (!c || !c.known) return;
   if (structure === 'atom' && c.atoms !== 1) {
     f.error(['composition'], `an atom must consist of exactly 1 atom, this composition has ${c.atoms}`, {
+      code: 'atom-count-atom',
       value: ctx.input.composition,
       expected: "one element with count 1, or structure 'diatomic', 'linear' or 'nonlinear'",
     });
   }
   if (structure === 'diatomic' && c.atoms !== 2) {
     f.error(['composition'], `a diatomic must consist of exactly 2 atoms, this composition has ${c.atoms}`, {
+      code: 'atom-count-diatomic',
       value: ctx.input.composition,
       expected: c.atoms === 1 ? "2 atoms, or structure 'atom'" : "2 atoms, or structure 'linear' or 'nonlinear'",
     });
   }
   if (structure === 'linear' && c.atoms < 2) {
     f.error(['composition'], `a linear molecule needs at least 2 atoms, this composition has ${c.atoms}`, {
+      code: 'atom-count-linear',
       value: ctx.input.composition,
       expected: "2 or more atoms, or structure 'atom'",
     });
   }
   if (structure === 'nonlinear' && c.atoms < 3) {
     f.error(['composition'], `a nonlinear molecule needs at least 3 atoms, this composition has ${c.atoms}`, {
+      code: 'atom-count-nonlinear',
       value: ctx.input.composition,
       expected: "3 or more atoms, or structure 'linear' / 'diatomic'",
     });
@@ -272,6 +309,7 @@ function checkComposition(ctx: Ctx): void {
     electrons -= charge as number;
     if (electrons < 0) {
       f.error(['charge'], `charge ${charge as number} would leave ${electrons} electrons`, {
+        code: 'charge-exceeds-electrons',
         value: charge,
         expected: `a charge of at most +${electrons + (charge as number)} for this composition`,
       });
@@ -285,6 +323,7 @@ function checkSources(ctx: Ctx): void {
   sources.forEach((s, i) => {
     if (typeof s === 'string' && s.trim() !== '' && (SAYS_NOTHING.test(s.trim()) || s.trim().length < 3)) {
       ctx.f.warn(['sources', i], 'this source entry does not say where the numbers come from', {
+        code: 'source-says-nothing',
         value: s,
         expected: 'a citation, e.g. "Huber & Herzberg (1979)", or "from memory" / "invented (demo)"',
       });
@@ -302,6 +341,7 @@ function readEnthalpy(ctx: Ctx): { value: number; temperature: number } | undefi
   if (temperature !== 298.15 && temperature !== 0) return undefined;
   if (temperature === 0) {
     ctx.f.warn(['enthalpy_of_formation', 'temperature'], 'enthalpy of formation given at 0 K', {
+      code: 'enthalpy-at-0k',
       value: 0,
       expected:
         "a value at 298.15 K where available; a 0 K value is converted with the elements' reference-state enthalpy increments, so check they cover every element",
@@ -321,6 +361,7 @@ function readTemperatureRanges(ctx: Ctx): { low?: number; mid?: number; high?: n
     const b = order[i]!;
     if (!(out[a]! < out[b]!)) {
       ctx.f.error(['temperature_ranges', b], `${b} (${fmt(out[b]!)} K) must be above ${a} (${fmt(out[a]!)} K)`, {
+        code: 'temperature-range-order',
         value: out[b],
         expected: 'low < mid < high',
       });
@@ -365,6 +406,7 @@ function readElectronicLevels(ctx: Ctx): ElectronicLevel[] | undefined {
   if (lowest !== 0) {
     const i = levels.findIndex((l) => l.energy === lowest);
     ctx.f.error(['electronic_levels', i, 'energy'], `the lowest electronic level is at ${fmt(lowest)} cm-1, not at 0`, {
+      code: 'lowest-level-not-zero',
       value: (raw[i] as Obj).energy,
       expected: 'energies measured from the ground level, which is at energy 0',
     });
@@ -375,6 +417,7 @@ function readElectronicLevels(ctx: Ctx): ElectronicLevel[] | undefined {
     const first = seen.get(key);
     if (first !== undefined) {
       ctx.f.warn(['electronic_levels', i], `same energy${l.term ? ' and term' : ''} as electronic_levels[${first}]; is a level listed twice?`, {
+        code: 'electronic-level-repeated',
         value: raw[i],
         expected: 'each level once, with its total degeneracy',
       });
@@ -388,6 +431,7 @@ function checkSymmetryNumber(ctx: Ctx, sigma: number, hasSpinWeights: boolean): 
   const { f, structure, composition: c } = ctx;
   if ((structure === 'diatomic' || structure === 'linear') && sigma > 2) {
     f.error(['symmetry_number'], `a linear molecule has symmetry number 1 or 2, not ${sigma}`, {
+      code: 'symmetry-number-linear',
       value: sigma,
       expected: '1 (no centre of symmetry) or 2 (centrosymmetric)',
     });
@@ -398,29 +442,101 @@ function checkSymmetryNumber(ctx: Ctx, sigma: number, hasSpinWeights: boolean): 
   if (structure === 'diatomic') {
     if (hasSpinWeights && homonuclear && sigma !== 2) {
       f.warn(['symmetry_number'], `symmetry number ${sigma} is ignored: nuclear_spin_weights replace it`, {
+        code: 'symmetry-number-ignored',
         value: sigma,
         expected: '2 for a homonuclear diatomic',
       });
     } else if (homonuclear && sigma !== 2) {
-      f.warn(['symmetry_number'], 'a homonuclear diatomic usually has symmetry number 2', { value: sigma, expected: '2' });
+      f.warn(['symmetry_number'], 'a homonuclear diatomic usually has symmetry number 2', { code: 'symmetry-number-homonuclear', value: sigma, expected: '2' });
     } else if (!homonuclear && sigma !== 1) {
-      f.warn(['symmetry_number'], 'a heteronuclear diatomic usually has symmetry number 1', { value: sigma, expected: '1' });
+      f.warn(['symmetry_number'], 'a heteronuclear diatomic usually has symmetry number 1', { code: 'symmetry-number-heteronuclear', value: sigma, expected: '1' });
     }
   } else if (structure === 'linear' && sigma === 2) {
     // A centre of symmetry pairs atoms of each element; at most one element can have an odd count (the centre).
     const odd = c.symbols.filter((s) => c.counts[s]! % 2 === 1).length;
     if (odd > 1) {
       f.warn(['symmetry_number'], 'symmetry number 2 needs a centre of symmetry, which this composition cannot have', {
+        code: 'symmetry-number-no-centre',
         value: sigma,
         expected: '1',
       });
     }
   } else if (structure === 'nonlinear' && sigma > 1 && c.symbols.every((s) => c.counts[s] === 1)) {
     f.warn(['symmetry_number'], 'with no two atoms of the same element no rotation can be a symmetry operation', {
+      code: 'symmetry-number-no-equal-atoms',
       value: sigma,
       expected: '1',
     });
   }
+}
+
+/**
+ * The molecular fields of a linear or nonlinear species, or of one of its conformers (the same checks and
+ * normalisation for both; a conformer's ctx has its own input object and prefixed findings). Optional keys
+ * appear only when given, so every species without them keeps its normalised form and hash.
+ */
+function readMolecularPart(ctx: Ctx): PolyatomicMolecularPart | undefined {
+  const { f, input, structure } = ctx;
+  const sigma = isPositiveInteger(input.symmetry_number) ? input.symmetry_number : undefined;
+  if (sigma !== undefined) checkSymmetryNumber(ctx, sigma, false);
+  const electronicLevels = readElectronicLevels(ctx);
+  const { rotationalConstants, vibrations: given } = readPolyatomic(ctx);
+  const internal = readInternalRotors(ctx);
+  const scale = readVibrationScaleFactor(f, input);
+  const vibrations = given && scale ? given.map((v) => ({ ...v, wavenumber: v.wavenumber * scale.value })) : given;
+  const anh = readAnharmonicity(f, input, structure, vibrations);
+  const cd = readCentrifugalDistortion(f, input, structure);
+  const cutOk = checkPolyatomicCut(f, input);
+  const d0 = input.anharmonicity !== undefined && input.dissociation_energy !== undefined ? energy(input.dissociation_energy) : undefined;
+  if (!(electronicLevels && rotationalConstants && vibrations && sigma !== undefined && internal.ok && scale !== null && anh.ok && cd.ok && cutOk)) return undefined;
+  // Nonlinear constants are kept as A >= B >= C; per-axis alpha follow the same order.
+  const order = rotationalConstants.map((_, k) => k);
+  if (structure === 'nonlinear') order.sort((a, b) => rotationalConstants[b]! - rotationalConstants[a]! || a - b);
+  const anharmonicity = anh.anharmonicity?.alpha
+    ? { ...anh.anharmonicity, alpha: anh.anharmonicity.alpha.map((row) => order.map((k) => row[k]!)) }
+    : anh.anharmonicity;
+  const part: PolyatomicMolecularPart = {
+    symmetryNumber: sigma,
+    electronicLevels,
+    rotationalConstants: order.map((k) => rotationalConstants[k]!),
+    vibrations,
+    ...(internal.rotors ? { internalRotors: internal.rotors } : {}),
+    ...(scale ? { vibrationScaleFactor: scale } : {}),
+    ...(anharmonicity ? { anharmonicity } : {}),
+    ...(cd.centrifugal ? { centrifugalDistortion: cd.centrifugal } : {}),
+    ...(d0 !== undefined ? { dissociationEnergy: d0 } : {}),
+  };
+  return checkAnharmonicModel(f, part) ? part : undefined;
+}
+
+/** Each conformer through readMolecularPart (paths under `conformers[i]`), then the cross-conformer checks. */
+function readConformerParts(ctx: Ctx): Conformer[] | undefined {
+  const raw = ctx.input.conformers;
+  if (!Array.isArray(raw)) return undefined;
+  const out: Conformer[] = [];
+  let ok = true;
+  raw.forEach((item, i) => {
+    if (!isObj(item)) {
+      ok = false;
+      return;
+    }
+    const part = readMolecularPart({ ...ctx, f: ctx.f.within(['conformers', i]), input: item });
+    const e = energy(item.energy);
+    if (!part || e === undefined || typeof item.name !== 'string') {
+      ok = false;
+      return;
+    }
+    out.push({ label: item.name, energy: e, ...part });
+  });
+  return ok && checkConformerSet(ctx.f, out, raw) ? out : undefined;
+}
+
+/** The molecular part of the lowest conformer (energy 0), without its label and energy. */
+function lowestConformerPart(conformers: Conformer[] | undefined): PolyatomicMolecularPart | undefined {
+  const lowest = conformers?.find((c) => c.energy === 0);
+  if (!lowest) return undefined;
+  const { label: _label, energy: _energy, ...part } = lowest;
+  return part;
 }
 
 function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?: Vibration[] } {
@@ -431,11 +547,13 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
   let rotationalConstants: number[] | undefined;
   if (rc !== undefined && moi !== undefined) {
     f.error(['moments_of_inertia'], 'give either rotational_constants or moments_of_inertia, not both', {
+      code: 'rotation-given-twice',
       key: true,
       expected: 'exactly one of rotational_constants, moments_of_inertia',
     });
   } else if (rc === undefined && moi === undefined) {
     f.error(['rotational_constants'], `missing required field 'rotational_constants' (or 'moments_of_inertia') for structure '${structure}'`, {
+      code: 'rotation-missing',
       expected: structure === 'linear' ? '[B] in cm-1' : '[A, B, C] in cm-1',
     });
   } else {
@@ -446,6 +564,7 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
         // The schema already reports more than 3 items.
       } else if (list.length !== want) {
         f.error([field], `a ${structure} molecule takes ${want} ${field === 'rotational_constants' ? 'rotational constant' : 'moment of inertia'}${want === 1 ? '' : 's'}, got ${list.length}`, {
+          code: 'rotation-count',
           value: list,
           expected: structure === 'linear' ? (field === 'rotational_constants' ? '[B]' : '[I]') : field === 'rotational_constants' ? '[A, B, C]' : '[IA, IB, IC]',
         });
@@ -455,18 +574,11 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
           rotationalConstants = values;
           if (structure === 'nonlinear' && !(values[0]! >= values[1]! && values[1]! >= values[2]!)) {
             f.warn([field], field === 'rotational_constants' ? 'rotational constants are not in the order A >= B >= C' : 'moments of inertia are not in the order IA <= IB <= IC', {
+              code: 'rotation-order',
               value: list,
               expected: 'the conventional order (the product, and so the thermochemistry, is unaffected)',
             });
           }
-          values.forEach((b, i) => {
-            if (b > 100) {
-              f.warn([field, i], `rotational constant of ${fmt(b)} cm-1 is larger than that of any molecule (H2: about 60 cm-1); check the unit`, {
-                value: list[i],
-                expected: 'a value in cm-1 (or {value, unit})',
-              });
-            }
-          });
         }
       }
     }
@@ -480,12 +592,6 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
       const read = readVibration(item);
       if (!read) return;
       const { wavenumber: wn, degeneracy: g } = read;
-      if (wn > 5000) {
-        f.warn(['vibrations', i], `wavenumber ${fmt(wn)} cm-1 is above any fundamental (H2: about 4160 cm-1); check the unit`, {
-          value: item,
-          expected: 'a wavenumber in cm-1 (or {value, unit})',
-        });
-      }
       vs.push({ wavenumber: wn, degeneracy: g });
     });
     if (vs.length === raw.length) {
@@ -496,11 +602,14 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
         const rotors = Array.isArray(input.internal_rotors) ? input.internal_rotors.length : 0;
         if (rotors === 0 && expected > 0 && modes !== expected) {
           f.warn(['vibrations'], `${modes} vibrational mode${modes === 1 ? '' : 's'} (counting degeneracy), but a ${structure} molecule of ${c.atoms} atoms has ${expected} (3N-${structure === 'linear' ? 5 : 6})`, {
+            code: 'mode-count',
             expected: `${expected} modes counting degeneracy`,
           });
         } else if (rotors > 0 && expected > 0 && modes + rotors !== expected) {
-          // Each internal rotor replaces one torsional vibration; a torsion left in `vibrations` is counted twice.
-          f.warn(['vibrations'], `${modes} vibrational mode${modes === 1 ? '' : 's'} (counting degeneracy) plus ${rotors} internal rotor${rotors === 1 ? '' : 's'} make ${modes + rotors} modes, but a ${structure} molecule of ${c.atoms} atoms has ${expected} (3N-${structure === 'linear' ? 5 : 6})`, {
+          // Each internal rotor replaces one torsional vibration; a torsion left in `vibrations` is counted
+          // twice, which is an error (more modes than the molecule has); fewer modes stay a warning.
+          f.add(modes + rotors > expected ? 'error' : 'warning', ['vibrations'], `${modes} vibrational mode${modes === 1 ? '' : 's'} (counting degeneracy) plus ${rotors} internal rotor${rotors === 1 ? '' : 's'} make ${modes + rotors} modes, but a ${structure} molecule of ${c.atoms} atoms has ${expected} (3N-${structure === 'linear' ? 5 : 6})`, {
+            code: modes + rotors > expected ? 'torsion-counted-twice' : 'mode-count-with-rotors',
             expected: `${expected} modes counting each internal rotor as one (remove a torsion treated as an internal rotor from vibrations)`,
           });
         }
@@ -527,6 +636,7 @@ function readInternalRotors(ctx: Ctx): { rotors?: InternalRotor[]; ok: boolean }
   if (!Array.isArray(raw) || raw.length === 0) return { ok: false };
   if (structure === 'linear') {
     f.warn(['internal_rotors'], 'internal rotors on a linear molecule: a linear molecule has no torsion about a bond axis', {
+      code: 'rotor-on-linear',
       key: true,
       expected: "structure 'nonlinear' for a molecule with a torsion, or no internal_rotors",
     });
@@ -543,6 +653,7 @@ function readInternalRotors(ctx: Ctx): { rotors?: InternalRotor[]; ok: boolean }
     const hasB = item.rotational_constant !== undefined;
     if (hasI && hasB) {
       f.error(at('moment_of_inertia'), 'give either moment_of_inertia or rotational_constant of an internal rotor, not both', {
+        code: 'rotor-given-twice',
         key: true,
         expected: 'exactly one of moment_of_inertia (amu*angstrom^2), rotational_constant (cm-1)',
       });
@@ -551,6 +662,7 @@ function readInternalRotors(ctx: Ctx): { rotors?: InternalRotor[]; ok: boolean }
     }
     if (!hasI && !hasB) {
       f.error(at(), "an internal rotor needs 'moment_of_inertia' or 'rotational_constant'", {
+        code: 'rotor-missing-inertia',
         value: item,
         expected: 'the reduced moment of inertia (amu*angstrom^2) or the reduced rotational constant (cm-1) of the torsion',
       });
@@ -570,6 +682,7 @@ function readInternalRotors(ctx: Ctx): { rotors?: InternalRotor[]; ok: boolean }
     const basis = hinderedRotorBasisSize(rotor);
     if (basis > MAX_HINDERED_ROTOR_BASIS) {
       f.error(at(field), `reduced rotational constant ${fmt(b)} cm-1 is too small for the level sum: ${basis} free-rotor basis functions, more than ${MAX_HINDERED_ROTOR_BASIS}`, {
+        code: 'rotor-basis-too-large',
         value: item[field],
         expected: `the reduced constant of a real torsion, at least ${fmt(smallestHinderedRotorConstant(rotor))} cm-1 (check the unit: a bare moment_of_inertia is in amu*angstrom^2)`,
       });
@@ -578,12 +691,14 @@ function readInternalRotors(ctx: Ctx): { rotors?: InternalRotor[]; ok: boolean }
     }
     if (b > LARGEST_TORSION_ROTATIONAL_CONSTANT) {
       f.warn(at(field), `reduced rotational constant of ${fmt(b)} cm-1 is larger than that of any torsion (an OH top: about 20-40 cm-1); check the unit`, {
+        code: 'rotor-constant-too-large',
         value: item[field],
         expected: 'a value in cm-1, or a moment of inertia in amu*angstrom^2',
       });
     }
     if (n % sigma !== 0) {
       f.warn(at('symmetry_number'), `rotor symmetry number ${sigma} does not divide the foldedness ${n}: a rotation that maps the top onto itself must also map the potential onto itself`, {
+        code: 'rotor-symmetry-foldedness',
         value: sigma,
         expected: `a divisor of ${n} (usually ${n} for a symmetric top, 1 for an asymmetric one)`,
       });
@@ -672,6 +787,7 @@ function checkHigherOrderConstants(f: Findings, s: DiatomicState, i: number, raw
   const at = (field: string): Segment[] => ['electronic_states', i, field];
   if (s.betae !== undefined && s.De + 0.5 * s.betae < 0) {
     f.error(at('betae'), `D_0 = De + betae/2 = ${fmt(s.De + 0.5 * s.betae)} cm-1 is negative: the centrifugal distortion of the lowest vibrational level cannot raise the rotational levels`, {
+      code: 'diatomic-d0-negative',
       value: raw.betae,
       expected: `betae >= ${fmt(-2 * s.De)} cm-1 (D_0 >= 0; betae is usually a few percent of De, check its sign and unit)`,
     });
@@ -680,11 +796,13 @@ function checkHigherOrderConstants(f: Findings, s: DiatomicState, i: number, raw
     if (value === undefined) return;
     if (lower === 0) {
       f.warn(at(field), `${field} = ${fmt(value)} cm-1 is given but ${lowerName} is 0: a higher-order correction without the term it corrects`, {
+        code: 'higher-order-without-lower',
         value: raw[field],
         expected: `${lowerName} as well, or no ${field}`,
       });
     } else if (Math.abs(value) > HIGHER_ORDER_RATIO_LIMIT * Math.abs(lower)) {
       f.warn(at(field), `|${field}| = ${fmt(Math.abs(value))} cm-1 is more than ${HIGHER_ORDER_RATIO_LIMIT} of ${lowerName} = ${fmt(lower)} cm-1; higher-order constants are usually a few percent of the one before (check the unit)`, {
+        code: 'higher-order-too-large',
         value: raw[field],
         expected: `|${field}| << |${lowerName}|`,
       });
@@ -704,6 +822,7 @@ function checkHigherOrderConstants(f: Findings, s: DiatomicState, i: number, raw
     const ratio = s.He / estimate;
     if (!(ratio >= 0.1 && ratio <= 10)) {
       f.warn(at('He'), `He = ${fmt(s.He)} cm-1 is ${ratio < 0 ? 'of the other sign from' : 'more than a factor of 10 away from'} the estimate (2De/(3we^2))(12Be^2 - alphae we) = ${fmt(estimate)} cm-1 (Herzberg 1950)`, {
+        code: 'diatomic-he-estimate',
         value: raw.He,
         expected: `He of the order of ${fmt(estimate)} cm-1 in the convention E = ... - D_v J^2(J+1)^2 + He J^3(J+1)^3 (check the sign and the unit)`,
       });
@@ -717,6 +836,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
   const rawStates = ctx.input.electronic_states as unknown[];
   if (ground && ground.energy !== 0) {
     f.error(['electronic_states', 0, 'energy'], `the first electronic state must be the ground state at energy 0, got ${fmt(ground.energy)} cm-1`, {
+      code: 'ground-state-not-zero',
       value: (rawStates[0] as Obj).energy,
       expected: 'the ground state first, with energy 0',
     });
@@ -724,6 +844,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
   states.forEach((s, i) => {
     if (s && i > 0 && s.energy === 0) {
       f.warn(['electronic_states', i, 'energy'], 'a second electronic state at Te = 0; is a state listed twice?', {
+        code: 'electronic-state-repeated',
         value: 0,
         expected: 'Te > 0 for excited states (a degenerate state is listed once with its total degeneracy)',
       });
@@ -731,6 +852,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
   });
   if (ground && ground.dissociationEnergy !== undefined && d0 !== undefined && Math.abs(ground.dissociationEnergy - d0) > 1e-9 * d0) {
     f.error(['electronic_states', 0, 'dissociation_energy'], `the ground state's dissociation_energy (${fmt(ground.dissociationEnergy)} cm-1) differs from the molecule's (${fmt(d0)} cm-1)`, {
+      code: 'dissociation-energy-mismatch',
       value: (rawStates[0] as Obj).dissociation_energy,
       expected: "the same value, or leave it out (the ground state uses the molecule's dissociation_energy)",
     });
@@ -739,6 +861,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
     const g0 = termValue(ground, 0);
     if (d0 <= g0) {
       f.error(['dissociation_energy'], `dissociation energy D0 = ${fmt(d0)} cm-1 is below the zero-point energy G(0) = ${fmt(g0)} cm-1 of the ground state`, {
+        code: 'dissociation-below-zpe',
         value: ctx.input.dissociation_energy,
         expected: 'D0 measured from the lowest level, well above G(0) = we/2 - wexe/4 + weye/8 + weze/16 (check the unit)',
       });
@@ -751,12 +874,14 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
     let negativeDvWarned = false;
     if (s.wexe < 0) {
       f.warn(['electronic_states', i, 'wexe'], 'negative anharmonicity wexe: vibrational spacings grow with v', {
+        code: 'negative-anharmonicity',
         value: (rawStates[i] as Obj).wexe,
         expected: 'wexe > 0 for almost every state (check the sign convention: G(v) = we(v+1/2) - wexe(v+1/2)^2 + ...)',
       });
     }
     if (s.De > 0.01 * s.Be) {
       f.warn(['electronic_states', i, 'De'], `centrifugal distortion De = ${fmt(s.De)} cm-1 is more than 1% of Be; check the unit (De is usually ~1e-6 of Be)`, {
+        code: 'centrifugal-too-large',
         value: (rawStates[i] as Obj).De,
         expected: 'De << Be',
       });
@@ -769,6 +894,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
     if (limit === undefined) return;
     if (limit <= 0) {
       f.error(['electronic_states', i, 'energy'], `state '${s.term}' lies entirely above the dissociation limit (its lowest level is ${fmt(-limit)} cm-1 above it)`, {
+        code: 'state-above-limit',
         value: (rawStates[i] as Obj).energy,
         expected: `a bound state below the limit at ${fmt(d0 ?? 0)} cm-1, or its own dissociation_energy`,
       });
@@ -777,6 +903,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
     const g0 = termValue(s, 0);
     if (termValue(s, 1) <= g0) {
       f.error(['electronic_states', i, 'wexe'], `the vibrational levels of state '${s.term}' turn over before v = 1 (G(1) <= G(0)); the ladder has no excited levels`, {
+        code: 'ladder-turns-over',
         value: (rawStates[i] as Obj).wexe,
         expected: 'we - 2 wexe + ... > 0 (check the units and signs of we, wexe, weye)',
       });
@@ -787,6 +914,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
       if (v > 0 && (gv <= termValue(s, v - 1) || gv - g0 >= limit)) break;
       if (v >= MAX_VIBRATIONAL_LEVELS) {
         f.error(['electronic_states', i, 'we'], `the vibrational levels of state '${s.term}' never reach the dissociation limit: more than ${MAX_VIBRATIONAL_LEVELS} bound levels`, {
+          code: 'ladder-endless',
           value: (rawStates[i] as Obj).we,
           expected: 'constants and dissociation energy in consistent units (cm-1 when bare numbers)',
         });
@@ -798,6 +926,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
         const byGamma = s.gammae !== undefined && s.Be - s.alphae * (v + 0.5) > 0;
         const field = byGamma ? 'gammae' : 'alphae';
         f.error(['electronic_states', i, field], `B_v = Be - alphae(v+1/2)${s.gammae !== undefined ? ' + gammae(v+1/2)^2' : ''} is ${fmt(bv)} cm-1 at v = ${v}, below the dissociation limit: the rotational ladder of that level would not rise`, {
+          code: 'rotational-ladder-falls',
           value: (rawStates[i] as Obj)[field],
           expected: byGamma
             ? `gammae > ${fmt(-(s.Be - s.alphae * (v + 0.5)) / ((v + 0.5) * (v + 0.5)))} cm-1 so that B_v stays positive for every bound level (check its sign)`
@@ -810,6 +939,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
       if (2 * bv - 4 * dv + 8 * hv <= 0) {
         const field = hv < 0 && 2 * bv - 4 * dv > 0 ? 'He' : 'De';
         f.error(['electronic_states', i, field], `E(v,1) <= E(v,0) at v = ${v} (2B_v - 4D_v + 8H_v = ${fmt(2 * bv - 4 * dv + 8 * hv)} cm-1), below the dissociation limit: the rotational ladder of that level would not rise`, {
+          code: 'rotational-ladder-falls',
           value: (rawStates[i] as Obj)[field],
           expected: 'centrifugal terms that are small corrections to B_v J(J+1) (D_v << B_v, |H_v| << D_v; check the units)',
         });
@@ -818,6 +948,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
       if (dv < 0 && v > 0 && !negativeDvWarned) {
         negativeDvWarned = true;
         f.warn(['electronic_states', i, 'betae'], `D_v = De + betae(v+1/2) is ${fmt(dv)} cm-1 at v = ${v}, below the dissociation limit: the linear D_v is extrapolated past where it holds, and those J ladders rise faster than B_v J(J+1)`, {
+          code: 'centrifugal-extrapolated',
           value: (rawStates[i] as Obj).betae,
           expected: `D_v > 0 for every bound level: |betae| < ${fmt(s.De / (v + 0.5))} cm-1, or constants fitted up to this v`,
         });
@@ -828,6 +959,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
       if (v === 0 && top.turnsOver && top.energy < EARLY_TURNOVER_FRACTION * room) {
         const field = hv < 0 ? 'He' : 'De';
         f.warn(['electronic_states', i, field], `the J ladder of v = 0 of state '${s.term}' turns over at J = ${Math.floor(Math.sqrt(top.x + 0.25) - 0.5)}, ${fmt(top.energy)} cm-1 above J = 0, while the dissociation limit is ${fmt(room)} cm-1 above it: the truncated level expression crowds and then loses the high-J levels, so Cp and S come out wrong at high temperature`, {
+          code: 'j-ladder-turns-over',
           value: (rawStates[i] as Obj)[field],
           expected: hv < 0
             ? 'He from the tables (its sign: usually that of 12 Be^2 - alphae we)'
@@ -839,6 +971,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
   });
   if (totalLevels > MAX_ROVIBRATIONAL_LEVELS) {
     f.error(['electronic_states'], `the level sum would visit about ${fmt(totalLevels)} rovibrational levels; levels this dense are effectively a never-ending ladder`, {
+      code: 'too-many-levels',
       expected: `at most ${fmt(MAX_ROVIBRATIONAL_LEVELS)} levels: check the units of Be and dissociation_energy`,
     });
   }
@@ -863,6 +996,7 @@ function readSpinMixture(ctx: Ctx): NuclearSpinMixture {
   const given = raw === 'equilibrium' || raw === 'frozen' ? raw : undefined;
   if (given !== undefined && input.nuclear_spin_weights === undefined) {
     f.error(['nuclear_spin_mixture'], 'nuclear_spin_mixture needs nuclear_spin_weights: without them the symmetry number divides every level and there is no even/odd-J mixture to choose', {
+      code: 'spin-mixture-without-weights',
       key: true,
       value: raw,
       expected: 'nuclear_spin_weights {even, odd} on a homonuclear diatomic (e.g. {even: 1, odd: 3} for H2), or no nuclear_spin_mixture',
@@ -879,6 +1013,7 @@ function readDiatomic(ctx: Ctx): DiatomicReading {
   if (isObj(rawSpin)) {
     if (c && c.known && !(c.symbols.length === 1 && c.atoms === 2)) {
       f.error(['nuclear_spin_weights'], 'nuclear spin weights apply only to a homonuclear diatomic (two atoms of one element)', {
+        code: 'spin-weights-not-homonuclear',
         key: true,
         value: input.composition,
         expected: 'no nuclear_spin_weights for a heteronuclear molecule (its symmetry number is 1)',
@@ -887,6 +1022,7 @@ function readDiatomic(ctx: Ctx): DiatomicReading {
     if (Number.isInteger(rawSpin.even) && Number.isInteger(rawSpin.odd) && (rawSpin.even as number) >= 0 && (rawSpin.odd as number) >= 0) {
       if (rawSpin.even === 0 && rawSpin.odd === 0) {
         f.error(['nuclear_spin_weights'], 'nuclear spin weights are both 0: no rotational level would exist', {
+          code: 'spin-weights-zero',
           value: rawSpin,
           expected: 'at least one positive weight, e.g. {even: 1, odd: 3} for H2',
         });
@@ -912,6 +1048,10 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
   const name = isObj(input) && typeof input.name === 'string' ? input.name : undefined;
   const schemaDiagnostics = checkAgainstSchema(validateAgainstSpeciesSchema, doc, name === undefined ? {} : { species: name });
   if (!isObj(input)) return { diagnostics: schemaDiagnostics };
+  // A field the schema already rejected is not reported again by the bounds.
+  const rejected = schemaDiagnostics.map((d) => d.path);
+  const under = (p: string, q: string) => p === q || (p.startsWith(q) && (p[q.length] === '.' || p[q.length] === '['));
+  schemaDiagnostics.push(...checkPlausibility(doc, name).filter((d) => !rejected.some((q) => under(d.path, q))));
 
   const f = new Findings(doc, name);
   const structure = (['atom', 'diatomic', 'linear', 'nonlinear'] as const).find((s) => s === input.structure);
@@ -919,6 +1059,7 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
   ctx.composition = readComposition(input.composition, f);
   checkName(ctx);
   checkComposition(ctx);
+  checkElectron(ctx.f, ctx.composition, input.charge, structure, input.electronic_levels);
   checkSources(ctx);
   const enthalpy = readEnthalpy(ctx);
   const temperatureRanges = readTemperatureRanges(ctx);
@@ -947,16 +1088,10 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
     const electronicLevels = readElectronicLevels(ctx);
     if (canBuild && electronicLevels) species = { ...common(), structure, electronicLevels } as Species;
   } else if (structure === 'linear' || structure === 'nonlinear') {
-    if (sigma !== undefined) checkSymmetryNumber(ctx, sigma, false);
-    const electronicLevels = readElectronicLevels(ctx);
-    const { rotationalConstants, vibrations } = readPolyatomic(ctx);
-    const internal = readInternalRotors(ctx);
-    if (canBuild && electronicLevels && rotationalConstants && vibrations && sigma !== undefined && internal.ok) {
-      const rc = structure === 'nonlinear' ? rotationalConstants.slice().sort((a, b) => b - a) : rotationalConstants;
-      // The key only when rotors are given: every species without them keeps its normalised form and hash.
-      const rotors = internal.rotors ? { internalRotors: internal.rotors } : {};
-      species = { ...common(), structure, symmetryNumber: sigma, electronicLevels, rotationalConstants: rc, vibrations, ...rotors } as Species;
-    }
+    // With conformers the species-level molecular fields are those of the lowest conformer.
+    const conformers = input.conformers !== undefined ? readConformerParts(ctx) : undefined;
+    const part = input.conformers !== undefined ? lowestConformerPart(conformers) : readMolecularPart(ctx);
+    if (canBuild && part) species = { ...common(), structure, ...part, ...(conformers ? { conformers } : {}) } as Species;
   } else if (structure === 'diatomic') {
     const { states, d0, spin, mixture } = readDiatomic(ctx);
     if (sigma !== undefined) checkSymmetryNumber(ctx, sigma, spin !== undefined);
@@ -970,12 +1105,16 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
     }
   }
 
+  if (species && input.uncertainties !== undefined) {
+    const u = readUncertainties(input.uncertainties, species, (sev, at, message, extra) => f.add(sev, ['uncertainties', ...at], message, extra));
+    if (u) species.uncertainties = u;
+  }
   const diagnostics = [...schemaDiagnostics, ...f.diagnostics].sort(compareDiagnostics);
   const failed = diagnostics.some((d) => d.severity === 'error');
   if (failed || !species) {
     if (!failed) {
       // Defensive: normalisation could not complete although no check failed; never pass on a half species.
-      diagnostics.push({ severity: 'error', file: doc.file, path: '', message: 'species could not be normalised', species: name });
+      diagnostics.push({ severity: 'error', code: 'not-normalised', file: doc.file, path: '', message: 'species could not be normalised', species: name });
     }
     return { diagnostics };
   }
@@ -1023,6 +1162,7 @@ function nameFindings(docs: readonly LoadedDocument[], withCaseWarnings: boolean
       out.push(
         here({
           severity: 'error',
+          code: 'duplicate-name',
           file: doc.file,
           path: 'name',
           species: name,
@@ -1041,6 +1181,7 @@ function nameFindings(docs: readonly LoadedDocument[], withCaseWarnings: boolean
       out.push(
         here({
           severity: 'warning',
+          code: 'name-differs-in-case',
           file: doc.file,
           path: 'name',
           species: name,

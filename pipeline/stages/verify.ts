@@ -18,6 +18,7 @@ export function verifySpecies(
   const violations = assessFit(fit, samples, { cp, h, s, perCp: { ...perCp }, continuityOrder });
   return violations.map((v) => ({
     severity: 'error' as const,
+    code: `fit-${v.quantity}`,
     ...where,
     // fit.cp / fit.cp.relative_to_cp: the quantity and the part of its limit that applied.
     path: `fit.${v.quantity}${v.limitPart === 'perCp' ? '.relative_to_cp' : ''}`,

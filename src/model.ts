@@ -119,8 +119,18 @@ interface SpeciesBase {
   structure: Structure;
   /** Optional per-species temperature ranges for the fit; pipeline settings supply the default. */
   temperatureRanges?: { low?: number; mid?: number; high?: number };
+  /** Optional per-species fit limits (same meaning as the settings' tolerances); settings supply the rest. */
+  fitLimits?: SpeciesFitLimits;
   /** Standard uncertainties of the inputs (absent when the input declares none: every u is then zero). */
   uncertainties?: InputUncertainties;
+}
+
+/** Absolute parts and multiples of Cp/R of the fit limits of one species (dimensionless). */
+export interface SpeciesFitLimits {
+  cp?: number;
+  h?: number;
+  s?: number;
+  relativeToCp?: { cp?: number; h?: number; s?: number };
 }
 
 /**

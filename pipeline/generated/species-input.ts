@@ -393,6 +393,40 @@ export interface SpeciesInput {
      */
     high?: number;
   };
+  /**
+   * Optional per-species fit limits, same keys as tolerances in qforge.yaml: the limit of q = cp, h, s at T is max(q, relative_to_cp.q × Cp/R(T)). Missing keys come from the database settings.
+   */
+  tolerances?: {
+    /**
+     * Absolute part of the Cp/R limit (dimensionless).
+     */
+    cp?: number;
+    /**
+     * Absolute part of the H/RT limit (dimensionless).
+     */
+    h?: number;
+    /**
+     * Absolute part of the S/R limit (dimensionless).
+     */
+    s?: number;
+    /**
+     * Multiples of the computed Cp/R.
+     */
+    relative_to_cp?: {
+      /**
+       * Size-scaled part of the Cp/R limit: a multiple of the computed Cp/R.
+       */
+      cp?: number;
+      /**
+       * Size-scaled part of the H/RT limit: a multiple of the computed Cp/R.
+       */
+      h?: number;
+      /**
+       * Size-scaled part of the S/R limit: a multiple of the computed Cp/R.
+       */
+      s?: number;
+    };
+  };
 }
 /**
  * One accepted warning: its stable code and the reason a person accepts it.

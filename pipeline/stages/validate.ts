@@ -26,6 +26,7 @@ import type {
   Species,
   Structure,
   Vibration,
+  SpeciesFitLimits,
 } from '../../src/model.js';
 import { ENTHALPY_UNITS_TO_J_PER_MOL } from '../../src/units.js';
 import { compareDiagnostics, type Diagnostic } from '../core/diagnostics.js';
@@ -328,6 +329,21 @@ function readTemperatureRanges(ctx: Ctx): { low?: number; mid?: number; high?: n
         expected: 'low < mid < high',
       });
     }
+  }
+  return out;
+}
+
+/** The species' own fit limits (schema-checked shape; only finite values are kept). */
+function readFitLimits(ctx: Ctx): SpeciesFitLimits | undefined {
+  const raw = ctx.input.tolerances;
+  if (!isObj(raw)) return undefined;
+  const out: SpeciesFitLimits = {};
+  for (const q of ['cp', 'h', 's'] as const) if (isFiniteNumber(raw[q]) && raw[q] > 0) out[q] = raw[q];
+  const rel = raw.relative_to_cp;
+  if (isObj(rel)) {
+    const r: NonNullable<SpeciesFitLimits['relativeToCp']> = {};
+    for (const q of ['cp', 'h', 's'] as const) if (isFiniteNumber(rel[q]) && rel[q] >= 0) r[q] = rel[q];
+    out.relativeToCp = r;
   }
   return out;
 }
@@ -886,6 +902,7 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
   checkSources(ctx);
   const enthalpy = readEnthalpy(ctx);
   const temperatureRanges = readTemperatureRanges(ctx);
+  const fitLimits = readFitLimits(ctx);
   const sigma = isPositiveInteger(input.symmetry_number) ? input.symmetry_number : undefined;
 
   let species: Species | undefined;
@@ -903,7 +920,7 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
       enthalpyOfFormation: enthalpy!,
       sources: (input.sources as string[]).slice(),
     };
-    return temperatureRanges ? { ...base, temperatureRanges } : base;
+    return { ...base, ...(temperatureRanges ? { temperatureRanges } : {}), ...(fitLimits ? { fitLimits } : {}) };
   };
 
   if (structure === 'atom') {

@@ -153,6 +153,8 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .configureOutput({
       writeOut: (s) => io.stdout.write(s),
       writeErr: (s) => io.stderr.write(s),
+      // Argument errors carry the program name like every other error line.
+      outputError: (s, write) => write(s.startsWith('error:') ? `qforge: ${s}` : s),
       getOutHelpWidth: () => HELP_WIDTH,
       getErrHelpWidth: () => HELP_WIDTH,
     });
@@ -249,25 +251,22 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
       if (e.code === 'commander.helpDisplayed' || e.code === 'commander.version') return 0;
       // `qforge help [cmd]` asks for help (0); help shown because no command was given is usage (2).
       if (e.code === 'commander.help') return e.exitCode === 0 ? 0 : 2;
-      return 2;
+      const { commanderErrorCode, reportCliError } = await import('./commands/cli-error.js');
+      return reportCliError(io, argv, commanderErrorCode(e.code), e.message.replace(/^error: /, ''), 2, { printed: true });
     }
+    const { reportCliError } = await import('./commands/cli-error.js');
     // A malformed --report-against build or reference table is bad data (exit 1), like in diff/compare.
     if (['BuildLockedError', 'ReadBuildError', 'ReferenceError'].includes((e as Error)?.name)) {
-      io.stderr.write(`qforge: error: ${(e as Error).message}\n`);
-      return 1;
+      return reportCliError(io, argv, (e as Error).name === 'BuildLockedError' ? 'build-locked' : 'unreadable-input', (e as Error).message, 1);
     }
     if (e instanceof UsageError || ['UsageError', 'OutputFolderError'].includes((e as Error)?.name)) {
-      io.stderr.write(`qforge: error: ${(e as Error).message}\n`);
-      return 2;
+      return reportCliError(io, argv, (e as Error).name === 'OutputFolderError' ? 'output-folder' : 'usage', (e as Error).message, 2);
     }
     // Any file-system error that escaped a command (a disk that filled, a folder that vanished, a
     // permission): the path and the OS reason, not a stack trace.
     const { describeFsError } = await import('./storage/atomic-write.js');
     const fs = describeFsError(e);
-    if (fs) {
-      io.stderr.write(`qforge: error: ${fs}\n`);
-      return 1;
-    }
+    if (fs) return reportCliError(io, argv, 'file-system', fs, 1);
     throw e;
   }
 }

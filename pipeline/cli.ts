@@ -168,10 +168,11 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('-j, --jobs <n>', 'species processed concurrently', positiveInt, 4)
     .option('-q, --quiet', 'no progress output')
     .option('--json', 'print the build summary as JSON on stdout')
+    .option('--strict', 'every warning not accepted in writing (accepted_warnings) is an error')
     .option('--report', 'also write report.html (overview and charts of every species)')
     .option('--report-against <old>', 'report: compare with this earlier build folder (implies --report)')
     .addHelpText('after', EXAMPLES.build)
-    .action(async (dir: string, o: { out: string; cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; report?: boolean; reportAgainst?: string }) => {
+    .action(async (dir: string, o: { out: string; cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; strict?: boolean; report?: boolean; reportAgainst?: string }) => {
       exitCode = await buildCommand(io, abs(dir), dir, abs(o.out), o.out, o);
     });
 
@@ -180,8 +181,9 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .description('load and validate only: report every problem of every file at once')
     .argument('[dir]', 'database folder', 'species')
     .option('--json', 'print the diagnostics as JSON on stdout')
+    .option('--strict', 'every warning not accepted in writing (accepted_warnings) is an error')
     .addHelpText('after', EXAMPLES.check)
-    .action(async (dir: string, o: { json?: boolean }) => {
+    .action(async (dir: string, o: { json?: boolean; strict?: boolean }) => {
       exitCode = await checkCommand(io, abs(dir), o);
     });
 
@@ -347,7 +349,7 @@ async function buildCommand(
   dirLabel: string,
   out: string,
   outLabel: string,
-  o: { cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; report?: boolean; reportAgainst?: string },
+  o: { cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; strict?: boolean; report?: boolean; reportAgainst?: string },
 ): Promise<number> {
   await assertFolder(dir, `database folder ${dirLabel}`);
   const [{ runBuild }, { formatDiagnostic }, { createProgressReporter }, { assertReplaceable }, { CACHE_DIR_NAME }] = await Promise.all([
@@ -386,6 +388,7 @@ async function buildCommand(
       displayBase: io.cwd,
       jobs: o.jobs,
       keepGoing: !!o.keepGoing,
+      strict: !!o.strict,
       cacheDir,
       ...(o.report || o.reportAgainst !== undefined
         ? { report: o.reportAgainst !== undefined ? { against: { path: path.resolve(io.cwd, o.reportAgainst), label: o.reportAgainst } } : {} }
@@ -439,10 +442,10 @@ async function buildCommand(
   return report.exitCode;
 }
 
-async function checkCommand(io: CliIo, dir: string, o: { json?: boolean }): Promise<number> {
+async function checkCommand(io: CliIo, dir: string, o: { json?: boolean; strict?: boolean }): Promise<number> {
   await assertFolder(dir, `database folder ${displayPath(io.cwd, dir)}`);
   const [{ checkDatabase }, { formatDiagnostic, hasErrors }] = await Promise.all([import('./runner.js'), import('./core/diagnostics.js')]);
-  const report = await checkDatabase({ dir, displayBase: io.cwd });
+  const report = await checkDatabase({ dir, displayBase: io.cwd, strict: !!o.strict });
   printDiagnostics(io, report.diagnostics, formatDiagnostic);
   const errors = report.diagnostics.filter((d) => d.severity === 'error').length;
   const warnings = report.diagnostics.length - errors;

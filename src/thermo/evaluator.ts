@@ -8,6 +8,7 @@ import type {
   NonlinearSpecies,
   NuclearSpinMixture,
   PhysicsOptions,
+  PolyatomicMolecularPart,
   Species,
   ThermoEvaluator,
   ThermoGrid,
@@ -15,7 +16,7 @@ import type {
 } from '../model.js';
 import { diatomicLevels, diatomicSpinManifolds, higherOrderTermsOf, type DiatomicStateLevels } from '../partition/diatomic.js';
 import { electronicLevelList } from '../partition/electronic.js';
-import { addPointwise, temperatureGrid, zeroGridMoments, type GridMoments, type TemperatureGrid } from '../partition/grid-moments.js';
+import { addPointwise, momentsAt, temperatureGrid, zeroGridMoments, type GridMoments, type TemperatureGrid } from '../partition/grid-moments.js';
 import { addHarmonicGrid } from '../partition/harmonic.js';
 import { HINDERED_ROTOR_CEILING_TEMPERATURE, hinderedRotorLevels } from '../partition/hindered-rotor.js';
 import type { LevelList } from '../partition/level-sum.js';
@@ -27,6 +28,7 @@ import { addFrozenMixtureGrid, DEFAULT_NUCLEAR_SPIN_MIXTURE, type GridContributi
 import { addTranslationalGrid } from '../partition/translational.js';
 import { ELECTRON_CONVENTION, formationEnthalpyAt298 } from './reference-states.js';
 import { vibrationFactor } from './vibration-model.js';
+import { conformerSum } from './conformers.js';
 
 export class PhysicsOptionsError extends Error {
   constructor(message: string) {
@@ -59,6 +61,16 @@ const pointwise =
   (moments: (T: number) => PartitionMoments): GridFactor =>
   (grid, into) =>
     addPointwise(moments, grid, into);
+
+/** The per-point form of a set of grid factors (for models that combine moments per temperature). */
+const momentsOfFactors =
+  (factors: readonly GridFactor[]) =>
+  (T: number): PartitionMoments => {
+    const grid = temperatureGrid([T]);
+    const m = zeroGridMoments(1);
+    for (const f of factors) f(grid, m);
+    return momentsAt(m, 0);
+  };
 
 const levelSumFactor =
   (levels: LevelList): GridFactor =>
@@ -145,9 +157,18 @@ export function createThermoEvaluator(
       break;
     }
     case 'linear':
-    case 'nonlinear':
-      internal = { factors: polyatomicInternal(species, contributions, maxTemperature) };
+    case 'nonlinear': {
+      const conformers = species.conformers;
+      if (conformers) {
+        // The conformer sum combines per-temperature moments; each conformer is the plain factorisation.
+        const of = (part: PolyatomicMolecularPart, lines: string[]) =>
+          momentsOfFactors(polyatomicInternal({ ...species, ...part } as typeof species, lines, maxTemperature));
+        internal = { factors: [pointwise(conformerSum(conformers, of, contributions))] };
+      } else {
+        internal = { factors: polyatomicInternal(species, contributions, maxTemperature) };
+      }
       break;
+    }
     case 'diatomic': {
       const spin = species.nuclearSpinWeights;
       const mixture: NuclearSpinMixture | undefined = spin ? (species.nuclearSpinMixture ?? DEFAULT_NUCLEAR_SPIN_MIXTURE) : undefined;
@@ -216,13 +237,22 @@ export function createThermoEvaluator(
     addTranslationalGrid(mass, p, g, m);
     if ('mixture' in internal) {
       internal.mixture(g, out);
+      for (let j = 0; j < n; j++) {
+        out.cp[j]! += m.varU[j]!;
+        out.hmh0[j]! += m.meanU[j]!;
+        out.s[j]! += m.lnQ[j]! + m.meanU[j]!;
+      }
     } else {
-      for (const factor of internal.factors) factor(g, m);
-    }
-    for (let j = 0; j < n; j++) {
-      out.cp[j]! += m.varU[j]!;
-      out.hmh0[j]! += m.meanU[j]!;
-      out.s[j]! += m.lnQ[j]! + m.meanU[j]!;
+      // The internal factors in their own sum, then added to translation: the same operations whatever
+      // combines them (one conformer gives back the plain species bit for bit).
+      const mi = zeroGridMoments(n);
+      for (const factor of internal.factors) factor(g, mi);
+      for (let j = 0; j < n; j++) {
+        const meanU = m.meanU[j]! + mi.meanU[j]!;
+        out.cp[j] = m.varU[j]! + mi.varU[j]!;
+        out.hmh0[j] = meanU;
+        out.s[j] = m.lnQ[j]! + mi.lnQ[j]! + meanU;
+      }
     }
     return out;
   };

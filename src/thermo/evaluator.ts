@@ -18,7 +18,8 @@ import { diatomicLevels, diatomicSpinManifolds, higherOrderTermsOf, type Diatomi
 import { electronicLevelList } from '../partition/electronic.js';
 import { addPointwise, momentsAt, temperatureGrid, zeroGridMoments, type GridMoments, type TemperatureGrid } from '../partition/grid-moments.js';
 import { addHarmonicGrid } from '../partition/harmonic.js';
-import { HINDERED_ROTOR_CEILING_TEMPERATURE, hinderedRotorLevels } from '../partition/hindered-rotor.js';
+import { describeTorsionPotential, HINDERED_ROTOR_CEILING_TEMPERATURE, hinderedRotorLevels } from '../partition/hindered-rotor.js';
+import { opticalIsomerFactor } from './optical-isomers.js';
 import type { LevelList } from '../partition/level-sum.js';
 import { addLevelSumGrid } from '../partition/level-sum-grid.js';
 import type { PartitionMoments } from '../partition/moments.js';
@@ -104,19 +105,21 @@ function polyatomicInternal(
   const harmonic = species.anharmonicity === undefined && species.centrifugalDistortion === undefined;
   const vibration: GridFactor = harmonic ? (grid, into) => addHarmonicGrid(species.vibrations, grid, into) : pointwise(vibrationAt);
   contributions.push(`electronic level sum (${species.electronicLevels.length} levels)`);
+  const optical = opticalIsomerFactor(species, contributions);
+  const constant: GridFactor[] = optical ? [pointwise(() => optical)] : [];
   // Each torsion is one more independent factor (its levels built here, once).
   const torsions = (species.internalRotors ?? []).map((r) => {
     const levels = hinderedRotorLevels(r, { ceilingTemperature: maxTemperature });
     contributions.push(
-      `hindered internal rotor, direct level sum (V0 = ${r.barrier} cm-1, n = ${r.foldedness}, sigma = ${r.symmetryNumber}, B = ${r.rotationalConstant} cm-1, ${levels.energies.length} levels, |m| <= ${levels.basisLimit})`,
+      `hindered internal rotor, direct level sum (${describeTorsionPotential(r)}, sigma = ${r.symmetryNumber}, B = ${r.rotationalConstant} cm-1, ${levels.energies.length} levels, |m| <= ${levels.basisLimit})`,
     );
     return levelSumFactor(levels.list);
   });
-  return [rotor, vibration, levelSumFactor(el), ...torsions];
+  return [rotor, ...constant, vibration, levelSumFactor(el), ...torsions];
 }
 
 /**
- * Build the thermodynamic model of a species. Level lists are built here, once; `at(T)` only sums them.
+ * Build the thermodynamic model of a species. Level lists are built here, once; `grid` and `at` only sum them.
  *
  * Factorisation by structure (each factor documented in src/partition/):
  *   atom       q = q_trans · q_el

@@ -39,7 +39,8 @@ Examples:
   qforge build --keep-going --json     write the good species, print the summary
   qforge build --no-cache --jobs 1     recompute everything, one at a time
 
-Outputs (in OUT): thermo.json, nasa7.txt, tables/<name>.csv, summary.json
+Outputs (in OUT): thermo.json, nasa7.txt, tables/<name>.csv, summary.json,
+and with --report (or outputs.report in qforge.yaml) report.html
 (summary.json holds timings; the other files are byte-identical for identical
 inputs). The cache lives in .qforge-cache/ inside the database folder
 (--cache-dir to move it; qforge cache prune drops entries no species uses).
@@ -123,6 +124,8 @@ interface BuildFlags {
   shard?: Shard;
   quiet?: boolean;
   json?: boolean;
+  report?: boolean;
+  reportAgainst?: string;
 }
 
 function shardArg(value: string): Shard {
@@ -210,6 +213,8 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('--shard <i/n>', 'build only shard I of N (by a stable hash of the species name); see qforge merge', shardArg)
     .option('-q, --quiet', 'no progress output')
     .option('--json', 'print the build summary as JSON on stdout')
+    .option('--report', 'also write report.html (overview and charts of every species)')
+    .option('--report-against <old>', 'report: compare with this earlier build folder (implies --report)')
     .addHelpText('after', EXAMPLES.build)
     .action(async (dir: string, o: BuildFlags & { out: string }) => {
       exitCode = await buildCommand(io, abs(dir), dir, abs(o.out), o.out, o);
@@ -314,7 +319,8 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
       if (e.code === 'commander.help') return e.exitCode === 0 ? 0 : 2;
       return 2;
     }
-    if ((e as Error)?.name === 'BuildLockedError') {
+    // A malformed --report-against build or reference table is bad data (exit 1), like in diff/compare.
+    if (['BuildLockedError', 'ReadBuildError', 'ReferenceError'].includes((e as Error)?.name)) {
       io.stderr.write(`qforge: error: ${(e as Error).message}\n`);
       return 1;
     }
@@ -453,6 +459,9 @@ async function buildCommand(
       keepGoing: !!o.keepGoing,
       ...(o.shard ? { shard: o.shard } : {}),
       cacheDir,
+      ...(o.report || o.reportAgainst !== undefined
+        ? { report: o.reportAgainst !== undefined ? { against: { path: path.resolve(io.cwd, o.reportAgainst), label: o.reportAgainst } } : {} }
+        : {}),
       onProgress: (e) => reporter.onProgress(e),
       hooks: {
         beforeSwap: () => waitForTestPause(io, 'before-swap'),

@@ -32,6 +32,7 @@ import { codeFingerprint } from './storage/code-fingerprint.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './core/version.js';
 import { displayPath } from './core/display-path.js';
 import { compareText, errorText } from './core/text.js';
+import { ReportWriter, type ReportRequest } from './report/build-report.js';
 
 export type StageName = 'load' | 'validate' | 'compute' | 'fit' | 'verify' | 'emit';
 
@@ -59,6 +60,8 @@ export interface BuildOptions extends CheckOptions {
   shard?: Shard;
   onProgress?: (e: ProgressEvent) => void;
   hooks?: PublishHooks;
+  /** Write report.html (also when the settings' outputs.report is true); see pipeline/report/. */
+  report?: ReportRequest;
 }
 
 /** One species document that passed validation. */
@@ -191,7 +194,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
       invalid.push({ doc, entry: invalidEntry(doc, file, [...(doc.yamlErrors ?? []), ...ds]) });
     }
     if (loaded.documents.length === 0 && !hasErrors(loaded.diagnostics)) {
-      const d: Diagnostic = { severity: 'warning', file, path: '', message: 'file holds no species' };
+      const d: Diagnostic = { severity: 'warning', code: 'file-holds-no-species', file, path: '', message: 'file holds no species' };
       diagnostics.push(d);
       addFileDiag(d);
     }
@@ -244,6 +247,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   if (discovered.files.length === 0 && !hasErrors(discovered.diagnostics)) {
     diagnostics.push({
       severity: 'error',
+      code: 'no-species-files',
       file: dir,
       path: '',
       message: 'no species files (*.yaml, *.yml) in the database folder',
@@ -360,9 +364,9 @@ export async function buildOneSpecies(
     timings: { load: v.loadMs, validate: v.validateMs },
   };
   const where = { file: v.displayFile, species: v.name, ...(v.positions.name ?? {}) };
-  const fail = (pathText: string, message: string) => {
+  const fail = (code: string, pathText: string, message: string) => {
     const pos = (pathText === 'temperature_ranges' ? v.positions.temperature_ranges : undefined) ?? v.positions.name;
-    out.diagnostics.push({ severity: 'error', ...where, ...(pos ?? {}), path: pathText, message });
+    out.diagnostics.push({ severity: 'error', code, ...where, ...(pos ?? {}), path: pathText, message });
   };
   const note = (kind: CacheKind, r: { outcome: CacheOutcome; reason?: string }) => {
     out.cache[kind] = r.outcome;
@@ -392,7 +396,7 @@ export async function buildOneSpecies(
   try {
     fitOptions = fitOptionsFor(plan.fitOptions);
   } catch (e) {
-    fail(v.species.temperatureRanges ? 'temperature_ranges' : '', `fit options: ${errorText(e)}`);
+    fail('fit-options', v.species.temperatureRanges ? 'temperature_ranges' : '', `fit options: ${errorText(e)}`);
     return out;
   }
   const inputHash = `sha256:${sha256Hex(canonicalJson(v.normalisedInput))}`;
@@ -413,7 +417,7 @@ export async function buildOneSpecies(
       out.timings[kind === 'samples' ? 'compute' : kind] = r.ms;
       return r.value;
     } catch (e) {
-      fail(failPath, `${what} failed: ${errorText(e)}`);
+      fail(kind === 'samples' ? 'compute-failed' : `${kind}-failed`, failPath, `${what} failed: ${errorText(e)}`);
       return undefined;
     }
   };
@@ -528,6 +532,9 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   });
   const cacheDir = opts.cacheDir === null ? undefined : (opts.cacheDir ?? defaultCacheDir(opts.dir));
   const cache = new StageCache(cacheDir);
+  // Opened before the species run so that a missing --report-against build fails at once.
+  const reportWriter =
+    check.settingsOk && (opts.report || settings.outputs.report) ? await ReportWriter.open(opts.report ?? {}, settings, opts.dir, opts.displayBase) : undefined;
 
   const jobs = Math.max(1, opts.jobs ?? 1);
   const total = shardSpecies.length;
@@ -592,6 +599,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
           if (!(e instanceof Nasa7FormatError) || e.record !== o.valid.name) throw e;
           o.diagnostics.push({
             severity: 'error',
+            code: 'record-not-writable',
             file: o.valid.displayFile,
             species: o.valid.name,
             ...((e.field.startsWith('elements') ? o.valid.positions.composition : o.valid.positions.name) ?? {}),
@@ -607,7 +615,18 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
       if (o.keys) usedKeys.push(...o.keys);
       speciesDiagnostics.push(...o.diagnostics);
       for (const n of o.cacheNotes) warnings.push(`${o.valid.name}: ${n}`);
-      summarySpecies.push(summaryEntry(o, ownDiagnostics.get(speciesKey(o.valid.displayFile, o.valid.name)) ?? [], tableMs));
+      const s = summaryEntry(o, ownDiagnostics.get(speciesKey(o.valid.displayFile, o.valid.name)) ?? [], tableMs);
+      summarySpecies.push(s);
+      reportWriter?.add({
+        name: o.valid.name,
+        file: o.valid.file,
+        status: s.status,
+        species: o.valid.species,
+        ...(o.built ? { computed: o.built.computed, fit: o.built.fit } : {}),
+        warnings: s.warnings,
+        errors: s.errors,
+        cacheHit: s.cache_hit,
+      });
     };
 
     if (check.settingsOk) {
@@ -651,6 +670,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
       if (!hasErrors(allDiagnostics)) {
         allDiagnostics.push({
           severity: 'error',
+          code: 'database-empty',
           file: opts.displayBase ? displayPath(opts.displayBase, opts.dir) : opts.dir,
           path: '',
           message: 'the database holds no species',
@@ -665,6 +685,11 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
 
     const finalStaging = mayWrite ? (staging ?? (await OutputStaging.open(opts.out))) : undefined;
     if (finalStaging) await (emitter ?? (await StreamingEmitter.open(finalStaging, settings))).finish();
+    if (finalStaging && reportWriter) {
+      const report = reportWriter.finish(status, shardInvalid.map((i) => `${i.file}#${i.document}: ${i.diagnostics.find((d) => d.severity === 'error')?.message ?? 'invalid'}`));
+      await finalStaging.write('report.html', report.main);
+      for (const [page, html] of report.pages) await finalStaging.write(page, html);
+    }
     const outputs = finalStaging ? [...[...finalStaging.written].sort(), 'summary.json'] : [];
     emitMs += performance.now() - tEmit;
 

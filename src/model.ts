@@ -111,7 +111,62 @@ export interface AtomSpecies extends SpeciesBase {
   electronicLevels: ElectronicLevel[];
 }
 
-export interface LinearSpecies extends SpeciesBase {
+/**
+ * Anharmonic constants of a polyatomic (src/partition/anharmonic-vibration.ts); with them the wavenumbers of
+ * `vibrations` are harmonic ω_i and the rotational constants are those of the vibrational ground state.
+ * All cm⁻¹; mode indices are 0-based into `vibrations`, i <= j.
+ */
+export interface Anharmonicity {
+  /** x_ij: + x_ij (v_i + d_i/2)(v_j + d_j/2) in G(v). */
+  x: Array<[number, number, number]>;
+  /** g_tt': + g_tt' l_t l_t' for doubly degenerate modes t, t'. */
+  g: Array<[number, number, number]>;
+  /** Per mode: [α_B] (linear) or [α_A, α_B, α_C] (nonlinear); B_v = B_0 − Σ α_i v_i. Absent: no coupling. */
+  alpha?: number[][];
+}
+
+/** First-order centrifugal distortion, cm⁻¹: linear {DJ}; nonlinear Watson A-reduced {DJ, DJK, DK, dJ, dK}. */
+export interface CentrifugalDistortion {
+  DJ: number;
+  DJK?: number;
+  DK?: number;
+  dJ?: number;
+  dK?: number;
+}
+
+/** One conformer of a polyatomic species: its own molecular part and its energy above the lowest one. */
+export interface Conformer extends PolyatomicMolecularPart {
+  label: string;
+  /** Lowest level (zero-point level) of this conformer above that of the lowest conformer, cm⁻¹. */
+  energy: number;
+}
+
+/** The fields that describe one molecular structure of a linear or nonlinear species. */
+export interface PolyatomicMolecularPart {
+  symmetryNumber: number;
+  electronicLevels: ElectronicLevel[];
+  rotationalConstants: number[];
+  vibrations: Vibration[];
+  internalRotors?: InternalRotor[];
+  anharmonicity?: Anharmonicity;
+  centrifugalDistortion?: CentrifugalDistortion;
+  /** Cut of the anharmonic vibrational level sum above the lowest level, cm⁻¹ (only with anharmonicity). */
+  dissociationEnergy?: number;
+  /** Scale factor already applied to `vibrations` (recorded for the model summary). */
+  vibrationScaleFactor?: { value: number; source: string };
+}
+
+/** Optional extensions of the polyatomic model; absent keys keep the normalised form (and hash) unchanged. */
+interface PolyatomicExtensions {
+  anharmonicity?: Anharmonicity;
+  centrifugalDistortion?: CentrifugalDistortion;
+  dissociationEnergy?: number;
+  vibrationScaleFactor?: { value: number; source: string };
+  /** When present the partition function is the Boltzmann-weighted sum over these (src/thermo/conformers.ts). */
+  conformers?: Conformer[];
+}
+
+export interface LinearSpecies extends SpeciesBase, PolyatomicExtensions {
   structure: 'linear';
   symmetryNumber: number;
   electronicLevels: ElectronicLevel[];
@@ -122,7 +177,7 @@ export interface LinearSpecies extends SpeciesBase {
   internalRotors?: InternalRotor[];
 }
 
-export interface NonlinearSpecies extends SpeciesBase {
+export interface NonlinearSpecies extends SpeciesBase, PolyatomicExtensions {
   structure: 'nonlinear';
   symmetryNumber: number;
   electronicLevels: ElectronicLevel[];

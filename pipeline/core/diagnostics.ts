@@ -41,7 +41,7 @@ function showValue(v: unknown): string {
   return s.length > 60 ? `${s.slice(0, 57)}...` : s;
 }
 
-/** `file:line:col: error: [species] path: message (got V; expected E)` — one line per diagnostic. */
+/** `file:line:col: error: [species] path: message (got V; expected E) [code]` — one line per diagnostic. */
 export function formatDiagnostic(d: Diagnostic): string {
   const where = [d.file, d.line, d.column].filter((x) => x !== undefined).join(':');
   const who = d.species ? `[${d.species}] ` : '';
@@ -50,7 +50,8 @@ export function formatDiagnostic(d: Diagnostic): string {
   if (d.value !== undefined) extras.push(`got ${showValue(d.value)}`);
   if (d.expected) extras.push(`expected ${d.expected}`);
   const tail = extras.length ? ` (${extras.join('; ')})` : '';
-  return `${where}: ${d.severity}: ${who}${field}${d.message}${tail}`;
+  const code = d.code ? ` [${d.code}]` : '';
+  return `${where}: ${d.severity}: ${who}${field}${d.message}${tail}${code}`;
 }
 
 

@@ -54,7 +54,7 @@ export interface DatabaseSettings {
   };
   /** Dimensionless: |ΔCp/R|, |ΔH/RT|, |ΔS/R|. */
   tolerances: QuantityTriple;
-  outputs: { thermo_json: boolean; nasa7: boolean; tables: boolean };
+  outputs: { thermo_json: boolean; nasa7: boolean; tables: boolean; report: boolean };
   tables: { from: number; to: number; step: number; extra: number[] };
   references: {
     files: string[];
@@ -76,7 +76,7 @@ export const DEFAULT_SETTINGS: Readonly<DatabaseSettings> = Object.freeze({
     sampling_step: 10,
   },
   tolerances: { cp: 0.1, h: 0.02, s: 0.02 },
-  outputs: { thermo_json: true, nasa7: true, tables: true },
+  outputs: { thermo_json: true, nasa7: true, tables: true, report: false },
   tables: { from: 200, to: 6000, step: 100, extra: [298.15] },
   references: { files: [], tolerances: { cp: 0.5, h: 0.5, s: 0.5 }, known_deviations: [] },
 } satisfies DatabaseSettings);
@@ -130,34 +130,34 @@ export interface SettingsResult {
 export function checkSettingsRules(s: DatabaseSettings, file: string, doc?: LoadedDocument): Diagnostic[] {
   const out: Diagnostic[] = [];
   const at = (segments: Array<string | number>) => locate(doc, segments);
-  const push = (segments: Array<string | number>, message: string, value: unknown, expected: string) =>
-    out.push({ severity: 'error', file, ...at(segments), path: formatFieldPath(segments), message, value, expected });
+  const push = (code: string, segments: Array<string | number>, message: string, value: unknown, expected: string) =>
+    out.push({ severity: 'error', code, file, ...at(segments), path: formatFieldPath(segments), message, value, expected });
 
   const { low, mid, high } = s.temperature_ranges;
   if (!(low < mid && mid < high)) {
-    push(['temperature_ranges'], 'temperature ranges out of order', { low, mid, high }, 'low < mid < high');
+    push('settings-range-order', ['temperature_ranges'], 'temperature ranges out of order', { low, mid, high }, 'low < mid < high');
   }
   // Point at the bound that is on the wrong side of 298.15 K (both, when both are).
   if (!(low <= T_REF)) {
-    push(['temperature_ranges', 'low'], `the low range must contain ${T_REF} K (H and S are anchored there)`, low, `low ≤ ${T_REF} ≤ mid`);
+    push('settings-range-excludes-298', ['temperature_ranges', 'low'], `the low range must contain ${T_REF} K (H and S are anchored there)`, low, `low ≤ ${T_REF} ≤ mid`);
   }
   if (!(T_REF <= mid)) {
-    push(['temperature_ranges', 'mid'], `the low range must contain ${T_REF} K (H and S are anchored there)`, mid, `low ≤ ${T_REF} ≤ mid`);
+    push('settings-range-excludes-298', ['temperature_ranges', 'mid'], `the low range must contain ${T_REF} K (H and S are anchored there)`, mid, `low ≤ ${T_REF} ≤ mid`);
   }
   const om = s.fit.optimise_mid;
   if (om !== false) {
-    if (!(om.min < om.max)) push(['fit', 'optimise_mid'], 'midpoint search interval is empty', om, 'min < max');
+    if (!(om.min < om.max)) push('settings-mid-interval-empty', ['fit', 'optimise_mid'], 'midpoint search interval is empty', om, 'min < max');
     if (!(om.min > low && om.max < high)) {
-      push(['fit', 'optimise_mid'], 'midpoint search interval must lie inside the temperature ranges', om, `${low} < min < max < ${high}`);
+      push('settings-mid-interval-outside', ['fit', 'optimise_mid'], 'midpoint search interval must lie inside the temperature ranges', om, `${low} < min < max < ${high}`);
     }
-    if (om.min < T_REF) push(['fit', 'optimise_mid', 'min'], `midpoint may not fall below ${T_REF} K`, om.min, `min ≥ ${T_REF}`);
+    if (om.min < T_REF) push('settings-mid-below-298', ['fit', 'optimise_mid', 'min'], `midpoint may not fall below ${T_REF} K`, om.min, `min ≥ ${T_REF}`);
   }
-  if (!(s.tables.from < s.tables.to)) push(['tables'], 'table grid is empty', { from: s.tables.from, to: s.tables.to }, 'from < to');
+  if (!(s.tables.from < s.tables.to)) push('settings-table-grid-empty', ['tables'], 'table grid is empty', { from: s.tables.from, to: s.tables.to }, 'from < to');
   else if ((s.tables.to - s.tables.from) / s.tables.step > 100_000) {
-    push(['tables', 'step'], 'table grid has too many rows', s.tables.step, 'at most 100000 rows');
+    push('settings-table-grid-too-large', ['tables', 'step'], 'table grid has too many rows', s.tables.step, 'at most 100000 rows');
   }
   if ((high - low) / s.fit.sampling_step > 100_000) {
-    push(['fit', 'sampling_step'], 'sampling grid has too many points', s.fit.sampling_step, 'at most 100000 points');
+    push('settings-sampling-grid-too-large', ['fit', 'sampling_step'], 'sampling grid has too many points', s.fit.sampling_step, 'at most 100000 points');
   } else if (low < mid && mid < high && low <= T_REF && T_REF <= mid) {
     // Only once the ranges themselves are sound: a misplaced mid is one mistake, reported above.
     const step = s.fit.sampling_step;
@@ -167,6 +167,7 @@ export function checkSettingsRules(s: DatabaseSettings, file: string, doc?: Load
       const largest = largestSamplingStep({ low, mid, high });
       out.push({
         severity: 'error',
+        code: 'sampling-step-too-coarse',
         file,
         ...at(setHere ? ['fit', 'sampling_step'] : ['temperature_ranges']),
         path: 'fit.sampling_step',
@@ -177,7 +178,7 @@ export function checkSettingsRules(s: DatabaseSettings, file: string, doc?: Load
     }
   }
   const ref = s.references.files;
-  if (new Set(ref).size !== ref.length) push(['references', 'files'], 'a reference file is listed twice', ref, 'distinct files');
+  if (new Set(ref).size !== ref.length) push('settings-reference-listed-twice', ['references', 'files'], 'a reference file is listed twice', ref, 'distinct files');
   checkKnownDeviations(s.references, push);
   return out;
 }
@@ -268,6 +269,7 @@ export function checkSpeciesSampling(opts: {
       : 'the default';
   const d: Diagnostic = {
     severity: 'error',
+    code: 'sampling-step-too-coarse',
     file: opts.file,
     species: opts.species,
     path: 'temperature_ranges',
@@ -294,18 +296,19 @@ const PLACEHOLDER_REASON = /^\s*(todo|tbd|tba|fixme|xxx|n\/?a|none|unknown|known
 /** Windows, widened limits and reasons of references.known_deviations (all problems at once). */
 function checkKnownDeviations(
   refs: DatabaseSettings['references'],
-  push: (segments: Array<string | number>, message: string, value: unknown, expected: string) => void,
+  push: (code: string, segments: Array<string | number>, message: string, value: unknown, expected: string) => void,
 ): void {
   const list = refs.known_deviations;
   list.forEach((k, i) => {
     const at = ['references', 'known_deviations', i];
     if (k.from !== undefined && k.to !== undefined && !(k.from <= k.to)) {
-      push([...at, 'to'], 'known deviation: empty temperature window', { from: k.from, to: k.to }, 'from ≤ to');
+      push('known-deviation-window-empty', [...at, 'to'], 'known deviation: empty temperature window', { from: k.from, to: k.to }, 'from ≤ to');
     }
     for (const q of ['cp', 's', 'h'] as const) {
       const widened = k.tolerances[q];
       if (widened !== undefined && !(widened > refs.tolerances[q])) {
         push(
+          'known-deviation-not-wider',
           [...at, 'tolerances', q],
           `known deviation: the limit does not widen references.tolerances.${q} (${refs.tolerances[q]})`,
           widened,
@@ -314,7 +317,7 @@ function checkKnownDeviations(
       }
     }
     if (PLACEHOLDER_REASON.test(k.reason)) {
-      push([...at, 'reason'], 'known deviation: the reason is a placeholder', k.reason, 'why the deviation is accepted, e.g. the model limit and where it is documented');
+      push('known-deviation-placeholder-reason', [...at, 'reason'], 'known deviation: the reason is a placeholder', k.reason, 'why the deviation is accepted, e.g. the model limit and where it is documented');
     }
     // Two entries covering the same species, quantity and temperature would make the limit ambiguous.
     for (let j = 0; j < i; j++) {
@@ -324,6 +327,7 @@ function checkKnownDeviations(
       const shared = (['cp', 's', 'h'] as const).filter((q) => o.tolerances[q] !== undefined && k.tolerances[q] !== undefined);
       if (overlap && shared.length) {
         push(
+          'known-deviation-overlap',
           at,
           `known deviation overlaps references.known_deviations[${j}] for ${k.species} ${shared.join(', ')}`,
           { species: k.species, from: k.from, to: k.to },
@@ -360,6 +364,7 @@ export async function loadSettings(dir: string, displayDir = dir): Promise<Setti
   if (loaded.documents.length > 1) {
     diagnostics.push({
       severity: 'error',
+      code: 'settings-several-documents',
       file: display,
       path: '',
       message: `${SETTINGS_FILE_NAME} holds ${loaded.documents.length} YAML documents`,

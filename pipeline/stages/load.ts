@@ -109,8 +109,25 @@ export interface ParseOptions {
   split?: 'species' | 'single';
 }
 
-function err(file: string, message: string, extra: Partial<Diagnostic> = {}): Diagnostic {
-  return { severity: 'error', file, path: '', message, ...extra };
+function err(file: string, code: string, message: string, extra: Partial<Diagnostic> = {}): Diagnostic {
+  return { severity: 'error', code, file, path: '', message, ...extra };
+}
+
+/** The file's text when it is UTF-8 without NUL bytes (a binary or UTF-16 file has them), else undefined. */
+function decodeUtf8Text(bytes: Buffer): string | undefined {
+  if (bytes.includes(0)) return undefined;
+  try {
+    return new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+  } catch {
+    return undefined;
+  }
+}
+
+function describeNonText(bytes: Buffer): string {
+  if ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff)) return 'UTF-16 byte-order mark';
+  const nul = bytes.indexOf(0);
+  if (nul >= 0) return `NUL byte at offset ${nul}: binary or UTF-16`;
+  return 'invalid UTF-8 byte sequence';
 }
 
 function formatBytes(n: number): string {
@@ -120,7 +137,7 @@ function formatBytes(n: number): string {
 }
 
 function sizeDiagnostic(file: string, size: number, maxBytes: number): Diagnostic {
-  return err(file, `file is too large: ${formatBytes(size)} (${size} bytes); the limit is ${formatBytes(maxBytes)}`, {
+  return err(file, 'file-too-large', `file is too large: ${formatBytes(size)} (${size} bytes); the limit is ${formatBytes(maxBytes)}`, {
     expected: `a species file of at most ${maxBytes} bytes (split large databases into several files)`,
   });
 }
@@ -135,6 +152,13 @@ const YAML_MESSAGES: Readonly<Record<string, (m: string) => string>> = {
   TAG_RESOLVE_FAILED: (m) =>
     `${m}; only plain YAML values are accepted (no tags that construct objects or run code)`,
 };
+
+/** Stable diagnostic code of a YAML parser problem. */
+function yamlCode(yamlErrorCode: string): string {
+  if (yamlErrorCode === 'DUPLICATE_KEY') return 'yaml-duplicate-key';
+  if (yamlErrorCode === 'TAG_RESOLVE_FAILED') return 'yaml-tag-refused';
+  return 'yaml-syntax';
+}
 
 /** YAML-level problems after which the rest of the document can still be read and checked. */
 const RECOVERABLE = new Set(['DUPLICATE_KEY', 'TAG_RESOLVE_FAILED']);
@@ -306,7 +330,7 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
     const line = upTo.split('\n').length;
     const column = overflow - upTo.lastIndexOf('\n');
     result.diagnostics.push(
-      err(displayPath, `YAML nesting deeper than ${maxNesting} levels (or indented more than ${maxNesting * 4} columns); refused`, {
+      err(displayPath, 'yaml-too-deep', `YAML nesting deeper than ${maxNesting} levels (or indented more than ${maxNesting * 4} columns); refused`, {
         line,
         column,
         expected: `at most ${maxNesting} nested lists or mappings`,
@@ -328,7 +352,7 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
       strict: true,
     }) as Document.Parsed[];
   } catch (e) {
-    result.diagnostics.push(err(displayPath, `could not parse YAML: ${errorText(e)}`));
+    result.diagnostics.push(err(displayPath, 'yaml-unreadable', `could not parse YAML: ${errorText(e)}`));
     return result;
   }
   // parseAllDocuments returns an EmptyStream (array-like, empty) for text without documents.
@@ -347,7 +371,7 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
       const dup = e.code === 'DUPLICATE_KEY' ? dropped.get(e.pos[0]) : undefined;
       if (dup) message = `duplicate key '${dup.key}' in a mapping (each key may appear only once; first given on line ${dup.firstLine}); the rest of the document was checked with the first value, this one is ignored`;
       else if (recoverable && e.code === 'TAG_RESOLVE_FAILED') message += '; the value is treated as invalid and the rest of the document was checked';
-      const d = err(displayPath, message, { line: pos.line, column: pos.column });
+      const d = err(displayPath, yamlCode(e.code), message, { line: pos.line, column: pos.column });
       yamlErrors.push(d);
       result.diagnostics.push(d);
     }
@@ -356,6 +380,7 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
       const pos = positionOf(lc, w.pos[0]);
       result.diagnostics.push({
         severity: 'warning',
+        code: 'yaml-warning',
         file: displayPath,
         path: '',
         line: pos.line,
@@ -377,16 +402,16 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
       const where = start === undefined ? {} : positionOf(lc, start);
       if (isExcessiveAliasError(e)) {
         result.diagnostics.push(
-          err(displayPath, `too many YAML alias expansions (more than ${maxAliasCount}); refusing a possible alias bomb`, {
+          err(displayPath, 'yaml-alias-bomb', `too many YAML alias expansions (more than ${maxAliasCount}); refusing a possible alias bomb`, {
             ...where,
             expected: `at most ${maxAliasCount} alias (*name) expansions per document`,
           }),
         );
       } else if (e instanceof RangeError) {
-        result.diagnostics.push(err(displayPath, 'YAML nesting is too deep to read', where));
+        result.diagnostics.push(err(displayPath, 'yaml-too-deep', 'YAML nesting is too deep to read', where));
       } else {
         result.diagnostics.push(
-          err(displayPath, `could not read YAML document: ${errorText(e)}`, where),
+          err(displayPath, 'yaml-unreadable', `could not read YAML document: ${errorText(e)}`, where),
         );
       }
       continue;
@@ -438,19 +463,28 @@ export async function loadYamlFile(
   try {
     const info = await stat(filePath);
     if (!info.isFile()) {
-      empty.diagnostics.push(err(displayPath, 'not a regular file', { expected: 'a YAML file' }));
+      empty.diagnostics.push(err(displayPath, 'not-a-file', 'not a regular file', { expected: 'a YAML file' }));
       return empty;
     }
     if (info.size > maxBytes) {
       empty.diagnostics.push(sizeDiagnostic(displayPath, info.size, maxBytes));
       return empty;
     }
-    const text = await readFile(filePath, 'utf8');
+    const bytes = await readFile(filePath);
+    const text = decodeUtf8Text(bytes);
+    if (text === undefined) {
+      empty.diagnostics.push(
+        err(displayPath, 'not-utf8-text', `not UTF-8 text (${describeNonText(bytes)})`, {
+          expected: 'a UTF-8 encoded YAML text file',
+        }),
+      );
+      return empty;
+    }
     return parseYamlText(text, displayPath, opts);
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
     const reason = code === 'ENOENT' ? 'file not found' : `cannot read file (${code ?? String(e)})`;
-    empty.diagnostics.push(err(displayPath, reason));
+    empty.diagnostics.push(err(displayPath, code === 'ENOENT' ? 'file-not-found' : 'file-unreadable', reason));
     return empty;
   }
 }
@@ -489,11 +523,11 @@ export async function discoverSpeciesFiles(
   try {
     rootReal = await realpath(dir);
     if (!(await stat(rootReal)).isDirectory()) {
-      diagnostics.push(err(dir, 'not a folder', { expected: 'a database folder of species YAML files' }));
+      diagnostics.push(err(dir, 'not-a-folder', 'not a folder', { expected: 'a database folder of species YAML files' }));
       return { files: [], diagnostics };
     }
   } catch {
-    diagnostics.push(err(dir, 'database folder not found', { expected: 'an existing folder of species YAML files' }));
+    diagnostics.push(err(dir, 'folder-not-found', 'database folder not found', { expected: 'an existing folder of species YAML files' }));
     return { files: [], diagnostics };
   }
 
@@ -507,7 +541,7 @@ export async function discoverSpeciesFiles(
     try {
       entries = await readdir(absDir, { withFileTypes: true });
     } catch (e) {
-      diagnostics.push(err(relDir === '' ? dir : path.join(dir, relDir), `cannot read folder (${(e as NodeJS.ErrnoException).code ?? e})`));
+      diagnostics.push(err(relDir === '' ? dir : path.join(dir, relDir), 'folder-unreadable', `cannot read folder (${(e as NodeJS.ErrnoException).code ?? e})`));
       return;
     }
     entries.sort((a, b) => compareText(a.name, b.name));
@@ -534,14 +568,14 @@ export async function discoverSpeciesFiles(
     try {
       real = await realpath(link.abs);
     } catch {
-      diagnostics.push(err(display, 'broken symbolic link; refused', { expected: 'a link to a file or folder inside the database folder' }));
+      diagnostics.push(err(display, 'broken-link', 'broken symbolic link; refused', { expected: 'a link to a file or folder inside the database folder' }));
       return;
     }
     const info = await stat(real);
     if (!info.isDirectory() && !(info.isFile() && isYamlName(link.name))) return;
     if (!isInside(rootReal, real)) {
       diagnostics.push(
-        err(display, `symbolic link resolves outside the database folder (to ${real}); refused`, {
+        err(display, 'link-outside-database', `symbolic link resolves outside the database folder (to ${real}); refused`, {
           expected: 'species files and folders that live inside the database folder',
         }),
       );
@@ -574,6 +608,7 @@ export async function discoverSpeciesFiles(
   for (const s of skipped) {
     diagnostics.push({
       severity: 'warning',
+      code: 'same-file-twice',
       file: path.join(dir, s.rel),
       path: '',
       message: `same file as ${path.join(dir, s.first)} (reached through a symbolic link); read once`,

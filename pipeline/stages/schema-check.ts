@@ -386,7 +386,7 @@ export function checkAgainstSchema(
   const out: Diagnostic[] = [];
   const seen = new Set<string>();
 
-  const emit = (segments: Segment[], where: SourcePosition | undefined, d: Omit<Diagnostic, 'severity' | 'file' | 'path'>) => {
+  const emit = (segments: Segment[], where: SourcePosition | undefined, d: Omit<Diagnostic, 'severity' | 'file' | 'path'> & { code: string }) => {
     const pathText = formatFieldPath(segments);
     const key = `${pathText}\u0000${d.message}`;
     if (seen.has(key)) return;
@@ -407,6 +407,7 @@ export function checkAgainstSchema(
     if (typeof params.propertyName === 'string') {
       at.push(params.propertyName);
       emit(at, doc.locate(at, { key: true }), {
+        code: 'key-not-accepted',
         message: `key '${params.propertyName}' is not accepted here`,
         value: params.propertyName,
         expected: titleOf(e.parentSchema) ?? e.message ?? 'another key',
@@ -424,6 +425,7 @@ export function checkAgainstSchema(
         const own = parentSchema && typeof parentSchema.properties === 'object' ? (parentSchema.properties as JsonObject)[missing] : undefined;
         const prop = own !== undefined ? deref(root, own) : propertySchema(root, e.schemaPath, missing);
         emit([...at, missing], doc.locate(at), {
+          code: 'missing-field',
           message: `missing required field '${missing}'${condition ? ` (required for ${condition})` : ''}`,
           expected: expectationOf(prop),
         });
@@ -434,6 +436,7 @@ export function checkAgainstSchema(
         const known = parentSchema && typeof parentSchema.properties === 'object' ? Object.keys(parentSchema.properties as object) : [];
         const suggestion = nearestKey(key, known);
         emit([...at, key], doc.locate([...at, key], { key: true }), {
+          code: 'unknown-key',
           message: `unknown key '${key}'${suggestion ? ` (did you mean '${suggestion}'?)` : ''}`,
           expected: known.length ? `one of ${known.join(', ')}` : 'no keys here',
         });
@@ -442,6 +445,7 @@ export function checkAgainstSchema(
       case 'false schema': {
         const condition = conditionTitle(root, e.schemaPath);
         emit(at, doc.locate(at, { key: true }), {
+          code: condition ? 'field-not-applicable' : 'field-not-allowed',
           message: condition
             ? `field '${String(last)}' does not apply to ${condition}`
             : `field '${String(last)}' is not allowed here`,
@@ -451,6 +455,7 @@ export function checkAgainstSchema(
       }
       case 'type':
         emit(at, doc.locate(at), {
+          code: 'wrong-type',
           message: `wrong type: ${jsonTypeName(e.data)}`,
           // JSON would print Infinity and NaN as null.
           value: typeof e.data === 'number' && !Number.isFinite(e.data) ? String(e.data) : e.data,
@@ -464,6 +469,7 @@ export function checkAgainstSchema(
           typeof e.data === 'string' ? nearestKey(e.data, allowed.filter((x): x is string => typeof x === 'string')) : undefined;
         const what = last === 'unit' ? 'unknown unit' : 'not an accepted value';
         emit(at, doc.locate(at), {
+          code: last === 'unit' ? 'unknown-unit' : 'value-not-accepted',
           message: `${what}${suggestion ? ` (did you mean '${suggestion}'?)` : ''}`,
           value: e.data,
           expected: `one of ${allowed.map((x) => (typeof x === 'string' ? x : JSON.stringify(x))).join(', ')}`,
@@ -471,18 +477,19 @@ export function checkAgainstSchema(
         break;
       }
       case 'const':
-        emit(at, doc.locate(at), { message: 'not the accepted value', value: e.data, expected: JSON.stringify(params.allowedValue) });
+        emit(at, doc.locate(at), { code: 'value-not-accepted', message: 'not the accepted value', value: e.data, expected: JSON.stringify(params.allowedValue) });
         break;
       case 'minimum':
       case 'maximum':
       case 'exclusiveMinimum':
       case 'exclusiveMaximum': {
         const { message, expected } = describeLimit(e.keyword, params.limit);
-        emit(at, doc.locate(at), { message, value: e.data, expected: title ? `${expected} (${title})` : expected });
+        emit(at, doc.locate(at), { code: 'out-of-range', message, value: e.data, expected: title ? `${expected} (${title})` : expected });
         break;
       }
       case 'pattern':
         emit(at, doc.locate(at), {
+          code: 'wrong-form',
           message: 'wrong form',
           value: e.data,
           expected: title ?? `text matching ${String(params.pattern)}`,
@@ -493,6 +500,7 @@ export function checkAgainstSchema(
         const n = Array.isArray(e.data) ? e.data.length : 0;
         const limit = Number(params.limit);
         emit(at, doc.locate(at), {
+          code: e.keyword === 'minItems' ? 'too-few-items' : 'too-many-items',
           message: e.keyword === 'minItems' ? `too few items (${n})` : `too many items (${n})`,
           value: e.data,
           expected: `${e.keyword === 'minItems' ? 'at least' : 'at most'} ${plural(limit, 'item')}${title ? ` (${title})` : ''}`,
@@ -504,6 +512,7 @@ export function checkAgainstSchema(
         const n = typeof e.data === 'string' ? [...e.data].length : 0;
         const limit = `${e.keyword === 'minLength' ? 'at least' : 'at most'} ${plural(Number(params.limit), 'character')}`;
         emit(at, doc.locate(at), {
+          code: e.keyword === 'minLength' ? 'too-short' : 'too-long',
           message: `${e.keyword === 'minLength' ? 'too short' : 'too long'}: ${plural(n, 'character')}`,
           value: e.data,
           expected: title ? `${limit}: ${title}` : limit,
@@ -512,6 +521,7 @@ export function checkAgainstSchema(
       }
       case 'minProperties':
         emit(at, doc.locate(at), {
+          code: 'too-few-entries',
           message: 'too few entries',
           value: e.data,
           expected: `at least ${plural(Number(params.limit), 'entry')}${title ? ` (${title})` : ''}`,
@@ -527,6 +537,7 @@ export function checkAgainstSchema(
           parts.push(`unknown key '${k}'${suggestion ? ` (did you mean '${suggestion}'?)` : ''}`);
         }
         emit(at, doc.locate(at), {
+          code: 'quantity-form',
           message: `not an accepted form: ${parts.join('; ')}`,
           value: e.data,
           expected: title ?? `one of ${known.join(', ')}`,
@@ -537,6 +548,7 @@ export function checkAgainstSchema(
       case 'oneOf': {
         const multiple = Array.isArray(params.passingSchemas);
         emit(at, doc.locate(at), {
+          code: multiple ? 'ambiguous-form' : params.noTypeFits === true ? 'wrong-type' : 'not-accepted-form',
           message: multiple
             ? 'matches more than one accepted form'
             : params.noTypeFits === true
@@ -548,7 +560,7 @@ export function checkAgainstSchema(
         break;
       }
       default:
-        emit(at, doc.locate(at), { message: e.message ?? `fails '${e.keyword}'`, value: e.data });
+        emit(at, doc.locate(at), { code: `schema-${e.keyword.replace(/[^a-z0-9]+/gi, '-').toLowerCase()}`, message: e.message ?? `fails '${e.keyword}'`, value: e.data });
     }
   }
   // Source order, so a report reads top to bottom like the file.

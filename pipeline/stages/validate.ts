@@ -95,6 +95,14 @@ function atomicNumber(symbol: string): number | undefined {
 
 const ALL_SYMBOLS: readonly string[] = [...Object.keys(elementsObject as object), 'D', 'T'].filter(isKnownElement);
 
+/** Every finding carries its stable code (pipeline/core/diagnostics.ts). */
+interface FindingExtra {
+  code: string;
+  value?: unknown;
+  expected?: string;
+  key?: boolean;
+}
+
 class Findings {
   readonly diagnostics: Diagnostic[] = [];
   constructor(
@@ -106,10 +114,10 @@ class Findings {
     severity: Diagnostic['severity'],
     at: Segment[],
     message: string,
-    extra: { value?: unknown; expected?: string; key?: boolean } = {},
+    extra: FindingExtra,
   ): void {
     const where = this.doc.locate(at, { key: extra.key ?? false });
-    const d: Diagnostic = { severity, file: this.doc.file, path: formatFieldPath(at), message };
+    const d: Diagnostic = { severity, file: this.doc.file, path: formatFieldPath(at), message, code: extra.code };
     if (where) {
       d.line = where.line;
       d.column = where.column;
@@ -119,10 +127,10 @@ class Findings {
     if (extra.expected !== undefined) d.expected = extra.expected;
     this.diagnostics.push(d);
   }
-  error(at: Segment[], message: string, extra?: { value?: unknown; expected?: string; key?: boolean }): void {
+  error(at: Segment[], message: string, extra: FindingExtra): void {
     this.add('error', at, message, extra);
   }
-  warn(at: Segment[], message: string, extra?: { value?: unknown; expected?: string; key?: boolean }): void {
+  warn(at: Segment[], message: string, extra: FindingExtra): void {
     this.add('warning', at, message, extra);
   }
 }
@@ -183,6 +191,7 @@ function readComposition(raw: unknown, f: Findings): CompositionView | undefined
       const caseFix = ALL_SYMBOLS.find((s) => s.toLowerCase() === symbol.toLowerCase());
       const suggestion = caseFix ?? nearestKey(symbol, ALL_SYMBOLS);
       f.error(['composition', symbol], `unknown element symbol '${symbol}'${suggestion ? ` (did you mean '${suggestion}'?)` : ''}`, {
+        code: 'unknown-element',
         key: true,
         expected: 'an IUPAC element symbol with a standard atomic weight (or D, T for 2H, 3H)',
       });
@@ -220,17 +229,20 @@ function checkName(ctx: Ctx): void {
   // The 80-column file is framed by THERMO ... END lines; readers would take a record of that name for framing.
   if (/^(END|THERMO)$/i.test(name)) {
     ctx.f.error(['name'], `'${name}' is a keyword of the 80-column thermo file and cannot name a record`, {
+      code: 'name-is-keyword',
       value: name,
       expected: 'another name (e.g. with a suffix)',
     });
   } else if (/^END/i.test(name)) {
     ctx.f.warn(['name'], `a name starting with '${name.slice(0, 3)}' may be read as the END line by some readers of the 80-column file`, {
+      code: 'name-reads-as-end',
       value: name,
       expected: 'a name that does not start with END',
     });
   }
   if (/^\.+$/.test(name)) {
     ctx.f.error(['name'], 'a name made only of dots cannot name a record or an output file', {
+      code: 'name-only-dots',
       value: name,
       expected: 'a name with at least one letter, digit or symbol other than "."',
     });
@@ -242,24 +254,28 @@ function checkComposition(ctx: Ctx): void {
   if (!c || !c.known) return;
   if (structure === 'atom' && c.atoms !== 1) {
     f.error(['composition'], `an atom must consist of exactly 1 atom, this composition has ${c.atoms}`, {
+      code: 'atom-count-atom',
       value: ctx.input.composition,
       expected: "one element with count 1, or structure 'diatomic', 'linear' or 'nonlinear'",
     });
   }
   if (structure === 'diatomic' && c.atoms !== 2) {
     f.error(['composition'], `a diatomic must consist of exactly 2 atoms, this composition has ${c.atoms}`, {
+      code: 'atom-count-diatomic',
       value: ctx.input.composition,
       expected: c.atoms === 1 ? "2 atoms, or structure 'atom'" : "2 atoms, or structure 'linear' or 'nonlinear'",
     });
   }
   if (structure === 'linear' && c.atoms < 2) {
     f.error(['composition'], `a linear molecule needs at least 2 atoms, this composition has ${c.atoms}`, {
+      code: 'atom-count-linear',
       value: ctx.input.composition,
       expected: "2 or more atoms, or structure 'atom'",
     });
   }
   if (structure === 'nonlinear' && c.atoms < 3) {
     f.error(['composition'], `a nonlinear molecule needs at least 3 atoms, this composition has ${c.atoms}`, {
+      code: 'atom-count-nonlinear',
       value: ctx.input.composition,
       expected: "3 or more atoms, or structure 'linear' / 'diatomic'",
     });
@@ -271,6 +287,7 @@ function checkComposition(ctx: Ctx): void {
     electrons -= charge as number;
     if (electrons < 0) {
       f.error(['charge'], `charge ${charge as number} would leave ${electrons} electrons`, {
+        code: 'charge-exceeds-electrons',
         value: charge,
         expected: `a charge of at most +${electrons + (charge as number)} for this composition`,
       });
@@ -284,6 +301,7 @@ function checkSources(ctx: Ctx): void {
   sources.forEach((s, i) => {
     if (typeof s === 'string' && s.trim() !== '' && (SAYS_NOTHING.test(s.trim()) || s.trim().length < 3)) {
       ctx.f.warn(['sources', i], 'this source entry does not say where the numbers come from', {
+        code: 'source-says-nothing',
         value: s,
         expected: 'a citation, e.g. "Huber & Herzberg (1979)", or "from memory" / "invented (demo)"',
       });
@@ -301,6 +319,7 @@ function readEnthalpy(ctx: Ctx): { value: number; temperature: number } | undefi
   if (temperature !== 298.15 && temperature !== 0) return undefined;
   if (temperature === 0) {
     ctx.f.warn(['enthalpy_of_formation', 'temperature'], 'enthalpy of formation given at 0 K', {
+      code: 'enthalpy-at-0k',
       value: 0,
       expected:
         "a value at 298.15 K where available; a 0 K value is converted with the elements' reference-state enthalpy increments, so check they cover every element",
@@ -320,6 +339,7 @@ function readTemperatureRanges(ctx: Ctx): { low?: number; mid?: number; high?: n
     const b = order[i]!;
     if (!(out[a]! < out[b]!)) {
       ctx.f.error(['temperature_ranges', b], `${b} (${fmt(out[b]!)} K) must be above ${a} (${fmt(out[a]!)} K)`, {
+        code: 'temperature-range-order',
         value: out[b],
         expected: 'low < mid < high',
       });
@@ -349,6 +369,7 @@ function readElectronicLevels(ctx: Ctx): ElectronicLevel[] | undefined {
   if (lowest !== 0) {
     const i = levels.findIndex((l) => l.energy === lowest);
     ctx.f.error(['electronic_levels', i, 'energy'], `the lowest electronic level is at ${fmt(lowest)} cm-1, not at 0`, {
+      code: 'lowest-level-not-zero',
       value: (raw[i] as Obj).energy,
       expected: 'energies measured from the ground level, which is at energy 0',
     });
@@ -359,6 +380,7 @@ function readElectronicLevels(ctx: Ctx): ElectronicLevel[] | undefined {
     const first = seen.get(key);
     if (first !== undefined) {
       ctx.f.warn(['electronic_levels', i], `same energy${l.term ? ' and term' : ''} as electronic_levels[${first}]; is a level listed twice?`, {
+        code: 'electronic-level-repeated',
         value: raw[i],
         expected: 'each level once, with its total degeneracy',
       });
@@ -372,6 +394,7 @@ function checkSymmetryNumber(ctx: Ctx, sigma: number, hasSpinWeights: boolean): 
   const { f, structure, composition: c } = ctx;
   if ((structure === 'diatomic' || structure === 'linear') && sigma > 2) {
     f.error(['symmetry_number'], `a linear molecule has symmetry number 1 or 2, not ${sigma}`, {
+      code: 'symmetry-number-linear',
       value: sigma,
       expected: '1 (no centre of symmetry) or 2 (centrosymmetric)',
     });
@@ -382,25 +405,28 @@ function checkSymmetryNumber(ctx: Ctx, sigma: number, hasSpinWeights: boolean): 
   if (structure === 'diatomic') {
     if (hasSpinWeights && homonuclear && sigma !== 2) {
       f.warn(['symmetry_number'], `symmetry number ${sigma} is ignored: nuclear_spin_weights replace it`, {
+        code: 'symmetry-number-ignored',
         value: sigma,
         expected: '2 for a homonuclear diatomic',
       });
     } else if (homonuclear && sigma !== 2) {
-      f.warn(['symmetry_number'], 'a homonuclear diatomic usually has symmetry number 2', { value: sigma, expected: '2' });
+      f.warn(['symmetry_number'], 'a homonuclear diatomic usually has symmetry number 2', { code: 'symmetry-number-homonuclear', value: sigma, expected: '2' });
     } else if (!homonuclear && sigma !== 1) {
-      f.warn(['symmetry_number'], 'a heteronuclear diatomic usually has symmetry number 1', { value: sigma, expected: '1' });
+      f.warn(['symmetry_number'], 'a heteronuclear diatomic usually has symmetry number 1', { code: 'symmetry-number-heteronuclear', value: sigma, expected: '1' });
     }
   } else if (structure === 'linear' && sigma === 2) {
     // A centre of symmetry pairs atoms of each element; at most one element can have an odd count (the centre).
     const odd = c.symbols.filter((s) => c.counts[s]! % 2 === 1).length;
     if (odd > 1) {
       f.warn(['symmetry_number'], 'symmetry number 2 needs a centre of symmetry, which this composition cannot have', {
+        code: 'symmetry-number-no-centre',
         value: sigma,
         expected: '1',
       });
     }
   } else if (structure === 'nonlinear' && sigma > 1 && c.symbols.every((s) => c.counts[s] === 1)) {
     f.warn(['symmetry_number'], 'with no two atoms of the same element no rotation can be a symmetry operation', {
+      code: 'symmetry-number-no-equal-atoms',
       value: sigma,
       expected: '1',
     });
@@ -415,11 +441,13 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
   let rotationalConstants: number[] | undefined;
   if (rc !== undefined && moi !== undefined) {
     f.error(['moments_of_inertia'], 'give either rotational_constants or moments_of_inertia, not both', {
+      code: 'rotation-given-twice',
       key: true,
       expected: 'exactly one of rotational_constants, moments_of_inertia',
     });
   } else if (rc === undefined && moi === undefined) {
     f.error(['rotational_constants'], `missing required field 'rotational_constants' (or 'moments_of_inertia') for structure '${structure}'`, {
+      code: 'rotation-missing',
       expected: structure === 'linear' ? '[B] in cm-1' : '[A, B, C] in cm-1',
     });
   } else {
@@ -430,6 +458,7 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
         // The schema already reports more than 3 items.
       } else if (list.length !== want) {
         f.error([field], `a ${structure} molecule takes ${want} ${field === 'rotational_constants' ? 'rotational constant' : 'moment of inertia'}${want === 1 ? '' : 's'}, got ${list.length}`, {
+          code: 'rotation-count',
           value: list,
           expected: structure === 'linear' ? (field === 'rotational_constants' ? '[B]' : '[I]') : field === 'rotational_constants' ? '[A, B, C]' : '[IA, IB, IC]',
         });
@@ -439,6 +468,7 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
           rotationalConstants = values;
           if (structure === 'nonlinear' && !(values[0]! >= values[1]! && values[1]! >= values[2]!)) {
             f.warn([field], field === 'rotational_constants' ? 'rotational constants are not in the order A >= B >= C' : 'moments of inertia are not in the order IA <= IB <= IC', {
+              code: 'rotation-order',
               value: list,
               expected: 'the conventional order (the product, and so the thermochemistry, is unaffected)',
             });
@@ -446,6 +476,7 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
           values.forEach((b, i) => {
             if (b > 100) {
               f.warn([field, i], `rotational constant of ${fmt(b)} cm-1 is larger than that of any molecule (H2: about 60 cm-1); check the unit`, {
+                code: 'rotational-constant-too-large',
                 value: list[i],
                 expected: 'a value in cm-1 (or {value, unit})',
               });
@@ -466,6 +497,7 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
       const { wavenumber: wn, degeneracy: g } = read;
       if (wn > 5000) {
         f.warn(['vibrations', i], `wavenumber ${fmt(wn)} cm-1 is above any fundamental (H2: about 4160 cm-1); check the unit`, {
+          code: 'wavenumber-too-large',
           value: item,
           expected: 'a wavenumber in cm-1 (or {value, unit})',
         });
@@ -480,11 +512,13 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
         const rotors = Array.isArray(input.internal_rotors) ? input.internal_rotors.length : 0;
         if (rotors === 0 && expected > 0 && modes !== expected) {
           f.warn(['vibrations'], `${modes} vibrational mode${modes === 1 ? '' : 's'} (counting degeneracy), but a ${structure} molecule of ${c.atoms} atoms has ${expected} (3N-${structure === 'linear' ? 5 : 6})`, {
+            code: 'mode-count',
             expected: `${expected} modes counting degeneracy`,
           });
         } else if (rotors > 0 && expected > 0 && modes + rotors !== expected) {
           // Each internal rotor replaces one torsional vibration; a torsion left in `vibrations` is counted twice.
           f.warn(['vibrations'], `${modes} vibrational mode${modes === 1 ? '' : 's'} (counting degeneracy) plus ${rotors} internal rotor${rotors === 1 ? '' : 's'} make ${modes + rotors} modes, but a ${structure} molecule of ${c.atoms} atoms has ${expected} (3N-${structure === 'linear' ? 5 : 6})`, {
+            code: 'mode-count-with-rotors',
             expected: `${expected} modes counting each internal rotor as one (remove a torsion treated as an internal rotor from vibrations)`,
           });
         }
@@ -511,6 +545,7 @@ function readInternalRotors(ctx: Ctx): { rotors?: InternalRotor[]; ok: boolean }
   if (!Array.isArray(raw) || raw.length === 0) return { ok: false };
   if (structure === 'linear') {
     f.warn(['internal_rotors'], 'internal rotors on a linear molecule: a linear molecule has no torsion about a bond axis', {
+      code: 'rotor-on-linear',
       key: true,
       expected: "structure 'nonlinear' for a molecule with a torsion, or no internal_rotors",
     });
@@ -527,6 +562,7 @@ function readInternalRotors(ctx: Ctx): { rotors?: InternalRotor[]; ok: boolean }
     const hasB = item.rotational_constant !== undefined;
     if (hasI && hasB) {
       f.error(at('moment_of_inertia'), 'give either moment_of_inertia or rotational_constant of an internal rotor, not both', {
+        code: 'rotor-given-twice',
         key: true,
         expected: 'exactly one of moment_of_inertia (amu*angstrom^2), rotational_constant (cm-1)',
       });
@@ -535,6 +571,7 @@ function readInternalRotors(ctx: Ctx): { rotors?: InternalRotor[]; ok: boolean }
     }
     if (!hasI && !hasB) {
       f.error(at(), "an internal rotor needs 'moment_of_inertia' or 'rotational_constant'", {
+        code: 'rotor-missing-inertia',
         value: item,
         expected: 'the reduced moment of inertia (amu*angstrom^2) or the reduced rotational constant (cm-1) of the torsion',
       });
@@ -554,6 +591,7 @@ function readInternalRotors(ctx: Ctx): { rotors?: InternalRotor[]; ok: boolean }
     const basis = hinderedRotorBasisSize(rotor);
     if (basis > MAX_HINDERED_ROTOR_BASIS) {
       f.error(at(field), `reduced rotational constant ${fmt(b)} cm-1 is too small for the level sum: ${basis} free-rotor basis functions, more than ${MAX_HINDERED_ROTOR_BASIS}`, {
+        code: 'rotor-basis-too-large',
         value: item[field],
         expected: `the reduced constant of a real torsion, at least ${fmt(smallestHinderedRotorConstant(rotor))} cm-1 (check the unit: a bare moment_of_inertia is in amu*angstrom^2)`,
       });
@@ -562,12 +600,14 @@ function readInternalRotors(ctx: Ctx): { rotors?: InternalRotor[]; ok: boolean }
     }
     if (b > LARGEST_TORSION_ROTATIONAL_CONSTANT) {
       f.warn(at(field), `reduced rotational constant of ${fmt(b)} cm-1 is larger than that of any torsion (an OH top: about 20-40 cm-1); check the unit`, {
+        code: 'rotor-constant-too-large',
         value: item[field],
         expected: 'a value in cm-1, or a moment of inertia in amu*angstrom^2',
       });
     }
     if (n % sigma !== 0) {
       f.warn(at('symmetry_number'), `rotor symmetry number ${sigma} does not divide the foldedness ${n}: a rotation that maps the top onto itself must also map the potential onto itself`, {
+        code: 'rotor-symmetry-foldedness',
         value: sigma,
         expected: `a divisor of ${n} (usually ${n} for a symmetric top, 1 for an asymmetric one)`,
       });
@@ -656,6 +696,7 @@ function checkHigherOrderConstants(f: Findings, s: DiatomicState, i: number, raw
   const at = (field: string): Segment[] => ['electronic_states', i, field];
   if (s.betae !== undefined && s.De + 0.5 * s.betae < 0) {
     f.error(at('betae'), `D_0 = De + betae/2 = ${fmt(s.De + 0.5 * s.betae)} cm-1 is negative: the centrifugal distortion of the lowest vibrational level cannot raise the rotational levels`, {
+      code: 'diatomic-d0-negative',
       value: raw.betae,
       expected: `betae >= ${fmt(-2 * s.De)} cm-1 (D_0 >= 0; betae is usually a few percent of De, check its sign and unit)`,
     });
@@ -664,11 +705,13 @@ function checkHigherOrderConstants(f: Findings, s: DiatomicState, i: number, raw
     if (value === undefined) return;
     if (lower === 0) {
       f.warn(at(field), `${field} = ${fmt(value)} cm-1 is given but ${lowerName} is 0: a higher-order correction without the term it corrects`, {
+        code: 'higher-order-without-lower',
         value: raw[field],
         expected: `${lowerName} as well, or no ${field}`,
       });
     } else if (Math.abs(value) > HIGHER_ORDER_RATIO_LIMIT * Math.abs(lower)) {
       f.warn(at(field), `|${field}| = ${fmt(Math.abs(value))} cm-1 is more than ${HIGHER_ORDER_RATIO_LIMIT} of ${lowerName} = ${fmt(lower)} cm-1; higher-order constants are usually a few percent of the one before (check the unit)`, {
+        code: 'higher-order-too-large',
         value: raw[field],
         expected: `|${field}| << |${lowerName}|`,
       });
@@ -688,6 +731,7 @@ function checkHigherOrderConstants(f: Findings, s: DiatomicState, i: number, raw
     const ratio = s.He / estimate;
     if (!(ratio >= 0.1 && ratio <= 10)) {
       f.warn(at('He'), `He = ${fmt(s.He)} cm-1 is ${ratio < 0 ? 'of the other sign from' : 'more than a factor of 10 away from'} the estimate (2De/(3we^2))(12Be^2 - alphae we) = ${fmt(estimate)} cm-1 (Herzberg 1950)`, {
+        code: 'diatomic-he-estimate',
         value: raw.He,
         expected: `He of the order of ${fmt(estimate)} cm-1 in the convention E = ... - D_v J^2(J+1)^2 + He J^3(J+1)^3 (check the sign and the unit)`,
       });
@@ -701,6 +745,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
   const rawStates = ctx.input.electronic_states as unknown[];
   if (ground && ground.energy !== 0) {
     f.error(['electronic_states', 0, 'energy'], `the first electronic state must be the ground state at energy 0, got ${fmt(ground.energy)} cm-1`, {
+      code: 'ground-state-not-zero',
       value: (rawStates[0] as Obj).energy,
       expected: 'the ground state first, with energy 0',
     });
@@ -708,6 +753,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
   states.forEach((s, i) => {
     if (s && i > 0 && s.energy === 0) {
       f.warn(['electronic_states', i, 'energy'], 'a second electronic state at Te = 0; is a state listed twice?', {
+        code: 'electronic-state-repeated',
         value: 0,
         expected: 'Te > 0 for excited states (a degenerate state is listed once with its total degeneracy)',
       });
@@ -715,6 +761,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
   });
   if (ground && ground.dissociationEnergy !== undefined && d0 !== undefined && Math.abs(ground.dissociationEnergy - d0) > 1e-9 * d0) {
     f.error(['electronic_states', 0, 'dissociation_energy'], `the ground state's dissociation_energy (${fmt(ground.dissociationEnergy)} cm-1) differs from the molecule's (${fmt(d0)} cm-1)`, {
+      code: 'dissociation-energy-mismatch',
       value: (rawStates[0] as Obj).dissociation_energy,
       expected: "the same value, or leave it out (the ground state uses the molecule's dissociation_energy)",
     });
@@ -723,6 +770,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
     const g0 = termValue(ground, 0);
     if (d0 <= g0) {
       f.error(['dissociation_energy'], `dissociation energy D0 = ${fmt(d0)} cm-1 is below the zero-point energy G(0) = ${fmt(g0)} cm-1 of the ground state`, {
+        code: 'dissociation-below-zpe',
         value: ctx.input.dissociation_energy,
         expected: 'D0 measured from the lowest level, well above G(0) = we/2 - wexe/4 + weye/8 + weze/16 (check the unit)',
       });
@@ -735,12 +783,14 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
     let negativeDvWarned = false;
     if (s.wexe < 0) {
       f.warn(['electronic_states', i, 'wexe'], 'negative anharmonicity wexe: vibrational spacings grow with v', {
+        code: 'negative-anharmonicity',
         value: (rawStates[i] as Obj).wexe,
         expected: 'wexe > 0 for almost every state (check the sign convention: G(v) = we(v+1/2) - wexe(v+1/2)^2 + ...)',
       });
     }
     if (s.De > 0.01 * s.Be) {
       f.warn(['electronic_states', i, 'De'], `centrifugal distortion De = ${fmt(s.De)} cm-1 is more than 1% of Be; check the unit (De is usually ~1e-6 of Be)`, {
+        code: 'centrifugal-too-large',
         value: (rawStates[i] as Obj).De,
         expected: 'De << Be',
       });
@@ -753,6 +803,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
     if (limit === undefined) return;
     if (limit <= 0) {
       f.error(['electronic_states', i, 'energy'], `state '${s.term}' lies entirely above the dissociation limit (its lowest level is ${fmt(-limit)} cm-1 above it)`, {
+        code: 'state-above-limit',
         value: (rawStates[i] as Obj).energy,
         expected: `a bound state below the limit at ${fmt(d0 ?? 0)} cm-1, or its own dissociation_energy`,
       });
@@ -761,6 +812,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
     const g0 = termValue(s, 0);
     if (termValue(s, 1) <= g0) {
       f.error(['electronic_states', i, 'wexe'], `the vibrational levels of state '${s.term}' turn over before v = 1 (G(1) <= G(0)); the ladder has no excited levels`, {
+        code: 'ladder-turns-over',
         value: (rawStates[i] as Obj).wexe,
         expected: 'we - 2 wexe + ... > 0 (check the units and signs of we, wexe, weye)',
       });
@@ -771,6 +823,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
       if (v > 0 && (gv <= termValue(s, v - 1) || gv - g0 >= limit)) break;
       if (v >= MAX_VIBRATIONAL_LEVELS) {
         f.error(['electronic_states', i, 'we'], `the vibrational levels of state '${s.term}' never reach the dissociation limit: more than ${MAX_VIBRATIONAL_LEVELS} bound levels`, {
+          code: 'ladder-endless',
           value: (rawStates[i] as Obj).we,
           expected: 'constants and dissociation energy in consistent units (cm-1 when bare numbers)',
         });
@@ -782,6 +835,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
         const byGamma = s.gammae !== undefined && s.Be - s.alphae * (v + 0.5) > 0;
         const field = byGamma ? 'gammae' : 'alphae';
         f.error(['electronic_states', i, field], `B_v = Be - alphae(v+1/2)${s.gammae !== undefined ? ' + gammae(v+1/2)^2' : ''} is ${fmt(bv)} cm-1 at v = ${v}, below the dissociation limit: the rotational ladder of that level would not rise`, {
+          code: 'rotational-ladder-falls',
           value: (rawStates[i] as Obj)[field],
           expected: byGamma
             ? `gammae > ${fmt(-(s.Be - s.alphae * (v + 0.5)) / ((v + 0.5) * (v + 0.5)))} cm-1 so that B_v stays positive for every bound level (check its sign)`
@@ -794,6 +848,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
       if (2 * bv - 4 * dv + 8 * hv <= 0) {
         const field = hv < 0 && 2 * bv - 4 * dv > 0 ? 'He' : 'De';
         f.error(['electronic_states', i, field], `E(v,1) <= E(v,0) at v = ${v} (2B_v - 4D_v + 8H_v = ${fmt(2 * bv - 4 * dv + 8 * hv)} cm-1), below the dissociation limit: the rotational ladder of that level would not rise`, {
+          code: 'rotational-ladder-falls',
           value: (rawStates[i] as Obj)[field],
           expected: 'centrifugal terms that are small corrections to B_v J(J+1) (D_v << B_v, |H_v| << D_v; check the units)',
         });
@@ -802,6 +857,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
       if (dv < 0 && v > 0 && !negativeDvWarned) {
         negativeDvWarned = true;
         f.warn(['electronic_states', i, 'betae'], `D_v = De + betae(v+1/2) is ${fmt(dv)} cm-1 at v = ${v}, below the dissociation limit: the linear D_v is extrapolated past where it holds, and those J ladders rise faster than B_v J(J+1)`, {
+          code: 'centrifugal-extrapolated',
           value: (rawStates[i] as Obj).betae,
           expected: `D_v > 0 for every bound level: |betae| < ${fmt(s.De / (v + 0.5))} cm-1, or constants fitted up to this v`,
         });
@@ -812,6 +868,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
       if (v === 0 && top.turnsOver && top.energy < EARLY_TURNOVER_FRACTION * room) {
         const field = hv < 0 ? 'He' : 'De';
         f.warn(['electronic_states', i, field], `the J ladder of v = 0 of state '${s.term}' turns over at J = ${Math.floor(Math.sqrt(top.x + 0.25) - 0.5)}, ${fmt(top.energy)} cm-1 above J = 0, while the dissociation limit is ${fmt(room)} cm-1 above it: the truncated level expression crowds and then loses the high-J levels, so Cp and S come out wrong at high temperature`, {
+          code: 'j-ladder-turns-over',
           value: (rawStates[i] as Obj)[field],
           expected: hv < 0
             ? 'He from the tables (its sign: usually that of 12 Be^2 - alphae we)'
@@ -823,6 +880,7 @@ function checkDiatomicLadders(ctx: Ctx, states: (DiatomicState | undefined)[], d
   });
   if (totalLevels > MAX_ROVIBRATIONAL_LEVELS) {
     f.error(['electronic_states'], `the level sum would visit about ${fmt(totalLevels)} rovibrational levels; levels this dense are effectively a never-ending ladder`, {
+      code: 'too-many-levels',
       expected: `at most ${fmt(MAX_ROVIBRATIONAL_LEVELS)} levels: check the units of Be and dissociation_energy`,
     });
   }
@@ -847,6 +905,7 @@ function readSpinMixture(ctx: Ctx): NuclearSpinMixture {
   const given = raw === 'equilibrium' || raw === 'frozen' ? raw : undefined;
   if (given !== undefined && input.nuclear_spin_weights === undefined) {
     f.error(['nuclear_spin_mixture'], 'nuclear_spin_mixture needs nuclear_spin_weights: without them the symmetry number divides every level and there is no even/odd-J mixture to choose', {
+      code: 'spin-mixture-without-weights',
       key: true,
       value: raw,
       expected: 'nuclear_spin_weights {even, odd} on a homonuclear diatomic (e.g. {even: 1, odd: 3} for H2), or no nuclear_spin_mixture',
@@ -863,6 +922,7 @@ function readDiatomic(ctx: Ctx): DiatomicReading {
   if (isObj(rawSpin)) {
     if (c && c.known && !(c.symbols.length === 1 && c.atoms === 2)) {
       f.error(['nuclear_spin_weights'], 'nuclear spin weights apply only to a homonuclear diatomic (two atoms of one element)', {
+        code: 'spin-weights-not-homonuclear',
         key: true,
         value: input.composition,
         expected: 'no nuclear_spin_weights for a heteronuclear molecule (its symmetry number is 1)',
@@ -871,6 +931,7 @@ function readDiatomic(ctx: Ctx): DiatomicReading {
     if (Number.isInteger(rawSpin.even) && Number.isInteger(rawSpin.odd) && (rawSpin.even as number) >= 0 && (rawSpin.odd as number) >= 0) {
       if (rawSpin.even === 0 && rawSpin.odd === 0) {
         f.error(['nuclear_spin_weights'], 'nuclear spin weights are both 0: no rotational level would exist', {
+          code: 'spin-weights-zero',
           value: rawSpin,
           expected: 'at least one positive weight, e.g. {even: 1, odd: 3} for H2',
         });
@@ -958,7 +1019,7 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
   if (failed || !species) {
     if (!failed) {
       // Defensive: normalisation could not complete although no check failed; never pass on a half species.
-      diagnostics.push({ severity: 'error', file: doc.file, path: '', message: 'species could not be normalised', species: name });
+      diagnostics.push({ severity: 'error', code: 'not-normalised', file: doc.file, path: '', message: 'species could not be normalised', species: name });
     }
     return { diagnostics };
   }
@@ -1006,6 +1067,7 @@ function nameFindings(docs: readonly LoadedDocument[], withCaseWarnings: boolean
       out.push(
         here({
           severity: 'error',
+          code: 'duplicate-name',
           file: doc.file,
           path: 'name',
           species: name,
@@ -1024,6 +1086,7 @@ function nameFindings(docs: readonly LoadedDocument[], withCaseWarnings: boolean
       out.push(
         here({
           severity: 'warning',
+          code: 'name-differs-in-case',
           file: doc.file,
           path: 'name',
           species: name,

@@ -17,6 +17,7 @@ export function verifySpecies(
   const violations = assessFit(fit, samples, { ...tolerances, continuityOrder });
   return violations.map((v) => ({
     severity: 'error' as const,
+    code: `fit-${v.quantity}`,
     ...where,
     path: `fit.${v.quantity}`,
     message: v.message,

@@ -14,7 +14,6 @@ import type {
 } from '../model.js';
 import { diatomicLevels, diatomicSpinManifolds, higherOrderTermsOf, type DiatomicStateLevels } from '../partition/diatomic.js';
 import { electronicLevelList } from '../partition/electronic.js';
-import { harmonicMoments } from '../partition/harmonic.js';
 import { hinderedRotorLevels, hinderedRotorMoments } from '../partition/hindered-rotor.js';
 import { levelSumMoments, type LevelList } from '../partition/level-sum.js';
 import {
@@ -30,6 +29,7 @@ import { nonlinearRotorMoments } from '../partition/rigid-rotor-nonlinear.js';
 import { DEFAULT_NUCLEAR_SPIN_MIXTURE, frozenMixtureContribution } from '../partition/spin-mixture.js';
 import { translationalMoments } from '../partition/translational.js';
 import { ELECTRON_CONVENTION, formationEnthalpyAt298 } from './reference-states.js';
+import { vibrationFactor } from './vibration-model.js';
 
 export class PhysicsOptionsError extends Error {
   constructor(message: string) {
@@ -64,7 +64,6 @@ function polyatomicInternal(
 ): (T: number) => PartitionMoments {
   const el = electronicLevelList(species.electronicLevels);
   const sigma = species.symmetryNumber;
-  const vib = species.vibrations;
   let rotor: (T: number) => PartitionMoments;
   if (species.structure === 'linear') {
     const [B] = species.rotationalConstants;
@@ -75,13 +74,11 @@ function polyatomicInternal(
     contributions.push(`rigid rotor, nonlinear, classical (A, B, C = ${abc.join(', ')} cm-1, sigma = ${sigma})`);
     rotor = (T) => nonlinearRotorMoments(abc, sigma, T);
   }
-  contributions.push(
-    `harmonic oscillators (${vib.reduce((n, v) => n + v.degeneracy, 0)} modes)`,
-    `electronic level sum (${species.electronicLevels.length} levels)`,
-  );
+  const vibration = vibrationFactor(species, contributions);
+  contributions.push(`electronic level sum (${species.electronicLevels.length} levels)`);
   const rotors = species.internalRotors;
   if (rotors === undefined || rotors.length === 0) {
-    return (T) => addMoments([rotor(T), harmonicMoments(vib, T), levelSumMoments(el, T)]);
+    return (T) => addMoments([rotor(T), vibration(T), levelSumMoments(el, T)]);
   }
   // Each torsion is one more independent factor (its levels built here, once); species without rotors keep
   // the three-factor sum above, bit for bit.
@@ -93,7 +90,7 @@ function polyatomicInternal(
     return levels;
   });
   return (T) =>
-    addMoments([rotor(T), harmonicMoments(vib, T), levelSumMoments(el, T), ...torsions.map((l) => hinderedRotorMoments(l, T))]);
+    addMoments([rotor(T), vibration(T), levelSumMoments(el, T), ...torsions.map((l) => hinderedRotorMoments(l, T))]);
 }
 
 /**

@@ -23,7 +23,13 @@ interface BadCase {
   code: 1 | 2;
   /** Each must appear in stderr. */
   expect: Array<string | RegExp>;
+  /** The stable code of the diagnostic the case is about. */
+  diag?: string;
 }
+
+/** A diagnostic line (`file[:line:col]: error|warning: ...`), and the same ending in its `[code]`. */
+const DIAGNOSTIC_LINE = /^(?!qforge: )[^\s:][^:]*(:\d+:\d+)?: (error|warning): /;
+const CODED_LINE = / \[[a-z0-9]+(-[a-z0-9]+)*\]$/;
 
 const atom = (name: string, extra = '') =>
   `name: ${name}\ncomposition: {He: 1}\nenthalpy_of_formation: 0\nsources: ["invented for a test"]\nstructure: atom\n${extra}`;
@@ -366,6 +372,9 @@ describe('bad inputs: exit code, located message, outputs untouched', () => {
         expect(r.code, r.stderr).toBe(c.code);
         for (const e of c.expect) expect(r.stderr).toMatch(e);
         expect(r.stderr).not.toMatch(/internal error/);
+        // Every diagnostic line carries its stable code (pipeline/core/diagnostics.ts).
+        for (const line of r.stderr.split('\n').filter((l) => DIAGNOSTIC_LINE.test(l))) expect(line).toMatch(CODED_LINE);
+        if (c.diag) expect(r.stderr).toContain(`[${c.diag}]`);
         expect(await hashFolder(ws.out)).toBe(before);
         if (c.argv?.includes('.')) expect(await readFile(path.join(ws.root, 'precious.txt'), 'utf8')).toBe('keep me');
         if (c.argv?.includes('mine')) expect(await readFile(path.join(ws.root, 'mine', 'precious.txt'), 'utf8')).toBe('keep me');
@@ -450,7 +459,7 @@ describe('fit.sampling_step against the fit ranges (rules of src/nasa7/samples.t
     });
     expect(d).toBeDefined();
     expect(formatDiagnostic(d!)).toBe(
-      'db/He.yaml:6:21: error: [He] temperature_ranges: temperature_ranges 200/400/6000 K are too narrow for fit.sampling_step = 50 K (set in db/qforge.yaml:2:18): the low range [200, 400] K gets 6 distinct sample temperatures; the fit needs at least 7 (got {"low":200,"mid":400,"high":6000}; expected fit.sampling_step <= 49.5 K for these ranges, or wider temperature_ranges)',
+      'db/He.yaml:6:21: error: [He] temperature_ranges: temperature_ranges 200/400/6000 K are too narrow for fit.sampling_step = 50 K (set in db/qforge.yaml:2:18): the low range [200, 400] K gets 6 distinct sample temperatures; the fit needs at least 7 (got {"low":200,"mid":400,"high":6000}; expected fit.sampling_step <= 49.5 K for these ranges, or wider temperature_ranges) [sampling-step-too-coarse]',
     );
     expect(checkSpeciesSampling({ ranges: { low: 200, mid: 1000, high: 6000 }, settings, file: 'db/He.yaml', species: 'He' })).toBeUndefined();
   });

@@ -108,7 +108,7 @@ describe('checkAgainstSchema', () => {
       ['mode', 2, 7],
       ['modes', 3, 1],
     ]);
-    expect(formatDiagnostic(ds[1]!)).toBe("qforge.yaml:2:7: error: mode: not an accepted value (got \"quick\"; expected one of fast, careful)");
+    expect(formatDiagnostic(ds[1]!)).toBe("qforge.yaml:2:7: error: mode: not an accepted value (got \"quick\"; expected one of fast, careful) [value-not-accepted]");
     expect(ds[2]!.message).toBe("unknown key 'modes' (did you mean 'mode'?)");
     expect(ds[2]!.expected).toBe('one of title, mode, optimise, tolerance, kind, extra');
   });

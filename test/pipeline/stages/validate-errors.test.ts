@@ -504,7 +504,7 @@ describe('record name length', () => {
   it('a 17-character name of accepted characters gets the length message only', () => {
     const errors = diagnosticsOf(edit(ATOM, { 1: 'name: ABCDEFGHIJKLMNOPQ' })).filter((d) => d.severity === 'error');
     expect(errors.map(formatDiagnostic)).toEqual([
-      'species/bad.yaml:1:7: error: [ABCDEFGHIJKLMNOPQ] name: too long: 17 characters (got "ABCDEFGHIJKLMNOPQ"; expected at most 16 characters: 1-16 characters from A-Z a-z 0-9 ( ) + * , . _ - (the name field of the 80-column record))',
+      'species/bad.yaml:1:7: error: [ABCDEFGHIJKLMNOPQ] name: too long: 17 characters (got "ABCDEFGHIJKLMNOPQ"; expected at most 16 characters: 1-16 characters from A-Z a-z 0-9 ( ) + * , . _ - (the name field of the 80-column record)) [too-long]',
     ]);
   });
 });

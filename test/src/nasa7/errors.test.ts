@@ -1,5 +1,5 @@
 /**
- * Setups the fit must refuse with a clear FitError. Data: the invented known polynomial
+ * Setups the fit must refuse with a clear FitError. Data: the hand-written known polynomial
  * (known-polynomial.ts) and the closed-form RRHO N2 model (synthetic.ts; Huber & Herzberg 1979 constants).
  */
 import { describe, expect, it } from 'vitest';

@@ -1,7 +1,7 @@
 /**
  * Evaluation of the NASA-7 form (McBride, Gordon & Reno 1993, NASA TM-4513, eqs. 2–4) checked against
  * thermodynamic identities it must satisfy (published definitions): d(H/R)/dT = Cp/R, d(S/R)/dT = Cp/(R T),
- * and against a direct, non-Horner evaluation. Coefficients INVENTED (known-polynomial.ts).
+ * and against a direct, non-Horner evaluation. Coefficients written by hand for this test (known-polynomial.ts).
  */
 import { describe, expect, it } from 'vitest';
 import { cpDerivative, cpSecondDerivative, evaluateNasa7, evaluateRange, rangeAt } from '../../../src/nasa7/evaluate.js';

@@ -1,7 +1,7 @@
 /**
  * The constrained fit. Sources: the polynomial form of McBride, Gordon & Reno 1993 (NASA TM-4513);
  * closed-form RRHO data (formulas named in synthetic.ts, constants from Huber & Herzberg 1979 and from
- * memory as marked there); known-coefficient data constructed in known-polynomial.ts (invented values).
+ * memory as marked there); known-coefficient data constructed in known-polynomial.ts (coefficients written by hand for this test).
  */
 import { describe, expect, it } from 'vitest';
 import { T_REF } from '../../../src/constants.js';
@@ -16,7 +16,7 @@ function maxRelativeDifference(a: Coefficients7, b: Coefficients7): number {
   return Math.max(...a.map((v, i) => Math.abs(v - b[i]!) / Math.abs(b[i]!)));
 }
 
-describe('recovering a known 14-coefficient set (invented, constraint-satisfying by construction)', () => {
+describe('recovering a known 14-coefficient set (written by hand for this test, constraint-satisfying by construction)', () => {
   for (const order of [1, 2] as const) {
     it(`continuity order ${order}: every coefficient back to 1e-9 relative`, () => {
       const known = knownPolynomial(order);

@@ -2,7 +2,7 @@
  * The 80-column writer checked column by column against the published layout of the NASA coefficient
  * records (Gordon & McBride 1971, NASA SP-273; McBride, Gordon & Reno 1993, NASA TM-4513): line 1 name
  * 1–18, identifier 19–24, four element symbol(2)/count(3) pairs 25–44, phase 45, T_low 46–55, T_high 56–65,
- * T_mid 66–73, '1' in 80; lines 2–4 E15.8 fields, line number in 80. Coefficients are INVENTED.
+ * T_mid 66–73, '1' in 80; lines 2–4 E15.8 fields, line number in 80. Coefficients are written by hand for this test.
  */
 import { describe, expect, it } from 'vitest';
 import { Nasa7FormatError } from '../../../src/nasa7/errors.js';
@@ -17,12 +17,12 @@ const record: Nasa7Record = GOLDEN_RECORDS[1]!; // NO+, three elements incl. the
 
 describe('E15.8', () => {
   it.each([
-    [2.92664, ' 2.92664000E+00'],
+    [3.1428571, ' 3.14285710E+00'],
     [-1.23456789e-3, '-1.23456789E-03'],
     [0, ' 0.00000000E+00'],
     [-0, ' 0.00000000E+00'],
     [9.9999999996, ' 1.00000000E+01'], // mantissa carry into the exponent
-    [-118244.276, '-1.18244276E+05'],
+    [-117901.234, '-1.17901234E+05'],
     [1e-99, ' 1.00000000E-99'],
     [3e-100, ' 0.00000000E+00'], // underflow → zero
     [-9.87654321e99, '-9.87654321E+99'],
@@ -75,8 +75,8 @@ describe('record layout, column by column', () => {
     expect(cols(lines[1]!, 76, 79)).toBe('    ');
     expect(cols(lines[3]!, 61, 79)).toBe(' '.repeat(19));
     // A sample field in full: sign or blank, d.dddddddd, E, exponent sign, two digits.
-    expect(cols(lines[1]!, 1, 15)).toBe(' 2.94587702E+00');
-    expect(cols(lines[1]!, 31, 45)).toBe('-4.95503196E-07');
+    expect(cols(lines[1]!, 1, 15)).toBe(' 2.86428571E+00');
+    expect(cols(lines[1]!, 31, 45)).toBe('-6.42857143E-07');
   });
 
   it('file: THERMO, default ranges line, records, END, "\\n" endings, deterministic', () => {

@@ -1,5 +1,5 @@
 /**
- * Golden file of the 80-column writer: the fixed, INVENTED records of test/fixtures/nasa7/golden-records.ts
+ * Golden file of the 80-column writer: the fixed, hand-written records of test/fixtures/nasa7/golden-records.ts
  * must produce test/fixtures/nasa7/golden.txt byte for byte (source of the layout: the published record of
  * Gordon & McBride 1971, NASA SP-273;
  * McBride, Gordon & Reno 1993, NASA TM-4513). To update after a deliberate layout change:

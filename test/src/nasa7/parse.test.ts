@@ -1,6 +1,6 @@
 /**
  * Reader of the four-line 80-column NASA layout (Gordon & McBride 1971, NASA SP-273; McBride, Gordon &
- * Reno 1993, NASA TM-4513). Inputs are hand-written in that layout with INVENTED coefficients, in the
+ * Reno 1993, NASA TM-4513). Inputs are hand-written in that layout with coefficients written by hand for this test, in the
  * variants such files commonly show (common practice): THERMO ALL header, '!' comments, blank lines,
  * Fortran D exponents, no column-80 line numbers, real-valued element counts.
  */
@@ -11,7 +11,7 @@ import { GOLDEN_RECORDS } from '../../fixtures/nasa7/golden-records.js';
 
 const rec = (lines: string[]) => lines.join('\n');
 
-// A record in the published layout; coefficients INVENTED.
+// A record in the published layout; coefficients written by hand for this test.
 const L1 = 'AB2               TEST  A   1B   2          G   300.000  5000.000 1000.00      1';
 const L2 = ' 1.00000000E+00 2.00000000E-03-3.00000000E-07 4.00000000E-11-5.00000000E-15    2';
 const L3 = '-6.00000000E+03 7.00000000E+00 1.10000000E+00 2.20000000E-03-3.30000000E-06    3';

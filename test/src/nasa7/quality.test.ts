@@ -1,6 +1,6 @@
 /**
  * Fit checks. Data: closed-form RRHO models (synthetic.ts; constants from Huber & Herzberg 1979 and from
- * memory as marked there) and the invented known polynomial (known-polynomial.ts). The ideal-gas bound
+ * memory as marked there) and the hand-written known polynomial (known-polynomial.ts). The ideal-gas bound
  * Cp/R ≥ 5/2 is textbook statistical mechanics (McQuarrie, Statistical Mechanics, 1976).
  */
 import { describe, expect, it } from 'vitest';
@@ -62,7 +62,7 @@ describe('assessFit', () => {
   });
 
   it('a polynomial whose Cp turns over beyond the range is caught, even when it matches the data exactly', () => {
-    // INVENTED single polynomial (same set both sides, so continuous): Cp/R = 3.5 + 1e-4 (T − 150)², a
+    // written by hand for this test single polynomial (same set both sides, so continuous): Cp/R = 3.5 + 1e-4 (T − 150)², a
     // minimum at 150 K, i.e. 50 K below tLow = 200 K; monotone over the data 200–2000 K.
     const k = 1e-4;
     const c: Coefficients7 = [3.5 + k * 150 * 150, -2 * k * 150, k, 0, 0, 0, 0];
@@ -79,7 +79,7 @@ describe('assessFit', () => {
   });
 
   it('continuing a trend beyond the end is not a turn-over (a real Cp minimum inside the range, as for NO)', () => {
-    // INVENTED: Cp/R = 3.5 + 1e-5 (T − 250)², minimum at 250 K inside the data, rising steadily below 200 K.
+    // written by hand for this test: Cp/R = 3.5 + 1e-5 (T − 250)², minimum at 250 K inside the data, rising steadily below 200 K.
     const k = 1e-5;
     const c: Coefficients7 = [3.5 + k * 250 * 250, -2 * k * 250, k, 0, 0, 0, 0];
     const poly = { tLow: 200, tMid: 1000, tHigh: 2000, low: c, high: [...c] as Coefficients7 };

@@ -6,13 +6,14 @@
  * pure function of the species and its plan (no shared mutable state); results are collected into a map
  * and emitted in name order, so the outputs do not depend on `jobs` or on the order of completion.
  */
+import { stat } from 'node:fs/promises';
 import path from 'node:path';
 import pLimit from 'p-limit';
 import type { Species, StandardProperties } from '../src/model.js';
 import { Nasa7FormatError } from '../src/nasa7/errors.js';
 import type { FitOptions, FitResult } from '../src/nasa7/types.js';
 import { acquireOutputLock, OutputStaging, recoverOutputDir, type PublishHooks } from './storage/atomic-write.js';
-import { cached, defaultCacheDir, StageCache, type CacheKind, type CacheOutcome } from './storage/cache.js';
+import { cached, cacheEntryPath, defaultCacheDir, StageCache, type CacheKind, type CacheOutcome } from './storage/cache.js';
 import { recordCacheUse } from './storage/cache-uses.js';
 import { shardLabel, shardOf, shardRecord, type Shard } from './core/shard.js';
 import { StreamingEmitter } from './stages/emit-stream.js';
@@ -307,21 +308,36 @@ function keyList(keys: ReturnType<typeof stageKeys>, settings: DatabaseSettings)
   return [`samples/${keys.samples}`, `fit/${keys.fit}`, ...(settings.outputs.tables ? [`table/${keys.table}`] : [])];
 }
 
+/** `kind/key` of the cache entries one species uses; undefined when it fails before using the cache. */
+export function speciesCacheKeys(v: ValidSpecies, settings: DatabaseSettings): string[] | undefined {
+  const plan = planSpecies(v.species, settings);
+  let fitOptions: FitOptions;
+  try {
+    fitOptions = fitOptionsFor(plan.fitOptions);
+  } catch {
+    return undefined;
+  }
+  const inputHash = `sha256:${sha256Hex(canonicalJson(v.normalisedInput))}`;
+  return keyList(stageKeys(inputHash, v.species, plan, fitOptions), settings);
+}
+
 /** The cache entries the current species of a checked database use (what `qforge cache prune` keeps). */
 export function currentCacheKeys(check: CheckReport): string[] {
-  const out: string[] = [];
-  for (const v of check.species) {
-    const plan = planSpecies(v.species, check.settings);
-    let fitOptions: FitOptions;
-    try {
-      fitOptions = fitOptionsFor(plan.fitOptions);
-    } catch {
-      continue; // such a species fails before it uses the cache
+  return check.species.flatMap((v) => speciesCacheKeys(v, check.settings) ?? []);
+}
+
+/** Whether every stage result of every species of a batch is in the cache (then no worker is needed). */
+async function allCached(cacheDir: string | undefined, batch: readonly ValidSpecies[], settings: DatabaseSettings): Promise<boolean> {
+  if (cacheDir === undefined) return false;
+  for (const v of batch) {
+    const keys = speciesCacheKeys(v, settings);
+    if (!keys) return false;
+    for (const k of keys) {
+      const [kind, key] = k.split('/') as [CacheKind, string];
+      if (!(await stat(cacheEntryPath(cacheDir, kind, key)).then(() => true, () => false))) return false;
     }
-    const inputHash = `sha256:${sha256Hex(canonicalJson(v.normalisedInput))}`;
-    out.push(...keyList(stageKeys(inputHash, v.species, plan, fitOptions), check.settings));
   }
-  return out;
+  return true;
 }
 
 /** Where a fit check's limit came from, for the message: the settings file (file:line) or a default. */
@@ -568,6 +584,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     jobs,
     init: { settings, limits: plainLimits(check), cacheDir },
     inline: (v) => buildOneSpecies(v, settings, cache, check),
+    cheap: (batch) => allCached(cacheDir, batch, settings),
     crashed: (v, reason) => ({
       valid: v,
       diagnostics: [
@@ -585,8 +602,9 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
       timings: { load: v.loadMs, validate: v.validateMs },
     }),
   });
+  let emitter: StreamingEmitter | undefined;
   try {
-    const emitter = staging ? await StreamingEmitter.open(staging, settings) : undefined;
+    emitter = staging ? await StreamingEmitter.open(staging, settings) : undefined;
 
     // In name order: emit (a record the 80-column layout cannot hold fails its species), then summarise.
     const sink = async (o: SpeciesOutcome): Promise<void> => {
@@ -684,7 +702,10 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     const status: Summary['status'] = !anyError ? 'ok' : mayWrite ? 'partial' : 'failed';
 
     const finalStaging = mayWrite ? (staging ?? (await OutputStaging.open(opts.out))) : undefined;
-    if (finalStaging) await (emitter ?? (await StreamingEmitter.open(finalStaging, settings))).finish();
+    if (finalStaging) {
+      emitter ??= await StreamingEmitter.open(finalStaging, settings);
+      await emitter.finish();
+    }
     if (finalStaging && reportWriter) {
       const report = reportWriter.finish(status, shardInvalid.map((i) => `${i.file}#${i.document}: ${i.diagnostics.find((d) => d.severity === 'error')?.message ?? 'invalid'}`));
       await finalStaging.write('report.html', report.main);
@@ -789,6 +810,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     return report;
   } finally {
     await pool.close();
+    await emitter?.close();
     if (!published) await staging?.discard();
   }
 }

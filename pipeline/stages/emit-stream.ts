@@ -138,6 +138,12 @@ export class StreamingEmitter {
     if (this.settings.outputs.tables) await this.staging.write('tables/README.txt', renderTablesReadme(this.settings));
   }
 
+  /** Closes the scratch files (idempotent; `finish` closes them itself). */
+  async close(): Promise<void> {
+    await this.thermo?.close();
+    await this.nasa7?.close();
+  }
+
   private async frame(rel: string, head: string, tail: string): Promise<void> {
     const out = await this.staging.stream(rel);
     try {

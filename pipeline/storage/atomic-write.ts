@@ -19,7 +19,7 @@
  * without a marker is never replaced. (A marker of an older qforge, without a list, is trusted as before.)
  */
 import { randomBytes } from 'node:crypto';
-import { lstat, mkdir, open, readdir, readFile, rename, rm, stat } from 'node:fs/promises';
+import { lstat, mkdir, open, readdir, readFile, rename, rm, stat, type FileHandle } from 'node:fs/promises';
 import path from 'node:path';
 import { compareText } from '../core/text.js';
 
@@ -309,6 +309,21 @@ export interface StagedStream {
   close(): Promise<void>;
 }
 
+/** A file handle as a StagedStream whose close may be called more than once. */
+function closeOnce(fh: FileHandle): StagedStream {
+  let closed = false;
+  return {
+    write: async (text: string) => {
+      await fh.write(text);
+    },
+    close: async () => {
+      if (closed) return;
+      closed = true;
+      await fh.close();
+    },
+  };
+}
+
 /**
  * The temporary folder a build writes into while it runs (`.<OUT>.qforge-new-<pid>-<random>` next to OUT),
  * published as OUT by `publish` with the swap described in the module comment, or removed by `discard`.
@@ -368,13 +383,7 @@ export class OutputStaging {
   }
 
   async stream(rel: string): Promise<StagedStream> {
-    const fh = await open(await this.target(rel), 'wx');
-    return {
-      write: async (text: string) => {
-        await fh.write(text);
-      },
-      close: () => fh.close(),
-    };
+    return closeOnce(await open(await this.target(rel), 'wx'));
   }
 
   /** Path of a scratch file (not published; removed by `dropScratch` or with the folder). */
@@ -384,13 +393,7 @@ export class OutputStaging {
 
   /** An unlisted scratch file in the staging folder, for pieces assembled later (thermo.json's species). */
   async scratch(rel: string): Promise<StagedStream> {
-    const fh = await open(this.scratchPath(rel), 'wx');
-    return {
-      write: async (text: string) => {
-        await fh.write(text);
-      },
-      close: () => fh.close(),
-    };
+    return closeOnce(await open(this.scratchPath(rel), 'wx'));
   }
 
   async dropScratch(rel: string): Promise<void> {

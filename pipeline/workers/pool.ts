@@ -8,6 +8,9 @@
  * the crash, a fresh worker takes the remaining batches, and after repeated crashes the remaining batches
  * fail the same way instead of waiting. The pool never hangs on a dead worker.
  *
+ * Workers start lazily, on the first batch that needs computing: a batch whose every stage result is in
+ * the cache is run on the main thread (reading an entry is cheaper than starting a thread).
+ *
  * Workers run the compiled code in dist/ (`npm run build`); from TypeScript sources (the tests) the pool
  * points at the dist/ file of the same tree.
  */
@@ -32,6 +35,11 @@ export interface PoolOptions {
   inline: (v: ValidSpecies) => Promise<SpeciesOutcome>;
   /** The outcome of a species whose worker died (an error diagnostic naming `reason`). */
   crashed: (v: ValidSpecies, reason: string) => SpeciesOutcome;
+  /**
+   * Whether a batch is cheap enough for this thread (every stage result already cached): then it is run
+   * inline and no worker is started for it, so a no-change rebuild starts no thread at all.
+   */
+  cheap?: (batch: readonly ValidSpecies[]) => Promise<boolean>;
 }
 
 /** The worker entry module: next to this file when compiled, in dist/ when running from sources. */
@@ -93,7 +101,12 @@ class ThreadPool implements SpeciesPool {
     }
   }
 
-  run(batch: ValidSpecies[]): Promise<SpeciesOutcome[]> {
+  async run(batch: ValidSpecies[]): Promise<SpeciesOutcome[]> {
+    if (this.opts.cheap && (await this.opts.cheap(batch))) {
+      const out: SpeciesOutcome[] = [];
+      for (const v of batch) out.push(await this.opts.inline(v));
+      return out;
+    }
     return new Promise((resolve) => {
       this.queue.push({ req: { id: this.nextId++, species: batch }, resolve });
       this.pump();

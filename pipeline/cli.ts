@@ -124,6 +124,7 @@ interface BuildFlags {
   shard?: Shard;
   quiet?: boolean;
   json?: boolean;
+  strict?: boolean;
   report?: boolean;
   reportAgainst?: string;
 }
@@ -213,6 +214,7 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('--shard <i/n>', 'build only shard I of N (by a stable hash of the species name); see qforge merge', shardArg)
     .option('-q, --quiet', 'no progress output')
     .option('--json', 'print the build summary as JSON on stdout')
+    .option('--strict', 'every warning not accepted in writing (accepted_warnings) is an error')
     .option('--report', 'also write report.html (overview and charts of every species)')
     .option('--report-against <old>', 'report: compare with this earlier build folder (implies --report)')
     .addHelpText('after', EXAMPLES.build)
@@ -250,8 +252,9 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .description('load and validate only: report every problem of every file at once')
     .argument('[dir]', 'database folder', 'species')
     .option('--json', 'print the diagnostics as JSON on stdout')
+    .option('--strict', 'every warning not accepted in writing (accepted_warnings) is an error')
     .addHelpText('after', EXAMPLES.check)
-    .action(async (dir: string, o: { json?: boolean }) => {
+    .action(async (dir: string, o: { json?: boolean; strict?: boolean }) => {
       exitCode = await checkCommand(io, abs(dir), o);
     });
 
@@ -458,6 +461,7 @@ async function buildCommand(
       jobs: o.jobs ?? availableParallelism(),
       keepGoing: !!o.keepGoing,
       ...(o.shard ? { shard: o.shard } : {}),
+      strict: !!o.strict,
       cacheDir,
       ...(o.report || o.reportAgainst !== undefined
         ? { report: o.reportAgainst !== undefined ? { against: { path: path.resolve(io.cwd, o.reportAgainst), label: o.reportAgainst } } : {} }
@@ -511,10 +515,10 @@ async function buildCommand(
   return report.exitCode;
 }
 
-async function checkCommand(io: CliIo, dir: string, o: { json?: boolean }): Promise<number> {
+async function checkCommand(io: CliIo, dir: string, o: { json?: boolean; strict?: boolean }): Promise<number> {
   await assertFolder(dir, `database folder ${displayPath(io.cwd, dir)}`);
   const [{ checkDatabase }, { formatDiagnostic, hasErrors }] = await Promise.all([import('./runner.js'), import('./core/diagnostics.js')]);
-  const report = await checkDatabase({ dir, displayBase: io.cwd });
+  const report = await checkDatabase({ dir, displayBase: io.cwd, strict: !!o.strict });
   printDiagnostics(io, report.diagnostics, formatDiagnostic);
   const errors = report.diagnostics.filter((d) => d.severity === 'error').length;
   const warnings = report.diagnostics.length - errors;

@@ -104,6 +104,29 @@ interface SpeciesBase {
   structure: Structure;
   /** Optional per-species temperature ranges for the fit; pipeline settings supply the default. */
   temperatureRanges?: { low?: number; mid?: number; high?: number };
+  /** Standard uncertainties of the inputs (absent when the input declares none: every u is then zero). */
+  uncertainties?: InputUncertainties;
+}
+
+/**
+ * Standard uncertainties of a species' inputs, internal units; every key optional (absent = exact). See
+ * `uncertainties` in schemas/species.schema.json and src/uncertainty/.
+ */
+export interface InputUncertainties {
+  /** Fraction of each vibration wavenumber (or of ωe of each diatomic state). */
+  vibrationsRelative?: number;
+  /** cm⁻¹ per entry of `vibrations` (alternative to vibrationsRelative). */
+  vibrations?: number[];
+  /** Fraction by which all wavenumbers move together. */
+  scaleFactorRelative?: number;
+  rotationalConstantsRelative?: number;
+  /** cm⁻¹ for each excited electronic level (or diatomic state Te). */
+  electronicEnergies?: number;
+  barriersRelative?: number;
+  anharmonicRelative?: number;
+  /** J/mol */
+  enthalpyOfFormation?: number;
+  molarMassRelative?: number;
 }
 
 export interface AtomSpecies extends SpeciesBase {

@@ -13,20 +13,23 @@ export interface UncertainInput {
   u: number;
   /** Unit of value and u, for the report. */
   unit: string;
+  /** How its sensitivities were obtained. */
+  method?: SensitivityMethod;
 }
 
-/** Sensitivities of the dimensionless functions to one input at one temperature: d(f)/d(input). */
+/**
+ * Sensitivities of the standard functions to one input at one temperature, d(property)/d(input), in table
+ * units per unit of the input: Cp°, S° in J/(mol K); H° − H°298 and H° in kJ/mol.
+ */
 export interface Sensitivity {
   cp: number;
-  /** d(S/R)/dx */
   s: number;
-  /** d[(H − H298)/R]/dx, K per unit of x */
   hMinusH298: number;
-  /** d[H/R]/dx (absolute H = ΔfH°298 + H − H298), K per unit of x */
   h: number;
-  /** How the derivative was obtained. */
-  method: 'analytic' | 'central-difference';
 }
+
+/** How the sensitivities of an input were obtained. */
+export type SensitivityMethod = 'analytic' | 'central-difference';
 
 export type UncertaintyQuantity = 'cp' | 's' | 'hMinusH298' | 'h';
 

@@ -607,7 +607,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   let published = false;
   const pool = createSpeciesPool({
     jobs,
-    init: { settings, limits: plainLimits(check), cacheDir },
+    init: { settings, limits: plainLimits(check), cacheDir, codeFingerprint: codeFingerprint() },
     inline: (v) => buildOneSpecies(v, settings, cache, check),
     cheap: (batch) => allCached(cacheDir, batch, settings),
     crashed: (v, reason) => ({

@@ -18,6 +18,8 @@ export interface WorkerInit {
   limits: PlainLimitSource;
   /** Cache folder, or undefined when the cache is off. */
   cacheDir: string | undefined;
+  /** The main thread's code fingerprint (cache keys), see storage/code-fingerprint.ts. */
+  codeFingerprint: string;
   /** TEST-ONLY (test/pipeline/workers.test.ts): the worker exits abruptly when it reaches this species. */
   testCrashOn?: string;
 }

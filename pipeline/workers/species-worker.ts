@@ -7,10 +7,12 @@
 import { parentPort, workerData } from 'node:worker_threads';
 import { buildOneSpecies, type LimitSource } from '../runner.js';
 import { StageCache } from '../storage/cache.js';
+import { useCodeFingerprint } from '../storage/code-fingerprint.js';
 import { errorText } from '../core/text.js';
 import type { BatchRequest, WorkerInit, WorkerReply } from './protocol.js';
 
 const init = workerData as WorkerInit;
+useCodeFingerprint(init.codeFingerprint);
 const cache = new StageCache(init.cacheDir);
 const limits: LimitSource = {
   settingsSetAt: (segments) => init.limits.setAt[segments.join('.')],

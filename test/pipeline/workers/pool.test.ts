@@ -52,7 +52,7 @@ describe('worker pool', () => {
     const cache = new StageCache(undefined);
     const pool = createSpeciesPool({
       jobs: 2,
-      init: { settings: check.settings, limits: { setAt: {} }, cacheDir: undefined, testCrashOn: 'CO' },
+      init: { settings: check.settings, limits: { setAt: {} }, cacheDir: undefined, codeFingerprint: 'test', testCrashOn: 'CO' },
       inline: (v) => buildOneSpecies(v, check.settings, cache, check),
       crashed: (v, reason) => ({ valid: v, diagnostics: [{ severity: 'error', file: v.displayFile, path: '', message: reason }], cache: {}, cacheNotes: [], timings: {} }),
     });

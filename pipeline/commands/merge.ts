@@ -1,11 +1,11 @@
 /** `qforge merge SHARD_DIR... --out OUT`: joins the shards of a sharded build (storage/merge-shards.ts). */
-import { realpath } from 'node:fs/promises';
+import { realpath, stat } from 'node:fs/promises';
 import path from 'node:path';
-import { assertReplaceable } from '../storage/atomic-write.js';
+import { assertReplaceable, resolveReadableBuild } from '../storage/atomic-write.js';
 import { MergeError, mergeShards, type ShardInput } from '../storage/merge-shards.js';
 import type { CliIo } from './io.js';
 
-/** A shard folder inside OUT (or OUT itself) would be deleted by the swap. */
+/** A missing shard folder, or one inside OUT (or OUT itself, deleted by the swap): exit 2. */
 class MergeUsageError extends Error {
   constructor(message: string) {
     super(message);
@@ -16,6 +16,8 @@ class MergeUsageError extends Error {
 export async function mergeCommand(io: CliIo, shards: ShardInput[], out: ShardInput, o: { quiet?: boolean }): Promise<number> {
   const outReal = await realpath(out.path).catch(() => path.resolve(out.path));
   for (const s of shards) {
+    const dir = await resolveReadableBuild(s.path);
+    if (!(await stat(dir).then((st) => st.isDirectory(), () => false))) throw new MergeUsageError(`shard folder ${s.label}: no such folder`);
     const real = await realpath(s.path).catch(() => path.resolve(s.path));
     const rel = path.relative(outReal, real);
     if (rel === '' || (!rel.startsWith('..') && !path.isAbsolute(rel))) {

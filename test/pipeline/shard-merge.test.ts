@@ -76,6 +76,9 @@ describe('build --shard and merge', () => {
     expect(notShard.code).toBe(1);
     expect(notShard.stderr).toMatch(/full is not a shard/);
     expect(await hashFolder(path.join(root, 'refused'))).toBe(before);
+    const absent = await runCli(['merge', 's3-1', 'no-such-shard', '--out', 'refused'], root);
+    expect(absent.code).toBe(2);
+    expect(absent.stderr).toMatch(/no-such-shard: no such folder/);
     const bad = await runCli(['build', 'demo', '--out', 'x', '--shard', '4/3'], root);
     expect(bad.code).toBe(2);
     expect(bad.stderr).toMatch(/--shard/);

@@ -33,10 +33,14 @@ export type WorkerReply =
   | { id: number; outcomes: SpeciesOutcome[]; cacheWriteProblem?: string }
   | { id: number; error: string };
 
-/** Settings keys whose position the per-species stages quote (see runner.ts `locateFitViolation`). */
+/**
+ * Settings keys whose position the per-species stages quote (stages/limit-origin.ts, the sampling-step
+ * check in runner.ts `buildOneSpecies`). A new quoted key must be added here, or workers print "default".
+ */
 export const LIMIT_KEYS: ReadonlyArray<readonly string[]> = [
-  ['tolerances', 'cp'],
-  ['tolerances', 'h'],
-  ['tolerances', 's'],
+  ...(['cp', 'h', 's'] as const).flatMap((q) => [
+    ['tolerances', q],
+    ['tolerances', 'relative_to_cp', q],
+  ]),
   ['fit', 'sampling_step'],
 ];

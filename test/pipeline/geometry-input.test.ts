@@ -187,6 +187,20 @@ describe('geometry input: normalisation', () => {
   });
 });
 
+describe('geometry in a conformer', () => {
+  it('a one-conformer list with the geometry gives the plain species (same normalisation, same S)', () => {
+    const body = ETHANE.slice(ETHANE.indexOf('geometry:\n'));
+    const indented = body.split('\n').map((l) => (l === '' ? l : `    ${l}`)).join('\n');
+    const yaml = ETHANE.slice(0, ETHANE.indexOf('geometry:\n')) + `conformers:\n  - name: staggered\n    energy: 0\n${indented.replace(/^    /, '    ')}`;
+    const v = validateSpecies(parseYamlText(yaml, FILE).documents[0]!);
+    expect(v.diagnostics.filter((d) => d.severity === 'error').map(formatDiagnostic)).toEqual([]);
+    const conf = v.species as NonlinearSpecies;
+    expect(conf.conformers![0]!.symmetryNumber).toBe(6);
+    expect(conf.conformers![0]!.internalRotors![0]!.symmetryNumber).toBe(3);
+    expect(Math.abs(s298(conf).S - s298(speciesOf(ETHANE)).S)).toBeLessThan(1e-9);
+  });
+});
+
 describe('geometry_file', () => {
   it('reads the XYZ file next to the species file; its problems point into the XYZ file', async () => {
     const dir = await mkdtemp(path.join(tmpdir(), 'qforge-geo-'));

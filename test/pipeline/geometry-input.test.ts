@@ -5,7 +5,7 @@
  * (sources named there); the mistakes and the scan points (generated from V3 = 12.1 kJ/mol by our own
  * formula) are invented.
  */
-import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
+import { mkdtemp, readFile, rm, symlink, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -218,6 +218,17 @@ describe('geometry_file', () => {
       await writeFile(path.join(dir, 'CH3OH.yaml'), yaml.replace('bad.xyz', '../outside.xyz'));
       const outside = validateSpecies((await loadYamlFile(path.join(dir, 'CH3OH.yaml'), 'db/CH3OH.yaml')).documents[0]!);
       expect(outside.diagnostics.map((x) => x.code)).toContain('geometry-file-outside');
+      // A symbolic link out of the folder is refused too (never read, never echoed).
+      const elsewhere = await mkdtemp(path.join(tmpdir(), 'qforge-geo-out-'));
+      try {
+        await writeFile(path.join(elsewhere, 'secret.xyz'), '1\nsecret\nC 0 0 0\n');
+        await symlink(path.join(elsewhere, 'secret.xyz'), path.join(dir, 'link.xyz'));
+        await writeFile(path.join(dir, 'CH3OH.yaml'), yaml.replace('bad.xyz', 'link.xyz'));
+        const linked = validateSpecies((await loadYamlFile(path.join(dir, 'CH3OH.yaml'), 'db/CH3OH.yaml')).documents[0]!);
+        expect(linked.diagnostics.map((x) => x.code)).toContain('geometry-file-outside');
+      } finally {
+        await rm(elsewhere, { recursive: true, force: true });
+      }
     } finally {
       await rm(dir, { recursive: true, force: true });
     }

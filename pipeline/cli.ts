@@ -529,7 +529,7 @@ async function checkCommand(io: CliIo, dir: string, o: { json?: boolean; strict?
   );
   if (o.json) {
     io.stdout.write(
-      `${JSON.stringify({ species: report.species.map((s) => ({ name: s.name, file: s.file })), diagnostics: report.diagnostics }, nonFiniteAsText, 2)}\n`,
+      `${JSON.stringify({ format: 'qforge-check/1', species: report.species.map((s) => ({ name: s.name, file: s.file })), diagnostics: report.diagnostics }, nonFiniteAsText, 2)}\n`,
     );
   }
   return hasErrors(report.diagnostics) ? 1 : 0;

@@ -576,7 +576,7 @@ export async function compareCommand(
     const tables: ReferenceTable[] = [];
     for (const r of refs) tables.push(await loadReference(r, build));
     const report = compareWithReferences(build, tables, tolerances, { knownDeviations, strict: o.strict === true });
-    if (o.json) io.stdout.write(`${JSON.stringify(report, null, 2)}\n`);
+    if (o.json) io.stdout.write(`${JSON.stringify({ format: 'qforge-compare/1', ...report }, null, 2)}\n`);
     else io.stdout.write(renderCompareText(report));
     for (const w of report.warnings) io.stderr.write(`qforge: warning: ${w}\n`);
     if (report.deviations.length === 0) {

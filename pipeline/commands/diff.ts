@@ -19,6 +19,7 @@
 import { T_REF } from '../../src/constants.js';
 import type { Nasa7Polynomial } from '../../src/nasa7/types.js';
 import type { CliIo } from './io.js';
+import { diffGateResults } from './gate-results.js';
 import { formatFixed, polynomialProperties, readPolynomialSet, ReadBuildError, type PolynomialSet, type Properties } from '../storage/read-build.js';
 import { compareText } from '../core/text.js';
 
@@ -257,7 +258,7 @@ export async function diffCommand(
     throw e;
   }
   const breaches = gateBreaches(report, o.failAbove ?? {}, !!o.failOnRemoved);
-  if (o.json) io.stdout.write(`${JSON.stringify({ ...report, gate: { limits: o.failAbove ?? {}, breaches } }, null, 2)}\n`);
+  if (o.json) io.stdout.write(`${JSON.stringify({ format: 'qforge-diff/1', ...report, gate: { limits: o.failAbove ?? {}, breaches, results: diffGateResults(report, o.failAbove ?? {}, !!o.failOnRemoved) } }, null, 2)}\n`);
   else io.stdout.write(renderDiffText(report));
   if (breaches.length) {
     io.stderr.write(`qforge: diff gate FAILED (${breaches.length}):\n${breaches.map((x) => `  ${x}`).join('\n')}\n`);

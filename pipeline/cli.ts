@@ -98,6 +98,12 @@ function positiveInt(value: string): number {
   return n;
 }
 
+function positiveSamples(value: string): number {
+  const n = Number(value);
+  if (!Number.isInteger(n) || n < 2 || n > 100000) throw new InvalidArgumentError('expected a whole number of samples from 2 to 100000');
+  return n;
+}
+
 /** Parses `cp=0.1,h=0.2,s=0.3` (any subset). */
 export function parseTriple(value: string): { cp?: number; h?: number; s?: number } {
   const out: { cp?: number; h?: number; s?: number } = {};
@@ -170,8 +176,9 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('--json', 'print the build summary as JSON on stdout')
     .option('--report', 'also write report.html (overview and charts of every species)')
     .option('--report-against <old>', 'report: compare with this earlier build folder (implies --report)')
+    .option('--uncertainty-samples <n>', 'Monte Carlo check of the propagated uncertainties with N samples per species', positiveSamples)
     .addHelpText('after', EXAMPLES.build)
-    .action(async (dir: string, o: { out: string; cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; report?: boolean; reportAgainst?: string }) => {
+    .action(async (dir: string, o: { out: string; cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; report?: boolean; reportAgainst?: string; uncertaintySamples?: number }) => {
       exitCode = await buildCommand(io, abs(dir), dir, abs(o.out), o.out, o);
     });
 
@@ -347,7 +354,7 @@ async function buildCommand(
   dirLabel: string,
   out: string,
   outLabel: string,
-  o: { cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; report?: boolean; reportAgainst?: string },
+  o: { cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; report?: boolean; reportAgainst?: string; uncertaintySamples?: number },
 ): Promise<number> {
   await assertFolder(dir, `database folder ${dirLabel}`);
   const [{ runBuild }, { formatDiagnostic }, { createProgressReporter }, { assertReplaceable }, { CACHE_DIR_NAME }] = await Promise.all([
@@ -387,6 +394,7 @@ async function buildCommand(
       jobs: o.jobs,
       keepGoing: !!o.keepGoing,
       cacheDir,
+      ...(o.uncertaintySamples !== undefined ? { uncertaintySamples: o.uncertaintySamples } : {}),
       ...(o.report || o.reportAgainst !== undefined
         ? { report: o.reportAgainst !== undefined ? { against: { path: path.resolve(io.cwd, o.reportAgainst), label: o.reportAgainst } } : {} }
         : {}),

@@ -34,6 +34,7 @@ import { planSpecies, type SpeciesPlan } from './core/plan.js';
 import { checkSpeciesSampling, loadSettings, type DatabaseSettings, type QuantityTriple } from './core/settings.js';
 import { checkUniqueNames, validateSpecies } from './stages/validate.js';
 import { verifySpecies } from './stages/verify.js';
+import { computeUncertainty } from './stages/uncertainty.js';
 import { codeFingerprint } from './storage/code-fingerprint.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './core/version.js';
 import { displayPath } from './core/display-path.js';
@@ -66,6 +67,8 @@ export interface BuildOptions extends CheckOptions {
   hooks?: PublishHooks;
   /** Write report.html (also when the settings' outputs.report is true); see pipeline/report/. */
   report?: ReportRequest;
+  /** Monte Carlo samples of the uncertainty check per species (none: linear propagation only). */
+  uncertaintySamples?: number;
 }
 
 /** One species document that passed validation. */
@@ -335,6 +338,7 @@ export async function buildOneSpecies(
   settings: DatabaseSettings,
   cache: StageCache,
   limitSource: LimitSource = {},
+  extra: { uncertaintySamples?: number } = {},
 ): Promise<SpeciesOutcome> {
   const out: SpeciesOutcome = {
     valid: v,
@@ -433,6 +437,13 @@ export async function buildOneSpecies(
     table = rows;
   }
   out.built = { name: v.name, file: v.file, species: v.species, inputHash, computed, fit, table };
+  const tu = performance.now();
+  try {
+    out.built.uncertainty = computeUncertainty(v.species, plan.physics, plan.ranges, extra.uncertaintySamples);
+  } catch (e) {
+    out.diagnostics.push({ severity: 'warning', code: 'uncertainty-failed', ...where, path: 'uncertainties', message: `uncertainty propagation failed: ${errorText(e)}` });
+  }
+  out.timings.uncertainty = performance.now() - tu;
   return out;
 }
 
@@ -519,7 +530,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
         limit(async () => {
           // Yield between species so progress output and signals are handled during long builds.
           await new Promise((r) => setImmediate(r));
-          const o = await buildOneSpecies(v, settings, cache, check);
+          const o = await buildOneSpecies(v, settings, cache, check, { ...(opts.uncertaintySamples ? { uncertaintySamples: opts.uncertaintySamples } : {}) });
           outcomes.set(v.name, o);
           done++;
           const hit = isCacheHit(o);
@@ -639,6 +650,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
         status: s.status,
         species: o.valid.species,
         ...(o.built ? { computed: o.built.computed, fit: o.built.fit } : {}),
+        ...(o.built?.uncertainty ? { uncertainty: o.built.uncertainty } : {}),
         warnings: s.warnings,
         errors: s.errors,
         cacheHit: s.cache_hit,

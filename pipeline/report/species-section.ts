@@ -177,7 +177,7 @@ export function renderSpeciesSection(input: ReportSpeciesInput): RenderedSpecies
       if (d) row.deviation = d;
     }
     body.push(cpChart(input, poly, computed));
-    body.push(`<div class="residuals">${residualCharts(input, fit, computed)}</div>`);
+    body.push(`<div class="residuals">${residualCharts(input, fit, computed)}${uncertaintyChart(input, poly)}</div>`);
   } else {
     body.push('<p class="nochart">No fit: the species failed before it could be fitted (errors below).</p>');
   }
@@ -284,6 +284,24 @@ function residualCharts(input: ReportSpeciesInput, fit: FitResult, computed: Com
       });
     })
     .join('');
+}
+
+/** u(Cp°) over the range, for species that declare input uncertainties (the band on Cp/R is thin). */
+function uncertaintyChart(input: ReportSpeciesInput, poly: Nasa7Polynomial): string {
+  const u = input.uncertainty;
+  if (!u || u.inputs.length === 0) return '';
+  return renderChart({
+    title: `${input.name}: propagated standard uncertainty of Cp°`,
+    xLabel: 'T [K]',
+    yLabel: 'u(Cp°) [J/(mol K)]',
+    width: RES_W,
+    height: RES_H,
+    series: [{ kind: 'line', style: 'residual', label: 'u(Cp°), linear propagation', points: u.cpBand.map((b) => [b.T, b.u] as const) }],
+    markers: [{ x: poly.tMid, label: 'T_mid' }],
+    yInclude: [0],
+    className: 'uncertainty',
+    legend: 'above',
+  });
 }
 
 const fmtDiff = (d: LargestDifference | undefined) =>

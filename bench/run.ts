@@ -12,7 +12,7 @@
  * RSS. Per-stage species/s come from the per-species stage timings of the build's summary.json.
  *
  * Usage: node dist/bench/run.js [--sizes 1000,10000,50000] [--seed 1] [--jobs N] [--no-reference]
- *        [--no-nasa7] [--json FILE] [--check-targets]
+ *        [--no-nasa7] [--no-anharmonic] [--json FILE] [--check-targets]
  *   --sizes      comma-separated database sizes (default 1000,10000,50000; e.g. --sizes 200 for a quick run)
  *   --json       where the results go (default bench/results/latest.json; the folder is gitignored)
  *   --check-targets  exit 1 when a target of the throughput issue is missed (else the table only says so)
@@ -216,10 +216,19 @@ async function main(): Promise<number> {
     for (const x of r) console.log(`${x.name.padEnd(60)} ${x.ms.toFixed(2).padStart(9)} ms`);
     nasa7 = r;
   }
+  let anharmonic: unknown;
+  if (!argv.includes('--no-anharmonic')) {
+    const { benchAnharmonic } = await import('./anharmonic.js');
+    const r = benchAnharmonic();
+    for (const x of r) {
+      console.log(`anharmonic ${x.name} (${x.levels}): validate ${x.validateMs.toFixed(1)} ms, build ${x.buildMs.toFixed(1)} ms, 581-point grid ${x.gridMs.toFixed(0)} ms (RRHO ${x.harmonicGridMs.toFixed(1)} ms)`);
+    }
+    anharmonic = r;
+  }
   await mkdir(path.dirname(jsonFile), { recursive: true });
   await writeFile(
     jsonFile,
-    `${JSON.stringify({ format: 'qforge-bench/1', seed, cores: cpus().length, node: process.version, settings: BENCH_SETTINGS, results, targets: checks, nasa7 }, null, 2)}\n`,
+    `${JSON.stringify({ format: 'qforge-bench/1', seed, cores: cpus().length, node: process.version, settings: BENCH_SETTINGS, results, targets: checks, nasa7, anharmonic }, null, 2)}\n`,
   );
   console.log(`results: ${jsonFile}`);
   const buildFailed = results.some((r) => [r.coldNoCache, r.coldFreshCache, r.rebuild].some((b) => b.exitCode > 1) || r.rebuild.cacheHits < r.rebuild.built);

@@ -174,11 +174,12 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('-j, --jobs <n>', 'species processed concurrently', positiveInt, 4)
     .option('-q, --quiet', 'no progress output')
     .option('--json', 'print the build summary as JSON on stdout')
+    .option('--strict', 'every warning not accepted in writing (accepted_warnings) is an error')
     .option('--report', 'also write report.html (overview and charts of every species)')
     .option('--report-against <old>', 'report: compare with this earlier build folder (implies --report)')
     .option('--uncertainty-samples <n>', 'Monte Carlo check of the propagated uncertainties with N samples per species', positiveSamples)
     .addHelpText('after', EXAMPLES.build)
-    .action(async (dir: string, o: { out: string; cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; report?: boolean; reportAgainst?: string; uncertaintySamples?: number }) => {
+    .action(async (dir: string, o: { out: string; cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; strict?: boolean; report?: boolean; reportAgainst?: string; uncertaintySamples?: number }) => {
       exitCode = await buildCommand(io, abs(dir), dir, abs(o.out), o.out, o);
     });
 
@@ -187,8 +188,9 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .description('load and validate only: report every problem of every file at once')
     .argument('[dir]', 'database folder', 'species')
     .option('--json', 'print the diagnostics as JSON on stdout')
+    .option('--strict', 'every warning not accepted in writing (accepted_warnings) is an error')
     .addHelpText('after', EXAMPLES.check)
-    .action(async (dir: string, o: { json?: boolean }) => {
+    .action(async (dir: string, o: { json?: boolean; strict?: boolean }) => {
       exitCode = await checkCommand(io, abs(dir), o);
     });
 
@@ -354,7 +356,7 @@ async function buildCommand(
   dirLabel: string,
   out: string,
   outLabel: string,
-  o: { cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; report?: boolean; reportAgainst?: string; uncertaintySamples?: number },
+  o: { cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; strict?: boolean; report?: boolean; reportAgainst?: string; uncertaintySamples?: number },
 ): Promise<number> {
   await assertFolder(dir, `database folder ${dirLabel}`);
   const [{ runBuild }, { formatDiagnostic }, { createProgressReporter }, { assertReplaceable }, { CACHE_DIR_NAME }] = await Promise.all([
@@ -393,6 +395,7 @@ async function buildCommand(
       displayBase: io.cwd,
       jobs: o.jobs,
       keepGoing: !!o.keepGoing,
+      strict: !!o.strict,
       cacheDir,
       ...(o.uncertaintySamples !== undefined ? { uncertaintySamples: o.uncertaintySamples } : {}),
       ...(o.report || o.reportAgainst !== undefined
@@ -447,10 +450,10 @@ async function buildCommand(
   return report.exitCode;
 }
 
-async function checkCommand(io: CliIo, dir: string, o: { json?: boolean }): Promise<number> {
+async function checkCommand(io: CliIo, dir: string, o: { json?: boolean; strict?: boolean }): Promise<number> {
   await assertFolder(dir, `database folder ${displayPath(io.cwd, dir)}`);
   const [{ checkDatabase }, { formatDiagnostic, hasErrors }] = await Promise.all([import('./runner.js'), import('./core/diagnostics.js')]);
-  const report = await checkDatabase({ dir, displayBase: io.cwd });
+  const report = await checkDatabase({ dir, displayBase: io.cwd, strict: !!o.strict });
   printDiagnostics(io, report.diagnostics, formatDiagnostic);
   const errors = report.diagnostics.filter((d) => d.severity === 'error').length;
   const warnings = report.diagnostics.length - errors;

@@ -36,6 +36,7 @@ import { checkUniqueNames, validateSpecies } from './stages/validate.js';
 import { verifySpecies } from './stages/verify.js';
 import { computeUncertainty } from './stages/uncertainty.js';
 import { codeFingerprint } from './storage/code-fingerprint.js';
+import { createWarningPolicy } from './core/strict.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './core/version.js';
 import { displayPath } from './core/display-path.js';
 import { compareText, errorText } from './core/text.js';
@@ -56,6 +57,8 @@ export interface CheckOptions {
   displayBase?: string;
   /** Concurrency of file loading (default 8). */
   jobs?: number;
+  /** Warnings are errors (also `strict: true` in the settings); see core/strict.ts. */
+  strict?: boolean;
 }
 
 export interface BuildOptions extends CheckOptions {
@@ -140,6 +143,25 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   const t0 = performance.now();
   const settingsResult = await loadSettings(dir, dir);
   const discovered = await discoverSpeciesFiles(dir);
+  const policy = createWarningPolicy({
+    strict: opts.strict === true || settingsResult.settings.strict,
+    accepted: settingsResult.settings.accepted_warnings,
+    ...(settingsResult.file !== undefined ? { settingsFile: settingsResult.file } : {}),
+    ...(settingsResult.locate ? { settingsLocate: settingsResult.locate } : {}),
+  });
+  discovered.diagnostics = policy.applyOther(discovered.diagnostics);
+  settingsResult.diagnostics = policy.applyOther(settingsResult.diagnostics);
+  const validateWithPolicy = (doc: LoadedDocument) => {
+    const r = validateSpecies(doc);
+    const name = doc.value && typeof doc.value === 'object' ? (doc.value as { name?: unknown }).name : undefined;
+    r.diagnostics = policy.applySpecies(r.diagnostics, {
+      raw: doc.value,
+      file: doc.file,
+      ...(typeof name === 'string' ? { name } : {}),
+      locate: (at) => doc.locate(at),
+    });
+    return r;
+  };
   const diagnostics: Diagnostic[] = [...settingsResult.diagnostics, ...discovered.diagnostics];
   const fileDiagnostics = new Map<string, Diagnostic[]>();
   const failedFiles = new Set<string>();
@@ -159,10 +181,11 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
       limit(async () => {
         const tl = performance.now();
         const loaded = await loadYamlFile(f, f);
+        loaded.diagnostics = policy.applyOther(loaded.diagnostics);
         const loadMs = performance.now() - tl;
         const results = loaded.documents.map((doc: LoadedDocument) => {
           const tv = performance.now();
-          const r = validateSpecies(doc);
+          const r = validateWithPolicy(doc);
           const ms = performance.now() - tv;
           validateTotal += ms;
           return { doc, r, ms };
@@ -171,7 +194,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
         // error of the file in one run; they are never built (one of their values is a guess).
         const recovered = (loaded.recoveredDocuments ?? []).map((doc: LoadedDocument) => ({
           doc,
-          diagnostics: validateSpecies(doc).diagnostics,
+          diagnostics: validateWithPolicy(doc).diagnostics,
         }));
         return { file: f, loaded, results, recovered, loadMs };
       }),
@@ -201,9 +224,10 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
       invalid.push({ doc, entry: invalidEntry(doc, file, [...(doc.yamlErrors ?? []), ...ds]) });
     }
     if (loaded.documents.length === 0 && !hasErrors(loaded.diagnostics)) {
-      const d: Diagnostic = { severity: 'warning', code: 'file-holds-no-species', file, path: '', message: 'file holds no species' };
-      diagnostics.push(d);
-      addFileDiag(d);
+      for (const d of policy.applyOther([{ severity: 'warning', code: 'file-holds-no-species', file, path: '', message: 'file holds no species' }])) {
+        diagnostics.push(d);
+        addFileDiag(d);
+      }
     }
     const n = Math.max(1, results.length);
     for (const { doc, r, ms: vms } of results) {
@@ -229,7 +253,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     }
   }
   // Names must be unique across the database: the later duplicates fail (validate.ts names the first use).
-  const dup = checkUniqueNames(perFile.flatMap((p) => [...p.results.map((x) => x.doc), ...p.recovered.map((x) => x.doc)]));
+  const dup = policy.applyOther(checkUniqueNames(perFile.flatMap((p) => [...p.results.map((x) => x.doc), ...p.recovered.map((x) => x.doc)])));
   diagnostics.push(...dup);
   dup.forEach(addFileDiag);
   const isDuplicate = (doc: LoadedDocument, name: string) =>
@@ -261,6 +285,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
       expected: 'at least one species file',
     });
   }
+  diagnostics.push(...policy.staleSettingsEntries());
   species.sort(byName);
   for (const d of diagnostics) d.file = show(d.file);
   diagnostics.sort(compareDiagnostics);

@@ -26,6 +26,9 @@ const TABLE: ReadonlyMap<string, ElementRecord> = (() => {
   }
   m.set('D', { symbol: 'D', atomicWeight: isotopeMass('H', 2) });
   m.set('T', { symbol: 'T', atomicWeight: isotopeMass('H', 3) });
+  // The free electron, composition {E: 1} with charge -1: its mass enters through the charge term of
+  // molarMass (− z·m_e), so E itself weighs nothing and e⁻ comes out at m_e (CODATA 2018).
+  m.set('E', { symbol: 'E', atomicWeight: 0 });
   return m;
 })();
 

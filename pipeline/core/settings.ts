@@ -62,6 +62,16 @@ export interface DatabaseSettings {
     tolerances: QuantityTriple;
     known_deviations: KnownDeviation[];
   };
+  /** Warnings are errors (pipeline/core/strict.ts), except the accepted ones. */
+  strict: boolean;
+  accepted_warnings: AcceptedWarning[];
+}
+
+/** A warning accepted in writing (settings or species `accepted_warnings`). */
+export interface AcceptedWarning {
+  code: string;
+  species?: string;
+  reason: string;
 }
 
 export const DEFAULT_SETTINGS: Readonly<DatabaseSettings> = Object.freeze({
@@ -79,6 +89,8 @@ export const DEFAULT_SETTINGS: Readonly<DatabaseSettings> = Object.freeze({
   outputs: { thermo_json: true, nasa7: true, tables: true, report: false },
   tables: { from: 200, to: 6000, step: 100, extra: [298.15] },
   references: { files: [], tolerances: { cp: 0.5, h: 0.5, s: 0.5 }, known_deviations: [] },
+  strict: false,
+  accepted_warnings: [],
 } satisfies DatabaseSettings);
 
 /** Standard pressure in Pa for a settings label. */

@@ -78,6 +78,13 @@ export type Wavenumber =
       unit: "cm-1" | "eV" | "K" | "J/mol" | "kJ/mol" | "kcal/mol";
     };
 /**
+ * One anharmonic constant: 1-based mode indices i <= j into vibrations and the value in cm-1.
+ *
+ * @minItems 3
+ * @maxItems 3
+ */
+export type AnharmonicTerm = never[];
+/**
  * An energy or wavenumber, strictly positive. A bare number is in cm-1; or {value, unit} with unit one of cm-1, eV, K, J/mol, kJ/mol, kcal/mol (per particle for cm-1, eV, K; per mole for the molar units).
  */
 export type PositiveEnergy =
@@ -176,6 +183,12 @@ export interface SpeciesInput {
         temperature?: 298.15 | 0;
       };
   /**
+   * Warnings of this species accepted in writing: each names the stable code of one warning (as printed in [brackets]) and why it is acceptable. An accepted warning is neither printed nor turned into an error by --strict; an entry that matches no warning is itself warned about (stale-accepted-warning). Never part of the normalised input (no effect on the numbers or the cache).
+   *
+   * @minItems 1
+   */
+  accepted_warnings?: [AcceptedWarning, ...AcceptedWarning[]];
+  /**
    * Where every number comes from (free text, one entry per source). Required and non-empty.
    *
    * @minItems 1
@@ -224,6 +237,15 @@ export interface SpeciesInput {
    * @minItems 1
    */
   internal_rotors?: [InternalRotor, ...InternalRotor[]];
+  vibration_scale_factor?: VibrationScaleFactor;
+  anharmonicity?: Anharmonicity;
+  centrifugal_distortion?: CentrifugalDistortion;
+  /**
+   * Optional (linear, nonlinear): several conformers of one species, each with its own molecular constants and its energy above the lowest conformer; the partition function is their Boltzmann-weighted sum. With conformers the molecular fields (symmetry_number, rotational_constants, moments_of_inertia, vibrations, internal_rotors, electronic_levels, vibration_scale_factor, anharmonicity, centrifugal_distortion, dissociation_energy) go into each conformer, not at the species level.
+   *
+   * @minItems 1
+   */
+  conformers?: [Conformer, ...Conformer[]];
   dissociation_energy?: PositiveEnergy;
   /**
    * Homonuclear diatomic only, optional: statistical weights of even-J and odd-J rotational levels. When given they replace the symmetry number.
@@ -315,6 +337,19 @@ export interface SpeciesInput {
   };
 }
 /**
+ * One accepted warning: its stable code and the reason a person accepts it.
+ */
+export interface AcceptedWarning {
+  /**
+   * Stable code of the accepted warning, as printed in [brackets] after the message.
+   */
+  code: string;
+  /**
+   * Why a person accepts this warning for this species; a placeholder (todo, n/a, ...) is an error.
+   */
+  reason: string;
+}
+/**
  * One electronic level of an atom or polyatomic molecule.
  */
 export interface ElectronicLevel {
@@ -334,6 +369,117 @@ export interface InternalRotor {
   foldedness?: PositiveInteger;
   moment_of_inertia?: MomentOfInertia;
   rotational_constant?: RotationalConstant;
+}
+/**
+ * A vibrational scale factor and where it comes from.
+ */
+export interface VibrationScaleFactor {
+  /**
+   * The factor every wavenumber is multiplied by (dimensionless).
+   */
+  value: number;
+  /**
+   * Where the factor comes from (method, basis set, citation).
+   */
+  source: string;
+}
+/**
+ * Anharmonic constants of a polyatomic, cm-1.
+ */
+export interface Anharmonicity {
+  /**
+   * x_ij in cm-1 with 1-based mode indices into vibrations, i <= j, each pair at most once.
+   */
+  x: AnharmonicTerm[];
+  /**
+   * g_tt' in cm-1 of doubly degenerate modes t <= t' (vibrational angular momentum, + g_tt' l_t l_t'). Default none.
+   */
+  g?: AnharmonicTerm[];
+  /**
+   * Optional vibration-rotation constants in cm-1, one entry per item of vibrations: B_v = B_0 - sum alpha_i v_i.
+   *
+   * @minItems 1
+   */
+  alpha?: [
+    [number] | [number, number] | [number, number, number],
+    ...([number] | [number, number] | [number, number, number])[]
+  ];
+}
+/**
+ * Quartic centrifugal distortion constants of the vibrational ground state, cm-1.
+ */
+export interface CentrifugalDistortion {
+  /**
+   * D_J (linear) or Delta_J (nonlinear, Watson A), cm-1.
+   */
+  DJ: number;
+  /**
+   * Delta_JK (Watson A), cm-1; nonlinear only.
+   */
+  DJK?: number;
+  /**
+   * Delta_K (Watson A), cm-1; nonlinear only.
+   */
+  DK?: number;
+  /**
+   * delta_J (Watson A), cm-1; nonlinear only.
+   */
+  dJ?: number;
+  /**
+   * delta_K (Watson A), cm-1; nonlinear only.
+   */
+  dK?: number;
+}
+/**
+ * One conformer: its energy and the molecular fields of a linear or nonlinear species.
+ */
+export interface Conformer {
+  /**
+   * Label of the conformer (unique within the species).
+   */
+  name: string;
+  energy: NonNegativeEnergy;
+  symmetry_number: PositiveInteger;
+  /**
+   * Rotational constants: [B] for linear, [A, B, C] for nonlinear (conventionally A >= B >= C). Give either this or moments_of_inertia.
+   *
+   * @minItems 1
+   * @maxItems 3
+   */
+  rotational_constants?:
+    | [RotationalConstant]
+    | [RotationalConstant, RotationalConstant]
+    | [RotationalConstant, RotationalConstant, RotationalConstant];
+  /**
+   * Principal moments of inertia, alternative to rotational_constants: [I] for linear, [IA, IB, IC] for nonlinear; converted with B = h/(8 pi^2 c I).
+   *
+   * @minItems 1
+   * @maxItems 3
+   */
+  moments_of_inertia?:
+    [MomentOfInertia] | [MomentOfInertia, MomentOfInertia] | [MomentOfInertia, MomentOfInertia, MomentOfInertia];
+  /**
+   * Harmonic vibrations (linear, nonlinear): each a wavenumber (bare number in cm-1, or {value, unit}) or {wavenumber, degeneracy}. 3N-5 (linear) or 3N-6 (nonlinear) modes counting degeneracy (internal_rotors count as modes).
+   *
+   * @minItems 1
+   */
+  vibrations: [Vibration, ...Vibration[]];
+  /**
+   * Optional (linear, nonlinear): torsions treated as one-dimensional hindered internal rotors with potential V(phi) = (V0/2)(1 - cos n phi), summed over their quantum levels, instead of harmonic vibrations. A torsion listed here must be removed from vibrations (each rotor counts as one of the 3N-6 modes).
+   *
+   * @minItems 1
+   */
+  internal_rotors?: [InternalRotor, ...InternalRotor[]];
+  /**
+   * Electronic levels (atom, linear, nonlinear). Default: one non-degenerate ground level, [{energy: 0, degeneracy: 1}]. The lowest level must be at energy 0.
+   *
+   * @minItems 1
+   */
+  electronic_levels?: [ElectronicLevel, ...ElectronicLevel[]];
+  vibration_scale_factor?: VibrationScaleFactor;
+  anharmonicity?: Anharmonicity;
+  centrifugal_distortion?: CentrifugalDistortion;
+  dissociation_energy?: PositiveEnergy;
 }
 /**
  * One electronic state of a diatomic molecule with its spectroscopic constants (Huber & Herzberg notation). Term values E(v,J) = Te + G(v) + B_v x - D_v x^2 + H_v x^3 with x = J(J+1), G(v) = we(v+1/2) - wexe(v+1/2)^2 + weye(v+1/2)^3 + weze(v+1/2)^4, B_v = Be - alphae(v+1/2) + gammae(v+1/2)^2, D_v = De + betae(v+1/2), H_v = He; the higher-order constants weze, gammae, betae, He are optional (0 when absent).

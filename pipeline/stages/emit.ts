@@ -216,7 +216,8 @@ export const jsonText = (value: unknown): string => `${JSON.stringify(value, nul
 /** Element/count pairs of the 80-column record: the composition, plus the electron for ions. */
 export function recordElements(species: Species): Array<[string, number]> {
   const pairs: Array<[string, number]> = Object.entries(species.composition);
-  if (species.charge !== 0) pairs.push(['E', -species.charge]);
+  // The free electron's composition is its own E 1 (its charge is that electron).
+  if (species.charge !== 0 && !Object.hasOwn(species.composition, 'E')) pairs.push(['E', -species.charge]);
   return pairs;
 }
 

@@ -18,11 +18,13 @@ import { centrifugalConstantOf, rotationalConstantOf, vibrationalTerm } from '..
 import { hinderedRotorBasisSize, MAX_HINDERED_ROTOR_BASIS, smallestHinderedRotorConstant } from '../../src/partition/hindered-rotor.js';
 import { DEFAULT_NUCLEAR_SPIN_MIXTURE } from '../../src/partition/spin-mixture.js';
 import type {
+  Conformer,
   DiatomicState,
   ElectronicLevel,
   InternalRotor,
   NuclearSpinMixture,
   NuclearSpinWeights,
+  PolyatomicMolecularPart,
   Species,
   Structure,
   Vibration,
@@ -36,7 +38,17 @@ import {
 } from '../../src/units.js';
 import { compareDiagnostics, type Diagnostic } from '../core/diagnostics.js';
 import type { LoadedDocument } from './load.js';
+import { checkPlausibility } from './plausibility.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from './schema-check.js';
+import {
+  checkAnharmonicModel,
+  checkPolyatomicCut,
+  readAnharmonicity,
+  readCentrifugalDistortion,
+  readVibrationScaleFactor,
+} from './validate-anharmonic.js';
+import { checkConformerSet } from './validate-conformers.js';
+import { checkElectron } from './validate-electron.js';
 import { compareText } from '../core/text.js';
 import { readUncertainties } from './uncertainty-input.js';
 
@@ -105,18 +117,26 @@ interface FindingExtra {
 }
 
 class Findings {
-  readonly diagnostics: Diagnostic[] = [];
   constructor(
     private readonly doc: LoadedDocument,
     private readonly species: string | undefined,
+    /** Path of the nested part these findings are about (a conformer), prepended to every path. */
+    private readonly prefix: Segment[] = [],
+    readonly diagnostics: Diagnostic[] = [],
   ) {}
+
+  /** Findings about a nested part (e.g. `conformers[1]`), reported into the same list. */
+  within(prefix: Segment[]): Findings {
+    return new Findings(this.doc, this.species, [...this.prefix, ...prefix], this.diagnostics);
+  }
 
   add(
     severity: Diagnostic['severity'],
-    at: Segment[],
+    relative: Segment[],
     message: string,
     extra: FindingExtra,
   ): void {
+    const at = [...this.prefix, ...relative];
     const where = this.doc.locate(at, { key: extra.key ?? false });
     const d: Diagnostic = { severity, file: this.doc.file, path: formatFieldPath(at), message, code: extra.code };
     if (where) {
@@ -434,6 +454,75 @@ function checkSymmetryNumber(ctx: Ctx, sigma: number, hasSpinWeights: boolean): 
   }
 }
 
+/**
+ * The molecular fields of a linear or nonlinear species, or of one of its conformers (the same checks and
+ * normalisation for both; a conformer's ctx has its own input object and prefixed findings). Optional keys
+ * appear only when given, so every species without them keeps its normalised form and hash.
+ */
+function readMolecularPart(ctx: Ctx): PolyatomicMolecularPart | undefined {
+  const { f, input, structure } = ctx;
+  const sigma = isPositiveInteger(input.symmetry_number) ? input.symmetry_number : undefined;
+  if (sigma !== undefined) checkSymmetryNumber(ctx, sigma, false);
+  const electronicLevels = readElectronicLevels(ctx);
+  const { rotationalConstants, vibrations: given } = readPolyatomic(ctx);
+  const internal = readInternalRotors(ctx);
+  const scale = readVibrationScaleFactor(f, input);
+  const vibrations = given && scale ? given.map((v) => ({ ...v, wavenumber: v.wavenumber * scale.value })) : given;
+  const anh = readAnharmonicity(f, input, structure, vibrations);
+  const cd = readCentrifugalDistortion(f, input, structure);
+  const cutOk = checkPolyatomicCut(f, input);
+  const d0 = input.anharmonicity !== undefined && input.dissociation_energy !== undefined ? energy(input.dissociation_energy) : undefined;
+  if (!(electronicLevels && rotationalConstants && vibrations && sigma !== undefined && internal.ok && scale !== null && anh.ok && cd.ok && cutOk)) return undefined;
+  // Nonlinear constants are kept as A >= B >= C; per-axis alpha follow the same order.
+  const order = rotationalConstants.map((_, k) => k);
+  if (structure === 'nonlinear') order.sort((a, b) => rotationalConstants[b]! - rotationalConstants[a]! || a - b);
+  const anharmonicity = anh.anharmonicity?.alpha
+    ? { ...anh.anharmonicity, alpha: anh.anharmonicity.alpha.map((row) => order.map((k) => row[k]!)) }
+    : anh.anharmonicity;
+  const part: PolyatomicMolecularPart = {
+    symmetryNumber: sigma,
+    electronicLevels,
+    rotationalConstants: order.map((k) => rotationalConstants[k]!),
+    vibrations,
+    ...(internal.rotors ? { internalRotors: internal.rotors } : {}),
+    ...(scale ? { vibrationScaleFactor: scale } : {}),
+    ...(anharmonicity ? { anharmonicity } : {}),
+    ...(cd.centrifugal ? { centrifugalDistortion: cd.centrifugal } : {}),
+    ...(d0 !== undefined ? { dissociationEnergy: d0 } : {}),
+  };
+  return checkAnharmonicModel(f, part) ? part : undefined;
+}
+
+/** Each conformer through readMolecularPart (paths under `conformers[i]`), then the cross-conformer checks. */
+function readConformerParts(ctx: Ctx): Conformer[] | undefined {
+  const raw = ctx.input.conformers;
+  if (!Array.isArray(raw)) return undefined;
+  const out: Conformer[] = [];
+  let ok = true;
+  raw.forEach((item, i) => {
+    if (!isObj(item)) {
+      ok = false;
+      return;
+    }
+    const part = readMolecularPart({ ...ctx, f: ctx.f.within(['conformers', i]), input: item });
+    const e = energy(item.energy);
+    if (!part || e === undefined || typeof item.name !== 'string') {
+      ok = false;
+      return;
+    }
+    out.push({ label: item.name, energy: e, ...part });
+  });
+  return ok && checkConformerSet(ctx.f, out, raw) ? out : undefined;
+}
+
+/** The molecular part of the lowest conformer (energy 0), without its label and energy. */
+function lowestConformerPart(conformers: Conformer[] | undefined): PolyatomicMolecularPart | undefined {
+  const lowest = conformers?.find((c) => c.energy === 0);
+  if (!lowest) return undefined;
+  const { label: _label, energy: _energy, ...part } = lowest;
+  return part;
+}
+
 function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?: Vibration[] } {
   const { f, input, structure, composition: c } = ctx;
   const want = structure === 'linear' ? 1 : 3;
@@ -474,15 +563,6 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
               expected: 'the conventional order (the product, and so the thermochemistry, is unaffected)',
             });
           }
-          values.forEach((b, i) => {
-            if (b > 100) {
-              f.warn([field, i], `rotational constant of ${fmt(b)} cm-1 is larger than that of any molecule (H2: about 60 cm-1); check the unit`, {
-                code: 'rotational-constant-too-large',
-                value: list[i],
-                expected: 'a value in cm-1 (or {value, unit})',
-              });
-            }
-          });
         }
       }
     }
@@ -496,13 +576,6 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
       const read = readVibration(item);
       if (!read) return;
       const { wavenumber: wn, degeneracy: g } = read;
-      if (wn > 5000) {
-        f.warn(['vibrations', i], `wavenumber ${fmt(wn)} cm-1 is above any fundamental (H2: about 4160 cm-1); check the unit`, {
-          code: 'wavenumber-too-large',
-          value: item,
-          expected: 'a wavenumber in cm-1 (or {value, unit})',
-        });
-      }
       vs.push({ wavenumber: wn, degeneracy: g });
     });
     if (vs.length === raw.length) {
@@ -517,9 +590,10 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
             expected: `${expected} modes counting degeneracy`,
           });
         } else if (rotors > 0 && expected > 0 && modes + rotors !== expected) {
-          // Each internal rotor replaces one torsional vibration; a torsion left in `vibrations` is counted twice.
-          f.warn(['vibrations'], `${modes} vibrational mode${modes === 1 ? '' : 's'} (counting degeneracy) plus ${rotors} internal rotor${rotors === 1 ? '' : 's'} make ${modes + rotors} modes, but a ${structure} molecule of ${c.atoms} atoms has ${expected} (3N-${structure === 'linear' ? 5 : 6})`, {
-            code: 'mode-count-with-rotors',
+          // Each internal rotor replaces one torsional vibration; a torsion left in `vibrations` is counted
+          // twice, which is an error (more modes than the molecule has); fewer modes stay a warning.
+          f.add(modes + rotors > expected ? 'error' : 'warning', ['vibrations'], `${modes} vibrational mode${modes === 1 ? '' : 's'} (counting degeneracy) plus ${rotors} internal rotor${rotors === 1 ? '' : 's'} make ${modes + rotors} modes, but a ${structure} molecule of ${c.atoms} atoms has ${expected} (3N-${structure === 'linear' ? 5 : 6})`, {
+            code: modes + rotors > expected ? 'torsion-counted-twice' : 'mode-count-with-rotors',
             expected: `${expected} modes counting each internal rotor as one (remove a torsion treated as an internal rotor from vibrations)`,
           });
         }
@@ -958,6 +1032,10 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
   const name = isObj(input) && typeof input.name === 'string' ? input.name : undefined;
   const schemaDiagnostics = checkAgainstSchema(validateAgainstSpeciesSchema, doc, name === undefined ? {} : { species: name });
   if (!isObj(input)) return { diagnostics: schemaDiagnostics };
+  // A field the schema already rejected is not reported again by the bounds.
+  const rejected = schemaDiagnostics.map((d) => d.path);
+  const under = (p: string, q: string) => p === q || (p.startsWith(q) && (p[q.length] === '.' || p[q.length] === '['));
+  schemaDiagnostics.push(...checkPlausibility(doc, name).filter((d) => !rejected.some((q) => under(d.path, q))));
 
   const f = new Findings(doc, name);
   const structure = (['atom', 'diatomic', 'linear', 'nonlinear'] as const).find((s) => s === input.structure);
@@ -965,6 +1043,7 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
   ctx.composition = readComposition(input.composition, f);
   checkName(ctx);
   checkComposition(ctx);
+  checkElectron(ctx.f, ctx.composition, input.charge, structure, input.electronic_levels);
   checkSources(ctx);
   const enthalpy = readEnthalpy(ctx);
   const temperatureRanges = readTemperatureRanges(ctx);
@@ -992,16 +1071,10 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
     const electronicLevels = readElectronicLevels(ctx);
     if (canBuild && electronicLevels) species = { ...common(), structure, electronicLevels } as Species;
   } else if (structure === 'linear' || structure === 'nonlinear') {
-    if (sigma !== undefined) checkSymmetryNumber(ctx, sigma, false);
-    const electronicLevels = readElectronicLevels(ctx);
-    const { rotationalConstants, vibrations } = readPolyatomic(ctx);
-    const internal = readInternalRotors(ctx);
-    if (canBuild && electronicLevels && rotationalConstants && vibrations && sigma !== undefined && internal.ok) {
-      const rc = structure === 'nonlinear' ? rotationalConstants.slice().sort((a, b) => b - a) : rotationalConstants;
-      // The key only when rotors are given: every species without them keeps its normalised form and hash.
-      const rotors = internal.rotors ? { internalRotors: internal.rotors } : {};
-      species = { ...common(), structure, symmetryNumber: sigma, electronicLevels, rotationalConstants: rc, vibrations, ...rotors } as Species;
-    }
+    // With conformers the species-level molecular fields are those of the lowest conformer.
+    const conformers = input.conformers !== undefined ? readConformerParts(ctx) : undefined;
+    const part = input.conformers !== undefined ? lowestConformerPart(conformers) : readMolecularPart(ctx);
+    if (canBuild && part) species = { ...common(), structure, ...part, ...(conformers ? { conformers } : {}) } as Species;
   } else if (structure === 'diatomic') {
     const { states, d0, spin, mixture } = readDiatomic(ctx);
     if (sigma !== undefined) checkSymmetryNumber(ctx, sigma, spin !== undefined);

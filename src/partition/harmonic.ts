@@ -3,6 +3,7 @@
  */
 import { C2_CM_K } from '../constants.js';
 import type { Vibration } from '../model.js';
+import type { GridMoments, TemperatureGrid } from './grid-moments.js';
 import type { PartitionMoments } from './moments.js';
 
 /**
@@ -25,4 +26,58 @@ export function harmonicMoments(vibrations: readonly Vibration[], T: number): Pa
     varU += (degeneracy * x * x * e) / (oneMinusE * oneMinusE);
   }
   return { lnQ, meanU, varU };
+}
+
+/**
+ * Grid form of `harmonicMoments`, adding into `into` at every temperature of `grid` (the same formula).
+ * Method: per mode and temperature ONE exponential: e = e^{−x} when x ≥ ln 2, else 1 − e = −expm1(−x); the
+ * other of the pair is one subtraction whose result lies in [½, 1], so both carry ≤ 1 ulp relative error.
+ * lnQ = −Σ d ln(1 − e) is one logarithm per temperature, of the running product Π (1 − e)^d (flushed into
+ * the logarithm before it can underflow).
+ * Accuracy (stated, tested against harmonicMoments): meanU and varU within a few ulps relative per mode;
+ * lnQ within (number of factors + 2) ulps of 1 absolute, i.e. ~4e-14 for 180 modes — below 1e-14 of S/R,
+ * which always holds the translational lnQ ≥ 10.
+ */
+export function addHarmonicGrid(vibrations: readonly Vibration[], grid: TemperatureGrid, into: GridMoments): void {
+  const modes = vibrations.length;
+  const theta = new Float64Array(modes);
+  const degeneracy = new Float64Array(modes);
+  for (let k = 0; k < modes; k++) {
+    theta[k] = C2_CM_K * vibrations[k]!.wavenumber;
+    degeneracy[k] = vibrations[k]!.degeneracy;
+  }
+  const { T, invT } = grid;
+  for (let j = 0; j < T.length; j++) {
+    const y = invT[j]!;
+    let logSum = 0;
+    let product = 1;
+    let meanU = 0;
+    let varU = 0;
+    for (let k = 0; k < modes; k++) {
+      const x = theta[k]! * y;
+      const d = degeneracy[k]!;
+      let e: number;
+      let oneMinusE: number;
+      if (x >= Math.LN2) {
+        e = Math.exp(-x);
+        oneMinusE = 1 - e;
+      } else {
+        oneMinusE = -Math.expm1(-x);
+        e = 1 - oneMinusE;
+      }
+      const ratio = e / oneMinusE;
+      meanU += d * x * ratio;
+      varU += (d * x * x * ratio) / oneMinusE;
+      if (d === 1) product *= oneMinusE;
+      else if (Number.isInteger(d) && d <= 8) for (let r = 0; r < d; r++) product *= oneMinusE;
+      else logSum += d * Math.log(oneMinusE);
+      if (product < 1e-250) {
+        logSum += Math.log(product);
+        product = 1;
+      }
+    }
+    into.lnQ[j]! -= logSum + Math.log(product);
+    into.meanU[j]! += meanU;
+    into.varU[j]! += varU;
+  }
 }

@@ -24,9 +24,12 @@ export const MAX_HINDERED_ROTOR_BASIS = 10001;
 /** QL iterations allowed per eigenvalue before giving up (2–3 are typical; EISPACK allows 30). */
 const MAX_QL_ITERATIONS = 30;
 
-/** Highest level kept, cm⁻¹ above the lowest. */
-export function hinderedRotorEnergyCeiling(): number {
-  return (KEPT_U_AT_CEILING * HINDERED_ROTOR_CEILING_TEMPERATURE) / C2_CM_K;
+/**
+ * Highest level kept, cm⁻¹ above the lowest, for a list complete up to `ceilingTemperature` (K): every
+ * omitted level has u = E/kT > 50 there, e^{−50}(1 + 50²) ≈ 5e-19 of a ground-level term.
+ */
+export function hinderedRotorEnergyCeiling(ceilingTemperature: number = HINDERED_ROTOR_CEILING_TEMPERATURE): number {
+  return (KEPT_U_AT_CEILING * ceilingTemperature) / C2_CM_K;
 }
 
 /**
@@ -35,8 +38,11 @@ export function hinderedRotorEnergyCeiling(): number {
  * ends (variational: truncation can only raise an eigenvalue, and the test suite checks that doubling M
  * changes nothing). Plus 2n so every Floquet block holds several functions above the kept energy.
  */
-export function hinderedRotorBasisLimit(rotor: Pick<InternalRotor, 'barrier' | 'rotationalConstant' | 'foldedness'>): number {
-  const need = 2.25 * (hinderedRotorEnergyCeiling() + rotor.barrier);
+export function hinderedRotorBasisLimit(
+  rotor: Pick<InternalRotor, 'barrier' | 'rotationalConstant' | 'foldedness'>,
+  ceilingTemperature: number = HINDERED_ROTOR_CEILING_TEMPERATURE,
+): number {
+  const need = 2.25 * (hinderedRotorEnergyCeiling(ceilingTemperature) + rotor.barrier);
   return Math.ceil(Math.sqrt(need / rotor.rotationalConstant)) + 2 * rotor.foldedness;
 }
 
@@ -49,6 +55,15 @@ export function smallestHinderedRotorConstant(rotor: Pick<InternalRotor, 'barrie
 /** Number of basis functions 2M + 1 the rotor needs. */
 export function hinderedRotorBasisSize(rotor: Pick<InternalRotor, 'barrier' | 'rotationalConstant' | 'foldedness'>): number {
   return 2 * hinderedRotorBasisLimit(rotor) + 1;
+}
+
+/**
+ * √(a² + b²) without Math.hypot's cost (it dominates the QL sweep in V8); falls back to Math.hypot only
+ * where the squares could overflow or underflow. Same correctly-rounded-within-1-ulp accuracy class.
+ */
+function hypot2(a: number, b: number): number {
+  const s = a * a + b * b;
+  return s < 1e300 && s > 1e-300 ? Math.sqrt(s) : Math.hypot(a, b);
 }
 
 /**
@@ -78,7 +93,7 @@ export function symmetricTridiagonalEigenvalues(diagonal: Float64Array, offDiago
         if (++iterations > MAX_QL_ITERATIONS) throw new LevelSumError('hindered rotor: the QL eigenvalue iteration did not converge');
         let g = d[l]!;
         let p = (d[l + 1]! - g) / (2 * e[l]!);
-        let r = Math.hypot(p, 1);
+        let r = hypot2(p, 1);
         if (p < 0) r = -r;
         d[l] = e[l]! / (p + r);
         d[l + 1] = e[l]! * (p + r);
@@ -99,7 +114,7 @@ export function symmetricTridiagonalEigenvalues(diagonal: Float64Array, offDiago
           s2 = s;
           g = c * e[i]!;
           h = c * p;
-          r = Math.hypot(p, e[i]!);
+          r = hypot2(p, e[i]!);
           e[i + 1] = s * r;
           s = e[i]! / r;
           c = p / r;
@@ -135,8 +150,11 @@ export interface HinderedRotorLevels {
  *
  * Formula: in the free-rotor basis e^{imφ}/√(2π), |m| ≤ M, the matrix elements are
  *   ⟨m|H|m⟩ = B m² + V0/2,   ⟨m|H|m ± n⟩ = −V0/4   (⟨m|cos nφ|m ± n⟩ = ½),
- * so H splits into n tridiagonal blocks m ≡ r (mod n), each diagonalised exactly (QL). All eigenvalues up
- * to `hinderedRotorEnergyCeiling()` above the lowest are kept, each with weight 1/σ: the levels of the full
+ * so H splits into n tridiagonal blocks m ≡ r (mod n), each diagonalised exactly (QL; blocks related by
+ * m → −m are diagonalised once, self-related ones split into even and odd halves). All eigenvalues up to
+ * `hinderedRotorEnergyCeiling(ceilingTemperature)` above the lowest are kept (default ceiling
+ * HINDERED_ROTOR_CEILING_TEMPERATURE; an evaluator that knows its highest temperature asks for less, which
+ * keeps every level with u ≤ 50 there and shrinks the basis as √ of the ceiling), each with weight 1/σ: the levels of the full
  * 2π period are counted once and the rotor symmetry number σ removes the configurations that are the same
  * (σ = n for a symmetric top such as CH3; σ = 1 with n = 2 for a two-well torsion of distinguishable wells).
  * Units: B (reduced rotational constant ħ²/(2 I_red hc)) and V0 in cm⁻¹. Valid for a torsion separable
@@ -147,38 +165,68 @@ export interface HinderedRotorLevels {
  * J. Chem. Phys. 14, 239 (1946) (reduced moments); McClurg, Flagan & Goddard, J. Chem. Phys. 106, 6675
  * (1997) (direct level summation of the hindered-rotor Hamiltonian in the free-rotor basis).
  */
-export function hinderedRotorLevels(rotor: InternalRotor, options: { basisLimit?: number } = {}): HinderedRotorLevels {
+export function hinderedRotorLevels(
+  rotor: InternalRotor,
+  options: { basisLimit?: number; ceilingTemperature?: number } = {},
+): HinderedRotorLevels {
   const { barrier: v0, foldedness: n, symmetryNumber: sigma, rotationalConstant: b } = rotor;
   if (!(Number.isFinite(v0) && v0 >= 0)) throw new LevelSumError(`hindered rotor: barrier ${v0} cm-1; expected >= 0`);
   if (!(Number.isInteger(n) && n >= 1)) throw new LevelSumError(`hindered rotor: foldedness ${n}; expected a whole number >= 1`);
   if (!(Number.isInteger(sigma) && sigma >= 1)) throw new LevelSumError(`hindered rotor: symmetry number ${sigma}; expected a whole number >= 1`);
   if (!(Number.isFinite(b) && b > 0)) throw new LevelSumError(`hindered rotor: rotational constant ${b} cm-1; expected > 0`);
   // `basisLimit` (a larger |m| than needed) exists for the convergence tests only.
-  const mMax = Math.max(hinderedRotorBasisLimit(rotor), options.basisLimit ?? 0);
+  const ceilingTemperature = options.ceilingTemperature ?? HINDERED_ROTOR_CEILING_TEMPERATURE;
+  if (!(ceilingTemperature > 0 && ceilingTemperature <= HINDERED_ROTOR_CEILING_TEMPERATURE)) {
+    throw new LevelSumError(`hindered rotor: ceiling temperature ${ceilingTemperature} K; expected > 0 and <= ${HINDERED_ROTOR_CEILING_TEMPERATURE}`);
+  }
+  const mMax = Math.max(hinderedRotorBasisLimit(rotor, ceilingTemperature), options.basisLimit ?? 0);
   if (2 * mMax + 1 > MAX_HINDERED_ROTOR_BASIS) {
     throw new LevelSumError(
       `hindered rotor: rotational constant ${b} cm-1 needs ${2 * mMax + 1} basis functions, more than ${MAX_HINDERED_ROTOR_BASIS}`,
     );
   }
-  const all: number[] = [];
-  for (let r = 0; r < n; r++) {
-    // Block m = m0, m0 + n, ... ≤ mMax with m0 the smallest m ≥ −mMax in the residue class r.
-    const m0 = -mMax + ((((r + mMax) % n) + n) % n);
-    const size = Math.floor((mMax - m0) / n) + 1;
+  const parts: Float64Array[] = [];
+  const eigenvaluesOf = (diagonal: (k: number) => number, firstCoupling: number, size: number, copies: number) => {
     const d = new Float64Array(size);
-    const e = new Float64Array(size);
-    for (let k = 0; k < size; k++) {
-      const m = m0 + k * n;
-      d[k] = b * m * m + v0 / 2;
-      e[k] = -v0 / 4;
+    const e = new Float64Array(size).fill(-v0 / 4);
+    for (let k = 0; k < size; k++) d[k] = diagonal(k);
+    e[0] = size > 1 ? firstCoupling : 0;
+    const values = symmetricTridiagonalEigenvalues(d, e);
+    for (let c = 0; c < copies; c++) parts.push(values);
+  };
+  const diagonalAt = (m: number) => b * m * m + v0 / 2;
+  for (let r = 0; r < n; r++) {
+    // m → −m maps residue class r onto n − r with the same matrix: those two blocks have the same
+    // eigenvalues (computed once, counted twice), and a class that maps onto itself (r = 0, r = n/2)
+    // splits exactly into its even and odd combinations (|m⟩ ± |−m⟩)/√2, two blocks of half the size.
+    const mirror = (n - r) % n;
+    if (mirror < r) continue;
+    if (mirror !== r) {
+      // Block m = m0, m0 + n, ... ≤ mMax with m0 the smallest m ≥ −mMax in the residue class r.
+      const m0 = -mMax + ((((r + mMax) % n) + n) % n);
+      eigenvaluesOf((k) => diagonalAt(m0 + k * n), -v0 / 4, Math.floor((mMax - m0) / n) + 1, 2);
+    } else if (r === 0) {
+      // m = 0, ±n, ±2n, …: even block {|0⟩, (|kn⟩ + |−kn⟩)/√2} couples |0⟩ to the next by −√2·V0/4.
+      const top = Math.floor(mMax / n);
+      eigenvaluesOf((k) => diagonalAt(k * n), (-Math.SQRT2 * v0) / 4, top + 1, 1);
+      if (top > 0) eigenvaluesOf((k) => diagonalAt((k + 1) * n), -v0 / 4, top, 1);
+    } else {
+      // m = ±n/2, ±3n/2, …: ⟨n/2|H|−n/2⟩ = −V0/4 shifts the first even level down and the first odd up.
+      const count = Math.floor((mMax - r) / n) + 1;
+      eigenvaluesOf((k) => diagonalAt(r + k * n) - (k === 0 ? v0 / 4 : 0), -v0 / 4, count, 1);
+      eigenvaluesOf((k) => diagonalAt(r + k * n) + (k === 0 ? v0 / 4 : 0), -v0 / 4, count, 1);
     }
-    for (const x of symmetricTridiagonalEigenvalues(d, e)) all.push(x);
   }
-  all.sort((x, y) => x - y);
+  const all = new Float64Array(parts.reduce((t, x) => t + x.length, 0));
+  let filled = 0;
+  for (const x of parts) {
+    all.set(x, filled);
+    filled += x.length;
+  }
+  all.sort();
   const lowest = all[0]!;
-  const ceiling = hinderedRotorEnergyCeiling();
-  const kept = all.map((x) => x - lowest).filter((x) => x <= ceiling);
-  const energies = Float64Array.from(kept);
+  const ceiling = hinderedRotorEnergyCeiling(ceilingTemperature);
+  const energies = all.map((x) => x - lowest).filter((x) => x <= ceiling);
   const list = createLevelList(energies, new Float64Array(energies.length).fill(1 / sigma), C2_CM_K);
   return { energies, list, basisLimit: mMax, zeroPointEnergy: lowest };
 }

@@ -1,10 +1,11 @@
 /**
  * Sum over discrete levels: q = Σ g_i exp(−θ_i/T) with level temperatures θ_i = c2·E_i (K).
  */
+import type { GridMoments } from './grid-moments.js';
 import { LevelSumError, type PartitionMoments } from './moments.js';
 
 /** Past this point the remaining levels change q, ⟨u⟩ and var u by less than this relative amount. */
-const TAIL_CUTOFF = 1e-17;
+export const TAIL_CUTOFF = 1e-17;
 
 /**
  * A list of levels with their statistical weights, sorted by energy. `theta` holds c2·(E − E_lowest) in K,
@@ -67,6 +68,13 @@ export function createLevelList(
  * Source: McQuarrie, Statistical Mechanics (1976), eqs. 2-30 to 2-34 (canonical fluctuations).
  */
 export function levelSumMoments(levels: LevelList, T: number): PartitionMoments {
+  const one: GridMoments = { lnQ: new Float64Array(1), meanU: new Float64Array(1), varU: new Float64Array(1) };
+  addDirectLevelSum(levels, T, one, 0);
+  return { lnQ: one.lnQ[0]!, meanU: one.meanU[0]!, varU: one.varU[0]! };
+}
+
+/** The direct sum of `levelSumMoments` at T, added into grid index j (no object per temperature). */
+export function addDirectLevelSum(levels: LevelList, T: number, into: GridMoments, j: number): void {
   const { theta, weight, tailWeight } = levels;
   const n = theta.length;
   const invT = 1 / T;
@@ -85,5 +93,7 @@ export function levelSumMoments(levels: LevelList, T: number): PartitionMoments 
     mean += (w / q) * d;
     m2 += w * d * (u - mean);
   }
-  return { lnQ: Math.log(q), meanU: mean, varU: m2 / q };
+  into.lnQ[j]! += Math.log(q);
+  into.meanU[j]! += mean;
+  into.varU[j]! += m2 / q;
 }

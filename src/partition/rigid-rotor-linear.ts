@@ -2,6 +2,9 @@
  * Rigid-rotor partition function of a linear molecule, by direct summation over J.
  */
 import { C2_CM_K } from '../constants.js';
+import type { GridMoments, TemperatureGrid } from './grid-moments.js';
+import type { LevelList } from './level-sum.js';
+import { addLevelSumGrid } from './level-sum-grid.js';
 import { LevelSumError, type PartitionMoments } from './moments.js';
 
 /** Terms below this fraction of the running sum, past the population maximum, are negligible. */
@@ -39,6 +42,46 @@ export function linearRotorMoments(
     m2 += w * d * (u - mean);
   }
   return { lnQ: Math.log(q) - Math.log(symmetryNumber), meanU: mean, varU: m2 / q };
+}
+
+/** Levels are kept up to u = θJ(J+1)/T = 60 at the ceiling temperature of the list. */
+const KEPT_U_AT_CEILING = 60;
+
+/**
+ * The J levels of a linear rigid rotor as a level list (θ_J = θ J(J+1), weight 2J + 1; σ is applied by
+ * `addLinearRotorGrid`), complete up to `ceilingTemperature` (K): the omitted terms past u = 60 there sum
+ * to less than ∫ (2J+1) e^{−θJ(J+1)/T} dJ over the rest, q_classical·e^{−60} ≈ 1e-26 of q.
+ */
+export function linearRotorLevelList(rotationalConstant: number, ceilingTemperature: number): LevelList {
+  const x = (C2_CM_K * rotationalConstant) / ceilingTemperature;
+  if (!(x > 0 && Number.isFinite(x))) throw new LevelSumError(`rotational constant ${rotationalConstant} cm-1 gives θ/T = ${x}`);
+  // J(J+1) ≤ 60/x, so J ≤ √(60/x).
+  const count = Math.floor(Math.sqrt(KEPT_U_AT_CEILING / x)) + 2;
+  if (count > MAX_J) throw new LevelSumError(`rotational sum did not converge within J = ${MAX_J} (θ/T = ${x})`);
+  const theta = new Float64Array(count);
+  const weight = new Float64Array(count);
+  const tailWeight = new Float64Array(count);
+  const thetaRot = C2_CM_K * rotationalConstant;
+  for (let J = 0; J < count; J++) {
+    theta[J] = thetaRot * J * (J + 1);
+    weight[J] = 2 * J + 1;
+  }
+  let tail = 0;
+  for (let J = count - 1; J >= 0; J--) {
+    tail += weight[J]!;
+    tailWeight[J] = tail;
+  }
+  return { theta, weight, tailWeight };
+}
+
+/**
+ * Grid form of `linearRotorMoments` from the level list of `linearRotorLevelList` (level-sum-grid.ts: its
+ * stated accuracy, tested against the direct J sum); every T of the grid must be ≤ the list's ceiling.
+ */
+export function addLinearRotorGrid(levels: LevelList, symmetryNumber: number, grid: TemperatureGrid, into: GridMoments): void {
+  addLevelSumGrid(levels, grid, into);
+  const lnSigma = Math.log(symmetryNumber);
+  for (let j = 0; j < grid.T.length; j++) into.lnQ[j]! -= lnSigma;
 }
 
 /**

@@ -2,6 +2,7 @@
  * Classical rigid-rotor partition function of a nonlinear molecule.
  */
 import { C2_CM_K } from '../constants.js';
+import type { GridMoments, TemperatureGrid } from './grid-moments.js';
 import type { PartitionMoments } from './moments.js';
 
 /**
@@ -20,4 +21,20 @@ export function nonlinearRotorMoments(
   const thetaProduct = C2_CM_K * a * C2_CM_K * b * C2_CM_K * c;
   const lnQ = 0.5 * Math.log(Math.PI) - Math.log(symmetryNumber) + 0.5 * (3 * Math.log(T) - Math.log(thetaProduct));
   return { lnQ, meanU: 1.5, varU: 1.5 };
+}
+
+/** Grid form of `nonlinearRotorMoments` (the same expression at every T). */
+export function addNonlinearRotorGrid(
+  rotationalConstants: readonly [number, number, number],
+  symmetryNumber: number,
+  grid: TemperatureGrid,
+  into: GridMoments,
+): void {
+  const [a, b, c] = rotationalConstants;
+  const thetaProduct = C2_CM_K * a * C2_CM_K * b * C2_CM_K * c;
+  for (let j = 0; j < grid.T.length; j++) {
+    into.lnQ[j]! += 0.5 * Math.log(Math.PI) - Math.log(symmetryNumber) + 0.5 * (3 * Math.log(grid.T[j]!) - Math.log(thetaProduct));
+    into.meanU[j]! += 1.5;
+    into.varU[j]! += 1.5;
+  }
 }

@@ -39,7 +39,9 @@
  * Units: dimensionless. Valid for any T > 0.
  */
 import type { NuclearSpinMixture } from '../model.js';
+import { zeroGridMoments, type TemperatureGrid } from './grid-moments.js';
 import { levelSumMoments, type LevelList } from './level-sum.js';
+import { addLevelSumGrid } from './level-sum-grid.js';
 import type { ThermoContribution } from './moments.js';
 
 /**
@@ -78,4 +80,24 @@ export function frozenMixtureContribution(components: readonly FrozenMixtureComp
     cp += c.fraction * m.varU;
   }
   return { s, hmh0, cp };
+}
+
+/** Dimensionless functions on a grid: s → S/R, hmh0 → (H − H0)/RT, cp → Cp/R (contributions add). */
+export interface GridContribution {
+  readonly s: Float64Array;
+  readonly hmh0: Float64Array;
+  readonly cp: Float64Array;
+}
+
+/** Grid form of `frozenMixtureContribution`, added into `into` (each component by level-sum-grid.ts). */
+export function addFrozenMixtureGrid(components: readonly FrozenMixtureComponent[], grid: TemperatureGrid, into: GridContribution): void {
+  for (const c of components) {
+    const m = zeroGridMoments(grid.T.length);
+    addLevelSumGrid(c.levels, grid, m);
+    for (let j = 0; j < grid.T.length; j++) {
+      into.s[j]! += c.fraction * (m.lnQ[j]! + m.meanU[j]!);
+      into.hmh0[j]! += c.fraction * (m.meanU[j]! + c.offsetTheta * grid.invT[j]!);
+      into.cp[j]! += c.fraction * m.varU[j]!;
+    }
+  }
 }

@@ -2,6 +2,7 @@
  * Translational partition function of an ideal gas (Sackur–Tetrode).
  */
 import { AVOGADRO, BOLTZMANN, PLANCK } from '../constants.js';
+import type { GridMoments, TemperatureGrid } from './grid-moments.js';
 import type { PartitionMoments } from './moments.js';
 
 /**
@@ -18,4 +19,15 @@ export function translationalMoments(molarMassGPerMol: number, T: number, pressu
   const kT = BOLTZMANN * T;
   const lnQ = 1.5 * Math.log((2 * Math.PI * m * kT) / (PLANCK * PLANCK)) + Math.log(kT / pressurePa);
   return { lnQ, meanU: 2.5, varU: 2.5 };
+}
+
+/** Grid form of `translationalMoments` (the same expression at every T, so the same bits). */
+export function addTranslationalGrid(molarMassGPerMol: number, pressurePa: number, grid: TemperatureGrid, into: GridMoments): void {
+  const m = molarMassGPerMol / 1000 / AVOGADRO;
+  for (let j = 0; j < grid.T.length; j++) {
+    const kT = BOLTZMANN * grid.T[j]!;
+    into.lnQ[j]! += 1.5 * Math.log((2 * Math.PI * m * kT) / (PLANCK * PLANCK)) + Math.log(kT / pressurePa);
+    into.meanU[j]! += 2.5;
+    into.varU[j]! += 2.5;
+  }
 }

@@ -8,6 +8,7 @@ import type {
   NonlinearSpecies,
   NuclearSpinMixture,
   PhysicsOptions,
+  PolyatomicMolecularPart,
   Species,
   ThermoEvaluator,
   ThermoPoint,
@@ -30,6 +31,7 @@ import { DEFAULT_NUCLEAR_SPIN_MIXTURE, frozenMixtureContribution } from '../part
 import { translationalMoments } from '../partition/translational.js';
 import { ELECTRON_CONVENTION, formationEnthalpyAt298 } from './reference-states.js';
 import { vibrationFactor } from './vibration-model.js';
+import { conformerSum } from './conformers.js';
 
 export class PhysicsOptionsError extends Error {
   constructor(message: string) {
@@ -126,9 +128,12 @@ export function createThermoEvaluator(species: Species, options?: Partial<Physic
       break;
     }
     case 'linear':
-    case 'nonlinear':
-      internal = { moments: polyatomicInternal(species, contributions) };
+    case 'nonlinear': {
+      const conformers = species.conformers;
+      const of = (part: PolyatomicMolecularPart, lines: string[]) => polyatomicInternal({ ...species, ...part } as typeof species, lines);
+      internal = { moments: conformers ? conformerSum(conformers, of, contributions) : polyatomicInternal(species, contributions) };
       break;
+    }
     case 'diatomic': {
       const spin = species.nuclearSpinWeights;
       const mixture: NuclearSpinMixture | undefined = spin ? (species.nuclearSpinMixture ?? DEFAULT_NUCLEAR_SPIN_MIXTURE) : undefined;

@@ -79,6 +79,8 @@ export class MissingReferenceStateError extends Error {
 
 /** H°(298.15) − H°(0) of one mole of atoms of `element` in its reference state, J/mol. */
 export function elementIncrementPerAtom(element: string): number {
+  // The free electron (composition {E: 1}, charge −1) is counted by the charge term of formationEnthalpyAt298.
+  if (element === 'E') return 0;
   const ref = ELEMENT_REFERENCE_STATES[element];
   if (!ref) throw new MissingReferenceStateError(element);
   return (ref.incrementKJPerMol * 1000) / ref.atomsPerFormula;

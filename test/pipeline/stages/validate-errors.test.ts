@@ -293,6 +293,11 @@ const ERRORS: Case[] = [
     kind: 'negative He so large that the J ladder never rises', yaml: edit(DIATOMIC, { 9: n2State(', De: 5.76e-6, He: -1') }), line: 9, at: '-1}',
     path: 'electronic_states[0].He', contains: ['E(v,1) <= E(v,0) at v = 0', 'would not rise', 'got -1'],
   },
+  {
+    // A wavenumber beyond the plausibility bound (pipeline/stages/plausibility.ts) is an error, not a warning.
+    kind: 'wavenumber in the wrong unit', yaml: edit(NONLINEAR, { 8: 'vibrations: [365700, 1595, 3756]' }), line: 8, at: '365700',
+    path: 'vibrations[0]', contains: ['outside the plausible range', '[wavenumber-out-of-bounds]'],
+  },
 ];
 
 const WARNINGS: Case[] = [
@@ -329,10 +334,6 @@ const WARNINGS: Case[] = [
     kind: 'implausibly large centrifugal distortion',
     yaml: edit(DIATOMIC, { 9: '  - {term: X, energy: 0, degeneracy: 1, we: 2358.57, wexe: 14.324, Be: 1.99824, De: 0.5}' }),
     line: 9, at: '0.5', path: 'electronic_states[0].De', contains: ['more than 1% of Be'],
-  },
-  {
-    kind: 'wavenumber in the wrong unit', yaml: edit(NONLINEAR, { 8: 'vibrations: [365700, 1595, 3756]' }), line: 8, at: '365700',
-    path: 'vibrations[0]', contains: ['check the unit'],
   },
   // Higher-order level constants (weze, gammae, betae, He); values invented, N2 base from Huber & Herzberg (1979).
   {

@@ -341,10 +341,23 @@ function uncertaintyTable(u: SpeciesUncertainty): string {
       return `<tr><td>${sig(p.T, 5)}</td>${cells.join('')}</tr>`;
     })
     .join('');
+  // Beyond sampling error (≈ 1/√(2N) relative) and this margin, the model is not linear over ±u there.
+  const disagree = (mc: number, lin: number, n: number) => lin > 0 && Math.abs(mc - lin) / lin > Math.max(0.2, 3 / Math.sqrt(2 * n));
+  const flagged: string[] = [];
   const mc = u.monteCarlo?.length
     ? `<p class="mc">Monte Carlo check (${u.monteCarlo[0]!.samples} samples, seed ${u.monteCarlo[0]!.seed}): ${u.monteCarlo
-        .map((m) => `${sig(m.T, 5)} K: u(Cp°) ${sig(m.cp, 3)}, u(S°) ${sig(m.s, 3)}, u(H°−H°298) ${sig(m.hMinusH298, 3)}`)
-        .join(' · ')}</p>`
+        .map((m) => {
+          const lin = u.points.find((p) => p.T === m.T);
+          for (const q of ['cp', 's', 'hMinusH298', 'h'] as const) {
+            if (lin && disagree(m[q], lin[q], m.samples)) flagged.push(`${Q_LABEL[q]} at ${sig(m.T, 5)} K`);
+          }
+          return `${sig(m.T, 5)} K: u(Cp°) ${sig(m.cp, 3)}, u(S°) ${sig(m.s, 3)}, u(H°−H°298) ${sig(m.hMinusH298, 3)}`;
+        })
+        .join(' · ')}</p>${
+        flagged.length
+          ? `<p class="warning">Monte Carlo and linear propagation disagree (${flagged.join(', ')}): the model is not linear over ±u there; do not trust the linear figure.</p>`
+          : ''
+      }`
     : '';
   const none = u.inputs.length === 0 ? '<p class="warning">This species declares no input uncertainties: every u below is zero, not "known exactly".</p>' : '';
   const inputs = u.inputs.length

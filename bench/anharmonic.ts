@@ -11,7 +11,8 @@ import { validateSpecies } from '../pipeline/stages/validate.js';
 import type { Species } from '../src/model.js';
 import { createThermoEvaluator } from '../src/thermo/evaluator.js';
 
-const CO2 = `name: CO2
+/** Anharmonic CO2 as a species file (also the end-to-end test's input, test/pipeline/anharmonic-build.test.ts). */
+export const CO2_ANHARMONIC_YAML = `name: CO2
 composition: {C: 1, O: 2}
 enthalpy_of_formation: -393.51
 sources: ["Chedin (1979), from memory"]
@@ -65,7 +66,7 @@ function gridMs(s: Species): number {
 
 export function benchAnharmonic(): AnharmonicBenchRow[] {
   return [
-    ['CO2', CO2],
+    ['CO2', CO2_ANHARMONIC_YAML],
     ['H2O', H2O],
   ].map(([name, text]) => {
     const t0 = performance.now();

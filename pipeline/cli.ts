@@ -452,7 +452,7 @@ async function buildCommand(
 
 async function checkCommand(io: CliIo, dir: string, o: { json?: boolean; strict?: boolean }): Promise<number> {
   await assertFolder(dir, `database folder ${displayPath(io.cwd, dir)}`);
-  const [{ checkDatabase }, { formatDiagnostic, hasErrors }] = await Promise.all([import('./runner.js'), import('./core/diagnostics.js')]);
+  const [{ checkDatabase }, { formatDiagnostic, hasErrors, nonFiniteAsText }] = await Promise.all([import('./runner.js'), import('./core/diagnostics.js')]);
   const report = await checkDatabase({ dir, displayBase: io.cwd, strict: !!o.strict });
   printDiagnostics(io, report.diagnostics, formatDiagnostic);
   const errors = report.diagnostics.filter((d) => d.severity === 'error').length;
@@ -465,7 +465,7 @@ async function checkCommand(io: CliIo, dir: string, o: { json?: boolean; strict?
   );
   if (o.json) {
     io.stdout.write(
-      `${JSON.stringify({ species: report.species.map((s) => ({ name: s.name, file: s.file })), diagnostics: report.diagnostics }, null, 2)}\n`,
+      `${JSON.stringify({ species: report.species.map((s) => ({ name: s.name, file: s.file })), diagnostics: report.diagnostics }, nonFiniteAsText, 2)}\n`,
     );
   }
   return hasErrors(report.diagnostics) ? 1 : 0;

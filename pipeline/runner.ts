@@ -31,10 +31,11 @@ import { fitOptionsFor, fitSpecies } from './stages/fit.js';
 import { canonicalJson, hashParts, sha256Hex } from './storage/hash.js';
 import { discoverSpeciesFiles, loadYamlFile, type LoadedDocument } from './stages/load.js';
 import { planSpecies, type SpeciesPlan } from './core/plan.js';
-import { checkSpeciesSampling, loadSettings, type DatabaseSettings, type QuantityTriple } from './core/settings.js';
+import { checkSpeciesSampling, loadSettings, type DatabaseSettings, type FitTolerancesSetting } from './core/settings.js';
 import { checkUniqueNames, validateSpecies } from './stages/validate.js';
 import { verifySpecies } from './stages/verify.js';
 import { computeUncertainty } from './stages/uncertainty.js';
+import { fitLimitOrigin, toleranceKeyPositions } from './stages/limit-origin.js';
 import { codeFingerprint } from './storage/code-fingerprint.js';
 import { createWarningPolicy } from './core/strict.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './core/version.js';
@@ -84,7 +85,7 @@ export interface ValidSpecies {
   species: Species;
   normalisedInput: unknown;
   /** Source positions for diagnostics of later stages: the species' `name` and `temperature_ranges`. */
-  positions: Partial<Record<'name' | 'composition' | 'temperature_ranges', { line: number; column: number }>>;
+  positions: Partial<Record<'name' | 'composition' | 'temperature_ranges' | `tolerances.${string}`, { line: number; column: number }>>;
   loadMs: number;
   validateMs: number;
 }
@@ -133,6 +134,7 @@ function positionsOf(doc: LoadedDocument): ValidSpecies['positions'] {
     const tr = doc.locate(['temperature_ranges']);
     if (tr) out.temperature_ranges = { line: tr.line, column: tr.column };
   }
+  Object.assign(out, toleranceKeyPositions(doc));
   return out;
 }
 
@@ -343,18 +345,8 @@ export interface LimitSource {
  * settings key that set the limit: "… exceeds the tolerance 1e-06 by …; limit set by tolerances.cp in
  * db/qforge.yaml:11:17".
  */
-export function locateFitViolation(d: Diagnostic, tolerances: QuantityTriple, source: LimitSource): Diagnostic {
-  const q = d.path.startsWith('fit.') ? d.path.slice(4) : '';
-  let origin: string;
-  if (q === 'cp' || q === 'h' || q === 's') {
-    const at = source.settingsSetAt?.(['tolerances', q]);
-    if (at && source.settingsFile) origin = `limit set by tolerances.${q} in ${source.settingsFile}:${at.line}:${at.column}`;
-    else if (source.settingsFile) origin = `limit is the default tolerances.${q} = ${tolerances[q]} (not set in ${source.settingsFile})`;
-    else origin = `limit is the default tolerances.${q} = ${tolerances[q]} (the database has no qforge.yaml)`;
-  } else {
-    origin = 'a built-in check of every fit (not a setting)';
-  }
-  return { ...d, path: '', message: `fit check: ${d.message}; ${origin}` };
+export function locateFitViolation(d: Diagnostic, tolerances: FitTolerancesSetting, source: LimitSource, species?: ValidSpecies): Diagnostic {
+  return { ...d, path: '', message: `fit check: ${d.message}; ${fitLimitOrigin(d.path, tolerances, source, species)}` };
 }
 
 /** compute → fit → verify (and the table points) of one species, through the cache. */
@@ -445,7 +437,7 @@ export async function buildOneSpecies(
   const violations = verifySpecies(fit, computed.samples, plan.tolerances, fitOptions.continuityOrder, where);
   out.timings.verify = performance.now() - tv;
   if (violations.length) {
-    out.diagnostics.push(...violations.map((d) => locateFitViolation(d, plan.tolerances, limitSource)));
+    out.diagnostics.push(...violations.map((d) => locateFitViolation(d, plan.tolerances, limitSource, v)));
     return out;
   }
 

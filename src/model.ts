@@ -38,6 +38,21 @@ export interface InternalRotor {
   symmetryNumber: number;
   /** Reduced rotational constant B = h/(8π² c I_red), cm⁻¹. */
   rotationalConstant: number;
+  /**
+   * A general torsional potential, replacing the single cosine when present (src/partition/fourier-rotor.ts):
+   * V(φ) = Σ cos·(1 − cos nφ)/2 + sin·sin(nφ)/2, cm⁻¹. `barrier` then holds max V − min V and `foldedness`
+   * the largest n (they size the basis).
+   */
+  fourier?: FourierTerm[];
+  /** When `fourier` was fitted to a scan: its size and fit residuals (cm⁻¹), for the model summary. */
+  scanFit?: { points: number; terms: number; rmsResidual: number; maxResidual: number };
+}
+
+/** One term of a torsional Fourier potential: V_cos (1 − cos nφ)/2 + V_sin sin(nφ)/2, cm⁻¹. */
+export interface FourierTerm {
+  n: number;
+  cos: number;
+  sin: number;
 }
 
 /**
@@ -104,8 +119,18 @@ interface SpeciesBase {
   structure: Structure;
   /** Optional per-species temperature ranges for the fit; pipeline settings supply the default. */
   temperatureRanges?: { low?: number; mid?: number; high?: number };
+  /** Optional per-species fit limits (same meaning as the settings' tolerances); settings supply the rest. */
+  fitLimits?: SpeciesFitLimits;
   /** Standard uncertainties of the inputs (absent when the input declares none: every u is then zero). */
   uncertainties?: InputUncertainties;
+}
+
+/** Absolute parts and multiples of Cp/R of the fit limits of one species (dimensionless). */
+export interface SpeciesFitLimits {
+  cp?: number;
+  h?: number;
+  s?: number;
+  relativeToCp?: { cp?: number; h?: number; s?: number };
 }
 
 /**
@@ -185,6 +210,8 @@ interface PolyatomicExtensions {
   centrifugalDistortion?: CentrifugalDistortion;
   dissociationEnergy?: number;
   vibrationScaleFactor?: { value: number; source: string };
+  /** Number of optical isomers (2 for a chiral molecule): S/R += ln(opticalIsomers). Absent = 1. */
+  opticalIsomers?: number;
   /** When present the partition function is the Boltzmann-weighted sum over these (src/thermo/conformers.ts). */
   conformers?: Conformer[];
 }

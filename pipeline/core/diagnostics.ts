@@ -30,11 +30,16 @@ export interface Diagnostic {
   code?: string;
 }
 
+/** JSON.stringify replacer that keeps NaN and ±Infinity visible (JSON would print them as null). */
+export function nonFiniteAsText(_key: string, v: unknown): unknown {
+  return typeof v === 'number' && !Number.isFinite(v) ? String(v) : v;
+}
+
 function showValue(v: unknown): string {
   if (v === undefined) return '';
   let s: string;
   try {
-    s = typeof v === 'string' ? JSON.stringify(v) : JSON.stringify(v) ?? String(v);
+    s = typeof v === 'number' && !Number.isFinite(v) ? String(v) : (JSON.stringify(v, nonFiniteAsText) ?? String(v));
   } catch {
     s = String(v);
   }

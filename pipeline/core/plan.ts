@@ -10,7 +10,8 @@
 import { T_REF } from '../../src/constants.js';
 import type { PhysicsOptions, Species } from '../../src/model.js';
 import type { PartialFitOptions } from '../../src/nasa7/options.js';
-import type { DatabaseSettings, QuantityTriple } from './settings.js';
+import type { DatabaseSettings, FitTolerancesSetting } from './settings.js';
+import { fitLimitsFor, midSearchFor } from './fit-plan.js';
 import { standardPressurePa } from './settings.js';
 import { temperatureGrid, tidy } from './grid.js';
 
@@ -20,7 +21,8 @@ export interface SpeciesPlan {
   /** Temperatures (K) of the computed points the fit uses, ascending, 298.15 and the midpoint included. */
   sampleTemperatures: number[];
   fitOptions: PartialFitOptions;
-  tolerances: QuantityTriple;
+  /** The species' fit limits: its own `tolerances` keys over the settings'. */
+  tolerances: FitTolerancesSetting;
   /** Temperatures (K) of tables/<name>.csv, inside the species' range, ascending. */
   tableTemperatures: number[];
 }
@@ -41,11 +43,19 @@ export function planSpecies(species: Species, settings: DatabaseSettings): Speci
     weights: { ...settings.fit.weights },
     continuityOrder: settings.fit.continuity_order,
     anchorT: T_REF,
+    method: settings.fit.method === 'least_squares' ? 'least-squares' : 'minimax',
   };
-  if (settings.fit.optimise_mid !== false) fitOptions.optimiseMid = { ...settings.fit.optimise_mid };
+  const tolerances = fitLimitsFor(settings.tolerances, species.fitLimits);
+  fitOptions.limits = {
+    cp: { absolute: tolerances.cp, perCp: tolerances.relative_to_cp.cp },
+    h: { absolute: tolerances.h, perCp: tolerances.relative_to_cp.h },
+    s: { absolute: tolerances.s, perCp: tolerances.relative_to_cp.s },
+  };
+  const search = midSearchFor(settings.fit.optimise_mid, ranges, o.mid !== undefined);
+  if (search) fitOptions.optimiseMid = search;
   const t = settings.tables;
   const tableTemperatures = [...new Set([...temperatureGrid(t.from, t.to, t.step), ...t.extra.map(tidy)])]
     .filter((x) => x >= ranges.low && x <= ranges.high)
     .sort((a, b) => a - b);
-  return { ranges, physics, sampleTemperatures, fitOptions, tolerances: { ...settings.tolerances }, tableTemperatures };
+  return { ranges, physics, sampleTemperatures, fitOptions, tolerances, tableTemperatures };
 }

@@ -13,6 +13,7 @@ import type { Diagnostic } from './diagnostics.js';
 import { SETTINGS_FILE_NAME, loadYamlFile, type LoadedDocument } from '../stages/load.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath } from '../stages/schema-check.js';
 import { MAX_END_GAP_FRACTION, MAX_INNER_GAP_FRACTION, MIN_DISTINCT_TEMPERATURES } from '../../src/nasa7/samples.js';
+import { MAX_ANCHOR_EXTRAPOLATION } from '../../src/nasa7/options.js';
 // plan.ts imports this module too; only functions cross the cycle, and only at call time.
 import { temperatureGrid } from './grid.js';
 
@@ -40,6 +41,11 @@ export interface KnownDeviation {
   reason: string;
 }
 
+/** The fit limits of `tolerances`: limit of q at T = max(q, relative_to_cp.q · Cp/R(T)). */
+export interface FitTolerancesSetting extends QuantityTriple {
+  relative_to_cp: QuantityTriple;
+}
+
 /** Settings with every default filled in (same key names as the file). */
 export interface DatabaseSettings {
   title: string;
@@ -48,12 +54,13 @@ export interface DatabaseSettings {
   standard_pressure: StandardPressureLabel;
   fit: {
     weights: QuantityTriple;
+    method: 'minimax' | 'least_squares';
     continuity_order: 1 | 2;
     optimise_mid: false | { min: number; max: number; step: number };
     sampling_step: number;
   };
-  /** Dimensionless: |ΔCp/R|, |ΔH/RT|, |ΔS/R|. */
-  tolerances: QuantityTriple;
+  /** Dimensionless: |ΔCp/R|, |ΔH/RT|, |ΔS/R| (absolute parts) and multiples of Cp/R (relative_to_cp). */
+  tolerances: FitTolerancesSetting;
   outputs: { thermo_json: boolean; nasa7: boolean; tables: boolean; report: boolean };
   tables: { from: number; to: number; step: number; extra: number[] };
   references: {
@@ -81,11 +88,12 @@ export const DEFAULT_SETTINGS: Readonly<DatabaseSettings> = Object.freeze({
   standard_pressure: '1 bar',
   fit: {
     weights: { cp: 1, h: 1, s: 1 },
+    method: 'minimax',
     continuity_order: 1,
-    optimise_mid: false,
+    optimise_mid: { min: 700, max: 2500, step: 100 },
     sampling_step: 10,
   },
-  tolerances: { cp: 0.1, h: 0.02, s: 0.02 },
+  tolerances: { cp: 0.1, h: 0.02, s: 0.02, relative_to_cp: { cp: 0.015, h: 0.003, s: 0.003 } },
   outputs: { thermo_json: true, nasa7: true, tables: true, report: false },
   tables: { from: 200, to: 6000, step: 100, extra: [298.15] },
   references: { files: [], tolerances: { cp: 0.5, h: 0.5, s: 0.5 }, known_deviations: [] },
@@ -114,7 +122,7 @@ export function withDefaults(input: unknown): DatabaseSettings {
   };
   const merged = merge(DEFAULT_SETTINGS, isObject(input) ? input : {}) as DatabaseSettings;
   const om = merged.fit.optimise_mid;
-  if (om !== false && isObject(om) && om.step === undefined) om.step = 50;
+  if (om !== false && isObject(om) && om.step === undefined) om.step = 100;
   return merged;
 }
 
@@ -149,15 +157,23 @@ export function checkSettingsRules(s: DatabaseSettings, file: string, doc?: Load
   if (!(low < mid && mid < high)) {
     push('settings-range-order', ['temperature_ranges'], 'temperature ranges out of order', { low, mid, high }, 'low < mid < high');
   }
-  // Point at the bound that is on the wrong side of 298.15 K (both, when both are).
-  if (!(low <= T_REF)) {
-    push('settings-range-excludes-298', ['temperature_ranges', 'low'], `the low range must contain ${T_REF} K (H and S are anchored there)`, low, `low ≤ ${T_REF} ≤ mid`);
+  // Point at the bound that is on the wrong side of 298.15 K (both, when both are). The low range may
+  // start up to MAX_ANCHOR_EXTRAPOLATION above it (e.g. 300 K): the low set is extrapolated to the anchor.
+  if (!(low <= T_REF + MAX_ANCHOR_EXTRAPOLATION)) {
+    push(
+      'settings-range-excludes-298',
+      ['temperature_ranges', 'low'],
+      `the low range must start at most ${MAX_ANCHOR_EXTRAPOLATION} K above ${T_REF} K (H and S are anchored there, on the low polynomial)`,
+      low,
+      `low ≤ ${T_REF + MAX_ANCHOR_EXTRAPOLATION} and ${T_REF} ≤ mid`,
+    );
   }
   if (!(T_REF <= mid)) {
     push('settings-range-excludes-298', ['temperature_ranges', 'mid'], `the low range must contain ${T_REF} K (H and S are anchored there)`, mid, `low ≤ ${T_REF} ≤ mid`);
   }
   const om = s.fit.optimise_mid;
-  if (om !== false) {
+  // The default search interval is clipped to each species' ranges (plan.ts); only a written one is checked.
+  if (om !== false && isSetIn(doc, ['fit', 'optimise_mid'])) {
     if (!(om.min < om.max)) push('settings-mid-interval-empty', ['fit', 'optimise_mid'], 'midpoint search interval is empty', om, 'min < max');
     if (!(om.min > low && om.max < high)) {
       push('settings-mid-interval-outside', ['fit', 'optimise_mid'], 'midpoint search interval must lie inside the temperature ranges', om, `${low} < min < max < ${high}`);
@@ -170,7 +186,7 @@ export function checkSettingsRules(s: DatabaseSettings, file: string, doc?: Load
   }
   if ((high - low) / s.fit.sampling_step > 100_000) {
     push('settings-sampling-grid-too-large', ['fit', 'sampling_step'], 'sampling grid has too many points', s.fit.sampling_step, 'at most 100000 points');
-  } else if (low < mid && mid < high && low <= T_REF && T_REF <= mid) {
+  } else if (low < mid && mid < high && low <= T_REF + MAX_ANCHOR_EXTRAPOLATION && T_REF <= mid) {
     // Only once the ranges themselves are sound: a misplaced mid is one mistake, reported above.
     const step = s.fit.sampling_step;
     const shortfall = samplingShortfall({ low, mid, high }, step);

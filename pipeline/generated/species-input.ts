@@ -54,6 +54,13 @@ export type MomentOfInertia =
       unit: "amu*angstrom^2" | "kg*m^2" | "g*cm^2";
     };
 /**
+ * One atom: element or isotope symbol (C, 13C, D) and Cartesian coordinates in angstrom.
+ *
+ * @minItems 4
+ * @maxItems 4
+ */
+export type GeometryRow = [unknown, unknown, unknown, unknown];
+/**
  * One harmonic vibration: a fundamental wavenumber (a bare number in cm-1, or {value, unit}; degeneracy 1), or {wavenumber, degeneracy} with the wavenumber itself a bare number in cm-1 or {value, unit}.
  */
 export type Vibration =
@@ -76,6 +83,46 @@ export type Wavenumber =
        * Unit of `value`.
        */
       unit: "cm-1" | "eV" | "K" | "J/mol" | "kJ/mol" | "kcal/mol";
+    };
+/**
+ * A torsional potential: {barrier, foldedness?} is (V0/2)(1 - cos n phi); {fourier} is V(phi) = sum V_cos (1 - cos n phi)/2 + V_sin sin(n phi)/2; {scan} is a relaxed scan [angle in degrees, energy] fitted to a Fourier series in multiples of the rotor symmetry number (the scan must cover the period 360/symmetry_number). unit (default cm-1) applies to V_cos, V_sin and scan energies.
+ */
+export type TorsionPotential = {
+  barrier?: NonNegativeEnergy;
+  foldedness?: PositiveInteger;
+  /**
+   * Fourier terms [n >= 1, V_cos, V_sin] in unit.
+   *
+   * @minItems 1
+   */
+  fourier?: [[unknown, unknown, unknown], ...[unknown, unknown, unknown][]];
+  /**
+   * Scan points [torsion angle in degrees, energy in unit]; the energy zero is arbitrary.
+   *
+   * @minItems 5
+   */
+  scan?: [
+    [unknown, unknown],
+    [unknown, unknown],
+    [unknown, unknown],
+    [unknown, unknown],
+    [unknown, unknown],
+    ...[unknown, unknown][]
+  ];
+  /**
+   * Unit of V_cos, V_sin and scan energies. Default cm-1.
+   */
+  unit?: "cm-1" | "eV" | "K" | "J/mol" | "kJ/mol" | "kcal/mol";
+} & TorsionPotential1;
+export type TorsionPotential1 =
+  | {
+      [k: string]: unknown;
+    }
+  | {
+      [k: string]: unknown;
+    }
+  | {
+      [k: string]: unknown;
     };
 /**
  * One anharmonic constant: 1-based mode indices i <= j into vibrations and the value in cm-1.
@@ -226,13 +273,24 @@ export interface SpeciesInput {
   moments_of_inertia?:
     [MomentOfInertia] | [MomentOfInertia, MomentOfInertia] | [MomentOfInertia, MomentOfInertia, MomentOfInertia];
   /**
+   * Optional (linear, nonlinear): Cartesian geometry in angstrom. Symbols are elements (their most abundant isotope), isotopes with the mass number first (13C, 18O, 2H) or D, T. The rotational constants, the linear/nonlinear check, the symmetry number (when symmetry_number is absent) and internal rotors given by axis follow from it; the atoms must match composition. Give at most one of geometry and geometry_file.
+   *
+   * @minItems 2
+   */
+  geometry?: [GeometryRow, GeometryRow, ...GeometryRow[]];
+  /**
+   * Optional (linear, nonlinear): like geometry, read from an XYZ file (atom count, comment line, then one 'symbol x y z' line per atom, angstrom) in the species file's folder or below it.
+   */
+  geometry_file?: string;
+  optical_isomers?: PositiveInteger;
+  /**
    * Harmonic vibrations (linear, nonlinear): each a wavenumber (bare number in cm-1, or {value, unit}) or {wavenumber, degeneracy}. 3N-5 (linear) or 3N-6 (nonlinear) modes counting degeneracy (internal_rotors count as modes).
    *
    * @minItems 1
    */
   vibrations?: [Vibration, ...Vibration[]];
   /**
-   * Optional (linear, nonlinear): torsions treated as one-dimensional hindered internal rotors with potential V(phi) = (V0/2)(1 - cos n phi), summed over their quantum levels, instead of harmonic vibrations. A torsion listed here must be removed from vibrations (each rotor counts as one of the 3N-6 modes).
+   * Optional (linear, nonlinear): torsions treated as one-dimensional hindered internal rotors, summed over their quantum levels, instead of harmonic vibrations. A torsion listed here must be removed from vibrations (each rotor counts as one of the 3N-6 modes; README: finding the torsion among the frequencies).
    *
    * @minItems 1
    */
@@ -335,6 +393,40 @@ export interface SpeciesInput {
      */
     high?: number;
   };
+  /**
+   * Optional per-species fit limits, same keys as tolerances in qforge.yaml: the limit of q = cp, h, s at T is max(q, relative_to_cp.q × Cp/R(T)). Missing keys come from the database settings.
+   */
+  tolerances?: {
+    /**
+     * Absolute part of the Cp/R limit (dimensionless).
+     */
+    cp?: number;
+    /**
+     * Absolute part of the H/RT limit (dimensionless).
+     */
+    h?: number;
+    /**
+     * Absolute part of the S/R limit (dimensionless).
+     */
+    s?: number;
+    /**
+     * Multiples of the computed Cp/R.
+     */
+    relative_to_cp?: {
+      /**
+       * Size-scaled part of the Cp/R limit: a multiple of the computed Cp/R.
+       */
+      cp?: number;
+      /**
+       * Size-scaled part of the H/RT limit: a multiple of the computed Cp/R.
+       */
+      h?: number;
+      /**
+       * Size-scaled part of the S/R limit: a multiple of the computed Cp/R.
+       */
+      s?: number;
+    };
+  };
 }
 /**
  * One accepted warning: its stable code and the reason a person accepts it.
@@ -361,14 +453,28 @@ export interface ElectronicLevel {
   term?: string;
 }
 /**
- * One torsion as a one-dimensional hindered rotor: H = B(-d^2/dphi^2) + (V0/2)(1 - cos n phi) with B = h/(8 pi^2 c I_red), levels from a direct diagonalisation in the free-rotor basis. Give exactly one of moment_of_inertia and rotational_constant.
+ * One torsion as a one-dimensional hindered rotor H = B(-d^2/dphi^2) + V(phi), B = h/(8 pi^2 c I_red), levels from a direct diagonalisation in the free-rotor basis. The reduced moment: from the geometry (axis, top) by Pitzer's I(2,3), or given as moment_of_inertia or rotational_constant (exactly one of the three). The potential: barrier (+ foldedness), or potential {barrier, foldedness} | {fourier, unit} | {scan, unit} (exactly one of barrier and potential).
  */
 export interface InternalRotor {
-  barrier: NonNegativeEnergy;
-  symmetry_number: PositiveInteger;
+  /**
+   * The torsion bond, as 1-based indices into geometry (the two atoms must be bonded). Needs geometry or geometry_file; the reduced moment of inertia then follows from the geometry.
+   *
+   * @minItems 2
+   * @maxItems 2
+   */
+  axis?: [PositiveInteger, PositiveInteger];
+  /**
+   * With axis, optional: the atoms that turn (one whole side of the bond; the axis atom may be left out). Default: the side with fewer atoms.
+   *
+   * @minItems 1
+   */
+  top?: [PositiveInteger, ...PositiveInteger[]];
+  barrier?: NonNegativeEnergy;
+  symmetry_number?: PositiveInteger;
   foldedness?: PositiveInteger;
   moment_of_inertia?: MomentOfInertia;
   rotational_constant?: RotationalConstant;
+  potential?: TorsionPotential;
 }
 /**
  * A vibrational scale factor and where it comes from.
@@ -439,7 +545,7 @@ export interface Conformer {
    */
   name: string;
   energy: NonNegativeEnergy;
-  symmetry_number: PositiveInteger;
+  symmetry_number?: PositiveInteger;
   /**
    * Rotational constants: [B] for linear, [A, B, C] for nonlinear (conventionally A >= B >= C). Give either this or moments_of_inertia.
    *
@@ -458,6 +564,16 @@ export interface Conformer {
    */
   moments_of_inertia?:
     [MomentOfInertia] | [MomentOfInertia, MomentOfInertia] | [MomentOfInertia, MomentOfInertia, MomentOfInertia];
+  /**
+   * Optional (linear, nonlinear): Cartesian geometry in angstrom. Symbols are elements (their most abundant isotope), isotopes with the mass number first (13C, 18O, 2H) or D, T. The rotational constants, the linear/nonlinear check, the symmetry number (when symmetry_number is absent) and internal rotors given by axis follow from it; the atoms must match composition. Give at most one of geometry and geometry_file.
+   *
+   * @minItems 2
+   */
+  geometry?: [GeometryRow, GeometryRow, ...GeometryRow[]];
+  /**
+   * Optional (linear, nonlinear): like geometry, read from an XYZ file (atom count, comment line, then one 'symbol x y z' line per atom, angstrom) in the species file's folder or below it.
+   */
+  geometry_file?: string;
   /**
    * Harmonic vibrations (linear, nonlinear): each a wavenumber (bare number in cm-1, or {value, unit}) or {wavenumber, degeneracy}. 3N-5 (linear) or 3N-6 (nonlinear) modes counting degeneracy (internal_rotors count as modes).
    *

@@ -38,7 +38,9 @@ import {
   type Document,
   type Node as YamlNode,
 } from 'yaml';
+import type { GeometryRow } from '../../src/geometry/index.js';
 import type { Diagnostic } from '../core/diagnostics.js';
+import { parseXyz } from './xyz.js';
 import { compareText, errorText } from '../core/text.js';
 
 /** Default size limit of one YAML file: 1 MiB (a large species file is a few kB). */
@@ -80,6 +82,20 @@ export interface LoadedDocument {
    * also in LoadResult.diagnostics; a document carrying them must never be built.
    */
   yamlErrors?: readonly Diagnostic[];
+  /**
+   * The XYZ files named by `geometry_file` (of the species or of a conformer), by name as written, read by
+   * `loadYamlFile` (absent when none is named or the document was not loaded from disk).
+   */
+  geometryFiles?: Record<string, LoadedGeometryFile>;
+}
+
+/** A geometry file as read: its rows and their lines, or the problems that stopped it (located in it). */
+export interface LoadedGeometryFile {
+  /** Display path of the XYZ file. */
+  file: string;
+  rows: GeometryRow[];
+  lines: number[];
+  diagnostics: Diagnostic[];
 }
 
 export interface LoadResult {
@@ -480,12 +496,56 @@ export async function loadYamlFile(
       );
       return empty;
     }
-    return parseYamlText(text, displayPath, opts);
+    const result = parseYamlText(text, displayPath, opts);
+    await attachGeometryFiles([...result.documents, ...result.recoveredDocuments], filePath, displayPath, maxBytes);
+    return result;
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
     const reason = code === 'ENOENT' ? 'file not found' : `cannot read file (${code ?? String(e)})`;
     empty.diagnostics.push(err(displayPath, code === 'ENOENT' ? 'file-not-found' : 'file-unreadable', reason));
     return empty;
+  }
+}
+
+/**
+ * Reads the XYZ file each document names in `geometry_file` (a name relative to the species file's folder,
+ * never outside it; same size limit as species files) and attaches it, parsed, to the document. Problems
+ * become diagnostics of the geometry file, which the validator reports with the species.
+ */
+async function attachGeometryFiles(docs: LoadedDocument[], filePath: string, displayPath: string, maxBytes: number): Promise<void> {
+  const folder = path.dirname(filePath);
+  for (const doc of docs) {
+    const value = doc.value as { geometry_file?: unknown; conformers?: unknown } | null;
+    const conformers = Array.isArray(value?.conformers) ? (value.conformers as Array<{ geometry_file?: unknown } | null>) : [];
+    const names = [value?.geometry_file, ...conformers.map((c) => c?.geometry_file)].filter((n): n is string => typeof n === 'string' && n !== '');
+    for (const name of names) {
+      doc.geometryFiles ??= {};
+      doc.geometryFiles[name] ??= await readGeometryFile(folder, name, path.join(path.dirname(displayPath), name), maxBytes);
+    }
+  }
+}
+
+async function readGeometryFile(folder: string, name: string, display: string, maxBytes: number): Promise<LoadedGeometryFile> {
+  const fail = (code: string, message: string, expected: string): LoadedGeometryFile => ({
+    file: display,
+    rows: [],
+    lines: [],
+    diagnostics: [err(display, code, message, { expected })],
+  });
+  const target = path.resolve(folder, name);
+  if (path.isAbsolute(name) || !isInside(folder, target)) {
+    return fail('geometry-file-outside', 'a geometry file must lie in the folder of its species file or below it', 'a relative name without ..');
+  }
+  try {
+    const info = await stat(target);
+    if (!info.isFile()) return fail('not-a-file', 'not a regular file', 'an XYZ file');
+    if (info.size > maxBytes) return { file: display, rows: [], lines: [], diagnostics: [sizeDiagnostic(display, info.size, maxBytes)] };
+    const text = decodeUtf8Text(await readFile(target));
+    if (text === undefined) return fail('not-utf8-text', 'not UTF-8 text', 'a UTF-8 encoded XYZ text file');
+    return { file: display, ...parseXyz(text, display) };
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    return fail(code === 'ENOENT' ? 'file-not-found' : 'file-unreadable', code === 'ENOENT' ? 'geometry file not found' : `cannot read file (${code ?? String(e)})`, 'an XYZ file next to the species file');
   }
 }
 

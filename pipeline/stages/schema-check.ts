@@ -50,16 +50,22 @@ export function formatFieldPath(segments: ReadonlyArray<Segment>): string {
   return out;
 }
 
+/**
+ * Edit distance with adjacent transpositions counting as one edit (optimal string alignment), so the
+ * commonest typing slip ('titel' for 'title') is one edit away, not two.
+ */
 function levenshtein(a: string, b: string): number {
-  const prev = Array.from({ length: b.length + 1 }, (_, j) => j);
+  let before = Array.from({ length: b.length + 1 }, () => 0);
+  let prev = Array.from({ length: b.length + 1 }, (_, j) => j);
   for (let i = 1; i <= a.length; i++) {
-    let diag = prev[0]!;
-    prev[0] = i;
+    const cur = [i];
     for (let j = 1; j <= b.length; j++) {
-      const up = prev[j]!;
-      prev[j] = Math.min(prev[j]! + 1, prev[j - 1]! + 1, diag + (a[i - 1] === b[j - 1] ? 0 : 1));
-      diag = up;
+      let d = Math.min(prev[j]! + 1, cur[j - 1]! + 1, prev[j - 1]! + (a[i - 1] === b[j - 1] ? 0 : 1));
+      if (i > 1 && j > 1 && a[i - 1] === b[j - 2] && a[i - 2] === b[j - 1]) d = Math.min(d, before[j - 2]! + 1);
+      cur.push(d);
     }
+    before = prev;
+    prev = cur;
   }
   return prev[b.length]!;
 }

@@ -15,30 +15,24 @@ import { elementsObject } from 'chemical-elements';
 import schema from '../../schemas/species.schema.json' with { type: 'json' };
 import { isKnownElement, molarMass } from '../../src/elements.js';
 import { centrifugalConstantOf, rotationalConstantOf, vibrationalTerm } from '../../src/partition/diatomic.js';
-import { hinderedRotorBasisSize, MAX_HINDERED_ROTOR_BASIS, smallestHinderedRotorConstant } from '../../src/partition/hindered-rotor.js';
 import { DEFAULT_NUCLEAR_SPIN_MIXTURE } from '../../src/partition/spin-mixture.js';
 import type {
   Conformer,
   DiatomicState,
   ElectronicLevel,
-  InternalRotor,
   NuclearSpinMixture,
   NuclearSpinWeights,
   PolyatomicMolecularPart,
   Species,
   Structure,
   Vibration,
+  SpeciesFitLimits,
 } from '../../src/model.js';
-import {
-  ENERGY_UNITS_TO_CM1,
-  ENTHALPY_UNITS_TO_J_PER_MOL,
-  INERTIA_UNITS_TO_KG_M2,
-  ROTATIONAL_UNITS_TO_CM1,
-  rotationalConstantFromInertia,
-} from '../../src/units.js';
+import { ENTHALPY_UNITS_TO_J_PER_MOL } from '../../src/units.js';
 import { compareDiagnostics, type Diagnostic } from '../core/diagnostics.js';
 import type { LoadedDocument } from './load.js';
 import { checkPlausibility } from './plausibility.js';
+import { checkBareUnits } from './bare-units.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from './schema-check.js';
 import {
   checkAnharmonicModel,
@@ -50,10 +44,10 @@ import {
 import { checkConformerSet } from './validate-conformers.js';
 import { checkElectron } from './validate-electron.js';
 import { compareText } from '../core/text.js';
+import { normaliseMolecularPart } from './validate-molecule.js';
+import { energy, fmt, isFiniteNumber, isObj, isPositiveInteger, rotational, type FindingExtra, type Obj, type Segment } from './validate-values.js';
 import { readUncertainties } from './uncertainty-input.js';
 
-type Segment = string | number;
-type Obj = Record<string, unknown>;
 
 export interface SpeciesValidation {
   /** Present only when the document has no error. */
@@ -76,31 +70,6 @@ const MAX_ROVIBRATIONAL_LEVELS = 5e7;
 
 const SAYS_NOTHING = /^(todo|tbd|tba|fixme|unknown|none|n\/?a|nil|null|-+|\?+|x+|\.+|source|sources|ref|refs|reference|references|see above|various|misc|internet|web|google|wikipedia)$/i;
 
-const isObj = (v: unknown): v is Obj => v !== null && typeof v === 'object' && !Array.isArray(v);
-const isFiniteNumber = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
-const isPositiveInteger = (v: unknown): v is number => Number.isInteger(v) && (v as number) >= 1;
-
-/** A quantity in its internal unit, or undefined when malformed (the schema reports that). */
-function quantity(raw: unknown, table: Readonly<Record<string, number>>, defaultUnit: string): number | undefined {
-  if (isFiniteNumber(raw)) return raw * table[defaultUnit]!;
-  if (isObj(raw) && isFiniteNumber(raw.value) && typeof raw.unit === 'string' && Object.hasOwn(table, raw.unit)) {
-    return raw.value * table[raw.unit]!;
-  }
-  return undefined;
-}
-const energy = (raw: unknown) => quantity(raw, ENERGY_UNITS_TO_CM1, 'cm-1');
-const rotational = (raw: unknown) => quantity(raw, ROTATIONAL_UNITS_TO_CM1, 'cm-1');
-/** A moment of inertia (amu*angstrom^2 when bare) as the rotational constant it implies, cm⁻¹. */
-function rotationalFromInertia(raw: unknown): number | undefined {
-  const kgm2 = quantity(raw, INERTIA_UNITS_TO_KG_M2, 'amu*angstrom^2');
-  return kgm2 === undefined ? undefined : rotationalConstantFromInertia(kgm2);
-}
-
-/** Number formatting for messages: enough digits to recognise the value, no float noise. */
-function fmt(x: number): string {
-  return Number.isInteger(x) ? String(x) : String(Number(x.toPrecision(6)));
-}
-
 function atomicNumber(symbol: string): number | undefined {
   if (symbol === 'D' || symbol === 'T') return 1;
   return (elementsObject as Record<string, { number?: number }>)[symbol]?.number;
@@ -108,14 +77,7 @@ function atomicNumber(symbol: string): number | undefined {
 
 const ALL_SYMBOLS: readonly string[] = [...Object.keys(elementsObject as object), 'D', 'T'].filter(isKnownElement);
 
-/** Every finding carries its stable code (pipeline/core/diagnostics.ts). */
-interface FindingExtra {
-  code: string;
-  value?: unknown;
-  expected?: string;
-  key?: boolean;
-}
-
+/** Every finding carries its stable code (FindingExtra, pipeline/core/diagnostics.ts). */
 class Findings {
   constructor(
     private readonly doc: LoadedDocument,
@@ -242,6 +204,8 @@ interface Ctx {
   input: Obj;
   structure: Structure | undefined;
   composition: CompositionView | undefined;
+  /** The XYZ files named by geometry_file fields, as load.ts read them. */
+  geometryFiles?: LoadedDocument['geometryFiles'];
 }
 
 function checkName(ctx: Ctx): void {
@@ -369,6 +333,21 @@ function readTemperatureRanges(ctx: Ctx): { low?: number; mid?: number; high?: n
   return out;
 }
 
+/** The species' own fit limits (schema-checked shape; only finite values are kept). */
+function readFitLimits(ctx: Ctx): SpeciesFitLimits | undefined {
+  const raw = ctx.input.tolerances;
+  if (!isObj(raw)) return undefined;
+  const out: SpeciesFitLimits = {};
+  for (const q of ['cp', 'h', 's'] as const) if (isFiniteNumber(raw[q]) && raw[q] > 0) out[q] = raw[q];
+  const rel = raw.relative_to_cp;
+  if (isObj(rel)) {
+    const r: NonNullable<SpeciesFitLimits['relativeToCp']> = {};
+    for (const q of ['cp', 'h', 's'] as const) if (isFiniteNumber(rel[q]) && rel[q] >= 0) r[q] = rel[q];
+    out.relativeToCp = r;
+  }
+  return out;
+}
+
 function readElectronicLevels(ctx: Ctx): ElectronicLevel[] | undefined {
   const raw = ctx.input.electronic_levels;
   if (raw === undefined) return [{ energy: 0, degeneracy: 1 }];
@@ -461,11 +440,18 @@ function checkSymmetryNumber(ctx: Ctx, sigma: number, hasSpinWeights: boolean): 
  */
 function readMolecularPart(ctx: Ctx): PolyatomicMolecularPart | undefined {
   const { f, input, structure } = ctx;
-  const sigma = isPositiveInteger(input.symmetry_number) ? input.symmetry_number : undefined;
-  if (sigma !== undefined) checkSymmetryNumber(ctx, sigma, false);
+  if (isPositiveInteger(input.symmetry_number)) checkSymmetryNumber(ctx, input.symmetry_number, false);
   const electronicLevels = readElectronicLevels(ctx);
-  const { rotationalConstants, vibrations: given } = readPolyatomic(ctx);
-  const internal = readInternalRotors(ctx);
+  // Geometry or constants, symmetry number (given, or from the geometry), rotors: validate-molecule.ts.
+  const molecule = normaliseMolecularPart(input, [], f, {
+    structure: structure as 'linear' | 'nonlinear',
+    ...(ctx.composition?.known ? { composition: ctx.composition.counts } : {}),
+    ...(ctx.geometryFiles ? { geometryFiles: ctx.geometryFiles } : {}),
+  });
+  f.diagnostics.push(...molecule.external);
+  const { rotationalConstants, symmetryNumber: sigma } = molecule;
+  const internal = { rotors: molecule.internalRotors, ok: molecule.rotorsOk };
+  const { vibrations: given } = readPolyatomic(ctx);
   const scale = readVibrationScaleFactor(f, input);
   const vibrations = given && scale ? given.map((v) => ({ ...v, wavenumber: v.wavenumber * scale.value })) : given;
   const anh = readAnharmonicity(f, input, structure, vibrations);
@@ -485,6 +471,7 @@ function readMolecularPart(ctx: Ctx): PolyatomicMolecularPart | undefined {
     rotationalConstants: order.map((k) => rotationalConstants[k]!),
     vibrations,
     ...(internal.rotors ? { internalRotors: internal.rotors } : {}),
+    ...(molecule.opticalIsomers ? { opticalIsomers: molecule.opticalIsomers } : {}),
     ...(scale ? { vibrationScaleFactor: scale } : {}),
     ...(anharmonicity ? { anharmonicity } : {}),
     ...(cd.centrifugal ? { centrifugalDistortion: cd.centrifugal } : {}),
@@ -523,51 +510,8 @@ function lowestConformerPart(conformers: Conformer[] | undefined): PolyatomicMol
   return part;
 }
 
-function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?: Vibration[] } {
+function readPolyatomic(ctx: Ctx): { vibrations?: Vibration[] } {
   const { f, input, structure, composition: c } = ctx;
-  const want = structure === 'linear' ? 1 : 3;
-  const rc = input.rotational_constants;
-  const moi = input.moments_of_inertia;
-  let rotationalConstants: number[] | undefined;
-  if (rc !== undefined && moi !== undefined) {
-    f.error(['moments_of_inertia'], 'give either rotational_constants or moments_of_inertia, not both', {
-      code: 'rotation-given-twice',
-      key: true,
-      expected: 'exactly one of rotational_constants, moments_of_inertia',
-    });
-  } else if (rc === undefined && moi === undefined) {
-    f.error(['rotational_constants'], `missing required field 'rotational_constants' (or 'moments_of_inertia') for structure '${structure}'`, {
-      code: 'rotation-missing',
-      expected: structure === 'linear' ? '[B] in cm-1' : '[A, B, C] in cm-1',
-    });
-  } else {
-    const field = rc !== undefined ? 'rotational_constants' : 'moments_of_inertia';
-    const list = rc ?? moi;
-    if (Array.isArray(list)) {
-      if (list.length > 3) {
-        // The schema already reports more than 3 items.
-      } else if (list.length !== want) {
-        f.error([field], `a ${structure} molecule takes ${want} ${field === 'rotational_constants' ? 'rotational constant' : 'moment of inertia'}${want === 1 ? '' : 's'}, got ${list.length}`, {
-          code: 'rotation-count',
-          value: list,
-          expected: structure === 'linear' ? (field === 'rotational_constants' ? '[B]' : '[I]') : field === 'rotational_constants' ? '[A, B, C]' : '[IA, IB, IC]',
-        });
-      } else {
-        const values = list.map(field === 'rotational_constants' ? rotational : rotationalFromInertia);
-        if (values.every((v): v is number => v !== undefined && v > 0)) {
-          rotationalConstants = values;
-          if (structure === 'nonlinear' && !(values[0]! >= values[1]! && values[1]! >= values[2]!)) {
-            f.warn([field], field === 'rotational_constants' ? 'rotational constants are not in the order A >= B >= C' : 'moments of inertia are not in the order IA <= IB <= IC', {
-              code: 'rotation-order',
-              value: list,
-              expected: 'the conventional order (the product, and so the thermochemistry, is unaffected)',
-            });
-          }
-        }
-      }
-    }
-  }
-
   let vibrations: Vibration[] | undefined;
   const raw = input.vibrations;
   if (Array.isArray(raw)) {
@@ -600,96 +544,7 @@ function readPolyatomic(ctx: Ctx): { rotationalConstants?: number[]; vibrations?
       }
     }
   }
-  return { rotationalConstants, vibrations };
-}
-
-/** A reduced rotational constant above this is larger than any torsion's (an OH top: about 20-40 cm⁻¹). */
-const LARGEST_TORSION_ROTATIONAL_CONSTANT = 100;
-
-/**
- * The optional `internal_rotors` of a polyatomic, normalised (cm⁻¹; foldedness defaulting to the rotor
- * symmetry number), or undefined when absent or when any item is unusable (the schema or a check below
- * reports why). Signs and integer ranges are the schema's; here: exactly one of moment_of_inertia and
- * rotational_constant, a basis the level sum can diagonalise, and warnings for a rotor on a linear molecule,
- * a symmetry number that does not divide the foldedness and an implausibly large rotational constant.
- */
-function readInternalRotors(ctx: Ctx): { rotors?: InternalRotor[]; ok: boolean } {
-  const { f, input, structure } = ctx;
-  const raw = input.internal_rotors;
-  if (raw === undefined) return { ok: true };
-  if (!Array.isArray(raw) || raw.length === 0) return { ok: false };
-  if (structure === 'linear') {
-    f.warn(['internal_rotors'], 'internal rotors on a linear molecule: a linear molecule has no torsion about a bond axis', {
-      code: 'rotor-on-linear',
-      key: true,
-      expected: "structure 'nonlinear' for a molecule with a torsion, or no internal_rotors",
-    });
-  }
-  const rotors: InternalRotor[] = [];
-  let ok = true;
-  raw.forEach((item, i) => {
-    if (!isObj(item)) {
-      ok = false;
-      return;
-    }
-    const at = (field?: string): Segment[] => (field === undefined ? ['internal_rotors', i] : ['internal_rotors', i, field]);
-    const hasI = item.moment_of_inertia !== undefined;
-    const hasB = item.rotational_constant !== undefined;
-    if (hasI && hasB) {
-      f.error(at('moment_of_inertia'), 'give either moment_of_inertia or rotational_constant of an internal rotor, not both', {
-        code: 'rotor-given-twice',
-        key: true,
-        expected: 'exactly one of moment_of_inertia (amu*angstrom^2), rotational_constant (cm-1)',
-      });
-      ok = false;
-      return;
-    }
-    if (!hasI && !hasB) {
-      f.error(at(), "an internal rotor needs 'moment_of_inertia' or 'rotational_constant'", {
-        code: 'rotor-missing-inertia',
-        value: item,
-        expected: 'the reduced moment of inertia (amu*angstrom^2) or the reduced rotational constant (cm-1) of the torsion',
-      });
-      ok = false;
-      return;
-    }
-    const b = hasB ? rotational(item.rotational_constant) : rotationalFromInertia(item.moment_of_inertia);
-    const v0 = energy(item.barrier);
-    const sigma = item.symmetry_number;
-    const n = item.foldedness ?? sigma;
-    if (b === undefined || !(b > 0) || v0 === undefined || !(v0 >= 0) || !isPositiveInteger(sigma) || !isPositiveInteger(n)) {
-      ok = false;
-      return;
-    }
-    const field = hasB ? 'rotational_constant' : 'moment_of_inertia';
-    const rotor: InternalRotor = { barrier: v0, foldedness: n, symmetryNumber: sigma, rotationalConstant: b };
-    const basis = hinderedRotorBasisSize(rotor);
-    if (basis > MAX_HINDERED_ROTOR_BASIS) {
-      f.error(at(field), `reduced rotational constant ${fmt(b)} cm-1 is too small for the level sum: ${basis} free-rotor basis functions, more than ${MAX_HINDERED_ROTOR_BASIS}`, {
-        code: 'rotor-basis-too-large',
-        value: item[field],
-        expected: `the reduced constant of a real torsion, at least ${fmt(smallestHinderedRotorConstant(rotor))} cm-1 (check the unit: a bare moment_of_inertia is in amu*angstrom^2)`,
-      });
-      ok = false;
-      return;
-    }
-    if (b > LARGEST_TORSION_ROTATIONAL_CONSTANT) {
-      f.warn(at(field), `reduced rotational constant of ${fmt(b)} cm-1 is larger than that of any torsion (an OH top: about 20-40 cm-1); check the unit`, {
-        code: 'rotor-constant-too-large',
-        value: item[field],
-        expected: 'a value in cm-1, or a moment of inertia in amu*angstrom^2',
-      });
-    }
-    if (n % sigma !== 0) {
-      f.warn(at('symmetry_number'), `rotor symmetry number ${sigma} does not divide the foldedness ${n}: a rotation that maps the top onto itself must also map the potential onto itself`, {
-        code: 'rotor-symmetry-foldedness',
-        value: sigma,
-        expected: `a divisor of ${n} (usually ${n} for a symmetric top, 1 for an asymmetric one)`,
-      });
-    }
-    rotors.push(rotor);
-  });
-  return ok ? { rotors, ok } : { ok: false };
+  return { vibrations };
 }
 
 /**
@@ -1035,11 +890,11 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
   // A field the schema already rejected is not reported again by the bounds.
   const rejected = schemaDiagnostics.map((d) => d.path);
   const under = (p: string, q: string) => p === q || (p.startsWith(q) && (p[q.length] === '.' || p[q.length] === '['));
-  schemaDiagnostics.push(...checkPlausibility(doc, name).filter((d) => !rejected.some((q) => under(d.path, q))));
+  schemaDiagnostics.push(...[...checkPlausibility(doc, name), ...checkBareUnits(doc, name)].filter((d) => !rejected.some((q) => under(d.path, q))));
 
   const f = new Findings(doc, name);
   const structure = (['atom', 'diatomic', 'linear', 'nonlinear'] as const).find((s) => s === input.structure);
-  const ctx: Ctx = { f, input, structure, composition: undefined };
+  const ctx: Ctx = { f, input, structure, composition: undefined, ...(doc.geometryFiles ? { geometryFiles: doc.geometryFiles } : {}) };
   ctx.composition = readComposition(input.composition, f);
   checkName(ctx);
   checkComposition(ctx);
@@ -1047,6 +902,7 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
   checkSources(ctx);
   const enthalpy = readEnthalpy(ctx);
   const temperatureRanges = readTemperatureRanges(ctx);
+  const fitLimits = readFitLimits(ctx);
   const sigma = isPositiveInteger(input.symmetry_number) ? input.symmetry_number : undefined;
 
   let species: Species | undefined;
@@ -1064,7 +920,7 @@ export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
       enthalpyOfFormation: enthalpy!,
       sources: (input.sources as string[]).slice(),
     };
-    return temperatureRanges ? { ...base, temperatureRanges } : base;
+    return { ...base, ...(temperatureRanges ? { temperatureRanges } : {}), ...(fitLimits ? { fitLimits } : {}) };
   };
 
   if (structure === 'atom') {

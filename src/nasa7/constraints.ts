@@ -24,7 +24,7 @@ function lowMinusHigh(basis: number[]): number[] {
   return [...basis, ...basis.map((v) => -v)];
 }
 
-export function buildConstraints(anchor: FitSample, options: FitOptions): Constraints {
+export function buildConstraints(anchor: FitSample, options: Pick<FitOptions, 'tMid' | 'continuityOrder'>): Constraints {
   const ta = anchor.T / T_SCALE;
   const tm = options.tMid / T_SCALE;
   const rows: number[][] = [lowOnly(hBasis(ta)), lowOnly(sBasis(ta))];

@@ -29,36 +29,51 @@ function placeRow(basis: number[], range: 'low' | 'high', factor: number): numbe
   return row;
 }
 
-/**
- * Builds the weighted rows for both ranges. `hShift` = H(anchor)/R in K (anchor.hRT · anchor.T): the
- * enthalpy target of a sample at T is hRT − hShift/T.
- */
-export function buildDesign(
-  ranges: { low: readonly FitSample[]; high: readonly FitSample[] },
-  weights: FitWeights,
-  hShift: number,
-): Design {
+/** The weighted rows for both ranges: they depend on the sample temperatures and the weights only. */
+export function designRows(ranges: { low: readonly FitSample[]; high: readonly FitSample[] }, weights: FitWeights): number[][] {
   const rows: number[][] = [];
-  const rhs: number[] = [];
   const wc = Math.sqrt(weights.cp);
   const wh = Math.sqrt(weights.h);
   const ws = Math.sqrt(weights.s);
   for (const range of ['low', 'high'] as const) {
     for (const s of ranges[range]) {
       const tau = s.T / T_SCALE;
-      if (wc > 0) {
-        rows.push(placeRow(cpBasis(tau), range, wc));
-        rhs.push(wc * s.cpR);
-      }
-      if (wh > 0) {
-        rows.push(placeRow(hBasis(tau), range, wh));
-        rhs.push(wh * (s.hRT - hShift / s.T));
-      }
-      if (ws > 0) {
-        rows.push(placeRow(sBasis(tau), range, ws));
-        rhs.push(ws * s.sR);
-      }
+      if (wc > 0) rows.push(placeRow(cpBasis(tau), range, wc));
+      if (wh > 0) rows.push(placeRow(hBasis(tau), range, wh));
+      if (ws > 0) rows.push(placeRow(sBasis(tau), range, ws));
     }
   }
-  return { rows, rhs };
+  return rows;
+}
+
+/**
+ * The weighted targets, in the order of `designRows`. `hShift` = H(anchor)/R in K (anchor.hRT · anchor.T):
+ * the enthalpy target of a sample at T is hRT − hShift/T.
+ */
+export function designRhs(
+  ranges: { low: readonly FitSample[]; high: readonly FitSample[] },
+  weights: FitWeights,
+  hShift: number,
+): number[] {
+  const rhs: number[] = [];
+  const wc = Math.sqrt(weights.cp);
+  const wh = Math.sqrt(weights.h);
+  const ws = Math.sqrt(weights.s);
+  for (const range of ['low', 'high'] as const) {
+    for (const s of ranges[range]) {
+      if (wc > 0) rhs.push(wc * s.cpR);
+      if (wh > 0) rhs.push(wh * (s.hRT - hShift / s.T));
+      if (ws > 0) rhs.push(ws * s.sR);
+    }
+  }
+  return rhs;
+}
+
+/** Rows and targets together (see `designRows`, `designRhs`). */
+export function buildDesign(
+  ranges: { low: readonly FitSample[]; high: readonly FitSample[] },
+  weights: FitWeights,
+  hShift: number,
+): Design {
+  return { rows: designRows(ranges, weights), rhs: designRhs(ranges, weights, hShift) };
 }

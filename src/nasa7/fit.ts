@@ -6,7 +6,6 @@
  */
 import { FitError } from './errors.js';
 import { optimiseMid } from './mid-optimise.js';
-import { fitAtFixedMid } from './fit-fixed-mid.js';
 import { normaliseFitOptions, type PartialFitOptions } from './options.js';
 import type { FitOptions, FitResult, FitSample } from './types.js';
 
@@ -17,5 +16,5 @@ import type { FitOptions, FitResult, FitSample } from './types.js';
 export function fitNasa7(samples: readonly FitSample[], anchor: FitSample, options: FitOptions | PartialFitOptions = {}): FitResult {
   const opts = normaliseFitOptions(options);
   if (!Array.isArray(samples) || samples.length === 0) throw new FitError('no samples given; expected computed points over the fit range');
-  return opts.optimiseMid ? optimiseMid(samples, anchor, opts) : fitAtFixedMid(samples, anchor, opts);
+  return optimiseMid(samples, anchor, opts);
 }

@@ -29,15 +29,18 @@
  *     ≈ 0.006–0.06 in Cp/R near the ends (CH4: 0.055 at 5540–6000 K with E = 0.083) — the form's floor.
  */
 import { cpDerivative, cpSecondDerivative, evaluateNasa7, evaluateRange } from './evaluate.js';
+import { DEFAULT_FIT_LIMITS, limitAt, limitPart } from './limits.js';
 import type { FitResult, FitSample, Nasa7Polynomial } from './types.js';
 
 export interface FitTolerances {
-  /** Max |ΔCp/R| per range. */
+  /** Absolute part of the |ΔCp/R| limit (limits.ts: limit = max(cp, perCp.cp · Cp/R)). */
   cp: number;
-  /** Max |Δ(H/RT)| per range. */
+  /** Absolute part of the |Δ(H/RT)| limit. */
   h: number;
-  /** Max |ΔS/R| per range. */
+  /** Absolute part of the |ΔS/R| limit. */
   s: number;
+  /** Size-scaled parts: multiples of the computed Cp/R at the same temperature. */
+  perCp: { cp: number; h: number; s: number };
   /** Max continuity / anchor residual (dimensionless). */
   continuity: number;
   /** Least hysteresis amplitude (in Cp/R) of the reversal count inside [tLow, tHigh] (see rule 4). */
@@ -54,9 +57,10 @@ export interface FitTolerances {
  * Defaults (project choices, above the form's floor of ≈ 0.012 (N2) to ≈ 0.08 (harmonic CH4) in Cp/R).
  */
 export const DEFAULT_FIT_TOLERANCES: Readonly<FitTolerances> = Object.freeze({
-  cp: 0.1,
-  h: 0.02,
-  s: 0.02,
+  cp: DEFAULT_FIT_LIMITS.cp.absolute,
+  h: DEFAULT_FIT_LIMITS.h.absolute,
+  s: DEFAULT_FIT_LIMITS.s.absolute,
+  perCp: Object.freeze({ cp: DEFAULT_FIT_LIMITS.cp.perCp, h: DEFAULT_FIT_LIMITS.h.perCp, s: DEFAULT_FIT_LIMITS.s.perCp }),
   continuity: 1e-8,
   smoothness: 0.02,
   extrapolationSmoothness: 0.1,
@@ -87,6 +91,9 @@ export interface FitViolation {
   /** The offending value (an error, residual, Cp/R or a reversal count). */
   value: number;
   limit: number;
+  /** For the error checks (cp, h, s): which part set the limit at T, and the computed Cp/R there. */
+  limitPart?: 'absolute' | 'perCp';
+  cpR?: number;
   message: string;
 }
 
@@ -95,35 +102,51 @@ const QUANTITY_LABEL = { cp: 'Cp/R', h: 'H/RT', s: 'S/R' } as const;
 const fmt = (x: number): string => (x !== 0 && (Math.abs(x) < 1e-3 || Math.abs(x) >= 1e5) ? x.toExponential(3) : String(Number(x.toPrecision(4))));
 
 function normaliseTolerances(t: Partial<FitTolerances> | undefined): FitTolerances {
-  const out: FitTolerances = { ...DEFAULT_FIT_TOLERANCES };
+  const out: FitTolerances = { ...DEFAULT_FIT_TOLERANCES, perCp: { ...DEFAULT_FIT_TOLERANCES.perCp } };
   for (const [k, v] of Object.entries(t ?? {})) if (v !== undefined) (out as unknown as Record<string, unknown>)[k] = v;
   return out;
 }
+
+/** What to try when a fit misses its limits (the pipeline adds where each limit was set). */
+const ERROR_REMEDY =
+  'if the computed data are right, widen this species\' limits (tolerances in its own file), narrow its temperature_ranges, or move or search its midpoint (fit.optimise_mid)';
 
 function errorChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
   for (const range of ['low', 'high'] as const) {
     const [from, to] = range === 'low' ? [poly.tLow, poly.tMid] : [poly.tMid, poly.tHigh];
     const coeffs = range === 'low' ? poly.low : poly.high;
-    const worst = { cp: { err: 0, T: NaN }, h: { err: 0, T: NaN }, s: { err: 0, T: NaN } };
+    // Worst error relative to its limit, per quantity.
+    const worst = {
+      cp: { ratio: -1, err: 0, T: NaN, cpR: NaN },
+      h: { ratio: -1, err: 0, T: NaN, cpR: NaN },
+      s: { ratio: -1, err: 0, T: NaN, cpR: NaN },
+    };
     for (const smp of samples) {
       if (!(smp.T >= from && smp.T <= to)) continue;
       const v = evaluateRange(coeffs, smp.T);
       const errs = { cp: Math.abs(v.cpR - smp.cpR), h: Math.abs(v.hRT - smp.hRT), s: Math.abs(v.sR - smp.sR) };
       for (const q of ['cp', 'h', 's'] as const) {
         const e = Number.isFinite(errs[q]) ? errs[q] : Infinity;
-        if (e > worst[q].err || Number.isNaN(worst[q].T)) worst[q] = { err: e, T: smp.T };
+        const ratio = e / limitAt({ absolute: tol[q], perCp: tol.perCp[q] }, smp.cpR);
+        if (ratio > worst[q].ratio || Number.isNaN(worst[q].T)) worst[q] = { ratio, err: e, T: smp.T, cpR: smp.cpR };
       }
     }
     for (const q of ['cp', 'h', 's'] as const) {
-      const { err, T } = worst[q];
-      if (err > tol[q]) {
+      const { ratio, err, T, cpR } = worst[q];
+      if (ratio > 1) {
+        const spec = { absolute: tol[q], perCp: tol.perCp[q] };
+        const limit = limitAt(spec, cpR);
+        const part = limitPart(spec, cpR);
+        const setBy = part === 'perCp' ? `${fmt(tol.perCp[q])} × Cp/R ${fmt(cpR)} (the size-scaled part)` : `the absolute part ${fmt(tol[q])}`;
         out.push({
           quantity: q,
           range,
           T,
           value: err,
-          limit: tol[q],
-          message: `${QUANTITY_LABEL[q]} fit error ${fmt(err)} at ${T} K (${range} range ${from}–${to} K) exceeds the tolerance ${fmt(tol[q])} by ${fmt(err - tol[q])}`,
+          limit,
+          limitPart: part,
+          cpR,
+          message: `${QUANTITY_LABEL[q]} fit error ${fmt(err)} at ${T} K (${range} range ${from}–${to} K) is ${fmt(ratio)} × its limit ${fmt(limit)}, set there by ${setBy}; ${ERROR_REMEDY}`,
         });
       }
     }

@@ -9,6 +9,11 @@
  *      the singular values of its R factor (ml-matrix SVD).
  * The constraints hold to rounding error (‖C x − d‖ ≈ ε ‖C‖ ‖x‖) regardless of the data, which is what
  * "exact" can mean in floating point.
+ *
+ * Steps 1–3 up to the QR of the reduced matrix depend only on A and C, i.e. on the sample temperatures,
+ * the weights, the anchor temperature and tMid — not on the species. `factorConstrainedProblem` does them
+ * once; `solveFactored` applies the factorisation to one right-hand side (y, d) with exactly the
+ * arithmetic of a from-scratch solve, so cached and uncached results are bit-identical.
  */
 import { Matrix, QrDecomposition, SingularValueDecomposition } from 'ml-matrix';
 import { FitError } from './errors.js';
@@ -30,6 +35,10 @@ export interface ConstrainedSolution {
   conditionNumber: number;
   /** ‖A x − y‖₂ of the weighted problem. */
   residualNorm: number;
+  /** Coordinates on the null space of the constraints (u = u_p + Q2 z), when solved by solveFactored. */
+  z?: Float64Array;
+  /** Scaled particular solution u_p, when solved by solveFactored. */
+  up?: number[];
 }
 
 export interface ConstrainedProblem {
@@ -41,59 +50,79 @@ export interface ConstrainedProblem {
   constraintLabels?: readonly string[];
 }
 
+/** Everything of the null-space method that depends on A and C only (see the module comment). */
+export interface FactoredProblem {
+  /** Unknowns n and constraints m. */
+  n: number;
+  m: number;
+  /** Original rows of A (for the residual norm). */
+  rows: readonly (readonly number[])[];
+  /** Column scale D (powers of two). */
+  scale: number[];
+  /** A D⁻¹, row-major. */
+  scaledRows: number[][];
+  /** Full Q of (C D⁻¹)ᵀ and its R (m × m). */
+  q: number[][];
+  r: number[][];
+  /** Householder QR of the reduced matrix A D⁻¹ Q2 (ml-matrix), its factor column-major and R diagonal. */
+  reducedQr: QrDecomposition;
+  qrColumns: Float64Array;
+  rDiagonal: Float64Array;
+  /** A D⁻¹ flat, row-major (rows × n). */
+  scaledFlat: Float64Array;
+  /** A flat, row-major. */
+  rowsFlat: Float64Array;
+  /** Reduced matrix A D⁻¹ Q2 itself, row-major (the minimax fit reweights its rows). */
+  reduced: Float64Array;
+  conditionNumber: number;
+}
+
 function powerOfTwoNear(x: number): number {
   return x > 0 && Number.isFinite(x) ? 2 ** Math.round(Math.log2(x)) : 1;
 }
 
-export function solveConstrainedLeastSquares(p: ConstrainedProblem): ConstrainedSolution {
-  const n = p.rows[0]?.length ?? 0;
-  const m = p.constraintRows.length;
+/** Steps 1–3 of the module comment for A = rows, C = constraintRows. Throws FitError. */
+export function factorConstrainedProblem(
+  rows: readonly (readonly number[])[],
+  constraintRows: readonly (readonly number[])[],
+  constraintLabels?: readonly string[],
+): FactoredProblem {
+  const n = rows[0]?.length ?? 0;
+  const m = constraintRows.length;
   const k = n - m;
-  if (p.rows.length < k) throw new FitError(`least-squares system has ${p.rows.length} rows for ${k} free unknowns; expected at least as many rows`);
+  if (rows.length < k) throw new FitError(`least-squares system has ${rows.length} rows for ${k} free unknowns; expected at least as many rows`);
 
   const colNorm = new Array<number>(n).fill(0);
-  for (const row of p.rows) for (let j = 0; j < n; j++) colNorm[j] = Math.hypot(colNorm[j]!, row[j]!);
+  for (const row of rows) for (let j = 0; j < n; j++) colNorm[j] = Math.hypot(colNorm[j]!, row[j]!);
   // A column no sample touches (e.g. a6, a7 when the H and S weights are zero) can still be fixed by the
   // constraints; whether the whole problem is determined shows in the reduced condition number.
   const scale = colNorm.map(powerOfTwoNear);
 
-  const a = p.rows.map((row) => row.map((v, j) => v / scale[j]!));
-  const ct = Array.from({ length: n }, (_, j) => p.constraintRows.map((row) => row[j]! / scale[j]!));
+  const a = rows.map((row) => row.map((v, j) => v / scale[j]!));
+  const ct = Array.from({ length: n }, (_, j) => constraintRows.map((row) => row[j]! / scale[j]!));
 
   const { q, r } = householderQr(ct);
   const rMax = Math.max(...r.map((row, i) => Math.abs(row[i]!)));
   r.forEach((row, i) => {
     if (!(Math.abs(row[i]!) > CONSTRAINT_RANK_TOLERANCE * rMax)) {
-      const label = p.constraintLabels?.[i] ?? `constraint ${i}`;
+      const label = constraintLabels?.[i] ?? `constraint ${i}`;
       throw new FitError(`equality constraints are linearly dependent (at "${label}"); check anchorT and tMid`);
     }
   });
-  // Forward substitution Rᵀ w = d.
-  const w = new Array<number>(m).fill(0);
-  for (let i = 0; i < m; i++) {
-    let s = p.constraintRhs[i]!;
-    for (let j = 0; j < i; j++) s -= r[j]![i]! * w[j]!;
-    w[i] = s / r[i]![i]!;
-  }
-  const up = new Array<number>(n).fill(0);
-  for (let i = 0; i < n; i++) for (let j = 0; j < m; j++) up[i]! += q[i]![j]! * w[j]!;
 
-  // Reduced problem on the null space of the constraints.
-  const reduced = new Matrix(a.length, k);
-  const rhs = new Matrix(a.length, 1);
+  const reducedMatrix = new Matrix(a.length, k);
+  const reduced = new Float64Array(a.length * k);
   for (let row = 0; row < a.length; row++) {
     const ar = a[row]!;
-    let pred = 0;
-    for (let j = 0; j < n; j++) pred += ar[j]! * up[j]!;
-    rhs.set(row, 0, p.rhs[row]! - pred);
     for (let c = 0; c < k; c++) {
       let v = 0;
       for (let j = 0; j < n; j++) v += ar[j]! * q[j]![m + c]!;
-      reduced.set(row, c, v);
+      reducedMatrix.set(row, c, v);
+      reduced[row * k + c] = v;
     }
   }
-  const qr = new QrDecomposition(reduced);
-  const sv = new SingularValueDecomposition(qr.upperTriangularMatrix, {
+  const reducedQr = new QrDecomposition(reducedMatrix);
+  const sv = new SingularValueDecomposition(reducedQr.upperTriangularMatrix, {
     computeLeftSingularVectors: false,
     computeRightSingularVectors: false,
   }).diagonal;
@@ -105,18 +134,93 @@ export function solveConstrainedLeastSquares(p: ConstrainedProblem): Constrained
       `least-squares system is ill-conditioned or rank deficient (condition number ${conditionNumber.toExponential(2)} > ${MAX_CONDITION_NUMBER.toExponential(0)}): the samples do not determine all coefficients; use more, better spread temperatures in each range`,
     );
   }
-  const z = qr.solve(rhs).getColumn(0);
+  const nr = a.length;
+  const qrColumns = new Float64Array(nr * k);
+  const qrMatrix = (reducedQr as unknown as { QR: Matrix }).QR;
+  for (let c = 0; c < k; c++) for (let row = 0; row < nr; row++) qrColumns[c * nr + row] = qrMatrix.get(row, c);
+  const rDiagonal = Float64Array.from((reducedQr as unknown as { Rdiag: ArrayLike<number> }).Rdiag);
+  const scaledFlat = new Float64Array(nr * n);
+  const rowsFlat = new Float64Array(nr * n);
+  for (let row = 0; row < nr; row++) {
+    for (let j = 0; j < n; j++) {
+      scaledFlat[row * n + j] = a[row]![j]!;
+      rowsFlat[row * n + j] = rows[row]![j]!;
+    }
+  }
+  return { n, m, rows, scale, scaledRows: a, q, r, reducedQr, qrColumns, rDiagonal, scaledFlat, rowsFlat, reduced, conditionNumber };
+}
 
-  const x = up.map((v, i) => {
+/** u_p = Q1 R⁻ᵀ d: the scaled particular solution that satisfies the constraints. */
+export function particularSolution(f: FactoredProblem, constraintRhs: readonly number[]): number[] {
+  const { n, m, q, r } = f;
+  // Forward substitution Rᵀ w = d.
+  const w = new Array<number>(m).fill(0);
+  for (let i = 0; i < m; i++) {
+    let s = constraintRhs[i]!;
+    for (let j = 0; j < i; j++) s -= r[j]![i]! * w[j]!;
+    w[i] = s / r[i]![i]!;
+  }
+  const up = new Array<number>(n).fill(0);
+  for (let i = 0; i < n; i++) for (let j = 0; j < m; j++) up[i]! += q[i]![j]! * w[j]!;
+  return up;
+}
+
+/** x = D⁻¹ (u_p + Q2 z). */
+export function assembleSolution(f: FactoredProblem, up: readonly number[], z: ArrayLike<number>): number[] {
+  const { m, q, scale } = f;
+  const k = f.n - m;
+  return up.map((v, i) => {
     let s = v;
     for (let c = 0; c < k; c++) s += q[i]![m + c]! * z[c]!;
     return s / scale[i]!;
   });
-  let res = 0;
-  for (let row = 0; row < p.rows.length; row++) {
+}
+
+/**
+ * Solves min ‖A x − y‖ s.t. C x = d with a factorisation of A and C. The reduced solve repeats, on typed
+ * arrays, exactly the arithmetic of ml-matrix's QrDecomposition.solve (Householder application, then back
+ * substitution, in the same order), so the coefficients are bit-identical to a fresh solve.
+ */
+export function solveFactored(f: FactoredProblem, rhs: readonly number[], constraintRhs: readonly number[]): ConstrainedSolution {
+  const { n } = f;
+  const k = n - f.m;
+  const nr = f.scaledRows.length;
+  const a = f.scaledFlat;
+  const up = particularSolution(f, constraintRhs);
+  const x0 = new Float64Array(nr);
+  for (let row = 0; row < nr; row++) {
     let pred = 0;
-    for (let j = 0; j < n; j++) pred += p.rows[row]![j]! * x[j]!;
-    res = Math.hypot(res, pred - p.rhs[row]!);
+    const o = row * n;
+    for (let j = 0; j < n; j++) pred += a[o + j]! * up[j]!;
+    x0[row] = rhs[row]! - pred;
   }
-  return { x, conditionNumber, residualNorm: res };
+  const qr = f.qrColumns;
+  for (let c = 0; c < k; c++) {
+    const o = c * nr;
+    let s = 0;
+    for (let i = c; i < nr; i++) s += qr[o + i]! * x0[i]!;
+    s = -s / qr[o + c]!;
+    for (let i = c; i < nr; i++) x0[i] = x0[i]! + s * qr[o + i]!;
+  }
+  for (let c = k - 1; c >= 0; c--) {
+    x0[c] = x0[c]! / f.rDiagonal[c]!;
+    for (let i = 0; i < c; i++) x0[i] = x0[i]! - x0[c]! * qr[c * nr + i]!;
+  }
+  const z = x0.slice(0, k);
+  const x = assembleSolution(f, up, z);
+  let sumSq = 0;
+  const rows = f.rowsFlat;
+  for (let row = 0; row < nr; row++) {
+    let pred = 0;
+    const o = row * n;
+    for (let j = 0; j < n; j++) pred += rows[o + j]! * x[j]!;
+    const r = pred - rhs[row]!;
+    sumSq += r * r;
+  }
+  return { x, conditionNumber: f.conditionNumber, residualNorm: Math.sqrt(sumSq), z, up };
+}
+
+export function solveConstrainedLeastSquares(p: ConstrainedProblem): ConstrainedSolution {
+  const f = factorConstrainedProblem(p.rows, p.constraintRows, p.constraintLabels);
+  return solveFactored(f, p.rhs, p.constraintRhs);
 }

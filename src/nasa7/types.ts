@@ -7,6 +7,8 @@
  * (ΔfH°(298.15) + H°(T) − H°(298.15)), so a6 carries the formation enthalpy.
  */
 
+import type { FitLimits } from './limits.js';
+
 export type Coefficients7 = [number, number, number, number, number, number, number];
 
 export interface Nasa7Polynomial {
@@ -47,9 +49,18 @@ export interface FitOptions {
   continuityOrder: 1 | 2;
   /** Temperature at which H and S are reproduced exactly (298.15 K). */
   anchorT: number;
-  /** When set, tMid is chosen in [min, max] on this step to minimise the worst weighted error. */
+  /** When set, tMid is chosen in [min, max] on this step (see mid-optimise.ts). */
   optimiseMid?: { min: number; max: number; step: number };
+  /**
+   * 'least-squares': minimise Σ w_q r_q² (weights above); 'minimax': minimise the largest error relative
+   * to `limits` (minimax.ts), started from and never worse than least squares.
+   */
+  method: FitMethod;
+  /** Size-scaled limits the minimax fit and the midpoint search measure against (limits.ts). */
+  limits: FitLimits;
 }
+
+export type FitMethod = 'least-squares' | 'minimax';
 
 export interface QuantityErrors {
   cp: number;
@@ -83,6 +94,8 @@ export interface FitSolverInfo {
   residualNorm: number;
   /** Number of tMid candidates fitted (1 unless optimiseMid was set). */
   midCandidates: number;
+  /** Largest error relative to the limits (limit-ratio.ts), when the method or midpoint search used it. */
+  worstLimitRatio?: number;
 }
 
 export interface FitResult {

@@ -496,9 +496,12 @@ export function anharmonicMoments(model: AnharmonicLevels, T: number): Partition
   const n = theta.length;
   const invT = 1 / T;
   const tailFactor = 1 + model.maxCentrifugal * T;
+  // Plain (unshifted) sums: the lowest level is at m ≈ 0 with weight ≥ 1, so ⟨m⟩²/var m stays of the order of
+  // the number of modes and Σ w m² − (Σ w m)²/Σ w loses no more than a few ulps; this saves the division per
+  // level of a running mean.
   let q = 0;
-  let mean = 0;
-  let m2 = 0;
+  let sum1 = 0;
+  let sum2 = 0;
   let curvature = 0;
   for (let i = 0; i < n; i++) {
     const u = theta[i]! * invT;
@@ -508,12 +511,13 @@ export function anharmonicMoments(model: AnharmonicLevels, T: number): Partition
     const f = 1 + at;
     const w = weight[i]! * f * e;
     if (w === 0) break;
+    const r = at / f;
+    const m = u + r;
     q += w;
-    const m = u + at / f;
-    const d = m - mean;
-    mean += (w / q) * d;
-    m2 += w * d * (m - mean);
-    curvature += w * (at / f + at / (f * f));
+    sum1 += w * m;
+    sum2 += w * m * m;
+    curvature += w * (r + r / f);
   }
-  return { lnQ: Math.log(q), meanU: mean, varU: m2 / q + curvature / q };
+  const mean = sum1 / q;
+  return { lnQ: Math.log(q), meanU: mean, varU: Math.max(sum2 / q - mean * mean, 0) + curvature / q };
 }

@@ -15,7 +15,8 @@ import type {
 } from '../model.js';
 import { diatomicLevels, diatomicSpinManifolds, higherOrderTermsOf, type DiatomicStateLevels } from '../partition/diatomic.js';
 import { electronicLevelList } from '../partition/electronic.js';
-import { hinderedRotorLevels, hinderedRotorMoments } from '../partition/hindered-rotor.js';
+import { describeTorsionPotential, hinderedRotorLevels, hinderedRotorMoments } from '../partition/hindered-rotor.js';
+import { opticalIsomerFactor } from './optical-isomers.js';
 import { levelSumMoments, type LevelList } from '../partition/level-sum.js';
 import {
   addContributions,
@@ -79,6 +80,11 @@ function polyatomicInternal(
   const vibration = vibrationFactor(species, contributions);
   contributions.push(`electronic level sum (${species.electronicLevels.length} levels)`);
   const rotors = species.internalRotors;
+  const optical = opticalIsomerFactor(species, contributions);
+  if (optical) {
+    const plain = rotor;
+    rotor = (T) => addMoments([plain(T), optical]);
+  }
   if (rotors === undefined || rotors.length === 0) {
     return (T) => addMoments([rotor(T), vibration(T), levelSumMoments(el, T)]);
   }
@@ -87,7 +93,7 @@ function polyatomicInternal(
   const torsions = rotors.map((r) => {
     const levels = hinderedRotorLevels(r);
     contributions.push(
-      `hindered internal rotor, direct level sum (V0 = ${r.barrier} cm-1, n = ${r.foldedness}, sigma = ${r.symmetryNumber}, B = ${r.rotationalConstant} cm-1, ${levels.energies.length} levels, |m| <= ${levels.basisLimit})`,
+      `hindered internal rotor, direct level sum (${describeTorsionPotential(r)}, sigma = ${r.symmetryNumber}, B = ${r.rotationalConstant} cm-1, ${levels.energies.length} levels, |m| <= ${levels.basisLimit})`,
     );
     return levels;
   });

@@ -205,11 +205,11 @@ const CASES: BadCase[] = [
   },
   {
     name: 'settings: fit tolerance tighter than the form allows (fit check fails the species)',
-    setup: editSettings('tolerances: {cp: 0.1,', 'tolerances: {cp: 0.000001,'),
+    setup: editSettings('tolerances: {cp: 0.1,', 'tolerances: {relative_to_cp: {cp: 0}, cp: 0.000001,'),
     code: 1,
     // Reported at the species (its name line), naming the setting that set the limit and where.
     expect: [
-      /N2\.yaml:2:7: error: \[N2\] fit check: Cp\/R fit error [\d.]+ at \d+ K \((low|high) range [\d–]+ K\) exceeds the tolerance 1\.000e-6/,
+      /N2\.yaml:2:7: error: \[N2\] fit check: Cp\/R fit error [\d.e-]+ at \d+ K \((low|high) range [\d–]+ K\) is [\d.e+]+ × its limit 1\.000e-6, set there by the absolute part 1\.000e-6; .*temperature_ranges/,
       /limit set by tolerances\.cp in db\/qforge\.yaml:11:\d+/,
       // Ar's Cp is exactly 5/2 R (NIST-JANAF 4th ed. Ar-001), so its fit meets any tolerance.
       /build failed \(4 species failed: CO, H2O, N2, O\)/,

@@ -88,10 +88,11 @@ export type Workspace = Awaited<ReturnType<typeof tempWorkspace>>;
  * once before all its tests, removed after them. Returns a getter, since the workspace exists only
  * once `beforeAll` has run.
  */
-export function sharedBuiltWorkspace(): () => Workspace {
+export function sharedBuiltWorkspace(beforeBuild?: (ws: Workspace) => Promise<void>): () => Workspace {
   let ws: Workspace | undefined;
   beforeAll(async () => {
     ws = await tempWorkspace();
+    await beforeBuild?.(ws);
     const r = await runCli(['build', 'db', '--out', 'out', '--quiet'], ws.root);
     expect(r.code, r.stderr).toBe(0);
   });

@@ -56,7 +56,9 @@ describe('FitError for setups that cannot be fitted', () => {
   });
 
   it('anchor outside [tLow, tMid], tMid not inside, anchor at another temperature', () => {
-    expect(fitError(() => normaliseFitOptions({ tLow: 300 })).message).toMatch(/anchorT = 298.15 K lies outside the low range \[300, 1000\] K/);
+    // 300 K is allowed (1.85 K of extrapolation to the anchor, options.ts MAX_ANCHOR_EXTRAPOLATION); 310 K is not.
+    expect(normaliseFitOptions({ tLow: 300 }).tLow).toBe(300);
+    expect(fitError(() => normaliseFitOptions({ tLow: 310 })).message).toMatch(/anchorT = 298.15 K lies outside the low range \[310, 1000\] K/);
     expect(fitError(() => normaliseFitOptions({ tMid: 7000 })).message).toMatch(/expected tLow < tMid < tHigh/);
     expect(fitError(() => normaliseFitOptions({ tMid: 200 })).problems.length).toBeGreaterThanOrEqual(1);
     const samples = samplesOf(known, grid(200, 6000, 20));

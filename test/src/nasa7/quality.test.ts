@@ -38,14 +38,24 @@ describe('assessFit', () => {
   });
 
   it('a tolerance below the error names quantity, range, temperature and excess', () => {
-    const v = assessFit(fitN2, samplesN2, { cp: 0.01 });
+    const v = assessFit(fitN2, samplesN2, { cp: 0.01, perCp: { cp: 0, h: 0, s: 0 } });
     expect(v.map((x) => [x.quantity, x.range])).toEqual([
       ['cp', 'low'],
       ['cp', 'high'],
     ]);
     expect(v[0]!.T).toBe(fitN2.metrics.low.tAtMax.cp);
     expect(v[0]!.value).toBeCloseTo(fitN2.metrics.low.maxAbs.cp, 15);
-    expect(v[0]!.message).toMatch(/^Cp\/R fit error 0\.012\d* at 950 K \(low range 200–1000 K\) exceeds the tolerance 0\.01 by 0\.002/);
+    expect(v[0]!.message).toMatch(/^Cp\/R fit error 0\.012\d* at 950 K \(low range 200–1000 K\) is 1\.2\d* × its limit 0\.01, set there by the absolute part 0\.01; .*widen this species' limits/);
+    expect(v[0]!.limitPart).toBe('absolute');
+  });
+
+  it('the size-scaled part sets the limit where it is larger, and the message says so', () => {
+    // 0.003 × Cp/R ≈ 0.0105 at 950 K (N2 Cp/R ≈ 3.5) beats the absolute 0.001.
+    const v = assessFit(fitN2, samplesN2, { cp: 0.001, perCp: { cp: 0.003, h: 0.003, s: 0.003 } });
+    const low = v.find((x) => x.quantity === 'cp' && x.range === 'low')!;
+    expect(low.limitPart).toBe('perCp');
+    expect(low.limit).toBeCloseTo(0.003 * low.cpR!, 12);
+    expect(low.message).toMatch(/set there by 0\.003 × Cp\/R 3\.\d+ \(the size-scaled part\)/);
   });
 
   it('a broken midpoint is reported as a continuity jump at tMid', () => {

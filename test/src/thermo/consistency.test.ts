@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { GAS_CONSTANT } from '../../../src/constants.js';
 import type { Species } from '../../../src/model.js';
 import { createThermoEvaluator } from '../../../src/thermo/index.js';
-import { CO2_ANHARMONIC, H2O_ANHARMONIC } from '../../fixtures/anharmonic-species.js';
+import { CO2_ANHARMONIC, H2O_ANHARMONIC, H2O_CENTRIFUGAL_ONLY, TWO_CONFORMERS } from '../../fixtures/anharmonic-species.js';
 import { CARBON_DIOXIDE, EXCERPT_SPECIES, WATER } from '../../fixtures/physics-species.js';
 
 const SPECIES: ReadonlyArray<readonly [string, Species]> = [
@@ -16,6 +16,8 @@ const SPECIES: ReadonlyArray<readonly [string, Species]> = [
   ['CO2', CARBON_DIOXIDE],
   ['CO2 anharmonic (x, g, alpha, D_J)', CO2_ANHARMONIC],
   ['H2O anharmonic (x, alpha, Watson A)', H2O_ANHARMONIC],
+  ['H2O RRHO with the centrifugal factor only', H2O_CENTRIFUGAL_ONLY],
+  ['two conformers', TWO_CONFORMERS],
 ];
 const TEMPERATURES = [200, 298.15, 1000, 3000, 6000];
 

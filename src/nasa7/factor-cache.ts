@@ -1,0 +1,79 @@
+/**
+ * Cache of the species-independent part of the fit: the design rows, column scale, constraint QR and
+ * reduced-matrix QR (solve.ts `FactoredProblem`) depend only on the sample temperatures of each range, the
+ * weights, the anchor temperature, tMid and the continuity order. A build fits thousands of species on one
+ * grid, so each factorisation is made once and applied per species (a few matrix–vector products).
+ *
+ * Pure (no I/O), deterministic (a hit returns the same object a miss would build, so results do not depend
+ * on what was fitted before) and bounded: at most MAX_FACTORISATIONS entries, least recently used evicted
+ * first. Each entry holds ≈ 30 doubles per row (≈ 0.4 MB for a 10 K grid over 200–6000 K).
+ */
+import { buildConstraints } from './constraints.js';
+import { designRows } from './design.js';
+import { factorConstrainedProblem, type FactoredProblem } from './solve.js';
+import type { FitSample, FitWeights } from './types.js';
+
+/** Enough for a midpoint search of ~40 candidates on two grids (fixed and searched midpoints). */
+export const MAX_FACTORISATIONS = 96;
+
+/**
+ * Keyed first by the temperature key (one long string, the same string object for every candidate of a
+ * species, so its hash is computed once), then by the short option key; the LRU order runs over entries.
+ */
+const cache = new Map<string, Map<string, FactoredProblem>>();
+const order = new Map<FactoredProblem, [string, string]>();
+
+export interface FactorKeyParts {
+  /** Identity of the sample temperatures (see `temperatureKey`). */
+  temperatures: string;
+  weights: FitWeights;
+  anchorT: number;
+  tMid: number;
+  continuityOrder: 1 | 2;
+}
+
+/** A string identifying the temperatures of a sample list exactly (shortest round-trip decimal of each). */
+export function temperatureKey(samples: readonly FitSample[]): string {
+  let key = '';
+  for (const s of samples) key += `${s.T},`;
+  return key;
+}
+
+/**
+ * The factorisation for these ranges and options, from the cache or built now. `ranges` must be the split
+ * of samples whose temperatures `parts.temperatures` identifies. Throws FitError like the solve itself
+ * (failures are not cached).
+ */
+export function factorisationFor(
+  parts: FactorKeyParts,
+  ranges: { low: readonly FitSample[]; high: readonly FitSample[] },
+  anchor: FitSample,
+): FactoredProblem {
+  const w = parts.weights;
+  const key = `${w.cp}|${w.h}|${w.s}|${parts.anchorT}|${parts.tMid}|${parts.continuityOrder}`;
+  let inner = cache.get(parts.temperatures);
+  const hit = inner?.get(key);
+  if (hit) {
+    order.delete(hit);
+    order.set(hit, [parts.temperatures, key]);
+    return hit;
+  }
+  const constraints = buildConstraints(anchor, { tMid: parts.tMid, continuityOrder: parts.continuityOrder });
+  const made = factorConstrainedProblem(designRows(ranges, w), constraints.rows, constraints.labels);
+  if (!inner) cache.set(parts.temperatures, (inner = new Map()));
+  inner.set(key, made);
+  order.set(made, [parts.temperatures, key]);
+  if (order.size > MAX_FACTORISATIONS) {
+    const [oldest, [t, k]] = order.entries().next().value!;
+    order.delete(oldest);
+    const m = cache.get(t)!;
+    m.delete(k);
+    if (m.size === 0) cache.delete(t);
+  }
+  return made;
+}
+
+/** Number of cached factorisations (for tests of the bound). */
+export function cachedFactorisations(): number {
+  return order.size;
+}

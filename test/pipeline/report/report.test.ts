@@ -90,14 +90,15 @@ describe('overview', () => {
   });
 });
 
+let ws: Awaited<ReturnType<typeof tempWorkspace>>;
+beforeEach(async () => {
+  ws = await tempWorkspace();
+});
+afterEach(async () => {
+  await ws.cleanup();
+});
+
 describe('qforge build --report', () => {
-  let ws: Awaited<ReturnType<typeof tempWorkspace>>;
-  beforeEach(async () => {
-    ws = await tempWorkspace();
-  });
-  afterEach(async () => {
-    await ws.cleanup();
-  });
 
   it('writes report.html into the build folder, lists it in the marker, and rewrites it byte for byte', async () => {
     const r = await runCli(['build', 'db', '--out', 'out', '--report', '-q'], ws.root);
@@ -144,13 +145,6 @@ describe('qforge build --report', () => {
 });
 
 describe('report pages and failures through the runner', () => {
-  let ws: Awaited<ReturnType<typeof tempWorkspace>>;
-  beforeEach(async () => {
-    ws = await tempWorkspace();
-  });
-  afterEach(async () => {
-    await ws.cleanup();
-  });
 
   it('beyond the inline limit writes one page per species, all listed in the marker', async () => {
     const { runBuild } = await import('../../../pipeline/runner.js');

@@ -77,6 +77,7 @@ function polyatomicInternal(
     contributions.push(`rigid rotor, nonlinear, classical (A, B, C = ${abc.join(', ')} cm-1, sigma = ${sigma})`);
     rotor = (T) => nonlinearRotorMoments(abc, sigma, T);
   }
+  if (species.geometryNotes) contributions.push(...species.geometryNotes);
   const vibration = vibrationFactor(species, contributions);
   contributions.push(`electronic level sum (${species.electronicLevels.length} levels)`);
   const rotors = species.internalRotors;

@@ -72,6 +72,8 @@ interface SizeResult {
   reference: { wallS: number; cpuS: number; speciesPerS: number };
   /** qforge cold (no cache) wall time / reference wall time. */
   ratio: number;
+  /** The same ratio of CPU times (steadier than wall time on a shared machine). */
+  cpuRatio: number;
 }
 
 const here = path.dirname(fileURLToPath(import.meta.url));
@@ -134,7 +136,7 @@ async function benchSize(work: string, n: number, seed: number, jobs: string[], 
   await rm(out, { recursive: true, force: true });
   await rm(cache, { recursive: true, force: true });
   await rm(dir, { recursive: true, force: true });
-  return { size: n, mix, coldNoCache, coldFreshCache, rebuild, cacheMb, reference: ref, ratio: coldNoCache.wallS / ref.wallS };
+  return { size: n, mix, coldNoCache, coldFreshCache, rebuild, cacheMb, reference: ref, ratio: coldNoCache.wallS / ref.wallS, cpuRatio: coldNoCache.cpuS / ref.cpuS };
 }
 
 function printTable(results: readonly SizeResult[]): void {
@@ -153,7 +155,7 @@ function printTable(results: readonly SizeResult[]): void {
       ]);
     }
     rows.push([String(r.size), 'reference', f(r.reference.wallS, 2), f(r.reference.cpuS, 2), f((r.reference.cpuS * 1000) / r.size, 2), f(r.reference.speciesPerS, 0), '', '', '', '']);
-    rows.push([String(r.size), `ratio qforge/ref ${f(r.ratio, 2)}; cache ${f(r.cacheMb, 1)} MB`, '', '', '', '', '', '', '', '']);
+    rows.push([String(r.size), `qforge/reference: wall ${f(r.ratio, 2)}, CPU ${f(r.cpuRatio, 2)}; cache ${f(r.cacheMb, 1)} MB`, '', '', '', '', '', '', '', '']);
   }
   const widths = rows[0]!.map((_, i) => Math.max(...rows.map((r) => r[i]!.length)));
   for (const r of rows) console.log(r.map((c, i) => (i < 2 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join('  '));

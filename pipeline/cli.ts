@@ -18,6 +18,7 @@ import { Command, CommanderError, InvalidArgumentError, Option } from 'commander
 import type { Diagnostic } from './core/diagnostics.js';
 import type { CliIo } from './commands/io.js';
 import { displayPath } from './core/display-path.js';
+import { parseShard, type Shard } from './core/shard.js';
 
 export type { CliIo } from './commands/io.js';
 
@@ -41,7 +42,14 @@ Examples:
 Outputs (in OUT): thermo.json, nasa7.txt, tables/<name>.csv, summary.json,
 and with --report (or outputs.report in qforge.yaml) report.html
 (summary.json holds timings; the other files are byte-identical for identical
-inputs). The cache lives in .qforge-cache/ next to OUT.
+inputs). The cache lives in .qforge-cache/ inside the database folder
+(--cache-dir to move it; qforge cache prune drops entries no species uses).
+--jobs N runs compute, fit and verify on N worker threads (default: the
+number of cores); the outputs are the same bytes for every N.
+
+Sharding: --shard I/N builds only the species whose name hashes into shard I
+of N; qforge merge SHARD_DIR... --out OUT joins all N shard folders into the
+database an unsharded build writes.
 
 OUT belongs to qforge: every build replaces it as a whole, atomically. Its
 .qforge-build file lists what qforge wrote; a file you put into OUT stops the
@@ -90,7 +98,44 @@ within the widened one into "known": printed with its reason, counted
 separately, exit 0. --tolerance changes the normal limits only; --strict
 ignores the known deviations. Entries that name a missing species or are no
 longer needed are warned about.`,
+  merge: `
+Examples:
+  qforge build species --shard 1/2 --out shard-1
+  qforge build species --shard 2/2 --out shard-2
+  qforge merge shard-1 shard-2 --out build
+
+Every shard 1..N of one sharded build must be given once, built from the same
+database, settings and qforge version; the merged folder is byte for byte the
+one an unsharded build writes (summary.json aside, which holds timings).`,
+  cache: `
+Examples:
+  qforge cache prune                      prune species/.qforge-cache
+  qforge cache prune mydb --cache-dir /ci/cache
+
+Entries are kept while this database's species or another database that built
+into the same cache folder (its folder still existing) use them.`,
 };
+
+interface BuildFlags {
+  cache: boolean;
+  cacheDir?: string;
+  keepGoing?: boolean;
+  jobs?: number;
+  shard?: Shard;
+  quiet?: boolean;
+  json?: boolean;
+  strict?: boolean;
+  report?: boolean;
+  reportAgainst?: string;
+}
+
+function shardArg(value: string): Shard {
+  try {
+    return parseShard(value);
+  } catch (e) {
+    throw new InvalidArgumentError((e as Error).message);
+  }
+}
 
 function positiveInt(value: string): number {
   const n = Number(value);
@@ -163,17 +208,43 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .argument('[dir]', 'database folder (species files and qforge.yaml)', 'species')
     .option('-o, --out <dir>', 'output folder', 'build')
     .option('--no-cache', 'recompute and refit every species')
-    .option('--cache-dir <dir>', 'cache folder (default: .qforge-cache next to the output folder)')
+    .option('--cache-dir <dir>', 'cache folder (default: .qforge-cache inside the database folder)')
     .option('-k, --keep-going', 'write the species that succeeded even when others failed (exit code stays 1)')
-    .option('-j, --jobs <n>', 'species processed concurrently', positiveInt, 4)
+    .option('-j, --jobs <n>', 'worker threads for compute, fit and verify (default: the number of cores)', positiveInt)
+    .option('--shard <i/n>', 'build only shard I of N (by a stable hash of the species name); see qforge merge', shardArg)
     .option('-q, --quiet', 'no progress output')
     .option('--json', 'print the build summary as JSON on stdout')
     .option('--strict', 'every warning not accepted in writing (accepted_warnings) is an error')
     .option('--report', 'also write report.html (overview and charts of every species)')
     .option('--report-against <old>', 'report: compare with this earlier build folder (implies --report)')
     .addHelpText('after', EXAMPLES.build)
-    .action(async (dir: string, o: { out: string; cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; strict?: boolean; report?: boolean; reportAgainst?: string }) => {
+    .action(async (dir: string, o: BuildFlags & { out: string }) => {
       exitCode = await buildCommand(io, abs(dir), dir, abs(o.out), o.out, o);
+    });
+
+  program
+    .command('merge')
+    .description('join the shard folders of a sharded build (build --shard I/N) into one database')
+    .argument('<shards...>', 'the N shard output folders')
+    .requiredOption('-o, --out <dir>', 'output folder of the merged database')
+    .option('-q, --quiet', 'no summary line')
+    .addHelpText('after', EXAMPLES.merge)
+    .action(async (shards: string[], o: { out: string; quiet?: boolean }) => {
+      const { mergeCommand } = await import('./commands/merge.js');
+      exitCode = await mergeCommand(io, shards.map((s) => ({ path: abs(s), label: s })), { path: abs(o.out), label: o.out }, o);
+    });
+
+  const cacheCmd = program.command('cache').description('manage the stage cache of a database');
+  cacheCmd
+    .command('prune')
+    .description('delete the cache entries no current species of the database (nor another database sharing the folder) uses')
+    .argument('[dir]', 'database folder', 'species')
+    .option('--cache-dir <dir>', 'cache folder (default: .qforge-cache inside the database folder)')
+    .option('--json', 'print the result as JSON on stdout')
+    .addHelpText('after', EXAMPLES.cache)
+    .action(async (dir: string, o: { cacheDir?: string; json?: boolean }) => {
+      const { cachePruneCommand } = await import('./commands/cache.js');
+      exitCode = await cachePruneCommand(io, abs(dir), dir, { ...o, cacheDir: o.cacheDir === undefined ? undefined : abs(o.cacheDir) });
     });
 
   program
@@ -238,7 +309,7 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
   // No command at all is a usage error: the help goes to stderr, exit 2.
   if (argv.length === 0) {
     io.stderr.write(program.helpInformation());
-    io.stderr.write('qforge: error: no command given (build, check, table, diff or compare)\n');
+    io.stderr.write('qforge: error: no command given (build, check, table, diff, compare, merge or cache)\n');
     return 2;
   }
   try {
@@ -349,15 +420,16 @@ async function buildCommand(
   dirLabel: string,
   out: string,
   outLabel: string,
-  o: { cache: boolean; cacheDir?: string; keepGoing?: boolean; jobs: number; quiet?: boolean; json?: boolean; strict?: boolean; report?: boolean; reportAgainst?: string },
+  o: BuildFlags,
 ): Promise<number> {
   await assertFolder(dir, `database folder ${dirLabel}`);
-  const [{ runBuild }, { formatDiagnostic }, { createProgressReporter }, { assertReplaceable }, { CACHE_DIR_NAME }] = await Promise.all([
+  const [{ runBuild }, { formatDiagnostic }, { createProgressReporter }, { assertReplaceable }, { CACHE_DIR_NAME, defaultCacheDir }, { availableParallelism }] = await Promise.all([
     import('./runner.js'),
     import('./core/diagnostics.js'),
     import('./commands/progress.js'),
     import('./storage/atomic-write.js'),
     import('./storage/cache.js'),
+    import('node:os'),
   ]);
   const cacheDir = o.cache === false ? null : o.cacheDir ? path.resolve(io.cwd, o.cacheDir) : undefined;
   await assertSafeBuildPaths({
@@ -365,7 +437,7 @@ async function buildCommand(
     dirLabel,
     out,
     outLabel,
-    ...(cacheDir === null ? {} : { cacheDir: cacheDir ?? path.join(path.dirname(out), CACHE_DIR_NAME), cacheLabel: o.cacheDir ?? CACHE_DIR_NAME }),
+    ...(cacheDir === null ? {} : { cacheDir: cacheDir ?? defaultCacheDir(dir), cacheLabel: o.cacheDir ?? path.join(dirLabel, CACHE_DIR_NAME) }),
   });
   await assertReplaceable(out, outLabel);
   const reporter = await createProgressReporter(io.stderr, { quiet: !!o.quiet, tty: io.isTTY });
@@ -386,8 +458,9 @@ async function buildCommand(
       dir,
       out,
       displayBase: io.cwd,
-      jobs: o.jobs,
+      jobs: o.jobs ?? availableParallelism(),
       keepGoing: !!o.keepGoing,
+      ...(o.shard ? { shard: o.shard } : {}),
       strict: !!o.strict,
       cacheDir,
       ...(o.report || o.reportAgainst !== undefined

@@ -6,27 +6,22 @@
  * pure function of the species and its plan (no shared mutable state); results are collected into a map
  * and emitted in name order, so the outputs do not depend on `jobs` or on the order of completion.
  */
+import { stat } from 'node:fs/promises';
 import path from 'node:path';
 import pLimit from 'p-limit';
 import type { Species, StandardProperties } from '../src/model.js';
 import { Nasa7FormatError } from '../src/nasa7/errors.js';
 import type { FitOptions, FitResult } from '../src/nasa7/types.js';
-import { acquireOutputLock, recoverOutputDir, publishDirectory, type PublishHooks } from './storage/atomic-write.js';
-import { cached, StageCache, type CacheKind, type CacheOutcome } from './storage/cache.js';
+import { acquireOutputLock, OutputStaging, recoverOutputDir, type PublishHooks } from './storage/atomic-write.js';
+import { cached, cacheEntryPath, defaultCacheDir, StageCache, type CacheKind, type CacheOutcome } from './storage/cache.js';
+import { recordCacheUse } from './storage/cache-uses.js';
+import { shardLabel, shardOf, shardRecord, type Shard } from './core/shard.js';
+import { StreamingEmitter } from './stages/emit-stream.js';
+import { batchesOf, createSpeciesPool } from './workers/pool.js';
+import { LIMIT_KEYS, type PlainLimitSource } from './workers/protocol.js';
 import { computeSamples, computeTable, type ComputedSpecies } from './stages/compute.js';
 import { compareDiagnostics, formatDiagnostic, hasErrors, type Diagnostic } from './core/diagnostics.js';
-import {
-  byName,
-  databaseJson,
-  jsonText,
-  renderNasa7,
-  renderTable,
-  renderTablesReadme,
-  tableFileNames,
-  validateDatabaseJson,
-  validateSummaryJson,
-  type BuiltSpecies,
-} from './stages/emit.js';
+import { byName, jsonText, validateSummaryJson, type BuiltSpecies } from './stages/emit.js';
 import { fitOptionsFor, fitSpecies } from './stages/fit.js';
 import { canonicalJson, hashParts, sha256Hex } from './storage/hash.js';
 import { discoverSpeciesFiles, loadYamlFile, type LoadedDocument } from './stages/load.js';
@@ -63,9 +58,11 @@ export interface CheckOptions {
 
 export interface BuildOptions extends CheckOptions {
   out: string;
-  /** Cache folder; null disables the cache. Default: `.qforge-cache` next to `out`. */
+  /** Cache folder; null disables the cache. Default: `.qforge-cache` inside the database folder. */
   cacheDir?: string | null;
   keepGoing?: boolean;
+  /** Build only the species of this shard (see core/shard.ts). */
+  shard?: Shard;
   onProgress?: (e: ProgressEvent) => void;
   hooks?: PublishHooks;
   /** Write report.html (also when the settings' outputs.report is true); see pipeline/report/. */
@@ -317,6 +314,8 @@ export interface SpeciesOutcome {
   cache: Partial<Record<CacheKind, CacheOutcome>>;
   cacheNotes: string[];
   timings: Record<string, number>;
+  /** Cache entries this species uses (`kind/key`), for `qforge cache prune`. */
+  keys?: string[];
 }
 
 /** Cache keys of one species' stages; see plan.ts for what each depends on. */
@@ -330,6 +329,43 @@ export function stageKeys(inputHash: string, species: Species, plan: SpeciesPlan
   };
 }
 
+
+/** `kind/key` of the entries a species uses. */
+function keyList(keys: ReturnType<typeof stageKeys>, settings: DatabaseSettings): string[] {
+  return [`samples/${keys.samples}`, `fit/${keys.fit}`, ...(settings.outputs.tables ? [`table/${keys.table}`] : [])];
+}
+
+/** `kind/key` of the cache entries one species uses; undefined when it fails before using the cache. */
+export function speciesCacheKeys(v: ValidSpecies, settings: DatabaseSettings): string[] | undefined {
+  const plan = planSpecies(v.species, settings);
+  let fitOptions: FitOptions;
+  try {
+    fitOptions = fitOptionsFor(plan.fitOptions);
+  } catch {
+    return undefined;
+  }
+  const inputHash = `sha256:${sha256Hex(canonicalJson(v.normalisedInput))}`;
+  return keyList(stageKeys(inputHash, v.species, plan, fitOptions), settings);
+}
+
+/** The cache entries the current species of a checked database use (what `qforge cache prune` keeps). */
+export function currentCacheKeys(check: CheckReport): string[] {
+  return check.species.flatMap((v) => speciesCacheKeys(v, check.settings) ?? []);
+}
+
+/** Whether every stage result of every species of a batch is in the cache (then no worker is needed). */
+async function allCached(cacheDir: string | undefined, batch: readonly ValidSpecies[], settings: DatabaseSettings): Promise<boolean> {
+  if (cacheDir === undefined) return false;
+  for (const v of batch) {
+    const keys = speciesCacheKeys(v, settings);
+    if (!keys) return false;
+    for (const k of keys) {
+      const [kind, key] = k.split('/') as [CacheKind, string];
+      if (!(await stat(cacheEntryPath(cacheDir, kind, key)).then(() => true, () => false))) return false;
+    }
+  }
+  return true;
+}
 
 /** Where a fit check's limit came from, for the message: the settings file (file:line) or a default. */
 export interface LimitSource {
@@ -398,6 +434,7 @@ export async function buildOneSpecies(
   }
   const inputHash = `sha256:${sha256Hex(canonicalJson(v.normalisedInput))}`;
   const keys = stageKeys(inputHash, v.species, plan, fitOptions);
+  out.keys = keyList(keys, settings);
 
   // One cached stage: its result, or undefined after recording the failure (the species stops there).
   const stage = async <T>(
@@ -514,142 +551,107 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
 
   progress({ kind: 'stage', stage: 'load' });
   const check = await checkDatabase(opts);
-  progress({ kind: 'stage', stage: 'validate', detail: `${check.species.length} species in ${check.files.length} files` });
   const settings = check.settings;
-  const cacheDir =
-    opts.cacheDir === null ? undefined : (opts.cacheDir ?? path.join(path.dirname(path.resolve(opts.out)), '.qforge-cache'));
+  // A shard builds the species (and reports the invalid documents) whose name hashes into it.
+  const shard = opts.shard;
+  const inShard = (key: string) => !shard || shardOf(key, shard.count) === shard.index;
+  const shardSpecies = check.species.filter((v) => inShard(v.name));
+  const shardInvalid = check.invalid.filter((inv) => inShard(inv.name ?? `${inv.file}#${inv.document}`));
+  const checkDiagnostics = shard ? check.diagnostics.filter((d) => d.species === undefined || inShard(d.species)) : check.diagnostics;
+  progress({
+    kind: 'stage',
+    stage: 'validate',
+    detail: `${check.species.length} species in ${check.files.length} files${shard ? `; shard ${shardLabel(shard)}: ${shardSpecies.length} species` : ''}`,
+  });
+  const cacheDir = opts.cacheDir === null ? undefined : (opts.cacheDir ?? defaultCacheDir(opts.dir));
   const cache = new StageCache(cacheDir);
   // Opened before the species run so that a missing --report-against build fails at once.
   const reportWriter =
     check.settingsOk && (opts.report || settings.outputs.report) ? await ReportWriter.open(opts.report ?? {}, settings, opts.dir, opts.displayBase) : undefined;
 
-  const limit = pLimit(Math.max(1, opts.jobs ?? 8));
-  const total = check.species.length;
+  const jobs = Math.max(1, opts.jobs ?? 1);
+  const total = shardSpecies.length;
   let done = 0;
-  const outcomes = new Map<string, SpeciesOutcome>();
   const tStages = performance.now();
-  if (check.settingsOk) {
-    progress({ kind: 'stage', stage: 'compute', detail: 'compute, fit and verify per species' });
-    progress({ kind: 'species-start', total });
-    await Promise.all(
-      check.species.map((v) =>
-        limit(async () => {
-          // Yield between species so progress output and signals are handled during long builds.
-          await new Promise((r) => setImmediate(r));
-          const o = await buildOneSpecies(v, settings, cache, check);
-          outcomes.set(v.name, o);
-          done++;
-          const hit = isCacheHit(o);
-          progress({ kind: 'species-done', name: v.name, ok: !!o.built, cacheHit: hit, done, total });
-        }),
-      ),
-    );
-  }
-  const stagesMs = performance.now() - tStages;
+  let emitMs = 0;
 
-  // Emit: render everything in name order. A record the 80-column layout cannot hold fails its species.
-  progress({ kind: 'stage', stage: 'emit' });
-  const tEmit = performance.now();
-  const ordered = [...outcomes.values()].sort((a, b) => byName(a.valid, b.valid));
-  let good = ordered.filter((o) => o.built).map((o) => o.built as BuiltSpecies);
-  let nasa7Text = '';
-  if (settings.outputs.nasa7) {
-    for (;;) {
-      try {
-        nasa7Text = renderNasa7(good, settings);
-        break;
-      } catch (e) {
-        if (!(e instanceof Nasa7FormatError) || !e.record || !good.some((g) => g.name === e.record)) throw e;
-        const o = outcomes.get(e.record)!;
-        o.diagnostics.push({
-          severity: 'error',
-          code: 'record-not-writable',
-          file: o.valid.displayFile,
-          species: o.valid.name,
-          ...((e.field.startsWith('elements') ? o.valid.positions.composition : o.valid.positions.name) ?? {}),
-          path: e.field.startsWith('elements') ? 'composition' : e.field,
-          message: `cannot be written as an 80-column record: ${e.message}`,
-        });
-        delete o.built;
-        good = good.filter((g) => g.name !== e.record);
-      }
-    }
-  }
-
-  const speciesDiagnostics = ordered.flatMap((o) => o.diagnostics);
-  const allDiagnostics = [...check.diagnostics, ...speciesDiagnostics].sort(compareDiagnostics);
-  const failedSpecies = ordered.filter((o) => !o.built);
-  // Nothing good to publish: never replace a previous database with an empty one (also not with --keep-going).
-  let notWrittenReason: string | undefined;
-  if (check.settingsOk && check.files.length > 0 && good.length === 0) {
-    if (opts.keepGoing) notWrittenReason = 'no species succeeded, so --keep-going wrote nothing';
-    if (!hasErrors(allDiagnostics)) {
-      allDiagnostics.push({
-        severity: 'error',
-        code: 'database-empty',
-        file: opts.displayBase ? displayPath(opts.displayBase, opts.dir) : opts.dir,
-        path: '',
-        message: 'the database holds no species',
-        expected: 'at least one species document',
-      });
-    }
-  }
-  allDiagnostics.sort(compareDiagnostics);
-  const anyError = !check.settingsOk || hasErrors(allDiagnostics);
-  const mayWrite = check.settingsOk && (!anyError || opts.keepGoing === true) && check.files.length > 0 && good.length > 0;
-  const status: Summary['status'] = !anyError ? 'ok' : mayWrite ? 'partial' : 'failed';
-
-  const files = new Map<string, string>();
-  const outputs: string[] = [];
-  const emitTimes = new Map<string, number>();
-  if (mayWrite) {
-    if (settings.outputs.thermo_json) {
-      const db = databaseJson(good, settings);
-      validateDatabaseJson(db);
-      files.set('thermo.json', jsonText(db));
-    }
-    if (settings.outputs.nasa7) files.set('nasa7.txt', nasa7Text);
-    if (settings.outputs.tables) {
-      files.set('tables/README.txt', renderTablesReadme(settings));
-      const names = tableFileNames(good.map((g) => g.name), (s) => sha256Hex(s));
-      for (const g of good) {
-        const te = performance.now();
-        files.set(names.get(g.name)!, await renderTable(g));
-        emitTimes.set(g.name, performance.now() - te);
-      }
-    }
-    outputs.push(...[...files.keys()].sort(), 'summary.json');
-  }
-  const emitMs = performance.now() - tEmit;
-
-  const summarySpecies: SummarySpecies[] = [];
+  // Per-species summary entries are made as the species are emitted; nothing else of a species is kept.
+  const ownDiagnostics = new Map<string, Diagnostic[]>();
   const speciesKey = (file: string, name: string) => `${file}\u0000${name}`;
-  const validKeys = new Set(ordered.map((o) => speciesKey(o.valid.displayFile, o.valid.name)));
-  for (const o of ordered) {
-    const fm = o.built?.fit.metrics;
-    const own = [...check.fileDiagnostics.values()].flat().filter((d) => d.species === o.valid.name && d.file === o.valid.displayFile);
-    const s: SummarySpecies = {
-      name: o.valid.name,
-      file: o.valid.file,
-      status: o.built ? 'ok' : 'failed',
-      warnings: [...own, ...o.diagnostics].filter((d) => d.severity === 'warning').map(formatDiagnostic).concat(o.cacheNotes),
-      errors: o.diagnostics.filter((d) => d.severity === 'error').map(formatDiagnostic),
-      cache: o.cache,
-      cache_hit: isCacheHit(o),
-      timings_ms: Object.fromEntries(
-        Object.entries({ ...o.timings, emit: emitTimes.get(o.valid.name) ?? 0 }).map(([k, v]) => [k, ms(v)]),
-      ),
-    };
-    if (fm && o.built) {
-      s.fit_metrics = {
-        max_abs_cp: Math.max(fm.low.maxAbs.cp, fm.high.maxAbs.cp),
-        max_abs_h: Math.max(fm.low.maxAbs.h, fm.high.maxAbs.h),
-        max_abs_s: Math.max(fm.low.maxAbs.s, fm.high.maxAbs.s),
-        t_mid: o.built.fit.polynomial.tMid,
-      };
+  for (const ds of check.fileDiagnostics.values()) {
+    for (const d of ds) {
+      if (d.species === undefined) continue;
+      const k = speciesKey(d.file, d.species);
+      const list = ownDiagnostics.get(k);
+      if (list) list.push(d);
+      else ownDiagnostics.set(k, [d]);
     }
-    summarySpecies.push(s);
-    if (mayWrite) {
+  }
+  const summarySpecies: SummarySpecies[] = [];
+  const speciesDiagnostics: Diagnostic[] = [];
+  const warnings: string[] = [];
+  let processed = 0;
+  let failedCount = 0;
+  const usedKeys: string[] = [];
+
+  const canWrite = check.settingsOk && check.files.length > 0;
+  const staging = canWrite && total > 0 ? await OutputStaging.open(opts.out) : undefined;
+  let published = false;
+  const pool = createSpeciesPool({
+    jobs,
+    init: { settings, limits: plainLimits(check), cacheDir, codeFingerprint: codeFingerprint() },
+    inline: (v) => buildOneSpecies(v, settings, cache, check),
+    cheap: (batch) => allCached(cacheDir, batch, settings),
+    crashed: (v, reason) => ({
+      valid: v,
+      diagnostics: [
+        {
+          severity: 'error',
+          file: v.displayFile,
+          species: v.name,
+          ...(v.positions.name ?? {}),
+          path: '',
+          message: `internal error: ${reason} while building this species' batch; it was not built`,
+        },
+      ],
+      cache: {},
+      cacheNotes: [],
+      timings: { load: v.loadMs, validate: v.validateMs },
+    }),
+  });
+  let emitter: StreamingEmitter | undefined;
+  try {
+    emitter = staging ? await StreamingEmitter.open(staging, settings) : undefined;
+
+    // In name order: emit (a record the 80-column layout cannot hold fails its species), then summarise.
+    const sink = async (o: SpeciesOutcome): Promise<void> => {
+      const te = performance.now();
+      let tableMs = 0;
+      if (o.built && emitter) {
+        try {
+          tableMs = await emitter.add(o.built);
+        } catch (e) {
+          if (!(e instanceof Nasa7FormatError) || e.record !== o.valid.name) throw e;
+          o.diagnostics.push({
+            severity: 'error',
+            code: 'record-not-writable',
+            file: o.valid.displayFile,
+            species: o.valid.name,
+            ...((e.field.startsWith('elements') ? o.valid.positions.composition : o.valid.positions.name) ?? {}),
+            path: e.field.startsWith('elements') ? 'composition' : e.field,
+            message: `cannot be written as an 80-column record: ${e.message}`,
+          });
+          delete o.built;
+        }
+      }
+      emitMs += performance.now() - te;
+      processed++;
+      if (!o.built) failedCount++;
+      if (o.keys) usedKeys.push(...o.keys);
+      speciesDiagnostics.push(...o.diagnostics);
+      for (const n of o.cacheNotes) warnings.push(`${o.valid.name}: ${n}`);
+      const s = summaryEntry(o, ownDiagnostics.get(speciesKey(o.valid.displayFile, o.valid.name)) ?? [], tableMs);
+      summarySpecies.push(s);
       reportWriter?.add({
         name: o.valid.name,
         file: o.valid.file,
@@ -660,109 +662,208 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
         errors: s.errors,
         cacheHit: s.cache_hit,
       });
-    }
-  }
-  if (mayWrite && reportWriter) {
-    const report = reportWriter.finish(status, check.invalid.map((i) => `${i.file}#${i.document}: ${i.diagnostics.find((d) => d.severity === 'error')?.message ?? 'invalid'}`));
-    files.set('report.html', report.main);
-    for (const [page, html] of report.pages) files.set(page, html);
-    outputs.splice(0, outputs.length, ...[...files.keys()].sort(), 'summary.json');
-  }
-  for (const inv of check.invalid) {
-    const s: SummarySpecies = {
-      ...(inv.name !== undefined ? { name: inv.name } : {}),
-      file: inv.file,
-      document: inv.document,
-      status: 'failed',
-      warnings: inv.diagnostics.filter((d) => d.severity === 'warning').map(formatDiagnostic),
-      errors: inv.diagnostics.filter((d) => d.severity === 'error').map(formatDiagnostic),
-      cache: {},
-      cache_hit: false,
-      timings_ms: {},
     };
-    summarySpecies.push(s);
-  }
-  // Name order (unnamed documents last), then file and document: independent of completion order.
-  const nameKey = (x: SummarySpecies) => (x.name === undefined ? '\uffff' : x.name);
-  summarySpecies.sort(
-    (a, b) =>
-      compareText(nameKey(a), nameKey(b)) ||
-      compareText(a.file, b.file) ||
-      (a.document ?? 0) - (b.document ?? 0),
-  );
-  const failedLabels = summarySpecies
-    .filter((x) => x.status === 'failed')
-    .map((x) => x.name ?? `${x.file}#${x.document}`);
 
-  // Cache problems: once per build for an unwritable cache, one line per species for rejected entries.
-  const warnings: string[] = [];
-  if (cache.writeProblem) warnings.push(`cache: not writable: ${cache.dir}: ${cache.writeProblem}; every species is recomputed on each build`);
-  for (const o of ordered) for (const n of o.cacheNotes) warnings.push(`${o.valid.name}: ${n}`);
-  // Files whose problems are not tied to a species that validated (syntax errors, invalid documents, …).
-  const summaryFiles = [...check.fileDiagnostics.entries()]
-    .map(([file, ds]) => ({
-      file: ds[0]?.file ?? file,
-      // Warnings of species that were built are reported with the species; everything else stays with the file.
-      ds: ds.filter((d) => !(d.severity === 'warning' && d.species && validKeys.has(speciesKey(d.file, d.species)))),
-    }))
-    .filter(({ ds }) => ds.length > 0)
-    .sort((a, b) => compareText(a.file, b.file))
-    .map(({ file, ds }) => ({
-      file,
-      errors: ds.filter((d) => d.severity === 'error').map(formatDiagnostic),
-      warnings: ds.filter((d) => d.severity === 'warning').map(formatDiagnostic),
-    }));
+    if (check.settingsOk) {
+      progress({ kind: 'stage', stage: 'compute', detail: `compute, fit and verify per species (${jobs} ${jobs === 1 ? 'thread' : 'threads'})` });
+      progress({ kind: 'species-start', total });
+      // Batches go out in name order and are consumed in that order; at most `window` are in flight.
+      const batches = batchesOf(shardSpecies, jobs);
+      const window = Math.max(2, jobs * 2);
+      const inflight: Array<Promise<SpeciesOutcome[]>> = [];
+      const consume = async () => {
+        for (const o of await inflight.shift()!) await sink(o);
+      };
+      for (const batch of batches) {
+        inflight.push(
+          pool.run(batch).then((outs) => {
+            for (const o of outs) {
+              done++;
+              progress({ kind: 'species-done', name: o.valid.name, ok: !!o.built, cacheHit: isCacheHit(o), done, total });
+            }
+            return outs;
+          }),
+        );
+        if (inflight.length >= window) await consume();
+      }
+      while (inflight.length > 0) await consume();
+    }
+    await pool.close();
+    if (pool.cacheWriteProblem !== undefined) cache.writeProblem ??= pool.cacheWriteProblem;
+    const stagesMs = performance.now() - tStages - emitMs;
 
-  const summary: Summary = {
-    format: 'qforge-summary/1',
-    tool: { name: TOOL_NAME, version: TOOL_VERSION },
-    database: opts.displayBase ? displayPath(opts.displayBase, opts.dir) : opts.dir,
-    status,
-    written: mayWrite,
-    outputs,
-    counts: {
-      species: ordered.length + check.invalid.length,
-      ok: ordered.length - failedSpecies.length,
-      failed: failedSpecies.length + check.invalid.length,
-      cache_hits: summarySpecies.filter((s) => s.cache_hit).length,
-      files: check.files.length,
-      files_failed: check.failedFiles.size,
-    },
-    warnings,
-    settings_diagnostics: check.diagnostics.filter((d) => path.basename(d.file) === 'qforge.yaml').map(formatDiagnostic),
-    species: summarySpecies,
-    files: summaryFiles,
-    timings_ms: {
-      load: ms(check.timings.load),
-      validate: ms(check.timings.validate),
-      compute_fit_verify: ms(stagesMs),
-      emit: ms(emitMs),
-      total: 0,
-    },
-  };
+    progress({ kind: 'stage', stage: 'emit' });
+    const tEmit = performance.now();
+    const good = processed - failedCount;
+    const allDiagnostics = [...checkDiagnostics, ...speciesDiagnostics].sort(compareDiagnostics);
+    // Nothing good to publish: never replace a previous database with an empty one (also not with
+    // --keep-going). An empty shard (no species hashed into it) is written, so that merge finds it.
+    const emptyShard = shard !== undefined && total === 0 && shardInvalid.length === 0;
+    let notWrittenReason: string | undefined;
+    if (canWrite && good === 0 && !emptyShard) {
+      if (opts.keepGoing) notWrittenReason = 'no species succeeded, so --keep-going wrote nothing';
+      if (!hasErrors(allDiagnostics)) {
+        allDiagnostics.push({
+          severity: 'error',
+          code: 'database-empty',
+          file: opts.displayBase ? displayPath(opts.displayBase, opts.dir) : opts.dir,
+          path: '',
+          message: 'the database holds no species',
+          expected: 'at least one species document',
+        });
+      }
+    }
+    allDiagnostics.sort(compareDiagnostics);
+    const anyError = !check.settingsOk || hasErrors(allDiagnostics);
+    const mayWrite = canWrite && (!anyError || opts.keepGoing === true) && (good > 0 || emptyShard);
+    const status: Summary['status'] = !anyError ? 'ok' : mayWrite ? 'partial' : 'failed';
 
-  let replaced = false;
-  if (mayWrite) {
+    const finalStaging = mayWrite ? (staging ?? (await OutputStaging.open(opts.out))) : undefined;
+    if (finalStaging) {
+      emitter ??= await StreamingEmitter.open(finalStaging, settings);
+      await emitter.finish();
+    }
+    if (finalStaging && reportWriter) {
+      const report = reportWriter.finish(status, shardInvalid.map((i) => `${i.file}#${i.document}: ${i.diagnostics.find((d) => d.severity === 'error')?.message ?? 'invalid'}`));
+      await finalStaging.write('report.html', report.main);
+      for (const [page, html] of report.pages) await finalStaging.write(page, html);
+    }
+    const outputs = finalStaging ? [...[...finalStaging.written].sort(), 'summary.json'] : [];
+    emitMs += performance.now() - tEmit;
+
+    for (const inv of shardInvalid) {
+      summarySpecies.push({
+        ...(inv.name !== undefined ? { name: inv.name } : {}),
+        file: inv.file,
+        document: inv.document,
+        status: 'failed',
+        warnings: inv.diagnostics.filter((d) => d.severity === 'warning').map(formatDiagnostic),
+        errors: inv.diagnostics.filter((d) => d.severity === 'error').map(formatDiagnostic),
+        cache: {},
+        cache_hit: false,
+        timings_ms: {},
+      });
+    }
+    // Name order (unnamed documents last), then file and document: independent of completion order.
+    const nameKey = (x: SummarySpecies) => (x.name === undefined ? '\uffff' : x.name);
+    summarySpecies.sort(
+      (a, b) =>
+        compareText(nameKey(a), nameKey(b)) ||
+        compareText(a.file, b.file) ||
+        (a.document ?? 0) - (b.document ?? 0),
+    );
+    const failedLabels = summarySpecies
+      .filter((x) => x.status === 'failed')
+      .map((x) => x.name ?? `${x.file}#${x.document}`);
+
+    // Cache problems: once per build for an unwritable cache, one line per species for rejected entries.
+    if (cache.writeProblem) warnings.unshift(`cache: not writable: ${cache.dir}: ${cache.writeProblem}; every species is recomputed on each build`);
+    if (cacheDir !== undefined && check.settingsOk && !shard) await recordCacheUse(cacheDir, opts.dir, usedKeys).catch((e) => cache.noteWriteFailure(e));
+    // Files whose problems are not tied to a species that validated (syntax errors, invalid documents, …).
+    const validKeys = new Set((check.settingsOk ? check.species : []).map((v) => speciesKey(v.displayFile, v.name)));
+    const summaryFiles = [...check.fileDiagnostics.entries()]
+      .map(([file, ds]) => ({
+        file: ds[0]?.file ?? file,
+        // Warnings of species that were built are reported with the species; everything else stays with the file.
+        ds: ds.filter((d) => !(d.severity === 'warning' && d.species && validKeys.has(speciesKey(d.file, d.species)))),
+      }))
+      .filter(({ ds }) => ds.length > 0)
+      .sort((a, b) => compareText(a.file, b.file))
+      .map(({ file, ds }) => ({
+        file,
+        errors: ds.filter((d) => d.severity === 'error').map(formatDiagnostic),
+        warnings: ds.filter((d) => d.severity === 'warning').map(formatDiagnostic),
+      }));
+
+    const summary: Summary = {
+      format: 'qforge-summary/1',
+      tool: { name: TOOL_NAME, version: TOOL_VERSION },
+      database: opts.displayBase ? displayPath(opts.displayBase, opts.dir) : opts.dir,
+      status,
+      written: mayWrite,
+      outputs,
+      counts: {
+        species: processed + shardInvalid.length,
+        ok: good,
+        failed: failedCount + shardInvalid.length,
+        cache_hits: summarySpecies.filter((s) => s.cache_hit).length,
+        files: check.files.length,
+        files_failed: check.failedFiles.size,
+      },
+      warnings,
+      settings_diagnostics: check.diagnostics.filter((d) => path.basename(d.file) === 'qforge.yaml').map(formatDiagnostic),
+      species: summarySpecies,
+      files: summaryFiles,
+      timings_ms: {
+        load: ms(check.timings.load),
+        validate: ms(check.timings.validate),
+        compute_fit_verify: ms(stagesMs),
+        emit: ms(emitMs),
+        total: 0,
+      },
+    };
+    if (shard) summary.shard = shardRecord(shard, check);
+
+    let replaced = false;
     (summary.timings_ms as Record<string, number>).total = ms(performance.now() - t0);
-    validateSummaryJson(summary);
-    files.set('summary.json', jsonText(summary));
-    replaced = (await publishDirectory(opts.out, files, opts.hooks)).replaced;
-  } else {
-    (summary.timings_ms as Record<string, number>).total = ms(performance.now() - t0);
+    if (finalStaging) {
+      validateSummaryJson(summary);
+      await finalStaging.write('summary.json', jsonText(summary));
+      published = true;
+      replaced = (await finalStaging.publish(opts.hooks)).replaced;
+    }
+    const report: BuildReport = {
+      exitCode: anyError ? 1 : 0,
+      written: mayWrite,
+      replaced,
+      summary,
+      diagnostics: allDiagnostics,
+      notes,
+      warnings,
+      failed: failedLabels,
+    };
+    if (notWrittenReason !== undefined && !mayWrite) report.notWrittenReason = notWrittenReason;
+    if (check.settingsFile !== undefined) report.settingsFile = check.settingsFile;
+    return report;
+  } finally {
+    await pool.close();
+    await emitter?.close();
+    if (!published) await staging?.discard();
   }
-  const report: BuildReport = {
-    exitCode: anyError ? 1 : 0,
-    written: mayWrite,
-    replaced,
-    summary,
-    diagnostics: allDiagnostics,
-    notes,
-    warnings,
-    failed: failedLabels,
+}
+
+/** The summary entry of one species (its warnings: the validation ones of its file, then its own). */
+function summaryEntry(o: SpeciesOutcome, own: readonly Diagnostic[], emitMs: number): SummarySpecies {
+  const fm = o.built?.fit.metrics;
+  const s: SummarySpecies = {
+    name: o.valid.name,
+    file: o.valid.file,
+    status: o.built ? 'ok' : 'failed',
+    warnings: [...own, ...o.diagnostics].filter((d) => d.severity === 'warning').map(formatDiagnostic).concat(o.cacheNotes),
+    errors: o.diagnostics.filter((d) => d.severity === 'error').map(formatDiagnostic),
+    cache: o.cache,
+    cache_hit: isCacheHit(o),
+    timings_ms: Object.fromEntries(Object.entries({ ...o.timings, emit: emitMs }).map(([k, v]) => [k, ms(v)])),
   };
-  if (notWrittenReason !== undefined && !mayWrite) report.notWrittenReason = notWrittenReason;
-  if (check.settingsFile !== undefined) report.settingsFile = check.settingsFile;
-  return report;
+  if (fm && o.built) {
+    s.fit_metrics = {
+      max_abs_cp: Math.max(fm.low.maxAbs.cp, fm.high.maxAbs.cp),
+      max_abs_h: Math.max(fm.low.maxAbs.h, fm.high.maxAbs.h),
+      max_abs_s: Math.max(fm.low.maxAbs.s, fm.high.maxAbs.s),
+      t_mid: o.built.fit.polynomial.tMid,
+    };
+  }
+  return s;
+}
+
+/** The settings positions the per-species stages quote, as plain data for the workers. */
+function plainLimits(check: CheckReport): PlainLimitSource {
+  const setAt: PlainLimitSource['setAt'] = {};
+  for (const segments of LIMIT_KEYS) {
+    const at = check.settingsSetAt?.([...segments]);
+    if (at) setAt[segments.join('.')] = { line: at.line, column: at.column };
+  }
+  return { setAt, ...(check.settingsFile !== undefined ? { settingsFile: check.settingsFile } : {}) };
 }
 
 function isCacheHit(o: SpeciesOutcome): boolean {

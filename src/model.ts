@@ -263,6 +263,14 @@ export interface ThermoPoint {
   s: number;
 }
 
+/** Dimensionless functions relative to H°(0) on a temperature grid: element j belongs to T[j]. */
+export interface ThermoGrid {
+  readonly T: Float64Array;
+  readonly cp: Float64Array;
+  readonly hmh0: Float64Array;
+  readonly s: Float64Array;
+}
+
 /** Options of the physics that change the numbers (and hence the cache key). */
 export interface PhysicsOptions {
   /** Standard-state pressure, Pa. Default 1e5 (1 bar). */
@@ -282,8 +290,10 @@ export interface ModelSummary {
  */
 export interface ThermoEvaluator {
   readonly species: Species;
-  /** Dimensionless functions relative to H°(0) at T (K). */
+  /** Dimensionless functions relative to H°(0) at T (K); the same numbers as `grid([T])`. */
   at(T: number): ThermoPoint;
+  /** The same functions at every temperature of a grid (K), as typed arrays in the grid's order. */
+  grid(temperatures: ArrayLike<number>): ThermoGrid;
   /** H°(298.15) − H°(0), J/mol. */
   readonly h298MinusH0: number;
   /** ΔfH°(298.15), J/mol (converted from 0 K when the input gave it there). */

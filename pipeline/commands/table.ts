@@ -5,11 +5,10 @@
 import { stat } from 'node:fs/promises';
 import { STANDARD_PRESSURE_ATM, STANDARD_PRESSURE_BAR } from '../../src/constants.js';
 import type { StandardProperties } from '../../src/model.js';
-import { createThermoEvaluator } from '../../src/thermo/evaluator.js';
-import { standardProperties } from '../../src/thermo/properties.js';
 import type { CliIo } from './io.js';
 import { formatDiagnostic, hasErrors } from '../core/diagnostics.js';
 import { fixed } from '../stages/emit.js';
+import { computeTable } from '../stages/compute.js';
 import { loadYamlFile } from '../stages/load.js';
 import { validateSpecies } from '../stages/validate.js';
 
@@ -130,8 +129,7 @@ export async function tableCommand(
   const pressure = o.pressure === 'atm' ? STANDARD_PRESSURE_ATM : STANDARD_PRESSURE_BAR;
   let rows: StandardProperties[];
   try {
-    const ev = createThermoEvaluator(v.species, { standardPressure: pressure });
-    rows = temperatures.map((T) => standardProperties(ev, T));
+    rows = computeTable(v.species, { standardPressure: pressure }, temperatures);
   } catch (e) {
     io.stderr.write(`qforge: error: ${fileLabel}: [${v.species.name}] computing the properties failed: ${(e as Error).message}\n`);
     return 1;

@@ -1,13 +1,19 @@
 /**
  * Stage "compute": the partition-function properties of one species on its sampling grid (for the fit)
- * or on the table grid (for tables/<name>.csv). Pure: a function of the species and its plan only, no
- * shared state, so a worker pool can run it later.
+ * or on the table grid (for tables/<name>.csv). A function of the species and its plan only, so a worker
+ * pool can run it: the small memo below only lets the table of a species take its rows from the sampling
+ * grid just computed (the same numbers it would compute again), never changes a result.
+ *
+ * Both grids are evaluated whole (`ThermoEvaluator.grid`: typed arrays, no object per temperature). Level
+ * lists with a temperature ceiling (hindered and linear rotors) are built for the smallest ceiling of
+ * CEILINGS that holds every temperature asked for, so the sampling and the table grid of the usual
+ * settings (both within 200–6000 K) use the same lists and hence give the same numbers at shared points.
  */
 import { T_REF } from '../../src/constants.js';
-import type { ModelSummary, PhysicsOptions, Species, StandardProperties } from '../../src/model.js';
+import type { ModelSummary, PhysicsOptions, Species, StandardProperties, ThermoEvaluator, ThermoGrid } from '../../src/model.js';
 import type { FitSample } from '../../src/nasa7/types.js';
 import { createThermoEvaluator } from '../../src/thermo/evaluator.js';
-import { standardProperties } from '../../src/thermo/properties.js';
+import { standardPropertiesOf } from '../../src/thermo/properties.js';
 
 export interface ComputedSpecies {
   /** Cp/R, H/RT (absolute), S/R on the sampling grid, ascending T. */
@@ -31,6 +37,33 @@ export class ComputeError extends Error {
   }
 }
 
+/** Temperature ceilings (K) of the evaluators: 6000 covers the usual fit range, 20000 the largest the settings accept. */
+const CEILINGS = [6000, 10000, 20000] as const;
+
+/** Species whose sampling grid is remembered for their table (a few per concurrent job is plenty). */
+const MEMO_SIZE = 32;
+
+interface Evaluated {
+  species: Species;
+  standardPressure: number;
+  ev: ThermoEvaluator;
+  values: ThermoGrid;
+  index: Map<number, number>;
+}
+
+const recent: Evaluated[] = [];
+
+/** The smallest ceiling holding T_REF and every temperature (above the last, the evaluator itself refuses). */
+function evaluatorCeiling(temperatures: ArrayLike<number>): number {
+  let max = T_REF;
+  for (let j = 0; j < temperatures.length; j++) if (temperatures[j]! > max) max = temperatures[j]!;
+  return CEILINGS.find((c) => c >= max) ?? max;
+}
+
+function evaluatorFor(species: Species, physics: PhysicsOptions, temperatures: readonly number[]): ThermoEvaluator {
+  return createThermoEvaluator(species, physics, { maxTemperature: evaluatorCeiling(temperatures) });
+}
+
 const toSample = (p: StandardProperties): FitSample => ({ T: p.T, cpR: p.cpR, hRT: p.hRT, sR: p.sR });
 
 function assertFinite(p: StandardProperties): void {
@@ -40,16 +73,23 @@ function assertFinite(p: StandardProperties): void {
   if (!(p.Cp > 0)) throw new ComputeError(`Cp at ${p.T} K is not positive (${p.Cp})`);
 }
 
+function propertiesAt(ev: ThermoEvaluator, values: ThermoGrid, j: number): StandardProperties {
+  const p = standardPropertiesOf(ev, values.T[j]!, { cp: values.cp[j]!, hmh0: values.hmh0[j]!, s: values.s[j]! });
+  assertFinite(p);
+  return p;
+}
+
 export function computeSamples(species: Species, physics: PhysicsOptions, temperatures: readonly number[]): ComputedSpecies {
-  const ev = createThermoEvaluator(species, physics);
-  const samples: FitSample[] = [];
-  for (const T of temperatures) {
-    const p = standardProperties(ev, T);
-    assertFinite(p);
-    samples.push(toSample(p));
-  }
-  const at298 = standardProperties(ev, T_REF);
-  assertFinite(at298);
+  const ev = evaluatorFor(species, physics, temperatures);
+  const n = temperatures.length;
+  const values = ev.grid([...temperatures, T_REF]);
+  const samples: FitSample[] = new Array<FitSample>(n);
+  for (let j = 0; j < n; j++) samples[j] = toSample(propertiesAt(ev, values, j));
+  const at298 = propertiesAt(ev, values, n);
+  const index = new Map<number, number>();
+  for (let j = 0; j <= n; j++) if (!index.has(values.T[j]!)) index.set(values.T[j]!, j);
+  if (recent.length >= MEMO_SIZE) recent.shift();
+  recent.push({ species, standardPressure: physics.standardPressure, ev, values, index });
   return {
     samples,
     anchor: toSample(at298),
@@ -60,12 +100,18 @@ export function computeSamples(species: Species, physics: PhysicsOptions, temper
   };
 }
 
-/** Standard properties at each table temperature. */
+/**
+ * Standard properties at each table temperature: rows on the sampling grid just computed for this species
+ * come from it, the others from one grid evaluation.
+ */
 export function computeTable(species: Species, physics: PhysicsOptions, temperatures: readonly number[]): StandardProperties[] {
-  const ev = createThermoEvaluator(species, physics);
-  return temperatures.map((T) => {
-    const p = standardProperties(ev, T);
-    assertFinite(p);
-    return p;
-  });
+  const known = recent.find((r) => r.species === species && r.standardPressure === physics.standardPressure);
+  const sameCeiling = known !== undefined && evaluatorCeiling(temperatures) === evaluatorCeiling(known.values.T);
+  if (known && sameCeiling && temperatures.every((T) => known.index.has(T))) {
+    return temperatures.map((T) => propertiesAt(known.ev, known.values, known.index.get(T)!));
+  }
+  const ev = sameCeiling ? known!.ev : evaluatorFor(species, physics, temperatures);
+  const values = ev.grid(temperatures);
+  return temperatures.map((_, j) => propertiesAt(ev, values, j));
 }
+

@@ -133,7 +133,7 @@ export function fitMetricsJson(m: FitMetrics) {
   };
 }
 
-function speciesJson(b: BuiltSpecies) {
+export function speciesJson(b: BuiltSpecies) {
   const p = b.fit.polynomial;
   return {
     name: b.name,

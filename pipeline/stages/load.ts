@@ -537,6 +537,10 @@ async function readGeometryFile(folder: string, name: string, display: string, m
     return fail('geometry-file-outside', 'a geometry file must lie in the folder of its species file or below it', 'a relative name without ..');
   }
   try {
+    // As for species files: a symbolic link may not lead out of the folder.
+    if (!isInside(await realpath(folder), await realpath(target))) {
+      return fail('geometry-file-outside', 'the geometry file resolves outside the folder of its species file (symbolic link); refused', 'a file inside the database folder');
+    }
     const info = await stat(target);
     if (!info.isFile()) return fail('not-a-file', 'not a regular file', 'an XYZ file');
     if (info.size > maxBytes) return { file: display, rows: [], lines: [], diagnostics: [sizeDiagnostic(display, info.size, maxBytes)] };

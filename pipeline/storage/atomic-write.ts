@@ -19,7 +19,7 @@
  * without a marker is never replaced. (A marker of an older qforge, without a list, is trusted as before.)
  */
 import { randomBytes } from 'node:crypto';
-import { lstat, mkdir, open, readdir, readFile, rename, rm, stat } from 'node:fs/promises';
+import { lstat, mkdir, open, readdir, readFile, rename, rm, stat, type FileHandle } from 'node:fs/promises';
 import path from 'node:path';
 import { compareText } from '../core/text.js';
 
@@ -144,13 +144,16 @@ export async function acquireOutputLock(out: string): Promise<() => Promise<void
   throw new BuildLockedError(`could not take the lock ${s.lock}`);
 }
 
-/** Writes a file through a temporary name and a rename, fsync'd. */
-export async function writeFileAtomic(file: string, data: string | Uint8Array): Promise<void> {
+/**
+ * Writes a file through a temporary name and a rename, fsync'd unless `sync: false` (cache entries: a torn
+ * entry after a power cut fails its checksum and is recomputed, so it need not stall the build).
+ */
+export async function writeFileAtomic(file: string, data: string | Uint8Array, opts: { sync?: boolean } = {}): Promise<void> {
   const tmp = `${file}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`;
   const fh = await open(tmp, 'w');
   try {
     await fh.writeFile(data);
-    await fh.sync();
+    if (opts.sync !== false) await fh.sync();
   } finally {
     await fh.close();
   }
@@ -288,6 +291,161 @@ export interface PublishHooks {
   midSwap?: () => Promise<void>;
 }
 
+/** At most this many files are open at once while staging or syncing (well below common fd limits). */
+const FILE_CONCURRENCY = 16;
+
+/** Runs `work` over `items` with at most `width` at a time; rejects with the first failure. */
+async function forEachBounded<T>(items: readonly T[], width: number, work: (item: T) => Promise<void>): Promise<void> {
+  let next = 0;
+  const lane = async (): Promise<void> => {
+    while (next < items.length) await work(items[next++]!);
+  };
+  await Promise.all(Array.from({ length: Math.min(width, items.length) }, lane));
+}
+
+/** An appendable file in the staging folder (thermo.json and nasa7.txt are written this way, in pieces). */
+export interface StagedStream {
+  write(text: string): Promise<void>;
+  close(): Promise<void>;
+}
+
+/** A file handle as a StagedStream whose close may be called more than once. */
+function closeOnce(fh: FileHandle): StagedStream {
+  let closed = false;
+  return {
+    write: async (text: string) => {
+      await fh.write(text);
+    },
+    close: async () => {
+      if (closed) return;
+      closed = true;
+      await fh.close();
+    },
+  };
+}
+
+/**
+ * The temporary folder a build writes into while it runs (`.<OUT>.qforge-new-<pid>-<random>` next to OUT),
+ * published as OUT by `publish` with the swap described in the module comment, or removed by `discard`.
+ * Files are written without fsync as they come; `publish` fsyncs them all (in parallel, bounded) and their
+ * folders before the swap, so the durability is that of a file-by-file fsync without its stalls.
+ */
+export class OutputStaging {
+  private readonly files = new Set<string>();
+  private readonly dirs: Set<string>;
+  private constructor(
+    readonly out: string,
+    readonly dir: string,
+  ) {
+    this.dirs = new Set([dir]);
+  }
+
+  /** Checks that OUT may be replaced and creates the staging folder. */
+  static async open(out: string): Promise<OutputStaging> {
+    const s = siblings(out);
+    await mkdir(s.parent, { recursive: true });
+    await assertReplaceable(out);
+    const tmp = path.join(s.parent, `${s.newPrefix}${process.pid}-${randomBytes(4).toString('hex')}`);
+    await mkdir(tmp);
+    return new OutputStaging(out, tmp);
+  }
+
+  /** Files staged so far (relative paths). */
+  get written(): ReadonlySet<string> {
+    return this.files;
+  }
+
+  private async target(rel: string): Promise<string> {
+    if (this.files.has(rel) || rel === BUILD_MARKER) throw new OutputFolderError(`output file ${rel} written twice`);
+    const target = safeJoin(this.dir, rel);
+    const dir = path.dirname(target);
+    if (!this.dirs.has(dir)) {
+      await mkdir(dir, { recursive: true });
+      this.dirs.add(dir);
+    }
+    this.files.add(rel);
+    return target;
+  }
+
+  async write(rel: string, data: string | Uint8Array): Promise<void> {
+    const fh = await open(await this.target(rel), 'wx');
+    try {
+      await fh.writeFile(data);
+    } finally {
+      await fh.close();
+    }
+  }
+
+  /** Removes a staged file again (a species that failed after its table was staged). */
+  async remove(rel: string): Promise<void> {
+    if (!this.files.delete(rel)) return;
+    await rm(safeJoin(this.dir, rel), { force: true });
+  }
+
+  async stream(rel: string): Promise<StagedStream> {
+    return closeOnce(await open(await this.target(rel), 'wx'));
+  }
+
+  /** Path of a scratch file (not published; removed by `dropScratch` or with the folder). */
+  scratchPath(rel: string): string {
+    return path.join(this.dir, `.scratch-${rel.replace(/[^A-Za-z0-9._-]/g, '_')}`);
+  }
+
+  /** An unlisted scratch file in the staging folder, for pieces assembled later (thermo.json's species). */
+  async scratch(rel: string): Promise<StagedStream> {
+    return closeOnce(await open(this.scratchPath(rel), 'wx'));
+  }
+
+  async dropScratch(rel: string): Promise<void> {
+    await rm(this.scratchPath(rel), { force: true });
+  }
+
+  /** Adds the marker, fsyncs everything and swaps the staging folder in as OUT. */
+  async publish(hooks: PublishHooks = {}): Promise<{ replaced: boolean }> {
+    const s = siblings(this.out);
+    try {
+      const markerFile = path.join(this.dir, BUILD_MARKER);
+      const fh = await open(markerFile, 'wx');
+      try {
+        await fh.writeFile(markerText(this.files));
+      } finally {
+        await fh.close();
+      }
+      const all = [...this.files].map((rel) => safeJoin(this.dir, rel));
+      all.push(markerFile);
+      await forEachBounded(all, FILE_CONCURRENCY, async (file) => {
+        const h = await open(file, 'r+');
+        try {
+          await h.sync();
+        } finally {
+          await h.close();
+        }
+      });
+      for (const d of this.dirs) await fsyncDir(d);
+      await hooks.beforeSwap?.();
+      const hadOld = await exists(s.abs);
+      if (hadOld) {
+        await rm(s.old, { recursive: true, force: true });
+        await rename(s.abs, s.old);
+      }
+      await hooks.midSwap?.();
+      await rename(this.dir, s.abs);
+      await fsyncDir(s.parent);
+      if (hadOld) await rm(s.old, { recursive: true, force: true });
+      return { replaced: hadOld };
+    } catch (err) {
+      await this.discard();
+      if (!(await exists(s.abs)) && (await exists(s.old))) await rename(s.old, s.abs);
+      throw err;
+    }
+  }
+
+  /** Removes the staging folder (the build is not published). */
+  async discard(): Promise<void> {
+    await rm(this.dir, { recursive: true, force: true });
+  }
+}
+
 /**
  * Writes `files` (relative path → content) as the complete new content of OUT, atomically as described in
  * the module comment. The marker file (listing the files) is added. Returns whether a previous OUT was
@@ -298,47 +456,15 @@ export async function publishDirectory(
   files: ReadonlyMap<string, string | Uint8Array>,
   hooks: PublishHooks = {},
 ): Promise<{ replaced: boolean }> {
-  const s = siblings(out);
-  await mkdir(s.parent, { recursive: true });
-  await assertReplaceable(out);
-  const tmp = path.join(s.parent, `${s.newPrefix}${process.pid}-${randomBytes(4).toString('hex')}`);
-  await mkdir(tmp);
+  const staging = await OutputStaging.open(out);
   try {
-    const all = new Map(files);
-    all.set(BUILD_MARKER, markerText(files.keys()));
-    const dirs = new Set<string>([tmp]);
-    for (const [rel, data] of [...all].sort(([a], [b]) => compareText(a, b))) {
-      const target = safeJoin(tmp, rel);
-      const dir = path.dirname(target);
-      if (!dirs.has(dir)) {
-        await mkdir(dir, { recursive: true });
-        dirs.add(dir);
-      }
-      const fh = await open(target, 'wx');
-      try {
-        await fh.writeFile(data);
-        await fh.sync();
-      } finally {
-        await fh.close();
-      }
-    }
-    for (const d of dirs) await fsyncDir(d);
-    await hooks.beforeSwap?.();
-    const hadOld = await exists(s.abs);
-    if (hadOld) {
-      await rm(s.old, { recursive: true, force: true });
-      await rename(s.abs, s.old);
-    }
-    await hooks.midSwap?.();
-    await rename(tmp, s.abs);
-    await fsyncDir(s.parent);
-    if (hadOld) await rm(s.old, { recursive: true, force: true });
-    return { replaced: hadOld };
+    const sorted = [...files].sort(([a], [b]) => compareText(a, b));
+    await forEachBounded(sorted, FILE_CONCURRENCY, ([rel, data]) => staging.write(rel, data));
   } catch (err) {
-    await rm(tmp, { recursive: true, force: true });
-    if (!(await exists(s.abs)) && (await exists(s.old))) await rename(s.old, s.abs);
+    await staging.discard();
     throw err;
   }
+  return staging.publish(hooks);
 }
 
 /** Writes a text file into a fresh temp name next to it and renames it into place. */

@@ -1,34 +1,45 @@
 /**
- * The stage cache of incremental builds. One JSON file per entry:
- *   <cache dir>/<kind>/<key[0:2]>/<key>.json
- *   { "format": "qforge-cache/1", "kind", "key", "checksum": sha256(canonical payload), "payload" }
+ * The stage cache of incremental builds. One file per entry:
+ *   <cache dir>/<kind>/<key[0:2]>/<key>
+ * holding one header line and the payload bytes:
+ *   qforge-cache/2 <kind> <key> <sha256 of the payload bytes>\n<canonical JSON of the payload>
  * The key is a sha256 of everything the stage result depends on (see plan.ts) plus the tool version and
- * the constants edition, so a stale entry is never addressed. An entry is trusted only when it parses, its
- * format, kind and key match the ones asked for, and the checksum of its payload matches; otherwise it is
- * reported as corrupt, recomputed and overwritten. Writes go through a temp file and a rename.
+ * the code fingerprint, so a stale entry is never addressed. An entry is trusted only when its header names
+ * the format, kind and key asked for and the checksum of the stored payload bytes matches; otherwise it is
+ * reported as corrupt, recomputed and overwritten. The checksum is taken over the bytes as stored — not
+ * over a re-canonicalised parse — so a hit costs one hash and one JSON.parse. Writes go through a temp file
+ * and a rename.
+ *
+ * Which entries a database uses is recorded per database (cache-uses.ts), so `qforge cache prune` can drop
+ * the entries no database sharing the folder still uses.
  */
 import { mkdir, readFile } from 'node:fs/promises';
 import path from 'node:path';
 import { describeFsError, writeFileAtomic } from './atomic-write.js';
-import { canonicalJson, sha256Hex } from './hash.js';
+import { canonicalCopy, canonicalJson, sha256Hex } from './hash.js';
 
-export const CACHE_FORMAT = 'qforge-cache/1';
-/** Name of the cache folder, created next to the output folder. */
+export const CACHE_FORMAT = 'qforge-cache/2';
+/** Name of the default cache folder, created inside the database folder (discovery skips dot-folders). */
 export const CACHE_DIR_NAME = '.qforge-cache';
 
 export type CacheKind = 'samples' | 'fit' | 'table';
+export const CACHE_KINDS: readonly CacheKind[] = ['samples', 'fit', 'table'];
 export type CacheOutcome = 'hit' | 'miss' | 'corrupt' | 'off';
-
-/** JSON round trip: fresh and cached values go through it alike, so both give identical outputs. */
-export function jsonRoundTrip<T>(value: T): T {
-  return JSON.parse(canonicalJson(value)) as T;
-}
 
 export interface CacheLookup<T> {
   outcome: CacheOutcome;
   value?: T;
   /** Why an entry was rejected (outcome 'corrupt'). */
   reason?: string;
+}
+
+const KEY = /^[0-9a-f]{64}$/;
+const NEWLINE = 0x0a;
+
+/** Path of an entry below a cache folder. */
+export function cacheEntryPath(dir: string, kind: CacheKind, key: string): string {
+  if (!KEY.test(key)) throw new Error(`cache key must be a sha256 hex digest, got ${key}`);
+  return path.join(dir, kind, key.slice(0, 2), key);
 }
 
 export class StageCache {
@@ -47,50 +58,47 @@ export class StageCache {
     this.writeProblem ??= describeFsError(err) ?? (err instanceof Error ? err.message : String(err));
   }
 
-  private entryPath(kind: CacheKind, key: string): string {
-    if (!/^[0-9a-f]{64}$/.test(key)) throw new Error(`cache key must be a sha256 hex digest, got ${key}`);
-    return path.join(this.dir as string, kind, key.slice(0, 2), `${key}.json`);
-  }
-
   async get<T>(kind: CacheKind, key: string): Promise<CacheLookup<T>> {
     if (!this.dir) return { outcome: 'off' };
-    const file = this.entryPath(kind, key);
-    let text: string;
+    const file = cacheEntryPath(this.dir, kind, key);
+    let bytes: Buffer;
     try {
-      text = await readFile(file, 'utf8');
+      bytes = await readFile(file);
     } catch {
       return { outcome: 'miss' };
     }
-    let entry: unknown;
+    const eol = bytes.indexOf(NEWLINE);
+    const header = (eol < 0 ? bytes : bytes.subarray(0, eol)).toString('latin1').split(' ');
+    if (eol < 0 || header.length !== 4) return { outcome: 'corrupt', reason: 'no entry header' };
+    const [format, entryKind, entryKey, checksum] = header as [string, string, string, string];
+    if (format !== CACHE_FORMAT) return { outcome: 'corrupt', reason: `foreign format ${JSON.stringify(format.slice(0, 40))}` };
+    if (entryKind !== kind) return { outcome: 'corrupt', reason: `entry of kind ${JSON.stringify(entryKind.slice(0, 40))}` };
+    if (entryKey !== key) return { outcome: 'corrupt', reason: 'entry holds a different key' };
+    const payload = bytes.subarray(eol + 1);
+    if (sha256Hex(payload) !== checksum) return { outcome: 'corrupt', reason: 'checksum mismatch' };
     try {
-      entry = JSON.parse(text);
+      return { outcome: 'hit', value: JSON.parse(payload.toString('utf8')) as T };
     } catch {
       return { outcome: 'corrupt', reason: 'not valid JSON' };
     }
-    if (!entry || typeof entry !== 'object') return { outcome: 'corrupt', reason: 'not an object' };
-    const e = entry as Record<string, unknown>;
-    if (e.format !== CACHE_FORMAT) return { outcome: 'corrupt', reason: `foreign format ${JSON.stringify(e.format)}` };
-    if (e.kind !== kind) return { outcome: 'corrupt', reason: `entry of kind ${JSON.stringify(e.kind)}` };
-    if (e.key !== key) return { outcome: 'corrupt', reason: 'entry holds a different key' };
-    if (!('payload' in e) || sha256Hex(canonicalJson(e.payload)) !== e.checksum) {
-      return { outcome: 'corrupt', reason: 'checksum mismatch' };
-    }
-    return { outcome: 'hit', value: e.payload as T };
   }
 
   async put(kind: CacheKind, key: string, payload: unknown): Promise<void> {
     if (!this.dir) return;
-    const file = this.entryPath(kind, key);
+    const file = cacheEntryPath(this.dir, kind, key);
     await mkdir(path.dirname(file), { recursive: true });
-    const body = canonicalJson(payload);
-    const text = `{"format":${JSON.stringify(CACHE_FORMAT)},"kind":${JSON.stringify(kind)},"key":${JSON.stringify(key)},"checksum":${JSON.stringify(sha256Hex(body))},"payload":${body}}\n`;
-    await writeFileAtomic(file, text);
+    const body = Buffer.from(canonicalJson(payload), 'utf8');
+    const header = Buffer.from(`${CACHE_FORMAT} ${kind} ${key} ${sha256Hex(body)}\n`, 'latin1');
+    await writeFileAtomic(file, Buffer.concat([header, body]), { sync: false });
   }
 }
 
 /**
  * Cached evaluation: returns the cached payload on a hit, otherwise computes, stores and returns the
- * JSON round-tripped value. Errors thrown by `compute` propagate (failures are not cached).
+ * value in canonical form (`canonicalCopy`: sorted keys, as a parsed entry has them) — a structural copy,
+ * not a JSON text round trip. Stage results are plain JSON-safe data (finite numbers, arrays, plain
+ * objects), so cold, warm and --no-cache builds give the same bytes (tested). Errors thrown by `compute`
+ * propagate (failures are not cached).
  */
 export async function cached<T>(
   cache: StageCache,
@@ -101,7 +109,7 @@ export async function cached<T>(
   const t0 = performance.now();
   const found = await cache.get<T>(kind, key);
   if (found.outcome === 'hit') return { value: found.value as T, outcome: 'hit', ms: performance.now() - t0 };
-  const value = jsonRoundTrip(compute());
+  const value = canonicalCopy(compute());
   try {
     await cache.put(kind, key, value);
   } catch (err) {
@@ -115,4 +123,9 @@ export async function cached<T>(
   };
   if (found.reason) r.reason = found.reason;
   return r;
+}
+
+/** The default cache folder of a database: `.qforge-cache` inside it, so unrelated builds never share it. */
+export function defaultCacheDir(databaseDir: string): string {
+  return path.join(path.resolve(databaseDir), CACHE_DIR_NAME);
 }

@@ -50,3 +50,12 @@ export function codeFingerprint(): string {
   }
   return memo;
 }
+
+/**
+ * Makes this thread use `fingerprint` (a worker thread takes the main thread's, so both address the same
+ * cache entries). From the compiled dist/ both are the same tree anyway; from TypeScript sources (tests)
+ * the workers run dist/, which `npm test` builds from those sources first.
+ */
+export function useCodeFingerprint(fingerprint: string): void {
+  memo = fingerprint;
+}

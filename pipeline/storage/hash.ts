@@ -12,6 +12,15 @@ export function canonicalJson(value: unknown): string {
   return JSON.stringify(sortKeys(value));
 }
 
+/**
+ * The value `JSON.parse(canonicalJson(value))` would give, without the text: a structural copy with sorted
+ * keys, `undefined` members dropped and -0 as 0. Stage results go through it, fresh or cached alike, so
+ * their key order (which reaches thermo.json) never depends on whether the cache was used.
+ */
+export function canonicalCopy<T>(value: T): T {
+  return sortKeys(value) as T;
+}
+
 function sortKeys(value: unknown): unknown {
   if (Array.isArray(value)) return value.map((v) => (v === undefined ? null : sortKeys(v)));
   if (value !== null && typeof value === 'object') {

@@ -8,21 +8,21 @@
  * and likewise Σ g_i Δ_i e^{−θ_i y} and Σ g_i Δ_i² e^{−θ_i y} with M_{k+1}, M_{k+2}. The moments M_k are
  * computed once per level list (finest bins from the levels, each coarser resolution of twice the width
  * from the finer one by the exact binomial shift of the centre). At each T the coarsest resolution whose
- * bin width is ≤ T is used, so |Δ_i| y ≤ ½: one exponential and three degree-14 polynomials per bin, and
+ * bin width is ≤ 2T is used, so |Δ_i| y ≤ 1: one exponential and three degree-18 polynomials per bin, and
  * the number of bins visited per T is bounded by a few dozen however many levels there are.
  *
  * Accuracy (stated bound, tested against the direct sum): the Lagrange remainder of the degree-K Taylor
- * polynomial of e^{−x}, |x| ≤ ½, relative to e^{−x} itself, is at most e^{2|x|}|x|^{K+1}/(K+1)! = 6.3e-17
- * for K = 14. Every term g e^{−θy}·{1, Δ, Δ²} therefore carries a relative truncation error below
- * 6.3e-17, so q, Σ w u and Σ w u² (w = g e^{−u}, u = θ y) are each exact to ~1e-16 relative plus rounding,
+ * polynomial of e^{−x}, |x| ≤ 1, relative to e^{−x} itself, is at most e^{2|x|}|x|^{K+1}/(K+1)! = 6.1e-17
+ * for K = 18. Every term g e^{−θy}·{1, Δ, Δ²} therefore carries a relative truncation error below
+ * 6.1e-17, so q, Σ w u and Σ w u² (w = g e^{−u}, u = θ y) are each exact to ~1e-16 relative plus rounding,
  * and ln q, ⟨u⟩, var u to ~1e-15 relative (var u = ⟨u²⟩ − ⟨u⟩² loses the factor ⟨u²⟩/var u, a few at most
  * for levels measured from the lowest). Tested: Cp/R, H/RT, S/R within 1e-12 relative of the direct sum.
  *
  * Pruning (stated bound): bins are visited in rising energy, and the sum stops once the weight of all
  * remaining levels times e^{−u}(1 + u²), u the lowest remaining level (bounded via the bin centre), is below
  * 1e-17 of q — a bound on what the omitted levels can add to q, Σ w u and Σ w u² for u > 20, as in the
- * direct sum. Short lists (≤ DIRECT_LIMIT levels) and temperatures below the finest bin width use the
- * direct sum of level-sum.ts.
+ * direct sum. Short lists (≤ DIRECT_LIMIT levels) and temperatures below half the finest bin width use
+ * the direct sum of level-sum.ts.
  * Source of the moments: McQuarrie, Statistical Mechanics (1976), eqs. 2-30 to 2-34; the expansion is the
  * Taylor series of the exponential (any calculus text), our arrangement.
  */
@@ -30,13 +30,13 @@ import type { GridMoments, TemperatureGrid } from './grid-moments.js';
 import { addDirectLevelSum, TAIL_CUTOFF, type LevelList } from './level-sum.js';
 
 /** Degree of the Taylor polynomials (see the accuracy bound above). */
-const TAYLOR_DEGREE = 14;
+const TAYLOR_DEGREE = 18;
 /** Coefficients per series (degree + 1). */
 const TERMS = TAYLOR_DEGREE + 1;
 /** Raw moments M_0 … M_{K+2} kept per bin. */
 const RAW = TAYLOR_DEGREE + 3;
-/** Width of the finest bins, K. Below this temperature the direct sum is used. */
-const FINEST_WIDTH = 100;
+/** Width of the finest bins, K. Below half this temperature the direct sum is used. */
+const FINEST_WIDTH = 400;
 /** Lists of at most this many levels are summed directly (binning would not save exponentials). */
 export const DIRECT_LIMIT = 64;
 
@@ -205,8 +205,8 @@ function resolutionsOf(levels: LevelList): Resolution[] {
 
 /** Binned sum at one temperature (T ≥ FINEST_WIDTH); adds ln q, ⟨u⟩, var u at index j. */
 function addBinnedAt(all: readonly Resolution[], invT: number, T: number, into: GridMoments, j: number): void {
-  let level = Math.min(all.length - 1, Math.floor(Math.log2(T / FINEST_WIDTH)));
-  while (level > 0 && all[level]!.width > T) level--;
+  let level = Math.min(all.length - 1, Math.floor(Math.log2((2 * T) / FINEST_WIDTH)));
+  while (level > 0 && all[level]!.width > 2 * T) level--;
   const r = all[level]!;
   const n = r.centre.length;
   const z = -invT;
@@ -217,9 +217,9 @@ function addBinnedAt(all: readonly Resolution[], invT: number, T: number, into: 
     const c = r.centre[b]!;
     const e = Math.exp(-c * invT);
     if (e === 0) break; // sorted: every later bin underflows too
-    // Lowest level of the bin is ≥ c − h, so its factor is ≤ e·e^{h/T} ≤ e·√e (h/T ≤ ½).
+    // Lowest level of the bin is ≥ c − h, so its factor is ≤ e·e^{h/T} ≤ e·e (h/T ≤ 1).
     const uLow = (c - r.halfSpread[b]!) * invT;
-    if (uLow > 20 && r.tail[b]! * e * 1.6487212707001282 * (1 + uLow * uLow) < TAIL_CUTOFF * q) break;
+    if (uLow > 20 && r.tail[b]! * e * Math.E * (1 + uLow * uLow) < TAIL_CUTOFF * q) break;
     const o = b * 3 * TERMS;
     let a: number;
     let bb: number;
@@ -262,7 +262,7 @@ export function addLevelSumGrid(levels: LevelList, grid: TemperatureGrid, into: 
   const all = resolutionsOf(levels);
   for (let j = 0; j < T.length; j++) {
     const t = T[j]!;
-    if (t < FINEST_WIDTH) addDirectLevelSum(levels, t, into, j);
+    if (2 * t < FINEST_WIDTH) addDirectLevelSum(levels, t, into, j);
     else addBinnedAt(all, invT[j]!, t, into, j);
   }
 }

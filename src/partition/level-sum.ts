@@ -39,7 +39,7 @@ export function createLevelList(
     if (!(Number.isFinite(w) && w > 0)) throw new LevelSumError(`level ${i} has weight ${w}; expected > 0`);
     if (e < lowest) lowest = e;
   }
-  const order = Array.from({ length: n }, (_, i) => i).sort((a, b) => energies[a]! - energies[b]! || a - b);
+  const order = stableEnergyOrder(energies);
   const theta = new Float64Array(n);
   const weight = new Float64Array(n);
   for (let i = 0; i < n; i++) {
@@ -54,6 +54,40 @@ export function createLevelList(
     tailWeight[i] = tail;
   }
   return { theta, weight, tailWeight };
+}
+
+/**
+ * Indices of `energies` in rising energy, ties in input order (the order of a stable sort by energy).
+ * Natural merge sort: level lists arrive as a few already-sorted runs (one per vibrational ladder, J
+ * rising), so this is O(n log runs) on typed arrays.
+ */
+export function stableEnergyOrder(energies: ArrayLike<number>): Int32Array {
+  const n = energies.length;
+  let a = new Int32Array(n);
+  for (let i = 0; i < n; i++) a[i] = i;
+  let bounds: number[] = [0];
+  for (let i = 1; i < n; i++) if (energies[i]! < energies[i - 1]!) bounds.push(i);
+  bounds.push(n);
+  let b = new Int32Array(n);
+  while (bounds.length > 2) {
+    const next: number[] = [0];
+    for (let r = 0; r + 1 < bounds.length; r += 2) {
+      const lo = bounds[r]!;
+      const mid = bounds[r + 1]!;
+      const hi = r + 2 < bounds.length ? bounds[r + 2]! : mid;
+      let i = lo;
+      let j = mid;
+      let k = lo;
+      // On equal energies the left run (lower input indices) goes first: stable.
+      while (i < mid && j < hi) b[k++] = energies[a[j]!]! < energies[a[i]!]! ? a[j++]! : a[i++]!;
+      while (i < mid) b[k++] = a[i++]!;
+      while (j < hi) b[k++] = a[j++]!;
+      next.push(hi);
+    }
+    [a, b] = [b, a];
+    bounds = next;
+  }
+  return a;
 }
 
 /**

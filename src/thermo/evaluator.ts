@@ -11,25 +11,22 @@ import type {
   PolyatomicMolecularPart,
   Species,
   ThermoEvaluator,
+  ThermoGrid,
   ThermoPoint,
 } from '../model.js';
 import { diatomicLevels, diatomicSpinManifolds, higherOrderTermsOf, type DiatomicStateLevels } from '../partition/diatomic.js';
 import { electronicLevelList } from '../partition/electronic.js';
-import { describeTorsionPotential, hinderedRotorLevels, hinderedRotorMoments } from '../partition/hindered-rotor.js';
+import { addPointwise, momentsAt, temperatureGrid, zeroGridMoments, type GridMoments, type TemperatureGrid } from '../partition/grid-moments.js';
+import { addHarmonicGrid } from '../partition/harmonic.js';
+import { describeTorsionPotential, HINDERED_ROTOR_CEILING_TEMPERATURE, hinderedRotorLevels } from '../partition/hindered-rotor.js';
 import { opticalIsomerFactor } from './optical-isomers.js';
-import { levelSumMoments, type LevelList } from '../partition/level-sum.js';
-import {
-  addContributions,
-  addMoments,
-  assertTemperature,
-  contributionOf,
-  type PartitionMoments,
-  type ThermoContribution,
-} from '../partition/moments.js';
-import { linearRotorMoments } from '../partition/rigid-rotor-linear.js';
-import { nonlinearRotorMoments } from '../partition/rigid-rotor-nonlinear.js';
-import { DEFAULT_NUCLEAR_SPIN_MIXTURE, frozenMixtureContribution } from '../partition/spin-mixture.js';
-import { translationalMoments } from '../partition/translational.js';
+import type { LevelList } from '../partition/level-sum.js';
+import { addLevelSumGrid } from '../partition/level-sum-grid.js';
+import type { PartitionMoments } from '../partition/moments.js';
+import { addLinearRotorGrid, linearRotorLevelList } from '../partition/rigid-rotor-linear.js';
+import { addNonlinearRotorGrid } from '../partition/rigid-rotor-nonlinear.js';
+import { addFrozenMixtureGrid, DEFAULT_NUCLEAR_SPIN_MIXTURE, type GridContribution } from '../partition/spin-mixture.js';
+import { addTranslationalGrid } from '../partition/translational.js';
 import { ELECTRON_CONVENTION, formationEnthalpyAt298 } from './reference-states.js';
 import { vibrationFactor } from './vibration-model.js';
 import { conformerSum } from './conformers.js';
@@ -57,52 +54,72 @@ export function normalisePhysicsOptions(options: Partial<PhysicsOptions> = {}): 
   return { standardPressure };
 }
 
+/** One factor of the partition function in grid form: adds its lnQ, meanU, varU at every grid T. */
+type GridFactor = (grid: TemperatureGrid, into: GridMoments) => void;
+
+/** A factor that only has the per-point form, evaluated at each grid temperature. */
+const pointwise =
+  (moments: (T: number) => PartitionMoments): GridFactor =>
+  (grid, into) =>
+    addPointwise(moments, grid, into);
+
+/** The per-point form of a set of grid factors (for models that combine moments per temperature). */
+const momentsOfFactors =
+  (factors: readonly GridFactor[]) =>
+  (T: number): PartitionMoments => {
+    const grid = temperatureGrid([T]);
+    const m = zeroGridMoments(1);
+    for (const f of factors) f(grid, m);
+    return momentsAt(m, 0);
+  };
+
+const levelSumFactor =
+  (levels: LevelList): GridFactor =>
+  (grid, into) =>
+    addLevelSumGrid(levels, grid, into);
+
 /**
- * Internal factors of a polyatomic: rigid rotor × harmonic oscillators × electronic levels (independent
- * factors, so their moments add). The linear rotor is a direct sum over J; the nonlinear one is classical.
+ * Internal factors of a polyatomic: rigid rotor × vibrations × electronic levels (independent factors, so
+ * their moments add). The linear rotor is a direct sum over J; the nonlinear one is classical.
  */
 function polyatomicInternal(
   species: LinearSpecies | NonlinearSpecies,
   contributions: string[],
-): (T: number) => PartitionMoments {
+  maxTemperature: number,
+): GridFactor[] {
   const el = electronicLevelList(species.electronicLevels);
   const sigma = species.symmetryNumber;
-  let rotor: (T: number) => PartitionMoments;
+  let rotor: GridFactor;
   if (species.structure === 'linear') {
     const [B] = species.rotationalConstants;
     contributions.push(`rigid rotor, linear, direct sum over J (B = ${B} cm-1, sigma = ${sigma})`);
-    rotor = (T) => linearRotorMoments(B, sigma, T);
+    const levels = linearRotorLevelList(B, maxTemperature);
+    rotor = (grid, into) => addLinearRotorGrid(levels, sigma, grid, into);
   } else {
     const abc = species.rotationalConstants;
     contributions.push(`rigid rotor, nonlinear, classical (A, B, C = ${abc.join(', ')} cm-1, sigma = ${sigma})`);
-    rotor = (T) => nonlinearRotorMoments(abc, sigma, T);
+    rotor = (grid, into) => addNonlinearRotorGrid(abc, sigma, grid, into);
   }
-  const vibration = vibrationFactor(species, contributions);
+  const vibrationAt = vibrationFactor(species, contributions);
+  // Plain harmonic oscillators have a grid form (the same formula); the other vibration models run per T.
+  const harmonic = species.anharmonicity === undefined && species.centrifugalDistortion === undefined;
+  const vibration: GridFactor = harmonic ? (grid, into) => addHarmonicGrid(species.vibrations, grid, into) : pointwise(vibrationAt);
   contributions.push(`electronic level sum (${species.electronicLevels.length} levels)`);
-  const rotors = species.internalRotors;
   const optical = opticalIsomerFactor(species, contributions);
-  if (optical) {
-    const plain = rotor;
-    rotor = (T) => addMoments([plain(T), optical]);
-  }
-  if (rotors === undefined || rotors.length === 0) {
-    return (T) => addMoments([rotor(T), vibration(T), levelSumMoments(el, T)]);
-  }
-  // Each torsion is one more independent factor (its levels built here, once); species without rotors keep
-  // the three-factor sum above, bit for bit.
-  const torsions = rotors.map((r) => {
-    const levels = hinderedRotorLevels(r);
+  const constant: GridFactor[] = optical ? [pointwise(() => optical)] : [];
+  // Each torsion is one more independent factor (its levels built here, once).
+  const torsions = (species.internalRotors ?? []).map((r) => {
+    const levels = hinderedRotorLevels(r, { ceilingTemperature: maxTemperature });
     contributions.push(
       `hindered internal rotor, direct level sum (${describeTorsionPotential(r)}, sigma = ${r.symmetryNumber}, B = ${r.rotationalConstant} cm-1, ${levels.energies.length} levels, |m| <= ${levels.basisLimit})`,
     );
-    return levels;
+    return levelSumFactor(levels.list);
   });
-  return (T) =>
-    addMoments([rotor(T), vibration(T), levelSumMoments(el, T), ...torsions.map((l) => hinderedRotorMoments(l, T))]);
+  return [rotor, ...constant, vibration, levelSumFactor(el), ...torsions];
 }
 
 /**
- * Build the thermodynamic model of a species. Level lists are built here, once; `at(T)` only sums them.
+ * Build the thermodynamic model of a species. Level lists are built here, once; `grid` and `at` only sum them.
  *
  * Factorisation by structure (each factor documented in src/partition/):
  *   atom       q = q_trans · q_el
@@ -116,28 +133,43 @@ function polyatomicInternal(
  * already-combined contributions are added to the translational ones.
  * H0 is the lowest level of the species (the zero-point level for vibrations).
  */
-export function createThermoEvaluator(species: Species, options?: Partial<PhysicsOptions>): ThermoEvaluator {
+export function createThermoEvaluator(
+  species: Species,
+  options?: Partial<PhysicsOptions>,
+  range: { maxTemperature?: number } = {},
+): ThermoEvaluator {
   const opts = normalisePhysicsOptions(options);
+  // Level lists that need a ceiling (hindered and linear rotors) are complete up to this temperature.
+  const maxTemperature = range.maxTemperature ?? HINDERED_ROTOR_CEILING_TEMPERATURE;
+  if (!(maxTemperature >= T_REF && maxTemperature <= HINDERED_ROTOR_CEILING_TEMPERATURE)) {
+    throw new PhysicsOptionsError(`maxTemperature must be within ${T_REF}-${HINDERED_ROTOR_CEILING_TEMPERATURE} K, got ${maxTemperature}`);
+  }
   const p = opts.standardPressure;
   const mass = species.molarMass;
   const contributions: string[] = [`translational (Sackur-Tetrode), M = ${mass} g/mol`];
   const notes: string[] = [];
   /** The internal degrees of freedom: one partition function, or a mixture of independently populated parts. */
-  let internal: { moments: (T: number) => PartitionMoments } | { mixture: (T: number) => ThermoContribution };
+  let internal: { factors: GridFactor[] } | { mixture: (grid: TemperatureGrid, into: GridContribution) => void };
   let spinMixture: NuclearSpinMixture | undefined;
 
   switch (species.structure) {
     case 'atom': {
       const el = electronicLevelList(species.electronicLevels);
       contributions.push(`electronic level sum (${species.electronicLevels.length} levels)`);
-      internal = { moments: (T) => levelSumMoments(el, T) };
+      internal = { factors: [levelSumFactor(el)] };
       break;
     }
     case 'linear':
     case 'nonlinear': {
       const conformers = species.conformers;
-      const of = (part: PolyatomicMolecularPart, lines: string[]) => polyatomicInternal({ ...species, ...part } as typeof species, lines);
-      internal = { moments: conformers ? conformerSum(conformers, of, contributions) : polyatomicInternal(species, contributions) };
+      if (conformers) {
+        // The conformer sum combines per-temperature moments; each conformer is the plain factorisation.
+        const of = (part: PolyatomicMolecularPart, lines: string[]) =>
+          momentsOfFactors(polyatomicInternal({ ...species, ...part } as typeof species, lines, maxTemperature));
+        internal = { factors: [pointwise(conformerSum(conformers, of, contributions))] };
+      } else {
+        internal = { factors: polyatomicInternal(species, contributions, maxTemperature) };
+      }
       break;
     }
     case 'diatomic': {
@@ -170,7 +202,7 @@ export function createThermoEvaluator(species: Species, options?: Partial<Physic
             .map((c) => `${c.label} ${c.fraction}`)
             .join(', ')} (no interconversion), energies from the molecule's lowest level; conventional entropy (nuclear spin and its mixing term excluded)`,
         );
-        internal = { mixture: (T) => frozenMixtureContribution(components, T) };
+        internal = { mixture: (grid, into) => addFrozenMixtureGrid(components, grid, into) };
       } else {
         const levels = diatomicLevels(species);
         contributions.push(
@@ -182,7 +214,7 @@ export function createThermoEvaluator(species: Species, options?: Partial<Physic
             ? `nuclear spin weights even:odd = ${spin.even}:${spin.odd}, normalised by their sum (conventional entropy, nuclear spin excluded); equilibrium between even and odd J`
             : `symmetry number ${species.symmetryNumber} divides every level`,
         );
-        internal = { moments: (T) => levelSumMoments(levels.levels, T) };
+        internal = { factors: [levelSumFactor(levels.levels)] };
       }
       break;
     }
@@ -192,24 +224,44 @@ export function createThermoEvaluator(species: Species, options?: Partial<Physic
     }
   }
 
-  // The fit and the checks ask for the same temperatures; remembering recent points is safe because
-  // `at` is a pure function of T. Bounded so a long-running process cannot grow it without limit.
-  const memo = new Map<number, ThermoPoint>();
-  const at = (T: number): ThermoPoint => {
-    const known = memo.get(T);
-    if (known) return { ...known };
-    assertTemperature(T);
-    let point: ThermoPoint;
-    if ('mixture' in internal) {
-      const c = addContributions([contributionOf(translationalMoments(mass, T, p)), internal.mixture(T)]);
-      point = { T, cp: c.cp, hmh0: c.hmh0, s: c.s };
-    } else {
-      const m = addMoments([translationalMoments(mass, T, p), internal.moments(T)]);
-      point = { T, cp: m.varU, hmh0: m.meanU, s: m.lnQ + m.meanU };
+  /**
+   * Cp/R, (H − H0)/RT and S/R at every temperature: each factor adds its moments over the whole grid
+   * (typed arrays, no object per temperature), then Cp/R = Σ varU, (H − H0)/RT = Σ meanU, S/R = Σ (lnQ +
+   * meanU). Each temperature's numbers depend on that temperature alone, so `at(T)` equals the grid value.
+   */
+  const grid = (temperatures: ArrayLike<number>): ThermoGrid => {
+    const g = temperatureGrid(temperatures);
+    if (g.max > maxTemperature) {
+      throw new PhysicsOptionsError(`T = ${g.max} K is above ${maxTemperature} K, the highest temperature this evaluator was built for`);
     }
-    if (memo.size >= MEMO_LIMIT) memo.clear();
-    memo.set(T, point);
-    return { ...point };
+    const n = g.T.length;
+    const out: ThermoGrid = { T: g.T, cp: new Float64Array(n), hmh0: new Float64Array(n), s: new Float64Array(n) };
+    const m = zeroGridMoments(n);
+    addTranslationalGrid(mass, p, g, m);
+    if ('mixture' in internal) {
+      internal.mixture(g, out);
+      for (let j = 0; j < n; j++) {
+        out.cp[j]! += m.varU[j]!;
+        out.hmh0[j]! += m.meanU[j]!;
+        out.s[j]! += m.lnQ[j]! + m.meanU[j]!;
+      }
+    } else {
+      // The internal factors in their own sum, then added to translation: the same operations whatever
+      // combines them (one conformer gives back the plain species bit for bit).
+      const mi = zeroGridMoments(n);
+      for (const factor of internal.factors) factor(g, mi);
+      for (let j = 0; j < n; j++) {
+        const meanU = m.meanU[j]! + mi.meanU[j]!;
+        out.cp[j] = m.varU[j]! + mi.varU[j]!;
+        out.hmh0[j] = meanU;
+        out.s[j] = m.lnQ[j]! + mi.lnQ[j]! + meanU;
+      }
+    }
+    return out;
+  };
+  const at = (T: number): ThermoPoint => {
+    const r = grid([T]);
+    return { T, cp: r.cp[0]!, hmh0: r.hmh0[0]!, s: r.s[0]! };
   };
 
   // Same operand order as standardProperties, so H − H298 is exactly 0 at 298.15 K.
@@ -242,5 +294,5 @@ export function createThermoEvaluator(species: Species, options?: Partial<Physic
     notes,
   };
 
-  return { species, at, h298MinusH0, enthalpyOfFormation298, summary };
+  return { species, at, grid, h298MinusH0, enthalpyOfFormation298, summary };
 }

@@ -11,7 +11,15 @@ import type { StandardProperties, ThermoEvaluator } from '../model.js';
  * Source: definitions of the standard functions, e.g. NIST-JANAF 4th ed. (Chase 1998), introduction.
  */
 export function standardProperties(ev: ThermoEvaluator, T: number): StandardProperties {
-  const point = ev.at(T);
+  return standardPropertiesOf(ev, T, ev.at(T));
+}
+
+/** `standardProperties` from already-evaluated dimensionless functions at T (e.g. one point of a grid). */
+export function standardPropertiesOf(
+  ev: Pick<ThermoEvaluator, 'h298MinusH0' | 'enthalpyOfFormation298'>,
+  T: number,
+  point: { cp: number; hmh0: number; s: number },
+): StandardProperties {
   const R = GAS_CONSTANT;
   // Same operand order as the evaluator's h298MinusH0, so this is exactly 0 at 298.15 K.
   const hMinusH298Exact = R * T * point.hmh0 - ev.h298MinusH0; // J/mol

@@ -215,23 +215,23 @@ describe('qforge build of the fixture database', () => {
   it('a corrupted or foreign cache entry is detected and recomputed, never trusted', async () => {
     expect((await build()).code).toBe(0);
     const good = await deterministicOutputs(ws.out);
-    const cacheRoot = path.join(ws.root, '.qforge-cache');
+    // The default cache lives inside the database folder (never shared by unrelated builds).
+    const cacheRoot = path.join(ws.db, '.qforge-cache');
     const fitDir = path.join(cacheRoot, 'fit');
     const entries: string[] = [];
     for (const sub of await readdir(fitDir)) for (const f of await readdir(path.join(fitDir, sub))) entries.push(path.join(fitDir, sub, f));
     expect(entries.length).toBe(5);
-    // 1: broken JSON; 2: a payload edited without updating the checksum; 3: an entry copied under another key.
-    await writeFile(entries[0]!, '{"format":"qforge-cache/1", trunc');
-    const e1 = JSON.parse(await readFile(entries[1]!, 'utf8'));
-    e1.payload.polynomial.low[0] += 1;
-    await writeFile(entries[1]!, JSON.stringify(e1));
+    // 1: a truncated entry; 2: a payload edited without updating the checksum; 3: an entry copied under another key.
+    await writeFile(entries[0]!, 'qforge-cache/2 fit');
+    const e1 = await readFile(entries[1]!, 'utf8');
+    await writeFile(entries[1]!, e1.replace(/"low":\[(-?)(\d)/, (_m, sign: string, d: string) => `"low":[${sign}${(Number(d) + 1) % 10}`));
     await writeFile(entries[2]!, await readFile(entries[3]!, 'utf8'));
     const r = await build('--json', '--quiet');
     expect(r.code).toBe(0);
     const summary = JSON.parse(r.stdout);
     const corrupt = summary.species.filter((s: { cache: { fit: string } }) => s.cache.fit === 'corrupt');
     expect(corrupt.length).toBe(3);
-    expect(corrupt.flatMap((s: { warnings: string[] }) => s.warnings).join('\n')).toMatch(/not valid JSON|checksum mismatch|different key/);
+    expect(corrupt.flatMap((s: { warnings: string[] }) => s.warnings).join('\n')).toMatch(/no entry header|checksum mismatch|different key/);
     // Also on the terminal (even with --quiet): one line per rejected entry, naming the species.
     const lines = r.stderr.split('\n').filter((l) => /^qforge: warning: \w+: cache entry for fit rejected \(.+\); recomputed$/.test(l));
     expect(lines).toHaveLength(3);

@@ -5,7 +5,7 @@
  * (sources named there); the mistakes and the scan points (generated from V3 = 12.1 kJ/mol by our own
  * formula) are invented.
  */
-import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
+import { mkdtemp, readFile, rm, symlink, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -187,6 +187,20 @@ describe('geometry input: normalisation', () => {
   });
 });
 
+describe('geometry in a conformer', () => {
+  it('a one-conformer list with the geometry gives the plain species (same normalisation, same S)', () => {
+    const body = ETHANE.slice(ETHANE.indexOf('geometry:\n'));
+    const indented = body.split('\n').map((l) => (l === '' ? l : `    ${l}`)).join('\n');
+    const yaml = ETHANE.slice(0, ETHANE.indexOf('geometry:\n')) + `conformers:\n  - name: staggered\n    energy: 0\n${indented.replace(/^    /, '    ')}`;
+    const v = validateSpecies(parseYamlText(yaml, FILE).documents[0]!);
+    expect(v.diagnostics.filter((d) => d.severity === 'error').map(formatDiagnostic)).toEqual([]);
+    const conf = v.species as NonlinearSpecies;
+    expect(conf.conformers![0]!.symmetryNumber).toBe(6);
+    expect(conf.conformers![0]!.internalRotors![0]!.symmetryNumber).toBe(3);
+    expect(Math.abs(s298(conf).S - s298(speciesOf(ETHANE)).S)).toBeLessThan(1e-9);
+  });
+});
+
 describe('geometry_file', () => {
   it('reads the XYZ file next to the species file; its problems point into the XYZ file', async () => {
     const dir = await mkdtemp(path.join(tmpdir(), 'qforge-geo-'));
@@ -204,6 +218,17 @@ describe('geometry_file', () => {
       await writeFile(path.join(dir, 'CH3OH.yaml'), yaml.replace('bad.xyz', '../outside.xyz'));
       const outside = validateSpecies((await loadYamlFile(path.join(dir, 'CH3OH.yaml'), 'db/CH3OH.yaml')).documents[0]!);
       expect(outside.diagnostics.map((x) => x.code)).toContain('geometry-file-outside');
+      // A symbolic link out of the folder is refused too (never read, never echoed).
+      const elsewhere = await mkdtemp(path.join(tmpdir(), 'qforge-geo-out-'));
+      try {
+        await writeFile(path.join(elsewhere, 'secret.xyz'), '1\nsecret\nC 0 0 0\n');
+        await symlink(path.join(elsewhere, 'secret.xyz'), path.join(dir, 'link.xyz'));
+        await writeFile(path.join(dir, 'CH3OH.yaml'), yaml.replace('bad.xyz', 'link.xyz'));
+        const linked = validateSpecies((await loadYamlFile(path.join(dir, 'CH3OH.yaml'), 'db/CH3OH.yaml')).documents[0]!);
+        expect(linked.diagnostics.map((x) => x.code)).toContain('geometry-file-outside');
+      } finally {
+        await rm(elsewhere, { recursive: true, force: true });
+      }
     } finally {
       await rm(dir, { recursive: true, force: true });
     }

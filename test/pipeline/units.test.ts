@@ -103,14 +103,18 @@ describe('cache entries', () => {
       await cache.put('fit', key, { a: [1, 2.5] });
       expect(await cache.get('fit', key)).toEqual({ outcome: 'hit', value: { a: [1, 2.5] } });
       expect((await cache.get('samples', key)).outcome).toBe('miss');
-      const file = path.join(dir, 'fit', key.slice(0, 2), `${key}.json`);
-      const entry = JSON.parse(await readFile(file, 'utf8'));
-      await writeFile(file, JSON.stringify({ ...entry, kind: 'table' }));
+      // One header line (format, kind, key, sha256 of the payload bytes), then the payload as stored.
+      const file = path.join(dir, 'fit', key.slice(0, 2), key);
+      const entry = await readFile(file, 'utf8');
+      expect(entry).toBe(`qforge-cache/2 fit ${key} ${sha256Hex('{"a":[1,2.5]}')}\n{"a":[1,2.5]}`);
+      await writeFile(file, entry.replace(' fit ', ' table '));
       expect((await cache.get('fit', key)).reason).toMatch(/kind/);
-      await writeFile(file, JSON.stringify({ ...entry, format: 'other/1' }));
+      await writeFile(file, entry.replace('qforge-cache/2', 'other/1'));
       expect((await cache.get('fit', key)).reason).toMatch(/foreign format/);
-      await writeFile(file, JSON.stringify({ ...entry, payload: { a: [1, 2.6] } }));
+      await writeFile(file, entry.replace('2.5', '2.6'));
       expect((await cache.get('fit', key)).reason).toMatch(/checksum/);
+      await writeFile(file, '{"format":"qforge-cache/1"}');
+      expect((await cache.get('fit', key)).reason).toMatch(/header/);
       await expect(new StageCache(undefined).get('fit', key)).resolves.toEqual({ outcome: 'off' });
       await expect(cache.get('fit', '../../etc')).rejects.toThrow(/sha256/);
     } finally {

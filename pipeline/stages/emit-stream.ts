@@ -1,0 +1,158 @@
+/**
+ * Stage "emit", streamed: each built species is written into the staging folder as soon as it is its
+ * turn in name order (the runner's reorder window), so memory does not grow with the database.
+ *
+ *   tables/<name>.csv  written at once, named as `tableFileNames` would name the whole set (the
+ *                      case-collision suffix depends only on the species before it in name order);
+ *   thermo.json        each species record is validated against its sub-schema and appended to a scratch
+ *                      file; `finish` writes the envelope (validated with an empty species list) around it;
+ *   nasa7.txt          each 80-column record is appended to a scratch file; `finish` frames it.
+ *
+ * The envelopes are rendered at the end, when the build knows everything, by the same functions as the
+ * in-memory emit (databaseJson, renderNasa7 with no species), and the bytes are those of `jsonText` and
+ * `renderNasa7` of the whole set (tested against them).
+ */
+import { createReadStream } from 'node:fs';
+import { Ajv2020 } from 'ajv/dist/2020.js';
+import databaseSchema from '../../schemas/database.schema.json' with { type: 'json' };
+import settingsSchema from '../../schemas/settings.schema.json' with { type: 'json' };
+import { formatNasa7Record } from '../../src/nasa7/format.js';
+import type { OutputStaging, StagedStream } from '../storage/atomic-write.js';
+import { sha256Hex } from '../storage/hash.js';
+import type { DatabaseSettings } from '../core/settings.js';
+import { speciesFileStem } from './emit.js';
+import {
+  databaseJson,
+  jsonText,
+  nasa7Record,
+  OutputSchemaError,
+  renderNasa7,
+  renderTable,
+  renderTablesReadme,
+  speciesJson,
+  validateDatabaseJson,
+  type BuiltSpecies,
+} from './emit.js';
+
+let speciesValidator: ReturnType<Ajv2020['compile']> | undefined;
+function validateSpeciesRecord(record: unknown): void {
+  if (!speciesValidator) {
+    const ajv = new Ajv2020({ allErrors: true, strict: false });
+    ajv.addSchema(settingsSchema);
+    ajv.addSchema(databaseSchema);
+    speciesValidator = ajv.getSchema(`${databaseSchema.$id}#/$defs/species`)!;
+  }
+  if (!speciesValidator(record)) throw new OutputSchemaError('thermo.json (species record)', speciesValidator.errors);
+}
+
+/** Where the species list sits in the envelope text of `jsonText(databaseJson([], …))`. */
+const EMPTY_SPECIES = '\n  "species": []';
+const NASA7_END = 'END\n';
+
+/** Incremental `tableFileNames`: names must arrive in name order. */
+export class TableNamer {
+  private readonly taken = new Set<string>();
+  next(name: string): string {
+    let stem = speciesFileStem(name);
+    if (this.taken.has(stem.toLowerCase())) stem = `${stem}_${sha256Hex(name).slice(0, 8)}`;
+    this.taken.add(stem.toLowerCase());
+    return `tables/${stem}.csv`;
+  }
+}
+
+/** One species' rendered outputs (rendering can fail; writing starts only when all of it succeeded). */
+interface Rendered {
+  thermo?: string;
+  nasa7?: string;
+  table?: { file: string; text: string };
+}
+
+export class StreamingEmitter {
+  private thermo: StagedStream | undefined;
+  private nasa7: StagedStream | undefined;
+  private readonly namer = new TableNamer();
+  private count = 0;
+
+  private constructor(
+    private readonly staging: OutputStaging,
+    private readonly settings: DatabaseSettings,
+  ) {}
+
+  static async open(staging: OutputStaging, settings: DatabaseSettings): Promise<StreamingEmitter> {
+    const e = new StreamingEmitter(staging, settings);
+    if (settings.outputs.thermo_json) e.thermo = await staging.scratch('thermo.json');
+    if (settings.outputs.nasa7) e.nasa7 = await staging.scratch('nasa7.txt');
+    return e;
+  }
+
+  /** Species written so far. */
+  get written(): number {
+    return this.count;
+  }
+
+  /**
+   * Renders and writes one species (in name order). Throws before writing anything when a record cannot
+   * be rendered (a Nasa7FormatError: the runner fails that species). Returns the time spent on its table.
+   */
+  async add(b: BuiltSpecies): Promise<number> {
+    const r: Rendered = {};
+    if (this.nasa7) r.nasa7 = `${formatNasa7Record(nasa7Record(b, this.settings.record_identifier)).join('\n')}\n`;
+    if (this.thermo) {
+      const record = speciesJson(b);
+      validateSpeciesRecord(record);
+      const body = JSON.stringify(record, null, 2).replace(/^/gm, '    ');
+      r.thermo = this.count === 0 ? `\n${body}` : `,\n${body}`;
+    }
+    let tableMs = 0;
+    if (this.settings.outputs.tables) {
+      const t0 = performance.now();
+      r.table = { file: this.namer.next(b.name), text: await renderTable(b) };
+      tableMs = performance.now() - t0;
+    }
+    if (r.nasa7 !== undefined) await this.nasa7!.write(r.nasa7);
+    if (r.thermo !== undefined) await this.thermo!.write(r.thermo);
+    if (r.table) await this.staging.write(r.table.file, r.table.text);
+    this.count++;
+    return tableMs;
+  }
+
+  /** Writes the framed thermo.json and nasa7.txt and tables/README.txt. */
+  async finish(): Promise<void> {
+    if (this.thermo) {
+      const envelope = databaseJson([], this.settings);
+      validateDatabaseJson(envelope);
+      const text = jsonText(envelope);
+      const at = text.lastIndexOf(EMPTY_SPECIES);
+      if (at < 0) throw new Error('thermo.json envelope without a species list');
+      const head = `${text.slice(0, at)}\n  "species": [`;
+      const tail = `${this.count === 0 ? '' : '\n  '}]${text.slice(at + EMPTY_SPECIES.length)}`;
+      await this.thermo.close();
+      await this.frame('thermo.json', head, tail);
+    }
+    if (this.nasa7) {
+      const text = renderNasa7([], this.settings);
+      if (!text.endsWith(NASA7_END)) throw new Error('nasa7.txt framing without its END line');
+      await this.nasa7.close();
+      await this.frame('nasa7.txt', text.slice(0, -NASA7_END.length), NASA7_END);
+    }
+    if (this.settings.outputs.tables) await this.staging.write('tables/README.txt', renderTablesReadme(this.settings));
+  }
+
+  /** Closes the scratch files (idempotent; `finish` closes them itself). */
+  async close(): Promise<void> {
+    await this.thermo?.close();
+    await this.nasa7?.close();
+  }
+
+  private async frame(rel: string, head: string, tail: string): Promise<void> {
+    const out = await this.staging.stream(rel);
+    try {
+      await out.write(head);
+      for await (const chunk of createReadStream(this.staging.scratchPath(rel), { encoding: 'utf8' })) await out.write(chunk as string);
+      await out.write(tail);
+    } finally {
+      await out.close();
+    }
+    await this.staging.dropScratch(rel);
+  }
+}

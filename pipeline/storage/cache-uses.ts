@@ -1,0 +1,88 @@
+/**
+ * Which cache entries each database uses, so that pruning a cache folder shared by several databases
+ * (an explicit `--cache-dir`) never deletes an entry another database still needs.
+ *
+ * Every full (unsharded) build writes `<cache>/uses/<database id>` — the database's real path on the
+ * first line, then the `kind/key` of every entry its species used, sorted. The database id is the first
+ * 16 hex digits of sha256(real path). `qforge cache prune` recomputes the keys of the database it is
+ * given, records them, and deletes every entry that no use list names. A use list whose database folder
+ * no longer exists is stale: it is removed and protects nothing.
+ */
+import { readdir, readFile, realpath, rm, stat, mkdir } from 'node:fs/promises';
+import path from 'node:path';
+import { writeFileAtomic } from './atomic-write.js';
+import { CACHE_KINDS, type CacheKind } from './cache.js';
+import { sha256Hex } from './hash.js';
+import { compareText } from '../core/text.js';
+
+const USES = 'uses';
+
+async function databaseId(databaseDir: string): Promise<{ id: string; real: string }> {
+  const real = await realpath(databaseDir).catch(() => path.resolve(databaseDir));
+  return { id: sha256Hex(real).slice(0, 16), real };
+}
+
+/** Records the entries a database uses (replacing its previous list). */
+export async function recordCacheUse(cacheDir: string, databaseDir: string, keys: readonly string[]): Promise<void> {
+  const { id, real } = await databaseId(databaseDir);
+  await mkdir(path.join(cacheDir, USES), { recursive: true });
+  const body = [...new Set(keys)].sort(compareText).join('\n');
+  await writeFileAtomic(path.join(cacheDir, USES, id), `${real}\n${body}${body ? '\n' : ''}`, { sync: false });
+}
+
+export interface PruneResult {
+  /** Entries deleted and their bytes. */
+  removed: number;
+  bytesFreed: number;
+  /** Entries kept (used by this or another database). */
+  kept: number;
+  /** Use lists of other databases that protected entries. */
+  otherDatabases: number;
+  /** Use lists dropped because their database folder is gone. */
+  staleUseLists: number;
+}
+
+/** Deletes every entry below `cacheDir` that no database's use list (this one's: `keys`) names. */
+export async function pruneCache(cacheDir: string, databaseDir: string, keys: readonly string[]): Promise<PruneResult> {
+  await recordCacheUse(cacheDir, databaseDir, keys);
+  const { id } = await databaseId(databaseDir);
+  const used = new Set<string>();
+  let otherDatabases = 0;
+  let staleUseLists = 0;
+  for (const name of await readdir(path.join(cacheDir, USES))) {
+    const file = path.join(cacheDir, USES, name);
+    const lines = (await readFile(file, 'utf8')).split('\n').filter((l) => l !== '');
+    const owner = lines[0] ?? '';
+    if (name !== id) {
+      const alive = await stat(owner).then((s) => s.isDirectory(), () => false);
+      if (!alive) {
+        await rm(file, { force: true });
+        staleUseLists++;
+        continue;
+      }
+      otherDatabases++;
+    }
+    for (const k of lines.slice(1)) used.add(k);
+  }
+  const result: PruneResult = { removed: 0, bytesFreed: 0, kept: 0, otherDatabases, staleUseLists };
+  for (const kind of CACHE_KINDS) {
+    const kindDir = path.join(cacheDir, kind);
+    const subs = await readdir(kindDir).catch(() => [] as string[]);
+    for (const sub of subs.sort(compareText)) {
+      const subDir = path.join(kindDir, sub);
+      for (const entry of (await readdir(subDir).catch(() => [] as string[])).sort(compareText)) {
+        if (used.has(`${kind as CacheKind}/${entry}`)) {
+          result.kept++;
+          continue;
+        }
+        const file = path.join(subDir, entry);
+        const size = await stat(file).then((s) => s.size, () => 0);
+        await rm(file, { force: true });
+        result.removed++;
+        result.bytesFreed += size;
+      }
+      if ((await readdir(subDir).catch(() => ['x'])).length === 0) await rm(subDir, { recursive: true, force: true });
+    }
+  }
+  return result;
+}

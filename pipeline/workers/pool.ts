@@ -1,0 +1,172 @@
+/**
+ * The species worker pool: runs batches of validated species on `jobs` worker threads (or on the main
+ * thread when jobs is 1) and hands back their outcomes. The runner sends batches in name order and
+ * consumes the answers in that same order (a reorder window), so the outputs never depend on which
+ * worker finished first, and the species in flight are bounded by the window, not by the database.
+ *
+ * A worker that crashes or exits fails only the batch it held: each of its species gets an error naming
+ * the crash, a fresh worker takes the remaining batches, and after repeated crashes the remaining batches
+ * fail the same way instead of waiting. The pool never hangs on a dead worker.
+ *
+ * Workers start lazily, on the first batch that needs computing: a batch whose every stage result is in
+ * the cache is run on the main thread (reading an entry is cheaper than starting a thread).
+ *
+ * Workers run the compiled code in dist/ (`npm run build`); from TypeScript sources (the tests) the pool
+ * points at the dist/ file of the same tree.
+ */
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { Worker } from 'node:worker_threads';
+import type { SpeciesOutcome, ValidSpecies } from '../runner.js';
+import type { BatchRequest, WorkerInit, WorkerReply } from './protocol.js';
+
+export interface SpeciesPool {
+  run(batch: ValidSpecies[]): Promise<SpeciesOutcome[]>;
+  /** Stops the workers (idempotent). */
+  close(): Promise<void>;
+  /** The first cache write failure a worker reported. */
+  readonly cacheWriteProblem: string | undefined;
+}
+
+export interface PoolOptions {
+  jobs: number;
+  init: WorkerInit;
+  /** Builds one species on this thread (jobs = 1). */
+  inline: (v: ValidSpecies) => Promise<SpeciesOutcome>;
+  /** The outcome of a species whose worker died (an error diagnostic naming `reason`). */
+  crashed: (v: ValidSpecies, reason: string) => SpeciesOutcome;
+  /**
+   * Whether a batch is cheap enough for this thread (every stage result already cached): then it is run
+   * inline and no worker is started for it, so a no-change rebuild starts no thread at all.
+   */
+  cheap?: (batch: readonly ValidSpecies[]) => Promise<boolean>;
+}
+
+/** The worker entry module: next to this file when compiled, in dist/ when running from sources. */
+export function workerEntry(): URL {
+  const here = import.meta.url;
+  return here.endsWith('.ts') ? new URL('../../dist/pipeline/workers/species-worker.js', here) : new URL('./species-worker.js', here);
+}
+
+/** Deterministic batches: name order, sizes depending only on the count and `jobs`. */
+export function batchesOf<T>(items: readonly T[], jobs: number): T[][] {
+  const size = Math.max(1, Math.min(32, Math.ceil(items.length / (jobs * 8))));
+  const out: T[][] = [];
+  for (let i = 0; i < items.length; i += size) out.push(items.slice(i, i + size));
+  return out;
+}
+
+export function createSpeciesPool(opts: PoolOptions): SpeciesPool {
+  if (opts.jobs <= 1) {
+    return {
+      run: async (batch) => {
+        const out: SpeciesOutcome[] = [];
+        for (const v of batch) {
+          // Yield between species so progress output and signals are handled during long builds.
+          await new Promise((r) => setImmediate(r));
+          out.push(await opts.inline(v));
+        }
+        return out;
+      },
+      close: async () => {},
+      cacheWriteProblem: undefined,
+    };
+  }
+  return new ThreadPool(opts);
+}
+
+interface Job {
+  req: BatchRequest;
+  resolve: (o: SpeciesOutcome[]) => void;
+}
+
+interface Slot {
+  worker: Worker;
+  job: Job | undefined;
+}
+
+class ThreadPool implements SpeciesPool {
+  cacheWriteProblem: string | undefined;
+  private readonly queue: Job[] = [];
+  private readonly slots = new Set<Slot>();
+  private nextId = 0;
+  private crashes = 0;
+  private closed = false;
+  private readonly entry: URL;
+
+  constructor(private readonly opts: PoolOptions) {
+    this.entry = workerEntry();
+    if (!existsSync(fileURLToPath(this.entry))) {
+      throw new Error(`the worker code ${fileURLToPath(this.entry)} is missing: run \`npm run build\` (or use --jobs 1)`);
+    }
+  }
+
+  async run(batch: ValidSpecies[]): Promise<SpeciesOutcome[]> {
+    if (this.opts.cheap && (await this.opts.cheap(batch))) {
+      const out: SpeciesOutcome[] = [];
+      for (const v of batch) out.push(await this.opts.inline(v));
+      return out;
+    }
+    return new Promise((resolve) => {
+      this.queue.push({ req: { id: this.nextId++, species: batch }, resolve });
+      this.pump();
+    });
+  }
+
+  private pump(): void {
+    while (this.queue.length > 0 && !this.closed) {
+      let slot = [...this.slots].find((s) => s.job === undefined);
+      if (!slot) {
+        if (this.slots.size >= this.opts.jobs) return;
+        slot = this.spawn();
+      }
+      const job = this.queue.shift()!;
+      slot.job = job;
+      slot.worker.postMessage(job.req);
+    }
+  }
+
+  private spawn(): Slot {
+    const worker = new Worker(this.entry, { workerData: this.opts.init });
+    const slot: Slot = { worker, job: undefined };
+    this.slots.add(slot);
+    worker.on('message', (reply: WorkerReply) => {
+      const job = slot.job;
+      if (!job || job.req.id !== reply.id) return;
+      slot.job = undefined;
+      if ('error' in reply) job.resolve(this.failed(job, `a worker failed: ${reply.error}`));
+      else {
+        if (reply.cacheWriteProblem !== undefined) this.cacheWriteProblem ??= reply.cacheWriteProblem;
+        job.resolve(reply.outcomes);
+      }
+      this.pump();
+    });
+    const lost = (why: string) => {
+      if (!this.slots.delete(slot)) return;
+      const job = slot.job;
+      slot.job = undefined;
+      if (this.closed) return;
+      this.crashes++;
+      if (job) job.resolve(this.failed(job, why));
+      // A worker that keeps dying (out of memory, a broken install) fails the rest instead of looping.
+      if (this.crashes > this.opts.jobs + 2) {
+        for (const j of this.queue.splice(0)) j.resolve(this.failed(j, `${why} (and the workers keep crashing; not retried)`));
+      }
+      this.pump();
+    };
+    worker.on('error', (err) => lost(`the worker thread crashed (${err instanceof Error ? err.message : String(err)})`));
+    worker.on('exit', (code) => lost(`the worker thread exited with code ${code}`));
+    return slot;
+  }
+
+  private failed(job: Job, reason: string): SpeciesOutcome[] {
+    return job.req.species.map((v) => this.opts.crashed(v, reason));
+  }
+
+  async close(): Promise<void> {
+    this.closed = true;
+    const all = [...this.slots];
+    this.slots.clear();
+    await Promise.all(all.map((s) => s.worker.terminate()));
+  }
+}

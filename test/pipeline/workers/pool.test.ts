@@ -1,0 +1,71 @@
+/**
+ * The species worker pool (pipeline/workers/pool.ts): outputs byte-identical whatever --jobs, on the demo
+ * database and the fixture database, and a worker that dies fails only its own batch with a clear error
+ * instead of hanging the build. Workers run the compiled dist/ code (`npm test` builds it first). Holds no
+ * reference values (no source to name): the comparisons are between builds of our own code.
+ */
+import { cp, mkdtemp, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { checkDatabase, buildOneSpecies } from '../../../pipeline/runner.js';
+import { batchesOf, createSpeciesPool } from '../../../pipeline/workers/pool.js';
+import { StageCache } from '../../../pipeline/storage/cache.js';
+import { deterministicOutputs, FIXTURE_DB, REPO, runCli } from '../helpers.js';
+
+let root: string;
+beforeAll(async () => {
+  root = await mkdtemp(path.join(tmpdir(), 'qforge-pool-'));
+  await cp(path.join(REPO, 'species'), path.join(root, 'demo'), { recursive: true });
+  await cp(FIXTURE_DB, path.join(root, 'fx'), { recursive: true });
+});
+afterAll(async () => {
+  await rm(root, { recursive: true, force: true });
+});
+
+describe('worker pool', () => {
+  it('--jobs 1, 2 and 3 write the same bytes (demo and fixture databases)', async () => {
+    for (const db of ['demo', 'fx']) {
+      const outputs: Array<Awaited<ReturnType<typeof deterministicOutputs>>> = [];
+      for (const jobs of ['1', '2', '3']) {
+        const r = await runCli(['build', db, '--out', `${db}-${jobs}`, '--no-cache', '--jobs', jobs, '--quiet'], root);
+        expect(r.code, r.stderr).toBe(0);
+        outputs.push(await deterministicOutputs(path.join(root, `${db}-${jobs}`)));
+      }
+      expect(outputs[1]).toEqual(outputs[0]);
+      expect(outputs[2]).toEqual(outputs[0]);
+    }
+  }, 240_000);
+
+  it('batches are deterministic and cover every species once, in order', () => {
+    const items = Array.from({ length: 101 }, (_, i) => i);
+    for (const jobs of [1, 2, 3, 8]) {
+      const b = batchesOf(items, jobs);
+      expect(b.flat()).toEqual(items);
+      expect(batchesOf(items, jobs)).toEqual(b);
+    }
+  });
+
+  it('a crashing worker fails its batch with a clear error and the pool goes on (no hang)', async () => {
+    const dir = path.join(root, 'fx');
+    const check = await checkDatabase({ dir });
+    const cache = new StageCache(undefined);
+    const pool = createSpeciesPool({
+      jobs: 2,
+      init: { settings: check.settings, limits: { setAt: {} }, cacheDir: undefined, codeFingerprint: 'test', testCrashOn: 'CO' },
+      inline: (v) => buildOneSpecies(v, check.settings, cache, check),
+      crashed: (v, reason) => ({ valid: v, diagnostics: [{ severity: 'error', file: v.displayFile, path: '', message: reason }], cache: {}, cacheNotes: [], timings: {} }),
+    });
+    try {
+      const batches = check.species.map((v) => [v]);
+      const results = (await Promise.all(batches.map((b) => pool.run(b)))).flat();
+      expect(results.map((o) => o.valid.name)).toEqual(check.species.map((v) => v.name));
+      const co = results.find((o) => o.valid.name === 'CO')!;
+      expect(co.built).toBeUndefined();
+      expect(co.diagnostics[0]!.message).toMatch(/worker thread exited with code 70/);
+      for (const o of results.filter((x) => x.valid.name !== 'CO')) expect(o.built, o.valid.name).toBeDefined();
+    } finally {
+      await pool.close();
+    }
+  }, 120_000);
+});

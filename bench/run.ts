@@ -227,10 +227,22 @@ async function main(): Promise<number> {
     }
     anharmonic = r;
   }
+  // `--before OTHER_TREE/dist/bench/child.js`: no-change rebuild and peak RSS of that tree and this one,
+  // on the same files in this run (bench/runner.ts).
+  let rebuildBeforeAfter: unknown;
+  const before = option(argv, '--before');
+  if (before) {
+    const { benchRebuild, formatRebuildTable } = await import('./runner.js');
+    const own = path.join(here, 'child.js');
+    const rows = [];
+    for (const n of sizes) for (const c of [before, own]) rows.push(await benchRebuild(c, n, seed, jobs));
+    console.log(formatRebuildTable(rows));
+    rebuildBeforeAfter = rows;
+  }
   await mkdir(path.dirname(jsonFile), { recursive: true });
   await writeFile(
     jsonFile,
-    `${JSON.stringify({ format: 'qforge-bench/1', seed, cores: cpus().length, node: process.version, settings: BENCH_SETTINGS, results, targets: checks, nasa7, anharmonic }, null, 2)}\n`,
+    `${JSON.stringify({ format: 'qforge-bench/1', seed, cores: cpus().length, node: process.version, settings: BENCH_SETTINGS, results, targets: checks, nasa7, anharmonic, rebuildBeforeAfter }, null, 2)}\n`,
   );
   console.log(`results: ${jsonFile}`);
   const buildFailed = results.some((r) => [r.coldNoCache, r.coldFreshCache, r.rebuild].some((b) => b.exitCode > 1) || r.rebuild.cacheHits < r.rebuild.built);

@@ -105,7 +105,12 @@ async function main(): Promise<void> {
   const own = path.join(path.dirname(fileURLToPath(import.meta.url)), 'child.js');
   const children = [...options(argv, '--child'), own];
   const rows: RebuildFigures[] = [];
-  for (const n of sizes) for (const c of children) rows.push(await benchRebuild(c, n, seed, jobs));
+  for (const n of sizes) {
+    for (const c of children) {
+      rows.push(await benchRebuild(c, n, seed, jobs));
+      console.error(formatRebuildTable(rows.slice(-1)).split('\n')[1]);
+    }
+  }
   console.log(formatRebuildTable(rows));
   const json = options(argv, '--json')[0];
   if (json) await writeFile(json, `${JSON.stringify(rows, null, 2)}\n`);

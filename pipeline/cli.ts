@@ -127,6 +127,7 @@ interface BuildFlags {
   strict?: boolean;
   report?: boolean;
   reportAgainst?: string;
+  uncertaintySamples?: number;
 }
 
 function shardArg(value: string): Shard {
@@ -140,6 +141,12 @@ function shardArg(value: string): Shard {
 function positiveInt(value: string): number {
   const n = Number(value);
   if (!Number.isInteger(n) || n < 1 || n > 1024) throw new InvalidArgumentError('expected a whole number from 1 to 1024');
+  return n;
+}
+
+function positiveSamples(value: string): number {
+  const n = Number(value);
+  if (!Number.isInteger(n) || n < 2 || n > 100000) throw new InvalidArgumentError('expected a whole number of samples from 2 to 100000');
   return n;
 }
 
@@ -217,6 +224,7 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('--strict', 'every warning not accepted in writing (accepted_warnings) is an error')
     .option('--report', 'also write report.html (overview and charts of every species)')
     .option('--report-against <old>', 'report: compare with this earlier build folder (implies --report)')
+    .option('--uncertainty-samples <n>', 'Monte Carlo check of the propagated uncertainties with N samples per species', positiveSamples)
     .addHelpText('after', EXAMPLES.build)
     .action(async (dir: string, o: BuildFlags & { out: string }) => {
       exitCode = await buildCommand(io, abs(dir), dir, abs(o.out), o.out, o);
@@ -463,6 +471,7 @@ async function buildCommand(
       ...(o.shard ? { shard: o.shard } : {}),
       strict: !!o.strict,
       cacheDir,
+      ...(o.uncertaintySamples !== undefined ? { uncertaintySamples: o.uncertaintySamples } : {}),
       ...(o.report || o.reportAgainst !== undefined
         ? { report: o.reportAgainst !== undefined ? { against: { path: path.resolve(io.cwd, o.reportAgainst), label: o.reportAgainst } } : {} }
         : {}),

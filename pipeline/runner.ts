@@ -29,6 +29,7 @@ import { planSpecies, type SpeciesPlan } from './core/plan.js';
 import { checkSpeciesSampling, loadSettings, type DatabaseSettings, type FitTolerancesSetting } from './core/settings.js';
 import { checkUniqueNames, validateSpecies } from './stages/validate.js';
 import { classicalCpFloor, verifySpecies } from './stages/verify.js';
+import { computeUncertainty } from './stages/uncertainty.js';
 import { fitLimitOrigin, toleranceKeyPositions } from './stages/limit-origin.js';
 import { codeFingerprint } from './storage/code-fingerprint.js';
 import { createWarningPolicy } from './core/strict.js';
@@ -67,6 +68,8 @@ export interface BuildOptions extends CheckOptions {
   hooks?: PublishHooks;
   /** Write report.html (also when the settings' outputs.report is true); see pipeline/report/. */
   report?: ReportRequest;
+  /** Monte Carlo samples of the uncertainty check per species (none: linear propagation only). */
+  uncertaintySamples?: number;
 }
 
 /** One species document that passed validation. */
@@ -388,6 +391,7 @@ export async function buildOneSpecies(
   settings: DatabaseSettings,
   cache: StageCache,
   limitSource: LimitSource = {},
+  extra: { uncertaintySamples?: number } = {},
 ): Promise<SpeciesOutcome> {
   const out: SpeciesOutcome = {
     valid: v,
@@ -487,6 +491,13 @@ export async function buildOneSpecies(
     table = rows;
   }
   out.built = { name: v.name, file: v.file, species: v.species, inputHash, computed, fit, table };
+  const tu = performance.now();
+  try {
+    out.built.uncertainty = computeUncertainty(v.species, plan.physics, plan.ranges, extra.uncertaintySamples);
+  } catch (e) {
+    out.diagnostics.push({ severity: 'warning', code: 'uncertainty-failed', ...where, path: 'uncertainties', message: `uncertainty propagation failed: ${errorText(e)}` });
+  }
+  out.timings.uncertainty = performance.now() - tu;
   return out;
 }
 
@@ -599,8 +610,14 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   let published = false;
   const pool = createSpeciesPool({
     jobs,
-    init: { settings, limits: plainLimits(check), cacheDir, codeFingerprint: codeFingerprint() },
-    inline: (v) => buildOneSpecies(v, settings, cache, check),
+    init: {
+      settings,
+      limits: plainLimits(check),
+      cacheDir,
+      codeFingerprint: codeFingerprint(),
+      ...(opts.uncertaintySamples !== undefined ? { uncertaintySamples: opts.uncertaintySamples } : {}),
+    },
+    inline: (v) => buildOneSpecies(v, settings, cache, check, opts.uncertaintySamples !== undefined ? { uncertaintySamples: opts.uncertaintySamples } : {}),
     cheap: (batch) => allCached(cacheDir, batch, settings),
     crashed: (v, reason) => ({
       valid: v,
@@ -658,6 +675,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
         status: s.status,
         species: o.valid.species,
         ...(o.built ? { computed: o.built.computed, fit: o.built.fit } : {}),
+        ...(o.built?.uncertainty ? { uncertainty: o.built.uncertainty } : {}),
         warnings: s.warnings,
         errors: s.errors,
         cacheHit: s.cache_hit,

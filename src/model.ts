@@ -202,6 +202,8 @@ export interface PolyatomicMolecularPart {
   dissociationEnergy?: number;
   /** Scale factor already applied to `vibrations` (recorded for the model summary). */
   vibrationScaleFactor?: { value: number; source: string };
+  /** What was derived from a geometry (constants, σ, reduced moments), in words, for the model summary. */
+  geometryNotes?: string[];
 }
 
 /** Optional extensions of the polyatomic model; absent keys keep the normalised form (and hash) unchanged. */
@@ -210,6 +212,8 @@ interface PolyatomicExtensions {
   centrifugalDistortion?: CentrifugalDistortion;
   dissociationEnergy?: number;
   vibrationScaleFactor?: { value: number; source: string };
+  /** What was derived from a geometry, in words, for the model summary (see PolyatomicMolecularPart). */
+  geometryNotes?: string[];
   /** Number of optical isomers (2 for a chiral molecule): S/R += ln(opticalIsomers). Absent = 1. */
   opticalIsomers?: number;
   /** When present the partition function is the Boltzmann-weighted sum over these (src/thermo/conformers.ts). */

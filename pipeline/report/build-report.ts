@@ -7,6 +7,7 @@
 import path from 'node:path';
 import { parseReferenceCsv, type ReferenceRow } from '../commands/compare.js';
 import { displayPath } from '../core/display-path.js';
+import { fitLimitsFor } from '../core/fit-plan.js';
 import type { DatabaseSettings } from '../core/settings.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from '../core/version.js';
 import { speciesFileStem } from '../stages/emit.js';
@@ -53,7 +54,8 @@ export class ReportWriter {
     this.rendered.push(
       renderSpeciesSection({
         ...input,
-        tolerances: input.tolerances ?? this.settings.tolerances,
+        // The species' own limits over the settings' (as the fit check used them).
+        tolerances: input.tolerances ?? (input.species ? fitLimitsFor(this.settings.tolerances, input.species.fitLimits) : this.settings.tolerances),
         changeScale: this.settings.references.tolerances,
         ...(prev && this.againstLabel !== undefined ? { previous: { label: this.againstLabel, polynomial: prev.polynomial } } : {}),
         ...(ref ? { reference: { label: ref.label, rows: ref.species.get(input.name)! } } : {}),

@@ -28,8 +28,11 @@ export interface ReportSpeciesInput {
   species?: Species;
   computed?: ComputedSpecies;
   fit?: FitResult;
-  /** Fit tolerances, dimensionless (Cp/R, H/RT, S/R). */
-  tolerances: QuantityTriple;
+  /**
+   * Fit limits, dimensionless (Cp/R, H/RT, S/R): the limit of q at T is max(q, relative_to_cp.q · Cp/R(T))
+   * (the size-scaled limits of the settings); without relative_to_cp it is q.
+   */
+  tolerances: QuantityTriple & { relative_to_cp?: QuantityTriple };
   /** Scale of "how big is a change": references.tolerances (Cp, S in J/(mol K), H in kJ/mol). */
   changeScale: QuantityTriple;
   warnings: readonly string[];
@@ -89,6 +92,40 @@ const MAX_POINTS = 60;
 /** Extrapolation drawn beyond each end of the fitted range, K. */
 const EXTRAPOLATION_K = 100;
 
+type Q3 = 'cp' | 'h' | 's';
+const Q3S: readonly Q3[] = ['cp', 'h', 's'];
+
+/** The fit limit of q at a point whose computed Cp/R is cpR. */
+export function limitAt(tol: ReportSpeciesInput['tolerances'], q: Q3, cpR: number): number {
+  return Math.max(tol[q], (tol.relative_to_cp?.[q] ?? 0) * cpR);
+}
+
+interface Residuals {
+  /** fit − computed per quantity, at every sample. */
+  values: Record<Q3, Array<readonly [number, number]>>;
+  /** Limit per quantity at every sample. */
+  limits: Record<Q3, number[]>;
+  /** Largest |residual| / limit over all samples and quantities. */
+  worstRatio: number;
+}
+
+function residualsOf(fit: FitResult, computed: ComputedSpecies, tol: ReportSpeciesInput['tolerances']): Residuals {
+  const values: Residuals['values'] = { cp: [], h: [], s: [] };
+  const limits: Residuals['limits'] = { cp: [], h: [], s: [] };
+  let worstRatio = 0;
+  for (const smp of computed.samples) {
+    const f = evaluateNasa7(fit.polynomial, smp.T);
+    const d: Record<Q3, number> = { cp: f.cpR - smp.cpR, h: f.hRT - smp.hRT, s: f.sR - smp.sR };
+    for (const q of Q3S) {
+      const lim = limitAt(tol, q, smp.cpR);
+      values[q].push([smp.T, d[q]]);
+      limits[q].push(lim);
+      worstRatio = Math.max(worstRatio, Math.abs(d[q]) / lim);
+    }
+  }
+  return { values, limits, worstRatio };
+}
+
 function polyLine(poly: Nasa7Polynomial, from: number, to: number, n: number, f: (T: number) => number): Array<[number, number]> {
   const out: Array<[number, number]> = [];
   for (let i = 0; i <= n; i++) {
@@ -147,7 +184,8 @@ export function renderSpeciesSection(input: ReportSpeciesInput): RenderedSpecies
     const pick = (q: 'cp' | 'h' | 's') =>
       m.low.maxAbs[q] >= m.high.maxAbs[q] ? { value: m.low.maxAbs[q], T: m.low.tAtMax[q] } : { value: m.high.maxAbs[q], T: m.high.tAtMax[q] };
     row.worst = { cp: pick('cp'), h: pick('h'), s: pick('s') };
-    row.worstRatio = Math.max(row.worst.cp.value / input.tolerances.cp, row.worst.h.value / input.tolerances.h, row.worst.s.value / input.tolerances.s);
+    const residuals = residualsOf(fit, computed, input.tolerances);
+    row.worstRatio = residuals.worstRatio;
     if (input.previous) {
       const prev = input.previous.polynomial;
       const lo = Math.max(prev.tLow, poly.tLow);
@@ -177,7 +215,7 @@ export function renderSpeciesSection(input: ReportSpeciesInput): RenderedSpecies
       if (d) row.deviation = d;
     }
     body.push(cpChart(input, poly, computed));
-    body.push(`<div class="residuals">${residualCharts(input, fit, computed)}</div>`);
+    body.push(`<div class="residuals">${residualCharts(input, fit, residuals)}${uncertaintyChart(input, poly)}</div>`);
   } else {
     body.push('<p class="nochart">No fit: the species failed before it could be fitted (errors below).</p>');
   }
@@ -256,34 +294,55 @@ function cpChart(input: ReportSpeciesInput, poly: Nasa7Polynomial, computed: Com
   });
 }
 
-function residualCharts(input: ReportSpeciesInput, fit: FitResult, computed: ComputedSpecies): string {
+function residualCharts(input: ReportSpeciesInput, fit: FitResult, residuals: Residuals): string {
   const poly = fit.polynomial;
-  const quantities: Array<{ key: 'cp' | 'h' | 's'; label: string; of: (s: { cpR: number; hRT: number; sR: number }) => number }> = [
-    { key: 'cp', label: 'Cp/R', of: (s) => s.cpR },
-    { key: 'h', label: 'H/RT', of: (s) => s.hRT },
-    { key: 's', label: 'S/R', of: (s) => s.sR },
-  ];
-  return quantities
-    .map((q) => {
-      const res = computed.samples.map((s) => [s.T, q.of(evaluateNasa7(poly, s.T)) - q.of(s)] as const);
-      const tol = input.tolerances[q.key];
-      return renderChart({
-        title: `${input.name}: residual of ${q.label}, fit − computed`,
-        xLabel: 'T [K]',
-        yLabel: `Δ ${q.label} [–]`,
-        width: RES_W,
-        height: RES_H,
-        series: [
-          { kind: 'band', style: 'limit', label: `limit ±${sig(tol)}`, points: [[poly.tLow, -tol, tol], [poly.tHigh, -tol, tol]] },
-          { kind: 'line', style: 'residual', label: 'fit − computed', points: decimateEnvelope(res, 90) },
-        ],
-        markers: [{ x: poly.tMid, label: 'T_mid' }],
-        yInclude: [0],
-        className: 'residual',
-        legend: 'above',
-      });
-    })
-    .join('');
+  const label: Record<Q3, string> = { cp: 'Cp/R', h: 'H/RT', s: 'S/R' };
+  const scaled = input.tolerances.relative_to_cp !== undefined;
+  return Q3S.map((q) => {
+    const res = residuals.values[q];
+    const lims = residuals.limits[q];
+    // The limit band follows the size-scaled limit; ~60 points draw it exactly enough (it is smooth in T).
+    const stride = Math.max(1, Math.ceil(res.length / 60));
+    const band = res
+      .map((p, i) => [p[0], -lims[i]!, lims[i]!] as const)
+      .filter((_, i) => i % stride === 0 || i === res.length - 1);
+    const lo = Math.min(...lims);
+    const hi = Math.max(...lims);
+    const limitLabel = scaled && hi > lo * 1.0001 ? `limit ±${sig(lo)}…${sig(hi)}` : `limit ±${sig(hi)}`;
+    return renderChart({
+      title: `${input.name}: residual of ${label[q]}, fit − computed`,
+      xLabel: 'T [K]',
+      yLabel: `Δ ${label[q]} [–]`,
+      width: RES_W,
+      height: RES_H,
+      series: [
+        { kind: 'band', style: 'limit', label: limitLabel, points: band },
+        { kind: 'line', style: 'residual', label: 'fit − computed', points: decimateEnvelope(res, 90) },
+      ],
+      markers: [{ x: poly.tMid, label: 'T_mid' }],
+      yInclude: [0],
+      className: 'residual',
+      legend: 'above',
+    });
+  }).join('');
+}
+
+/** u(Cp°) over the range, for species that declare input uncertainties (the band on Cp/R is thin). */
+function uncertaintyChart(input: ReportSpeciesInput, poly: Nasa7Polynomial): string {
+  const u = input.uncertainty;
+  if (!u || u.inputs.length === 0) return '';
+  return renderChart({
+    title: `${input.name}: propagated standard uncertainty of Cp°`,
+    xLabel: 'T [K]',
+    yLabel: 'u(Cp°) [J/(mol K)]',
+    width: RES_W,
+    height: RES_H,
+    series: [{ kind: 'line', style: 'residual', label: 'u(Cp°), linear propagation', points: u.cpBand.map((b) => [b.T, b.u] as const) }],
+    markers: [{ x: poly.tMid, label: 'T_mid' }],
+    yInclude: [0],
+    className: 'uncertainty',
+    legend: 'above',
+  });
 }
 
 const fmtDiff = (d: LargestDifference | undefined) =>
@@ -295,7 +354,9 @@ function facts(input: ReportSpeciesInput, row: ReportRow): string {
   if (row.worst) {
     for (const [q, label] of [['cp', 'Cp/R'], ['h', 'H/RT'], ['s', 'S/R']] as const) {
       const w = row.worst[q];
-      items.push([`worst |Δ ${label}|`, `${sig(w.value)} at ${sig(w.T, 5)} K (limit ${sig(input.tolerances[q])})`]);
+      const cpAt = input.computed?.samples.find((x) => x.T === w.T)?.cpR;
+      const lim = cpAt !== undefined ? limitAt(input.tolerances, q, cpAt) : input.tolerances[q];
+      items.push([`worst |Δ ${label}|`, `${sig(w.value)} at ${sig(w.T, 5)} K (limit there ${sig(lim)})`]);
     }
   }
   if (input.computed) {
@@ -323,10 +384,23 @@ function uncertaintyTable(u: SpeciesUncertainty): string {
       return `<tr><td>${sig(p.T, 5)}</td>${cells.join('')}</tr>`;
     })
     .join('');
+  // Beyond sampling error (≈ 1/√(2N) relative) and this margin, the model is not linear over ±u there.
+  const disagree = (mc: number, lin: number, n: number) => lin > 0 && Math.abs(mc - lin) / lin > Math.max(0.2, 3 / Math.sqrt(2 * n));
+  const flagged: string[] = [];
   const mc = u.monteCarlo?.length
     ? `<p class="mc">Monte Carlo check (${u.monteCarlo[0]!.samples} samples, seed ${u.monteCarlo[0]!.seed}): ${u.monteCarlo
-        .map((m) => `${sig(m.T, 5)} K: u(Cp°) ${sig(m.cp, 3)}, u(S°) ${sig(m.s, 3)}, u(H°−H°298) ${sig(m.hMinusH298, 3)}`)
-        .join(' · ')}</p>`
+        .map((m) => {
+          const lin = u.points.find((p) => p.T === m.T);
+          for (const q of ['cp', 's', 'hMinusH298', 'h'] as const) {
+            if (lin && disagree(m[q], lin[q], m.samples)) flagged.push(`${Q_LABEL[q]} at ${sig(m.T, 5)} K`);
+          }
+          return `${sig(m.T, 5)} K: u(Cp°) ${sig(m.cp, 3)}, u(S°) ${sig(m.s, 3)}, u(H°−H°298) ${sig(m.hMinusH298, 3)}`;
+        })
+        .join(' · ')}</p>${
+        flagged.length
+          ? `<p class="warning">Monte Carlo and linear propagation disagree (${flagged.join(', ')}): the model is not linear over ±u there; do not trust the linear figure.</p>`
+          : ''
+      }`
     : '';
   const none = u.inputs.length === 0 ? '<p class="warning">This species declares no input uncertainties: every u below is zero, not "known exactly".</p>' : '';
   const inputs = u.inputs.length

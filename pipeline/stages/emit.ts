@@ -21,6 +21,8 @@ import { formatNasa7File } from '../../src/nasa7/format.js';
 import { roundForRecord } from '../../src/nasa7/round.js';
 import type { FitMetrics, FitResult, Nasa7Polynomial, Nasa7Record, RangeMetrics } from '../../src/nasa7/types.js';
 import type { ComputedSpecies } from './compute.js';
+import type { SpeciesUncertainty } from '../../src/uncertainty/types.js';
+import { uncertaintyJson } from './uncertainty.js';
 import type { DatabaseSettings } from '../core/settings.js';
 import { standardPressurePa } from '../core/settings.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from '../core/version.js';
@@ -74,6 +76,8 @@ export interface BuiltSpecies {
   fit: FitResult;
   /** Computed properties on the table grid (empty when tables are not written). */
   table: StandardProperties[];
+  /** Propagated uncertainties (pipeline/stages/uncertainty.ts); zeros when the species declares none. */
+  uncertainty?: SpeciesUncertainty;
 }
 
 /** Code-point order (not locale order), so that the output never depends on the machine's locale. */
@@ -159,6 +163,7 @@ export function speciesJson(b: BuiltSpecies) {
     },
     input_hash: b.inputHash,
     sources: [...b.species.sources],
+    ...(b.uncertainty ? { uncertainty: uncertaintyJson(b.uncertainty) } : {}),
   };
 }
 

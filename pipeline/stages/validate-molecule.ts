@@ -47,6 +47,8 @@ export interface MolecularPart {
   opticalIsomers?: number;
   /** False when any rotor is unusable (reported). */
   rotorsOk: boolean;
+  /** What came from the geometry, for the model summary (absent without a geometry). */
+  geometryNotes?: string[];
   /** Diagnostics located in another file (the XYZ file), to be added to the species' own. */
   external: Diagnostic[];
 }
@@ -289,7 +291,7 @@ function readRotorAxis(
   at: (field?: string) => Segment[],
   report: Reporter,
   geometry: GeometryReading,
-): { rotationalConstant: number; symmetryNumber: number } | undefined {
+): { rotationalConstant: number; symmetryNumber: number; reducedMoment: number; twoBodyMoment: number; top: number[] } | undefined {
   const axis = item.axis;
   const top = item.top;
   if (!geometry.given) {
@@ -334,7 +336,7 @@ function readRotorAxis(
       });
       return undefined;
     }
-    return { rotationalConstant: rotationalConstantOfMoment(t.reducedMoment), symmetryNumber: t.symmetryNumber };
+    return { rotationalConstant: rotationalConstantOfMoment(t.reducedMoment), symmetryNumber: t.symmetryNumber, reducedMoment: t.reducedMoment, twoBodyMoment: t.twoBodyMoment, top: t.top };
   } catch (e) {
     if (!(e instanceof GeometryError)) throw e;
     const onTop = e.code === 'rotor-top-both-sides' || e.code === 'rotor-top-incomplete';
@@ -357,7 +359,14 @@ function readRotorAxis(
  * diagonalise; warnings for a rotor on a linear molecule, a symmetry number that does not divide the
  * foldedness or differs from the geometry's, and an implausibly large rotational constant.
  */
-function readInternalRotors(input: Obj, prefix: Segment[], report: Reporter, structure: 'linear' | 'nonlinear', geometry: GeometryReading): { rotors?: InternalRotor[]; ok: boolean } {
+function readInternalRotors(
+  input: Obj,
+  prefix: Segment[],
+  report: Reporter,
+  structure: 'linear' | 'nonlinear',
+  geometry: GeometryReading,
+  notes: string[],
+): { rotors?: InternalRotor[]; ok: boolean } {
   const raw = input.internal_rotors;
   if (raw === undefined) return { ok: true };
   if (!Array.isArray(raw) || raw.length === 0) return { ok: false };
@@ -412,6 +421,11 @@ function readInternalRotors(input: Obj, prefix: Segment[], report: Reporter, str
       return;
     }
     const fromAxis = hasAxis ? readRotorAxis(item, at, report, geometry) : undefined;
+    if (fromAxis) {
+      notes.push(
+        `rotor ${i + 1} about atoms ${(item.axis as number[]).join('-')}: top ${fromAxis.top.map((k) => k + 1).join(', ')}, reduced moment ${fmt(fromAxis.reducedMoment)} amu*angstrom^2 (Pitzer I(2,3); two-body ${fmt(fromAxis.twoBodyMoment)}), rotor symmetry number ${fromAxis.symmetryNumber} from the geometry`,
+      );
+    }
     const b = hasAxis ? fromAxis?.rotationalConstant : hasB ? rotational(item.rotational_constant) : rotationalFromInertia(item.moment_of_inertia);
     const given = isPositiveInteger(item.symmetry_number) ? item.symmetry_number : undefined;
     if (item.symmetry_number === undefined && !hasAxis) {
@@ -478,6 +492,7 @@ function readInternalRotors(input: Obj, prefix: Segment[], report: Reporter, str
  */
 export function normaliseMolecularPart(input: Obj, at: Segment[], report: Reporter, context: MoleculeContext): MolecularPart {
   const external: Diagnostic[] = [];
+  const notes: string[] = [];
   const { structure } = context;
   const geometry = readGeometry(input, at, report, context, external);
   const given = readGivenRotation(input, at, report, structure, geometry.given);
@@ -495,6 +510,9 @@ export function normaliseMolecularPart(input: Obj, at: Segment[], report: Report
     } else {
       fromGeometrySigma = rotationalSymmetryNumber(geometry.atoms);
       const computed = rigid.rotationalConstants;
+      notes.push(
+        `geometry of ${geometry.atoms.length} atoms: principal moments ${rigid.moments.map((m) => fmt(m)).join(', ')} amu*angstrom^2, rotational constants ${computed.map(fmt).join(', ')} cm-1 (${given === undefined ? 'used' : 'the given constants agree within 0.5 % and are used'}), symmetry number ${fromGeometrySigma}`,
+      );
       if (given === undefined) rotationalConstants = computed;
       else if (given.length === computed.length) {
         const sorted = structure === 'nonlinear' ? given.slice().sort((a, b) => b - a) : given;
@@ -526,11 +544,12 @@ export function normaliseMolecularPart(input: Obj, at: Segment[], report: Report
     });
   }
   if (rawSigma === undefined && geometry.given && fromGeometrySigma === undefined) symmetryNumber = undefined;
-  const rotors = readInternalRotors(input, at, report, structure, geometry);
+  const rotors = readInternalRotors(input, at, report, structure, geometry, notes);
   const out: MolecularPart = { rotorsOk: rotors.ok, external };
   if (rotationalConstants) out.rotationalConstants = rotationalConstants;
   if (symmetryNumber !== undefined) out.symmetryNumber = symmetryNumber;
   if (rotors.rotors) out.internalRotors = rotors.rotors;
   if (isPositiveInteger(input.optical_isomers) && input.optical_isomers > 1) out.opticalIsomers = input.optical_isomers;
+  if (notes.length > 0) out.geometryNotes = notes;
   return out;
 }

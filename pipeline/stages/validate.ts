@@ -472,6 +472,7 @@ function readMolecularPart(ctx: Ctx): PolyatomicMolecularPart | undefined {
     vibrations,
     ...(internal.rotors ? { internalRotors: internal.rotors } : {}),
     ...(molecule.opticalIsomers ? { opticalIsomers: molecule.opticalIsomers } : {}),
+    ...(molecule.geometryNotes ? { geometryNotes: molecule.geometryNotes } : {}),
     ...(scale ? { vibrationScaleFactor: scale } : {}),
     ...(anharmonicity ? { anharmonicity } : {}),
     ...(cd.centrifugal ? { centrifugalDistortion: cd.centrifugal } : {}),

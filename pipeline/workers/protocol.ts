@@ -22,6 +22,8 @@ export interface WorkerInit {
   codeFingerprint: string;
   /** TEST-ONLY (test/pipeline/workers.test.ts): the worker exits abruptly when it reaches this species. */
   testCrashOn?: string;
+  /** Monte Carlo samples of the uncertainty check (build --uncertainty-samples). */
+  uncertaintySamples?: number;
 }
 
 export interface BatchRequest {

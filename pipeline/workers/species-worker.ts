@@ -14,6 +14,7 @@ import type { BatchRequest, WorkerInit, WorkerReply } from './protocol.js';
 const init = workerData as WorkerInit;
 useCodeFingerprint(init.codeFingerprint);
 const cache = new StageCache(init.cacheDir);
+const uncertaintyOptions = init.uncertaintySamples !== undefined ? { uncertaintySamples: init.uncertaintySamples } : {};
 const limits: LimitSource = {
   settingsSetAt: (segments) => init.limits.setAt[segments.join('.')],
   ...(init.limits.settingsFile !== undefined ? { settingsFile: init.limits.settingsFile } : {}),
@@ -26,7 +27,7 @@ parentPort!.on('message', (req: BatchRequest) => {
       const outcomes = [];
       for (const v of req.species) {
         if (init.testCrashOn !== undefined && v.name === init.testCrashOn) process.exit(70);
-        outcomes.push(await buildOneSpecies(v, init.settings, cache, limits));
+        outcomes.push(await buildOneSpecies(v, init.settings, cache, limits, uncertaintyOptions));
       }
       reply = { id: req.id, outcomes };
       if (cache.writeProblem !== undefined) reply.cacheWriteProblem = cache.writeProblem;

@@ -100,6 +100,7 @@ function polyatomicInternal(
     contributions.push(`rigid rotor, nonlinear, classical (A, B, C = ${abc.join(', ')} cm-1, sigma = ${sigma})`);
     rotor = (grid, into) => addNonlinearRotorGrid(abc, sigma, grid, into);
   }
+  if (species.geometryNotes) contributions.push(...species.geometryNotes);
   const vibrationAt = vibrationFactor(species, contributions);
   // Plain harmonic oscillators have a grid form (the same formula); the other vibration models run per T.
   const harmonic = species.anharmonicity === undefined && species.centrifugalDistortion === undefined;

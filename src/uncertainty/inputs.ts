@@ -71,12 +71,23 @@ export function uncertainInputs(species: Species): PerturbableInput[] {
     });
   }
   if (species.structure === 'diatomic') {
+    // States that repeat the same constant (e.g. the two spin-orbit components of one term) share one
+    // physical value: they move together, as one input named after all of them.
+    const shared = (key: 'we' | 'Be' | 'wexe', rel: number | undefined, label: string) => {
+      const groups = new Map<number, number[]>();
+      species.electronicStates.forEach((st, m) => groups.set(st[key], [...(groups.get(st[key]) ?? []), m]));
+      for (const [value, members] of groups) {
+        const terms = members.map((m) => species.electronicStates[m]!.term).join(',');
+        add(`${label}[${terms}]`, value, rel !== undefined ? rel * Math.abs(value) : undefined, 'cm-1', (sp, d) => {
+          for (const m of members) (sp as typeof species).electronicStates[m]![key] += d;
+        });
+      }
+    };
+    shared('we', u.vibrationsRelative, 'we');
+    shared('Be', u.rotationalConstantsRelative, 'Be');
+    shared('wexe', u.anharmonicRelative, 'wexe');
     species.electronicStates.forEach((st, m) => {
-      const state = (sp: Species) => (sp as typeof species).electronicStates[m]!;
-      add(`we[${st.term}]`, st.we, u.vibrationsRelative !== undefined ? u.vibrationsRelative * st.we : undefined, 'cm-1', (sp, d) => (state(sp).we += d));
-      add(`Be[${st.term}]`, st.Be, u.rotationalConstantsRelative !== undefined ? u.rotationalConstantsRelative * st.Be : undefined, 'cm-1', (sp, d) => (state(sp).Be += d));
-      add(`wexe[${st.term}]`, st.wexe, u.anharmonicRelative !== undefined ? u.anharmonicRelative * Math.abs(st.wexe) : undefined, 'cm-1', (sp, d) => (state(sp).wexe += d));
-      if (st.energy > 0) add(`Te[${st.term}]`, st.energy, u.electronicEnergies, 'cm-1', (sp, d) => (state(sp).energy += d));
+      if (st.energy > 0) add(`Te[${st.term}]`, st.energy, u.electronicEnergies, 'cm-1', (sp, d) => ((sp as typeof species).electronicStates[m]!.energy += d));
     });
   } else {
     species.electronicLevels.forEach((l, k) => {

@@ -44,7 +44,7 @@ export function propagateUncertainty(species: Species, physics: Partial<PhysicsO
     points: options.temperatures.map((T, k) => pointAt(k, T)),
     cpBand: band.map((T, j) => ({ T, u: pointAt(options.temperatures.length + j, T).cp })),
   };
-  if (options.monteCarlo && options.monteCarlo.samples > 1) {
+  if (options.monteCarlo && options.monteCarlo.samples > 1 && inputs.length > 0) {
     result.monteCarlo = monteCarlo(species, physics, inputs, options.temperatures, options.monteCarlo.samples, options.monteCarlo.seed);
   }
   return result;

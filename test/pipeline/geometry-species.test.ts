@@ -65,6 +65,9 @@ describe('a torsion from the geometry (Pitzer reduced moment, hindered-rotor lev
     const s = await speciesFrom(c.file);
     expect(s.symmetryNumber).toBe(c.sigma);
     expect(s.internalRotors![0]!.symmetryNumber).toBe(c.rotorSigma);
+    const summary = createThermoEvaluator(s).summary.contributions.join('\n');
+    expect(summary).toContain(`symmetry number ${c.sigma}`);
+    expect(summary).toMatch(/reduced moment [0-9.]+ amu\*angstrom\^2 \(Pitzer I\(2,3\); two-body [0-9.]+\)/);
     const p = at298(s);
     expect(Math.abs(p.S - c.S)).toBeLessThan(0.4);
     expect(Math.abs(p.Cp - c.Cp)).toBeLessThan(0.6);

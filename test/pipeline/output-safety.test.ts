@@ -35,7 +35,8 @@ describe('a build never deletes its own inputs', () => {
     const same = await build(['db', '--out', 'db']);
     expect(same.code).toBe(2);
     expect(same.stderr).toMatch(/database folder db is the output folder/);
-    expect((await readdir(ws.db)).sort()).toEqual(['Ar.yaml', 'CO.yaml', 'H2O.yaml', 'N2.yaml', 'O.yaml', 'qforge.yaml', 'reference']);
+    // The default cache lives inside the database folder (.qforge-cache); the species files are untouched.
+    expect((await readdir(ws.db)).filter((f) => f !== '.qforge-cache').sort()).toEqual(['Ar.yaml', 'CO.yaml', 'H2O.yaml', 'N2.yaml', 'O.yaml', 'qforge.yaml', 'reference']);
     expect(inside.stderr + same.stderr).not.toMatch(/internal error|at \w+ \(/);
   });
 

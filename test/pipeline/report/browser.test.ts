@@ -21,8 +21,9 @@ describe.skipIf(!available)('the demo report in headless Chromium', () => {
   let ws: Awaited<ReturnType<typeof tempWorkspace>>;
   beforeAll(async () => {
     ws = await tempWorkspace();
-    const r = await runCli(['build', path.join(REPO, 'species'), '--out', 'demo', '--report', '--no-cache', '-q'], ws.root);
-    expect(r.code, r.stderr).toBe(0);
+    // --keep-going: a species failing its fit check must not hide the report (it then shows as FAILED).
+    const r = await runCli(['build', path.join(REPO, 'species'), '--out', 'demo', '--report', '--keep-going', '-q'], ws.root);
+    expect(r.code, r.stderr).toBeLessThanOrEqual(1);
   });
   afterAll(async () => {
     await ws?.cleanup();
@@ -47,9 +48,11 @@ describe.skipIf(!available)('the demo report in headless Chromium', () => {
       });
       await page.goto(reportUrl, { waitUntil: 'load' });
       expect(await page.locator('svg.chart.cp').count()).toBe(db.species.length);
-      for (const s of db.species) {
-        await expect(page.locator(`section.species[data-name="${s.name}"] svg.chart.cp`).count()).resolves.toBe(1);
-      }
+      // One Cp chart in the section of every species that was built (failed species have a section without).
+      const perSection = await page.$$eval('section.species', (els) =>
+        els.filter((e) => e.querySelector('.badge.ok')).map((e) => [e.getAttribute('data-name'), e.querySelectorAll('svg.chart.cp').length]),
+      );
+      expect(perSection).toEqual(db.species.map((s) => [s.name, 1]));
       // Charts are laid out at their size (not collapsed) and the overview links resolve to sections.
       const box = await page.locator('svg.chart.cp').first().boundingBox();
       expect(box!.width).toBeGreaterThan(500);

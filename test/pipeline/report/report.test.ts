@@ -90,14 +90,15 @@ describe('overview', () => {
   });
 });
 
+let ws: Awaited<ReturnType<typeof tempWorkspace>>;
+beforeEach(async () => {
+  ws = await tempWorkspace();
+});
+afterEach(async () => {
+  await ws.cleanup();
+});
+
 describe('qforge build --report', () => {
-  let ws: Awaited<ReturnType<typeof tempWorkspace>>;
-  beforeEach(async () => {
-    ws = await tempWorkspace();
-  });
-  afterEach(async () => {
-    await ws.cleanup();
-  });
 
   it('writes report.html into the build folder, lists it in the marker, and rewrites it byte for byte', async () => {
     const r = await runCli(['build', 'db', '--out', 'out', '--report', '-q'], ws.root);
@@ -140,5 +141,37 @@ describe('qforge build --report', () => {
     const bad = await runCli(['build', 'db', '--out', 'out3', '--report-against', 'nowhere', '-q'], ws.root);
     expect(bad.code).toBe(2);
     expect(bad.stderr).toMatch(/nowhere/);
+  });
+});
+
+describe('report pages and failures through the runner', () => {
+
+  it('beyond the inline limit writes one page per species, all listed in the marker', async () => {
+    const { runBuild } = await import('../../../pipeline/runner.js');
+    const r = await runBuild({ dir: ws.db, out: ws.out, cacheDir: null, report: { inlineLimit: 2 } });
+    expect(r.exitCode).toBe(0);
+    const pages = (await readdir(path.join(ws.out, 'report'))).sort();
+    expect(pages).toEqual(['Ar.html', 'CO.html', 'H2O.html', 'N2.html', 'O.html']);
+    const marker = await readFile(path.join(ws.out, '.qforge-build'), 'utf8');
+    for (const p of pages) expect(marker).toContain(`report/${p}\n`);
+    const main = await readFile(path.join(ws.out, 'report.html'), 'utf8');
+    expect(main).not.toContain('<svg class="chart cp"');
+    expect(main).toContain('href="report/CO.html#sp-CO"');
+    expect(await readFile(path.join(ws.out, 'report/CO.html'), 'utf8')).toContain('<svg class="chart cp"');
+    // The pages belong to the build: the next build replaces them (and drops them without --report).
+    expect((await runBuild({ dir: ws.db, out: ws.out, cacheDir: null })).exitCode).toBe(0);
+    expect(await readdir(ws.out)).not.toContain('report');
+  });
+
+  it('with --keep-going lists a document that failed validation and keeps the good species', async () => {
+    const { writeFile } = await import('node:fs/promises');
+    await writeFile(path.join(ws.db, 'Bad.yaml'), 'name: Bad\ncomposition: {Xx: 1}\nstructure: atom\n');
+    const r = await runCli(['build', 'db', '--out', 'out', '--report', '--keep-going', '-q'], ws.root);
+    expect(r.code).toBe(1);
+    const html = await readFile(path.join(ws.out, 'report.html'), 'utf8');
+    expect(html).toContain('Documents that failed validation');
+    expect(html).toMatch(/Bad\.yaml#1: /);
+    expect(html.match(/<svg class="chart cp"/g)?.length).toBe(5);
+    expect(html).toContain('build status partial');
   });
 });

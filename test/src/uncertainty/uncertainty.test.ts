@@ -8,7 +8,7 @@
 import { derivative } from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import { C2_CM_K, GAS_CONSTANT, T_REF } from '../../../src/constants.js';
-import type { Species } from '../../../src/model.js';
+import type { NonlinearSpecies, Species } from '../../../src/model.js';
 import {
   centralDifference,
   harmonicWavenumberDerivatives,
@@ -21,7 +21,7 @@ const R = GAS_CONSTANT;
 const physics = { standardPressure: 1e5 };
 
 /** Hand-written nonlinear species with one vibration (values chosen for the test, water-like). */
-function oneOscillator(wavenumber = 1594.6): Species {
+function oneOscillator(wavenumber = 1594.6): NonlinearSpecies {
   return {
     name: 'X1',
     composition: { H: 2, O: 1 },
@@ -39,7 +39,7 @@ function oneOscillator(wavenumber = 1594.6): Species {
 }
 
 /** Hand-written water-like species with three vibrations and several uncertain inputs. */
-function waterLike(): Species {
+function waterLike(): NonlinearSpecies {
   return {
     ...oneOscillator(),
     vibrations: [

@@ -28,7 +28,7 @@ import { discoverSpeciesFiles, loadYamlFile, type LoadedDocument } from './stage
 import { planSpecies, type SpeciesPlan } from './core/plan.js';
 import { checkSpeciesSampling, loadSettings, type DatabaseSettings, type FitTolerancesSetting } from './core/settings.js';
 import { checkUniqueNames, validateSpecies } from './stages/validate.js';
-import { verifySpecies } from './stages/verify.js';
+import { classicalCpFloor, verifySpecies } from './stages/verify.js';
 import { computeUncertainty } from './stages/uncertainty.js';
 import { fitLimitOrigin, toleranceKeyPositions } from './stages/limit-origin.js';
 import { codeFingerprint } from './storage/code-fingerprint.js';
@@ -472,7 +472,7 @@ export async function buildOneSpecies(
   if (!fit) return out;
 
   const tv = performance.now();
-  const violations = verifySpecies(fit, computed.samples, plan.tolerances, fitOptions.continuityOrder, where);
+  const violations = verifySpecies(fit, computed.samples, plan.tolerances, fitOptions.continuityOrder, classicalCpFloor(v.species.structure), where);
   out.timings.verify = performance.now() - tv;
   if (violations.length) {
     out.diagnostics.push(...violations.map((d) => locateFitViolation(d, plan.tolerances, limitSource, v)));

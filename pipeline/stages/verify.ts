@@ -7,15 +7,22 @@ import type { FitResult, FitSample } from '../../src/nasa7/types.js';
 import type { Diagnostic } from '../core/diagnostics.js';
 import type { FitTolerancesSetting } from '../core/settings.js';
 
+/** Classical Cp/R of translation plus fully excited rotation, by structure. */
+export function classicalCpFloor(structure: string): number {
+  return structure === 'atom' ? 2.5 : structure === 'nonlinear' ? 4 : 3.5;
+}
+
 export function verifySpecies(
   fit: FitResult,
   samples: readonly FitSample[],
   tolerances: FitTolerancesSetting,
   continuityOrder: 1 | 2,
+  /** Classical Cp/R floor of the structure (5/2 atom, 7/2 linear or diatomic, 4 nonlinear). */
+  cpFloor: number,
   where: { file: string; species: string; line?: number; column?: number },
 ): Diagnostic[] {
   const { relative_to_cp: perCp, cp, h, s } = tolerances;
-  const violations = assessFit(fit, samples, { cp, h, s, perCp: { ...perCp }, continuityOrder });
+  const violations = assessFit(fit, samples, { cp, h, s, perCp: { ...perCp }, continuityOrder, cpFloor });
   return violations.map((v) => ({
     severity: 'error' as const,
     code: `fit-${v.quantity}`,

@@ -67,11 +67,14 @@ export function optimiseMid(samples: readonly FitSample[], anchor: FitSample, op
     let refined: { result: FitResult; score: number } | undefined;
     const nearestFixed = [...scored].sort((a, b) => Math.abs(a.tMid - options.tMid) - Math.abs(b.tMid - options.tMid))[0]!;
     const chosen = new Set([nearestFixed.tMid, ...ranked.slice(0, MINIMAX_CANDIDATES - 1).map((c) => c.tMid)]);
-    for (const tMid of [...chosen].sort((a, b) => a - b)) {
+    // The fixed midpoint first; another candidate must beat it by more than rounding noise (an atom's exact
+    // fit scores ~1e-12 everywhere and keeps the fixed midpoint).
+    const order = [nearestFixed.tMid, ...[...chosen].filter((t) => t !== nearestFixed.tMid).sort((a, b) => a - b)];
+    for (const tMid of order) {
       try {
         const result = fitAtFixedMid(samples, anchor, { ...options, tMid }, temperatures);
         const score = result.solver?.worstLimitRatio ?? ratioOf(result, samples, options);
-        if (!refined || score < refined.score) refined = { result, score };
+        if (!refined || score < refined.score * (1 - 1e-6) - 1e-9) refined = { result, score };
       } catch (e) {
         if (!(e instanceof FitError)) throw e;
       }

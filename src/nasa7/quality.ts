@@ -49,8 +49,16 @@ export interface FitTolerances {
   extrapolationSmoothness: number;
   /** 2 → also check d²Cp/dT² continuity (when the fit was made with continuityOrder 2). */
   continuityOrder: 1 | 2;
-  /** How far beyond each end Cp is checked, K. */
+  /** How far above the high end Cp is checked, K. */
   extrapolation: number;
+  /** How far below the low end Cp is checked, K (20 K: a large molecule's Cp falls fast at low T). */
+  extrapolationBelow: number;
+  /**
+   * Least Cp/R of the structure's classical limit: 5/2 atom, 7/2 linear, 4 nonlinear (translation plus
+   * fully excited rotation; vibration only adds). The floor checked is min(this, least computed Cp/R)
+   * less the Cp limit there, so a quantum rotor below its classical limit (H2 near 200 K) is not flagged.
+   */
+  cpFloor: number;
 }
 
 /**
@@ -66,6 +74,8 @@ export const DEFAULT_FIT_TOLERANCES: Readonly<FitTolerances> = Object.freeze({
   extrapolationSmoothness: 0.1,
   continuityOrder: 1,
   extrapolation: 100,
+  extrapolationBelow: 20,
+  cpFloor: 2.5,
 });
 
 export type FitViolationQuantity =
@@ -240,7 +250,7 @@ function where(poly: Nasa7Polynomial, T: number): 'low' | 'high' | 'extrapolatio
 }
 
 function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
-  const from = Math.max(poly.tLow - tol.extrapolation, 1);
+  const from = Math.max(poly.tLow - tol.extrapolationBelow, 1);
   const to = poly.tHigh + tol.extrapolation;
   const n = Math.max(2, Math.ceil((to - from) / 5));
   const ts: number[] = [];
@@ -251,7 +261,10 @@ function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: 
 
   let positive: FitViolation | undefined;
   let floor: FitViolation | undefined;
-  const floorLimit = 2.5 - tol.cp;
+  let leastData = Infinity;
+  for (const smp of samples) if (smp.T >= poly.tLow && smp.T <= poly.tHigh && smp.cpR < leastData) leastData = smp.cpR;
+  const floorBase = Math.min(tol.cpFloor, leastData);
+  const floorLimit = floorBase - limitAt({ absolute: tol.cp, perCp: tol.perCp.cp }, floorBase);
   cps.forEach((cp, i) => {
     const T = ts[i]!;
     if (!(cp > 0) && !positive) {
@@ -263,7 +276,7 @@ function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: 
         T,
         value: cp,
         limit: floorLimit,
-        message: `Cp/R of the fit falls to ${fmt(cp)} at ${fmt(T)} K (${where(poly, T)}), ${fmt(floorLimit - cp)} below the ideal-gas minimum 5/2 less the tolerance ${fmt(tol.cp)}`,
+        message: `Cp/R of the fit falls to ${fmt(cp)} at ${fmt(T)} K (${where(poly, T)}), ${fmt(floorLimit - cp)} below the floor ${fmt(floorLimit)} (${floorBase === tol.cpFloor ? `the structure's classical minimum ${fmt(tol.cpFloor)}` : `the least computed Cp/R ${fmt(floorBase)}`} less the Cp limit)`,
       };
     }
   });
@@ -317,14 +330,16 @@ function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: 
       const retreat = dir * (best - cp);
       if (slope !== 0 && retreat > worst.retreat) worst = { retreat, T, turn: bestT };
     }
-    if (worst.retreat > tol.extrapolationSmoothness) {
+    // Scaled like the error limits: a large molecule's fit may bend by more in absolute terms.
+    const turnLimit = Math.max(tol.extrapolationSmoothness, tol.perCp.cp * evaluateRange(coeffs, tEnd).cpR);
+    if (worst.retreat > turnLimit) {
       out.push({
         quantity: 'cp-wiggle',
         range: 'extrapolation',
         T: worst.turn,
         value: worst.retreat,
-        limit: tol.extrapolationSmoothness,
-        message: `Cp/R of the fit turns over at ${fmt(worst.turn)} K, ${fmt(Math.abs(worst.turn - tEnd))} K beyond T_${end === 'low' ? 'low' : 'high'} = ${fmt(tEnd)} K, and turns back by ${fmt(worst.retreat)} by ${fmt(worst.T)} K; limit ${fmt(tol.extrapolationSmoothness)} within ${tol.extrapolation} K of the range`,
+        limit: turnLimit,
+        message: `Cp/R of the fit turns over at ${fmt(worst.turn)} K, ${fmt(Math.abs(worst.turn - tEnd))} K beyond T_${end === 'low' ? 'low' : 'high'} = ${fmt(tEnd)} K, and turns back by ${fmt(worst.retreat)} by ${fmt(worst.T)} K; limit ${fmt(turnLimit)} within ${end === 'low' ? tol.extrapolationBelow : tol.extrapolation} K of the range`,
       });
     }
   }

@@ -72,20 +72,21 @@ describe('assessFit', () => {
   });
 
   it('a polynomial whose Cp turns over beyond the range is caught, even when it matches the data exactly', () => {
-    // written by hand for this test single polynomial (same set both sides, so continuous): Cp/R = 3.5 + 1e-4 (T − 150)², a
-    // minimum at 150 K, i.e. 50 K below tLow = 200 K; monotone over the data 200–2000 K.
-    const k = 1e-4;
-    const c: Coefficients7 = [3.5 + k * 150 * 150, -2 * k * 150, k, 0, 0, 0, 0];
+    // Written by hand for this test, one polynomial (same set both sides, so continuous): Cp/R = 3.5 +
+    // 2e-3 (T − 190)², a minimum at 190 K, i.e. 10 K below tLow = 200 K, inside the 20 K checked below the
+    // low end; monotone over the data 200–2000 K.
+    const k = 2e-3;
+    const c: Coefficients7 = [3.5 + k * 190 * 190, -2 * k * 190, k, 0, 0, 0, 0];
     const poly = { tLow: 200, tMid: 1000, tHigh: 2000, low: c, high: [...c] as Coefficients7 };
     const samples = grid(200, 2000, 10).map((T) => ({ T, ...evaluateNasa7(poly, T) }));
     const fit: FitResult = { ...fitN2, polynomial: poly, metrics: { ...fitN2.metrics, anchor: { h: 0, s: 0 } } };
     const v = assessFit(fit, samples);
-    expect(v.map((x) => [x.quantity, x.range, x.T])).toEqual([['cp-wiggle', 'extrapolation', 150]]);
+    expect(v.map((x) => [x.quantity, x.range, x.T])).toEqual([['cp-wiggle', 'extrapolation', 190]]);
     expect(v[0]!.message).toBe(
-      'Cp/R of the fit turns over at 150 K, 50 K beyond T_low = 200 K, and turns back by 0.25 by 100 K; limit 0.1 within 100 K of the range',
+      'Cp/R of the fit turns over at 190 K, 10 K beyond T_low = 200 K, and turns back by 0.2 by 180 K; limit 0.1 within 20 K of the range',
     );
-    // Checked only 40 K beyond the ends, the turn-over is out of sight.
-    expect(assessFit(fit, samples, { extrapolation: 40 })).toEqual([]);
+    // Checked only 5 K below the low end, the turn-over is out of sight.
+    expect(assessFit(fit, samples, { extrapolationBelow: 5 })).toEqual([]);
   });
 
   it('continuing a trend beyond the end is not a turn-over (a real Cp minimum inside the range, as for NO)', () => {
@@ -108,6 +109,18 @@ describe('assessFit', () => {
   it('Cp/R below the ideal-gas minimum 5/2 is reported', () => {
     const low = withHigh(fitN2, (c) => [c[0] - 2, c[1], c[2], c[3], c[4], c[5], c[6]]);
     const v = assessFit(low, samplesN2, { cp: 0.1, h: 1e9, s: 1e9, continuity: 1e9 });
-    expect(v.find((x) => x.quantity === 'cp-positive')?.message).toMatch(/below the ideal-gas minimum 5\/2/);
+    expect(v.find((x) => x.quantity === 'cp-positive')?.message).toMatch(/below the floor 2\.4 \(the structure's classical minimum 2\.5 less the Cp limit\)/);
+  });
+
+  it('the floor follows the structure: 7/2 for a linear molecule, but never above the computed Cp/R', () => {
+    // N2's high set starts near Cp/R 3.9 at 1000 K; lowering its a1 by 0.6 puts it near 3.3: below 7/2 − 0.1 for a
+    // linear molecule, fine for the atom floor 5/2, and fine when the data itself is that low (a quantum
+    // rotor such as H2 near 200 K has Cp/R ≈ 3.3 < 7/2; NIST-JANAF 4th ed. H-050, from memory).
+    const low = withHigh(fitN2, (c) => [c[0] - 0.6, c[1], c[2], c[3], c[4], c[5], c[6]]);
+    const loose = { cp: 1, h: 1e9, s: 1e9, continuity: 1e9, perCp: { cp: 0, h: 0, s: 0 } };
+    const floorOf = (cpFloor: number, data = samplesN2) => assessFit(low, data, { ...loose, cp: 0.1, cpFloor }).filter((x) => x.quantity === 'cp-positive');
+    expect(floorOf(3.5).length).toBe(1);
+    expect(floorOf(2.5)).toEqual([]);
+    expect(floorOf(3.5, samplesN2.map((s) => ({ ...s, cpR: s.cpR - 0.6 })))).toEqual([]);
   });
 });

@@ -66,6 +66,12 @@ Examples:
   qforge table species/O2.yaml --at 298.15,1000,2000
   qforge table test/fixtures/input/multi.yaml --name N2
   qforge table species/H2O.yaml --range 200:6000:100 --format csv > H2O.csv
+  qforge table build --name N2 --digits 6     the fitted polynomial a kinetics code reads
+  qforge table build/nasa7.txt --name N2 --at 298.15,1000
+
+A build folder or an 80-column file prints the fitted polynomial (same columns;
+H includes the enthalpy of formation, G = H - T S). Temperatures outside the
+record's fitted range are refused (exit 2); the default grid is cut to it.
 
 --name picks one species of a file holding several; a missing or wrong --name
 then is a usage error (exit 2), like a FILE that does not exist.`,
@@ -270,15 +276,16 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
 
   program
     .command('table')
-    .description("print one species' properties computed from its partition functions")
-    .argument('<file>', 'species YAML file')
+    .description("print one species' properties computed from its partition functions, or from the fitted polynomial of a build")
+    .argument('<file>', 'species YAML file, build folder or 80-column file')
     .option('-n, --name <name>', 'species to print when the file holds several')
     .option('--at <list>', 'comma-separated temperatures in K, e.g. 200,298.15,1000')
     .option('--range <from:to:step>', 'temperature grid in K, e.g. 200:6000:100')
     .addOption(new Option('--format <format>', 'output format').choices(['text', 'csv']).default('text'))
     .addOption(new Option('--pressure <p>', 'standard pressure').choices(['bar', 'atm']).default('bar'))
+    .option('--digits <n>', 'decimals printed (default 3)')
     .addHelpText('after', EXAMPLES.table)
-    .action(async (file: string, o: { name?: string; at?: string; range?: string; format: 'text' | 'csv'; pressure: 'bar' | 'atm' }) => {
+    .action(async (file: string, o: { name?: string; at?: string; range?: string; format: 'text' | 'csv'; pressure: 'bar' | 'atm'; digits?: string }) => {
       const { tableCommand } = await import('./commands/table.js');
       exitCode = await tableCommand(io, abs(file), file, o);
     });

@@ -313,8 +313,9 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('-t, --tolerance <limits>', 'largest accepted |deviation|: cp=J/(mol K),s=J/(mol K),h=kJ/mol', parseTriple)
     .option('--strict', 'ignore the known deviations of the settings: every value must meet the normal tolerance')
     .option('--json', 'print the report as JSON on stdout')
+    .option('-q, --quiet', 'print only the breaches and the summary line')
     .addHelpText('after', EXAMPLES.compare)
-    .action(async (build: string, o: { reference?: string[]; database?: string; tolerance?: { cp?: number; h?: number; s?: number }; strict?: boolean; json?: boolean }) => {
+    .action(async (build: string, o: { reference?: string[]; database?: string; tolerance?: { cp?: number; h?: number; s?: number }; strict?: boolean; json?: boolean; quiet?: boolean }) => {
       const { compareCommand } = await import('./commands/compare.js');
       exitCode = await compareCommand(io, abs(build), build, {
         ...o,

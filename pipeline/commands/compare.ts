@@ -9,7 +9,9 @@
  *   - an optional `species` column; without it, the file name without `.csv` is the species name
  *     (so `N2.csv` holds N2), which lets published tables be dropped in one per file;
  *   - lines starting with '#' are comments (name the source there); empty cells mean "no value";
- *   - every header cell must be one of these: an unrecognised one (`Cp (J/mol/K)`, `Cv [J/(mol K)]`, an
+ *   - columns compare knows but does not use (H, G, -(G-H298)/T, ΔfG, log Kf, and the fitted columns of
+ *     `build/tables/<name>.csv`, whose `computed` columns are read) are ignored and listed in a note;
+ *   - every other header cell must be one of these: an unrecognised one (`Cp (J/mol/K)`, `Cv [J/(mol K)]`, an
  *     empty cell), a property without a unit in brackets, or a header with no property column at all is an
  *     error naming the file, the header line and the column, with what is accepted. Units are never guessed;
  *   - messages give the line of the file (comment and blank lines counted), e.g. `N2.csv:5: ...`.
@@ -47,6 +49,7 @@ import {
 import { DEFAULT_SETTINGS, loadSettings, type KnownDeviation, type QuantityTriple } from '../core/settings.js';
 import { displayPath } from '../core/display-path.js';
 import { compareText } from '../core/text.js';
+import { referenceHeaderAlias } from './reference-columns.js';
 
 export type RefQuantity = 'cp' | 's' | 'h';
 const QS: readonly RefQuantity[] = ['cp', 's', 'h'];
@@ -67,6 +70,8 @@ export interface ReferenceRow {
 export interface ReferenceTable {
   file: string;
   species: Map<string, ReferenceRow[]>;
+  /** Header cells of columns compare recognises but does not use (see reference-columns.ts). */
+  ignoredColumns?: string[];
 }
 
 export class ReferenceError extends Error {
@@ -76,7 +81,7 @@ export class ReferenceError extends Error {
   }
 }
 
-type Column = { kind: 'T' } | { kind: 'species' } | { kind: RefQuantity; factor: number };
+type Column = { kind: 'T' } | { kind: 'species' } | { kind: 'ignored' } | { kind: RefQuantity; factor: number };
 
 const PROPERTY_NAMES: Record<string, RefQuantity> = { Cp: 'cp', S: 's', 'H-H298': 'h', 'H-H(298.15)': 'h', 'H-H298.15': 'h' };
 const ACCEPTED_HEADERS =
@@ -90,7 +95,9 @@ const EXAMPLE_HEADER = 'T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol]';
  * column nobody compared). Units are never guessed.
  */
 function parseHeaderCell(cell: string): Column | string {
-  const c = cell.trim();
+  const alias = referenceHeaderAlias(cell);
+  if (alias.ignored) return { kind: 'ignored' };
+  const c = alias.cell;
   if (c === '') return `empty header; every column needs one (${ACCEPTED_HEADERS})`;
   if (/^(species|name)$/i.test(c)) return { kind: 'species' };
   const m = /^(\S+?)\s*\[(.*)\]$/.exec(c);
@@ -164,7 +171,7 @@ export async function parseReferenceCsv(text: string, file: string): Promise<Ref
   const cols = parsed.map((c) => (typeof c === 'string' ? undefined : c));
   const kinds = cols.map((c) => c?.kind);
   kinds.forEach((k, j) => {
-    if (k !== undefined && kinds.indexOf(k) !== j) problems.push(`${file}:${headerLine}: column ${j + 1}: header '${header[j]}' repeats column ${kinds.indexOf(k) + 1} (each quantity once)`);
+    if (k !== undefined && k !== 'ignored' && kinds.indexOf(k) !== j) problems.push(`${file}:${headerLine}: column ${j + 1}: header '${header[j]}' repeats column ${kinds.indexOf(k) + 1} (each quantity once)`);
   });
   if (problems.length === 0) {
     if (!kinds.includes('T')) problems.push(`${file}:${headerLine}: no 'T [K]' column in the header; expected e.g. '${EXAMPLE_HEADER}'`);
@@ -217,7 +224,8 @@ export async function parseReferenceCsv(text: string, file: string): Promise<Ref
     const more = rowErrors.length > MAX_LISTED_ROW_ERRORS ? `\n(${rowErrors.length - MAX_LISTED_ROW_ERRORS} more bad row(s) not listed)` : '';
     throw new ReferenceError(rowErrors.slice(0, MAX_LISTED_ROW_ERRORS).join('\n') + more);
   }
-  return { file, species };
+  const ignoredColumns = header.filter((_, j) => kinds[j] === 'ignored');
+  return ignoredColumns.length ? { file, species, ignoredColumns } : { file, species };
 }
 
 /** An 80-column file as a reference: its records evaluated on a 100 K grid over the common range. */
@@ -537,7 +545,7 @@ export async function compareCommand(
   io: CliIo,
   buildPath: string,
   buildLabel: string,
-  o: { reference?: Array<{ path: string; label: string }>; database?: string; tolerance?: Partial<QuantityTriple>; strict?: boolean; json?: boolean },
+  o: { reference?: Array<{ path: string; label: string }>; database?: string; tolerance?: Partial<QuantityTriple>; strict?: boolean; json?: boolean; quiet?: boolean },
 ): Promise<number> {
   try {
     const build = await readPolynomialSet(buildPath, buildLabel);
@@ -577,8 +585,11 @@ export async function compareCommand(
     for (const r of refs) tables.push(await loadReference(r, build));
     const report = compareWithReferences(build, tables, tolerances, { knownDeviations, strict: o.strict === true });
     if (o.json) io.stdout.write(`${JSON.stringify({ format: 'qforge-compare/1', ...report }, null, 2)}\n`);
-    else io.stdout.write(renderCompareText(report));
-    for (const w of report.warnings) io.stderr.write(`qforge: warning: ${w}\n`);
+    else if (!o.quiet) {
+      io.stdout.write(renderCompareText(report));
+      for (const t of tables) if (t.ignoredColumns) io.stdout.write(`note: ${t.file}: column(s) not compared (ignored): ${t.ignoredColumns.join(', ')}\n`);
+    }
+    if (!o.quiet) for (const w of report.warnings) io.stderr.write(`qforge: warning: ${w}\n`);
     if (report.deviations.length === 0) {
       io.stderr.write('qforge: compare FAILED: no reference value matched a species and temperature of the build\n');
       return 1;

@@ -89,6 +89,7 @@ Examples:
   qforge compare build --reference janaf/N2.csv janaf/O2.csv
   qforge compare build --reference tables.csv --tolerance cp=0.1,s=0.05,h=0.02
   qforge compare build --database species    references of species/qforge.yaml
+  qforge compare build --quiet                references recorded in the build (summary.json)
   qforge compare build --database species --strict   ignore known deviations
 
 Reference CSV: one row per temperature; header names with units, e.g.

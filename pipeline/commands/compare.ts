@@ -50,6 +50,7 @@ import { DEFAULT_SETTINGS, loadSettings, type KnownDeviation, type QuantityTripl
 import { displayPath } from '../core/display-path.js';
 import { compareText } from '../core/text.js';
 import { referenceHeaderAlias } from './reference-columns.js';
+import { referencesRecordedInBuild } from './recorded-references.js';
 
 export type RefQuantity = 'cp' | 's' | 'h';
 const QS: readonly RefQuantity[] = ['cp', 's', 'h'];
@@ -577,8 +578,9 @@ export async function compareCommand(
     // --tolerance replaces the normal limits for every species; a known deviation still allows its own
     // widened limit where that is larger. --strict drops the known deviations altogether.
     tolerances = { ...tolerances, ...(o.tolerance ?? {}) };
+    if (!refs.length && !o.database && build.fromFolder) refs = await referencesRecordedInBuild(buildPath, buildLabel);
     if (!refs.length) {
-      io.stderr.write('qforge: error: no reference files: give --reference FILE... or --database DIR with references.files in its qforge.yaml\n');
+      io.stderr.write('qforge: error: no reference files: give --reference FILE... or --database DIR with references.files in its qforge.yaml (a build records the files of its settings in summary.json)\n');
       return 2;
     }
     const tables: ReferenceTable[] = [];

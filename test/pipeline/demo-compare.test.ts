@@ -35,6 +35,12 @@ describe('compare of the demo database with its shipped references', () => {
     expect(text.stdout).toMatch(/^known H2O: .*\n.*\n {8}reason: Rigid-rotor\/harmonic-oscillator model/m);
   });
 
+  it('the nightly form `compare BUILD` (no flags) reads the references recorded in the build: same result', async () => {
+    const r = await runCli(['compare', 'demo', '--quiet'], ws.root);
+    expect(r.code, r.stderr).toBe(0);
+    expect(r.stderr).toMatch(/^qforge: compare ok: \d+ values: \d+ within tolerance, \d+ within known deviations \(.*H2O \d+.*\)\n$/);
+  });
+
   it('--strict makes the same model limits fail', async () => {
     const r = await runCli(['compare', 'demo', '--database', path.join(REPO, 'species'), '--strict', '--quiet'], ws.root);
     expect(r.code).toBe(1);

@@ -5,7 +5,7 @@
  * partition functions: within the fit limits of test/fixtures/db/qforge.yaml (Cp/R 0.1, S/R 0.02,
  * H/RT 0.02, i.e. at most 0.83 J/(mol K), 0.17 J/(mol K) and 1.0 kJ/mol at 6000 K).
  */
-import { writeFile } from 'node:fs/promises';
+import { readFile, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { runCli, sharedBuiltWorkspace } from '../helpers.js';
@@ -56,5 +56,27 @@ describe('compare against qforge CSV tables', () => {
     expect(lines[0]).toMatch(/^qforge: \d+ value\(s\) beyond tolerance:$/);
     expect(lines.slice(1, -1).every((l) => /^ {2}\S+ Cp at [\d.]+ K: build/.test(l))).toBe(true);
     expect(lines.at(-1)).toMatch(/^qforge: compare FAILED: 72 values/);
+  });
+});
+
+describe('compare BUILD with no flags', () => {
+  it('uses the reference files the build recorded in summary.json (relative to the build folder)', async () => {
+    const summary = JSON.parse(await readFile(path.join(workspace().root, 'out', 'summary.json'), 'utf8'));
+    // test/fixtures/db/qforge.yaml: references.files [reference/janaf-4th-ed.csv]; the build is out/ beside db/.
+    expect(summary.reference_files).toEqual(['../db/reference/janaf-4th-ed.csv']);
+    const r = await runCli(['compare', 'out'], workspace().root);
+    expect(r.code, r.stderr).toBe(0);
+    // The tolerances recorded in the build's settings (cp 0.25, s 0.05, h 0.05), as with --database db.
+    expect(r.stdout).toMatch(/^qforge compare out: tolerances Cp 0\.25 J\/\(mol K\), S 0\.05/);
+    expect(r.stderr).toMatch(/compare ok: 72 values: 72 within tolerance$/m);
+    // From another folder the recorded paths still resolve against the build folder.
+    const elsewhere = await runCli(['compare', path.join(workspace().root, 'out'), '--quiet'], path.join(workspace().root, 'db'));
+    expect(elsewhere.code, elsewhere.stderr).toBe(0);
+  });
+
+  it('an 80-column file records nothing: no reference files is still a usage error', async () => {
+    const r = await runCli(['compare', 'out/nasa7.txt'], workspace().root);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/no reference files/);
   });
 });

@@ -9,6 +9,8 @@
  *   - an optional `species` column; without it, the file name without `.csv` is the species name
  *     (so `N2.csv` holds N2), which lets published tables be dropped in one per file;
  *   - lines starting with '#' are comments (name the source there); empty cells mean "no value";
+ *   - a `ΔfH [kJ/mol]` column (ΔfH°, DfH) is compared on its 298.15 K row with the polynomial's absolute
+ *     H(298.15) (ΔfH° in the NASA convention), against the H tolerance; other rows are noted, not compared;
  *   - columns compare knows but does not use (H, G, -(G-H298)/T, ΔfG, log Kf, and the fitted columns of
  *     `build/tables/<name>.csv`, whose `computed` columns are read) are ignored and listed in a note;
  *   - every other header cell must be one of these: an unrecognised one (`Cp (J/mol/K)`, `Cv [J/(mol K)]`, an
@@ -49,13 +51,16 @@ import {
 import { DEFAULT_SETTINGS, loadSettings, type KnownDeviation, type QuantityTriple } from '../core/settings.js';
 import { displayPath } from '../core/display-path.js';
 import { compareText } from '../core/text.js';
-import { referenceHeaderAlias } from './reference-columns.js';
+import { FORMATION_ENTHALPY_NAMES, referenceHeaderAlias } from './reference-columns.js';
 import { referencesRecordedInBuild } from './recorded-references.js';
 
-export type RefQuantity = 'cp' | 's' | 'h';
-const QS: readonly RefQuantity[] = ['cp', 's', 'h'];
-const LABEL: Record<RefQuantity, string> = { cp: 'Cp', s: 'S', h: 'H-H298' };
-const UNIT: Record<RefQuantity, string> = { cp: 'J/(mol K)', s: 'J/(mol K)', h: 'kJ/mol' };
+/** dfh: ΔfH°(298.15), compared with the polynomial's absolute H(298.15) (the NASA convention). */
+export type RefQuantity = 'cp' | 's' | 'h' | 'dfh';
+/** The quantities with a tolerance of their own (and known deviations); dfh is judged by h's tolerance. */
+const QS: readonly Exclude<RefQuantity, 'dfh'>[] = ['cp', 's', 'h'];
+const COMPARED: readonly RefQuantity[] = [...QS, 'dfh'];
+const LABEL: Record<RefQuantity, string> = { cp: 'Cp', s: 'S', h: 'H-H298', dfh: 'ΔfH°' };
+const UNIT: Record<RefQuantity, string> = { cp: 'J/(mol K)', s: 'J/(mol K)', h: 'kJ/mol', dfh: 'kJ/mol' };
 
 /** Unit → factor into the internal unit of the column (J/(mol K) or kJ/mol). Thermochemical calorie. */
 const ENTROPY_UNITS: Record<string, number> = { 'J/(mol K)': 1, 'J/(mol*K)': 1, 'J/mol/K': 1, 'J mol-1 K-1': 1, 'cal/(mol K)': 4.184, 'cal/mol/K': 4.184 };
@@ -66,6 +71,8 @@ export interface ReferenceRow {
   cp?: number;
   s?: number;
   h?: number;
+  /** ΔfH°(298.15), kJ/mol: only on a 298.15 K row (see reference-columns.ts). */
+  dfh?: number;
 }
 
 export interface ReferenceTable {
@@ -84,10 +91,10 @@ export class ReferenceError extends Error {
 
 type Column = { kind: 'T' } | { kind: 'species' } | { kind: 'ignored' } | { kind: RefQuantity; factor: number };
 
-const PROPERTY_NAMES: Record<string, RefQuantity> = { Cp: 'cp', S: 's', 'H-H298': 'h', 'H-H(298.15)': 'h', 'H-H298.15': 'h' };
+const PROPERTY_NAMES: Record<string, RefQuantity> = { Cp: 'cp', S: 's', 'H-H298': 'h', 'H-H(298.15)': 'h', 'H-H298.15': 'h', ...FORMATION_ENTHALPY_NAMES };
 const ACCEPTED_HEADERS =
   `accepted headers: 'T [K]'; 'Cp [unit]' and 'S [unit]' with unit ${Object.keys(ENTROPY_UNITS).join(' | ')}; ` +
-  `'H-H298 [unit]' with unit ${Object.keys(ENTHALPY_UNITS).join(' | ')}; optional 'species' (or 'name')`;
+  `'H-H298 [unit]' and 'ΔfH [unit]' (or 'DfH') with unit ${Object.keys(ENTHALPY_UNITS).join(' | ')}; optional 'species' (or 'name')`;
 const EXAMPLE_HEADER = 'T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol]';
 
 /**
@@ -108,17 +115,17 @@ function parseHeaderCell(cell: string): Column | string {
   const paren = /^(\S+?)\s*\((.*)\)$/.exec(c);
   if (!m && paren && (paren[1] === 'T' || PROPERTY_NAMES[paren[1]!] !== undefined)) {
     const name = paren[1]!;
-    return `header '${c}' has no unit in square brackets (a unit in parentheses is not read); units are never guessed: write e.g. '${name} [${name === 'T' ? 'K' : PROPERTY_NAMES[name] === 'h' ? 'kJ/mol' : 'J/(mol K)'}]'`;
+    return `header '${c}' has no unit in square brackets (a unit in parentheses is not read); units are never guessed: write e.g. '${name} [${name === 'T' ? 'K' : PROPERTY_NAMES[name] === 'h' || PROPERTY_NAMES[name] === 'dfh' ? 'kJ/mol' : 'J/(mol K)'}]'`;
   }
   if (what !== 'T' && q === undefined) {
     const looksLike = /^(t|cp|s|h)\b/i.test(c);
     return `header '${c}' is not recognised${looksLike ? ' (names are case-sensitive and units go in square brackets)' : ''}; ${ACCEPTED_HEADERS}`;
   }
   if (unit === undefined) {
-    return `header '${c}' has no unit; units are never guessed: write e.g. '${what} [${what === 'T' ? 'K' : q === 'h' ? 'kJ/mol' : 'J/(mol K)'}]'`;
+    return `header '${c}' has no unit; units are never guessed: write e.g. '${what} [${what === 'T' ? 'K' : q === 'h' || q === 'dfh' ? 'kJ/mol' : 'J/(mol K)'}]'`;
   }
   if (what === 'T') return unit === 'K' ? { kind: 'T' } : `header '${c}': temperatures must be in K, as 'T [K]'`;
-  const units = q === 'h' ? ENTHALPY_UNITS : ENTROPY_UNITS;
+  const units = q === 'h' || q === 'dfh' ? ENTHALPY_UNITS : ENTROPY_UNITS;
   const f = units[unit];
   if (f === undefined) return `header '${c}': unknown unit '${unit}'; expected one of ${Object.keys(units).join(', ')}`;
   return { kind: q!, factor: f };
@@ -133,6 +140,9 @@ async function csvRows(text: string): Promise<string[][]> {
       .on('end', () => resolve(rows));
   });
 }
+
+/** The row a ΔfH° value is compared on: 298.15 K (to the 0.005 K a table prints). */
+const isStandardTemperature = (T: number) => Math.abs(T - T_REF) < 0.005;
 
 const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 /** At most this many bad rows are listed in one error (the count says how many there were). */
@@ -176,7 +186,7 @@ export async function parseReferenceCsv(text: string, file: string): Promise<Ref
   });
   if (problems.length === 0) {
     if (!kinds.includes('T')) problems.push(`${file}:${headerLine}: no 'T [K]' column in the header; expected e.g. '${EXAMPLE_HEADER}'`);
-    if (!kinds.some((k) => k === 'cp' || k === 's' || k === 'h')) {
+    if (!kinds.some((k) => k === 'cp' || k === 's' || k === 'h' || k === 'dfh')) {
       problems.push(`${file}:${headerLine}: no property column (Cp, S or H-H298 with a unit) in the header, so nothing can be compared; expected e.g. '${EXAMPLE_HEADER}'`);
     }
   }
@@ -187,6 +197,7 @@ export async function parseReferenceCsv(text: string, file: string): Promise<Ref
   const fallbackName = path.basename(file).replace(/\.csv$/i, '');
   const species = new Map<string, ReferenceRow[]>();
   const rowErrors: string[] = [];
+  let dfhElsewhere = 0;
   rows.slice(1).forEach((r, i) => {
     const where = `${file}:${lines[i + 1]!.no}`;
     if (r.every((cell) => cell.trim() === '')) return;
@@ -207,9 +218,13 @@ export async function parseReferenceCsv(text: string, file: string): Promise<Ref
     }
     const row: ReferenceRow = { T };
     cols.forEach((c, j) => {
-      if (!c || (c.kind !== 'cp' && c.kind !== 's' && c.kind !== 'h')) return;
+      if (!c || (c.kind !== 'cp' && c.kind !== 's' && c.kind !== 'h' && c.kind !== 'dfh')) return;
       const cell = (r[j] ?? '').trim();
       if (cell === '') return;
+      if (c.kind === 'dfh' && !isStandardTemperature(T)) {
+        dfhElsewhere++;
+        return;
+      }
       const v = DECIMAL.test(cell) ? Number(cell) : NaN;
       if (!Number.isFinite(v)) {
         rowErrors.push(`${where}: ${header[j]} = '${cell}' is not a number`);
@@ -226,6 +241,7 @@ export async function parseReferenceCsv(text: string, file: string): Promise<Ref
     throw new ReferenceError(rowErrors.slice(0, MAX_LISTED_ROW_ERRORS).join('\n') + more);
   }
   const ignoredColumns = header.filter((_, j) => kinds[j] === 'ignored');
+  if (dfhElsewhere) ignoredColumns.push(`${header[kinds.indexOf('dfh')]} at temperatures other than 298.15 K (${dfhElsewhere} value(s); ΔfH(T) needs the elements' tables)`);
   return ignoredColumns.length ? { file, species, ignoredColumns } : { file, species };
 }
 
@@ -359,12 +375,13 @@ export function compareWithReferences(
           continue;
         }
         const p = polynomialProperties(b.polynomial, row.T);
-        const built: Record<RefQuantity, number> = { cp: p.cp, s: p.s, h: p.hMinusH298 };
-        for (const q of QS) {
+        const built: Record<RefQuantity, number> = { cp: p.cp, s: p.s, h: p.hMinusH298, dfh: p.h };
+        for (const q of COMPARED) {
           const rv = row[q];
           if (rv === undefined) continue;
           const deviation = built[q] - rv;
-          const ok = within(deviation, tolerances[q]);
+          const tolerance = tolerances[q === 'dfh' ? 'h' : q];
+          const ok = within(deviation, tolerance);
           const d: Deviation = {
             species: name,
             reference: ref.file,
@@ -373,20 +390,22 @@ export function compareWithReferences(
             referenceValue: rv,
             buildValue: built[q],
             deviation,
-            tolerance: tolerances[q],
+            tolerance,
             ok,
             status: ok ? 'ok' : 'breach',
           };
           // The settings rules forbid overlapping entries, so at most one covers a value.
-          const ki = report.knownDeviations.findIndex((k) => k.species === name && k.tolerances[q] !== undefined && inWindow(k, row.T));
-          if (ki >= 0) {
+          // Known deviations widen model limits (cp, s, h); a ΔfH° mismatch is an input question, never widened.
+          const kq = q === 'dfh' ? undefined : q;
+          const ki = kq ? report.knownDeviations.findIndex((k) => k.species === name && k.tolerances[kq] !== undefined && inWindow(k, row.T)) : -1;
+          if (kq && ki >= 0) {
             const k = report.knownDeviations[ki]!;
             d.knownDeviation = ki;
-            d.widenedTolerance = Math.max(k.tolerances[q]!, tolerances[q]);
+            d.widenedTolerance = Math.max(k.tolerances[kq]!, tolerance);
             k.covered++;
             if (!ok) {
               k.needed++;
-              neededBy[ki]!.add(q);
+              neededBy[ki]!.add(kq);
               if (!within(deviation, d.widenedTolerance)) k.exceeded++;
               else if (!strict) d.status = 'known';
             }
@@ -482,7 +501,7 @@ export function renderCompareText(r: CompareReport): string {
   const bySpecies = new Map<string, Deviation[]>();
   for (const d of r.deviations) bySpecies.set(d.species, [...(bySpecies.get(d.species) ?? []), d]);
   for (const [name, ds] of bySpecies) {
-    const worst = QS.map((q) => {
+    const worst = COMPARED.map((q) => {
       const of = ds.filter((d) => d.quantity === q);
       if (!of.length) return undefined;
       const w = of.reduce((a, b) => (Math.abs(b.deviation) > Math.abs(a.deviation) ? b : a));

@@ -10,6 +10,13 @@
  * the `fitted` and `fitted-computed` columns are ignored.
  */
 
+/**
+ * Header names of a ΔfH° column. compare uses its 298.15 K value against the polynomial's H(298.15)
+ * (which is ΔfH°(298.15) in the NASA convention); values at other temperatures are ΔfH(T), which needs
+ * the elements' tables, so they are reported as not compared.
+ */
+export const FORMATION_ENTHALPY_NAMES = { ΔfH: 'dfh', 'ΔfH°': 'dfh', DfH: 'dfh', 'DfH°': 'dfh' } as const;
+
 /** Quantities compare does not use, by their header name (without the unit). */
 const UNUSED_NAMES = new Set([
   'H',

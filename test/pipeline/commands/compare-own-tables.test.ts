@@ -80,3 +80,33 @@ describe('compare BUILD with no flags', () => {
     expect(r.stderr).toMatch(/no reference files/);
   });
 });
+
+describe('compare with a ΔfH° column', () => {
+  // NIST-JANAF 4th ed. (Chase 1998) ΔfH°(298.15): C-093 (CO) −110.527, O-001 (O) 249.173 kJ/mol, copied from
+  // the project's excerpt; N2 is the element reference (0 at every temperature). The wrong CO value on the
+  // second file is written by hand to show a breach.
+  const HEADER = 'species,T [K],Cp [J/(mol K)],ΔfH [kJ/mol]';
+  it('compares ΔfH°(298.15) with the polynomial H(298.15); values at other temperatures are noted, not compared', async () => {
+    await writeFile(path.join(workspace().root, 'dfh.csv'), `# NIST-JANAF 4th ed.\n${HEADER}\nCO,298.15,29.142,-110.527\nO,298.15,21.911,249.173\nN2,1000,32.697,0\n`);
+    const r = await runCli(['compare', 'out', '--reference', 'dfh.csv', '--json'], workspace().root);
+    expect(r.code, r.stderr).toBe(0);
+    const dfh = JSON.parse(r.stdout).deviations.filter((d: { quantity: string }) => d.quantity === 'dfh');
+    expect(dfh.map((d: { species: string }) => d.species)).toEqual(['CO', 'O']);
+    for (const d of dfh) expect(Math.abs(d.deviation)).toBeLessThan(0.01);
+    const text = await runCli(['compare', 'out', '--reference', 'dfh.csv'], workspace().root);
+    expect(text.stdout).toMatch(/ΔfH° +-110\.5270 +-110\.5\d+/);
+    expect(text.stdout).toMatch(/note: dfh\.csv: column\(s\) not compared \(ignored\): ΔfH \[kJ\/mol\] at temperatures other than 298\.15 K \(1 value\(s\)/);
+  });
+
+  it('a ΔfH° that disagrees beyond the H tolerance is a breach (known deviations never widen it)', async () => {
+    await writeFile(path.join(workspace().root, 'dfh-bad.csv'), `# hand-written wrong value\n${HEADER}\nCO,298.15,,-110.000\n`);
+    const r = await runCli(['compare', 'out', '--reference', 'dfh-bad.csv'], workspace().root);
+    expect(r.code).toBe(1);
+    expect(r.stderr).toMatch(/CO ΔfH° at 298\.15 K: build -110\.5\d+ vs reference -110\.0000 kJ\/mol \(dfh-bad\.csv\): deviation -0\.5\d+ exceeds the tolerance 0\.05 kJ\/mol/);
+    // A unit that is not an enthalpy unit is refused.
+    await writeFile(path.join(workspace().root, 'dfh-unit.csv'), '# hand-written\nspecies,T [K],ΔfH [J/(mol K)]\nCO,298.15,-110.5\n');
+    const u = await runCli(['compare', 'out', '--reference', 'dfh-unit.csv'], workspace().root);
+    expect(u.code).toBe(1);
+    expect(u.stderr).toMatch(/unknown unit 'J\/\(mol K\)'/);
+  });
+});

@@ -21,6 +21,8 @@ export interface FittedTableOptions {
   range?: string;
   format: 'text' | 'csv';
   digits: number;
+  /** --pressure: only checked (a polynomial holds the pressure it was fitted at); 'bar' is the default. */
+  pressure?: 'bar' | 'atm';
 }
 
 export async function fittedTableCommand(io: CliIo, file: string, fileLabel: string, o: FittedTableOptions): Promise<number> {
@@ -76,6 +78,10 @@ export async function fittedTableCommand(io: CliIo, file: string, fileLabel: str
     return { T, Cp: p.cp, S: p.s, HminusH298: p.hMinusH298, H: p.h, G: p.h - (T * p.s) / 1000 };
   });
   const pressure = set.settings?.standard_pressure;
+  // --pressure cannot convert a fitted polynomial: a request for 1 atm that the build does not hold is refused.
+  if (o.pressure === 'atm' && pressure !== '1 atm') {
+    return fail(`--pressure atm: ${set.origin} holds polynomials for standard pressure ${pressure ?? 'not recorded (80-column file)'}; a fitted polynomial is printed at the pressure it was built for`, 2);
+  }
   const title = `${entry.name}: fitted NASA 7-coefficient polynomial from ${set.origin} (${rangeLabel}${pressure ? `, standard pressure ${pressure}` : ''}), as a kinetics code reads it; valid only inside the fitted range`;
   io.stdout.write(o.format === 'csv' ? renderTableCsv(rows, o.digits) : renderTableText(entry.name, '', rows, o.digits, title));
   return 0;

@@ -71,6 +71,12 @@ describe('qforge table on a build (the fitted polynomial)', () => {
     expect(r.stdout).toMatch(/^N2: fitted NASA 7-coefficient polynomial from out\/thermo\.json \(200-6000 K, standard pressure 1 bar\).*valid only inside the fitted range/);
   });
 
+  it('--pressure atm is refused for a 1 bar build (a polynomial is not converted)', async () => {
+    const r = await runCli(['table', 'out', '--name', 'N2', '--pressure', 'atm'], workspace().root);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/--pressure atm: out\/thermo\.json holds polynomials for standard pressure 1 bar/);
+  });
+
   it('refuses temperatures outside the fitted range (never extrapolates); the default grid stays inside', async () => {
     const r = await runCli(['table', 'out', '--name', 'N2', '--at', '298.15,7000'], workspace().root);
     expect(r.code).toBe(2);

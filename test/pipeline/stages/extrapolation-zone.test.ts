@@ -14,6 +14,10 @@ import { createThermoEvaluator } from '../../../src/thermo/evaluator.js';
 import { HYDROGEN_PEROXIDE } from '../../fixtures/hindered-rotor.js';
 import { CARBON_DIOXIDE, NITROGEN } from '../../fixtures/physics-species.js';
 import type { Species } from '../../../src/model.js';
+import { locateFitViolation } from '../../../pipeline/runner.js';
+import { fitNasa7 } from '../../../src/nasa7/fit.js';
+import { T_REF } from '../../../src/constants.js';
+import { grid, N2_RRHO, rrhoSample } from '../../src/nasa7/synthetic.js';
 
 const bits = (xs: readonly number[]) => Buffer.from(new Float64Array(xs).buffer).toString('hex');
 
@@ -57,3 +61,23 @@ describe('extrapolation zone', () => {
     expect(other.fit).not.toBe(keys.fit);
   });
 });
+
+describe('verify stage: departure beyond the ends', () => {
+  it('becomes a located diagnostic with a stable code, naming the Cp limit key it is a multiple of', () => {
+    // Hand-made: RRHO N2 fitted only up to 5000 K, checked against its computed Cp/R at 5020–5100 K with
+    // a Cp limit so small that the form's ordinary drift there exceeds three times it.
+    const samples = grid(200, 5000, 10).map((T) => rrhoSample(N2_RRHO, T));
+    const fit = fitNasa7(samples, rrhoSample(N2_RRHO, T_REF), { tLow: 200, tMid: 1000, tHigh: 5000 });
+    const beyond = [5020, 5040, 5060, 5080, 5100].map((T) => rrhoSample(N2_RRHO, T));
+    const tolerances = { ...DEFAULT_SETTINGS.tolerances, cp: 1e-5, relative_to_cp: { cp: 0, h: 0.003, s: 0.003 } };
+    const where = { file: 'db/n2.yaml', species: 'N2', line: 1, column: 7 };
+    const all = verifySpecies(fit, samples, { ...tolerances, cp: 1 }, 1, 3.5, where, beyond);
+    expect(all).toEqual([]);
+    const d = verifySpecies(fit, samples, tolerances, 1, 3.5, where, beyond).filter((x) => x.code === 'fit-extrapolation-departs');
+    expect(d).toHaveLength(1);
+    expect(d[0]!).toMatchObject({ severity: 'error', file: 'db/n2.yaml', species: 'N2', line: 1, column: 7, path: 'fit.cp' });
+    const located = locateFitViolation(d[0]!, tolerances, { settingsFile: 'db/qforge.yaml' });
+    expect(located.message).toMatch(/^fit check: Cp\/R of the fit is .* K beyond T_high = 5000 K, .*; limit is the default tolerances\.cp = 1e-05 \(not set in db\/qforge\.yaml\)$/);
+  });
+});
+

@@ -77,7 +77,7 @@ describe('verify stage: departure beyond the ends', () => {
     expect(d).toHaveLength(1);
     expect(d[0]!).toMatchObject({ severity: 'error', file: 'db/n2.yaml', species: 'N2', line: 1, column: 7, path: 'fit.cp' });
     const located = locateFitViolation(d[0]!, tolerances, { settingsFile: 'db/qforge.yaml' });
-    expect(located.message).toMatch(/^fit check: Cp\/R of the fit is .* K beyond T_high = 5000 K, .*; limit is the default tolerances\.cp = 1e-05 \(not set in db\/qforge\.yaml\)$/);
+    expect(located.message).toMatch(/^fit check: Cp\/R of the fit is .* K beyond T_high = 5000 K, .*; limit is the default tolerances\.cp = 0\.00001 \(not set in db\/qforge\.yaml\)$/);
   });
 });
 

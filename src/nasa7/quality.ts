@@ -33,9 +33,11 @@
  *     limit at that point (limits.ts, from the computed Cp/R). Rules 3 and 5 bound the fit's shape; this
  *     one bounds where it goes, so a fit that leaves the physics just past its end (a quartic that is
  *     still rising and smooth but away from the true Cp) is caught. Why 3×: a fit inside its limit at the
- *     end and following the data's slope stays well within it over these short zones (measured on the
- *     demo and test databases); 3× leaves room for the form's natural drift while a genuine turn-away
- *     exceeds it. Extrapolation samples never enter the fit.
+ *     end and following the data's slope stays well within it over these short zones; 3× leaves room for
+ *     the form's natural drift while a genuine turn-away exceeds it. Measured with default settings (worst
+ *     departure as a fraction of this limit): demo database worst 0.22 (CH3OH at 6100 K); 205 closed-form
+ *     RRHO species (seeded synthetic set, propane, benzene, n-C7, n-C16, n-C30) median 0.33, 90th
+ *     percentile 0.45, max 0.63 (benzene at 180 K). Extrapolation samples never enter the fit.
  */
 import { cpDerivative, cpSecondDerivative, evaluateNasa7, evaluateRange } from './evaluate.js';
 import { DEFAULT_FIT_LIMITS, limitAt, limitPart } from './limits.js';

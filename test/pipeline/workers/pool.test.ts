@@ -68,4 +68,27 @@ describe('worker pool', () => {
       await pool.close();
     }
   }, 120_000);
+
+  it('a species built in a worker carries the extrapolation-zone points the verify stage checked, as inline', async () => {
+    const dir = path.join(root, 'fx');
+    const check = await checkDatabase({ dir });
+    const cache = new StageCache(undefined);
+    const pool = createSpeciesPool({
+      jobs: 2,
+      init: { settings: check.settings, limits: { setAt: {} }, cacheDir: undefined, codeFingerprint: 'test' },
+      inline: (v) => buildOneSpecies(v, check.settings, cache, check),
+      crashed: (v, reason) => ({ valid: v, diagnostics: [{ severity: 'error', file: v.displayFile, path: '', message: reason }], cache: {}, cacheNotes: [], timings: {} }),
+    });
+    try {
+      const results = (await Promise.all(check.species.map((v) => pool.run([v])))).flat();
+      for (const [i, o] of results.entries()) {
+        const inline = await buildOneSpecies(check.species[i]!, check.settings, cache, check);
+        const zone = o.built?.computed.extrapolationSamples;
+        expect(zone?.length, o.valid.name).toBeGreaterThan(0);
+        expect(zone).toEqual(inline.built!.computed.extrapolationSamples);
+      }
+    } finally {
+      await pool.close();
+    }
+  }, 120_000);
 });

@@ -69,7 +69,7 @@ function minimaxCoefficients(
   return assembleSolution(f, up, minimaxReduced(f, c, limits, start.z!, 3, 3 * ranges.low.length).z);
 }
 
-function constraintRhs(anchor: FitSample, m: number): number[] {
+export function constraintRhs(anchor: FitSample, m: number): number[] {
   const d = new Array<number>(m).fill(0);
   d[1] = anchor.sR;
   return d;
@@ -80,6 +80,23 @@ function constraintRhs(anchor: FitSample, m: number): number[] {
  * times (the midpoint search) so the key is built once.
  */
 export function fitAtFixedMid(samples: readonly FitSample[], anchor: FitSample, options: FitOptions, temperatures = temperatureKey(samples)): FitResult {
+  return withMetrics(fitWithoutMetrics(samples, anchor, options, temperatures), anchor);
+}
+
+/** A fit whose quality metrics are not computed yet (the midpoint search needs them for its winner only). */
+export interface UnmeasuredFit {
+  polynomial: Nasa7Polynomial;
+  ranges: SplitSamples;
+  solver: FitResult['solver'] & object;
+}
+
+/** Adds the metrics: exactly what `fitAtFixedMid` returns for the same fit. */
+export function withMetrics(fit: UnmeasuredFit, anchor: FitSample): FitResult {
+  return { polynomial: fit.polynomial, metrics: computeMetrics(fit.polynomial, fit.ranges, anchor), solver: fit.solver };
+}
+
+/** `fitAtFixedMid` without the metrics. */
+export function fitWithoutMetrics(samples: readonly FitSample[], anchor: FitSample, options: FitOptions, temperatures: string): UnmeasuredFit {
   const ranges = splitSamples(samples, anchor, options);
   const hShift = anchor.hRT * anchor.T;
   const f = factorisationFor({ temperatures, weights: options.weights, anchorT: anchor.T, tMid: options.tMid, continuityOrder: options.continuityOrder }, ranges, anchor);
@@ -96,7 +113,7 @@ export function fitAtFixedMid(samples: readonly FitSample[], anchor: FitSample, 
   }
   return {
     polynomial,
-    metrics: computeMetrics(polynomial, ranges, anchor),
+    ranges,
     solver: {
       conditionNumber: sol.conditionNumber,
       residualNorm: sol.residualNorm,

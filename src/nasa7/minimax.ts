@@ -72,8 +72,11 @@ function weightedSolve(
   }
   const diag = new Float64Array(k);
   for (let j = 0; j < k; j++) {
-    let norm = 0;
-    for (let r = j; r < count; r++) norm = Math.hypot(norm, work[r * cols + j]!);
+    // Plain sum of squares, not Math.hypot (several times slower): the rows are scaled by √w_i / L_i with
+    // Σ w_i = 1 and limit-relative targets, so the entries are far from overflow or underflow.
+    let sumSq = 0;
+    for (let r = j; r < count; r++) sumSq += work[r * cols + j]! * work[r * cols + j]!;
+    const norm = Math.sqrt(sumSq);
     if (norm === 0) {
       diag[j] = 0;
       continue;

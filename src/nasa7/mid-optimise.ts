@@ -85,7 +85,10 @@ export function optimiseMid(samples: readonly FitSample[], anchor: FitSample, op
     const order = [nearestFixed.tMid, ...[...chosen].filter((t) => t !== nearestFixed.tMid).sort((a, b) => a - b)];
     for (const tMid of order) {
       try {
-        const fit = fitWithoutMetrics(samples, anchor, { ...options, tMid }, temperatures);
+        // A candidate must beat the best so far by the margin below; the minimax fit may stop as soon as
+        // it has proved it cannot (exact pruning, see minimaxReduced).
+        const cutoff = refined ? refined.score * (1 - 1e-6) - 1e-9 : Infinity;
+        const fit = fitWithoutMetrics(samples, anchor, { ...options, tMid }, temperatures, cutoff);
         const score = fit.solver.worstLimitRatio ?? ratioOf({ polynomial: fit.polynomial }, samples, options);
         if (!refined || score < refined.score * (1 - 1e-6) - 1e-9) refined = { fit, score };
       } catch (e) {

@@ -12,6 +12,10 @@ import { T_REF } from '../../../src/constants.js';
 import { fitNasa7 } from '../../../src/nasa7/fit.js';
 import { worstLimitRatio } from '../../../src/nasa7/limit-ratio.js';
 import { DEFAULT_FIT_LIMITS } from '../../../src/nasa7/limits.js';
+import { leastSquaresScore } from '../../../src/nasa7/ls-score.js';
+import { worstWeightedError } from '../../../src/nasa7/mid-optimise.js';
+import { normaliseFitOptions } from '../../../src/nasa7/options.js';
+import { temperatureKey } from '../../../src/nasa7/factor-cache.js';
 import type { FitSample, Nasa7Polynomial } from '../../../src/nasa7/index.js';
 import { syntheticSpecies } from '../../fixtures/nasa7/synthetic-set.js';
 import { grid, rrhoSample } from './synthetic.js';
@@ -52,5 +56,21 @@ describe('midpoint search of the default fit', () => {
       if (!(searched <= ls1000 + 1e-12)) worse.push(`${sp.name}: ${searched} vs least squares at 1000 K ${ls1000}`);
     }
     expect(worse).toEqual([]);
+  });
+
+  it('the residual score of a candidate equals the measure of its finished least-squares polynomial', () => {
+    for (const sp of syntheticSpecies(6, 11)) {
+      const samples = TEMPERATURES.map((T) => rrhoSample(sp.model, T));
+      const anchor = rrhoSample(sp.model, T_REF);
+      for (const tMid of [700, 1300, 2500]) {
+        for (const weights of [{ cp: 1, h: 1, s: 1 }, { cp: 2, h: 0.5, s: 1 }]) {
+          const options = normaliseFitOptions({ ...RANGE, tMid, weights });
+          const fit = fitNasa7(samples, anchor, options);
+          const score = leastSquaresScore(samples, anchor, options, temperatureKey(samples));
+          expect(score.limitRatio).toBeCloseTo(ratioOf(fit.polynomial, samples), 8);
+          expect(score.weighted).toBeCloseTo(worstWeightedError(fit, options.weights), 8);
+        }
+      }
+    }
   });
 });

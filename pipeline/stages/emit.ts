@@ -72,6 +72,8 @@ export interface BuiltSpecies {
   species: Species;
   /** 'sha256:<hex>' of the species' normalised input. */
   inputHash: string;
+  /** The normalised input itself (what `inputHash` hashes), recorded so `diff` can name the fields that moved. */
+  input?: unknown;
   computed: ComputedSpecies;
   fit: FitResult;
   /** Computed properties on the table grid (empty when tables are not written). */
@@ -162,6 +164,7 @@ export function speciesJson(b: BuiltSpecies) {
       notes: [...b.computed.summary.notes],
     },
     input_hash: b.inputHash,
+    ...(b.input !== undefined ? { input: b.input } : {}),
     sources: [...b.species.sources],
     ...(b.uncertainty ? { uncertainty: uncertaintyJson(b.uncertainty) } : {}),
   };

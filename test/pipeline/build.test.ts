@@ -141,12 +141,17 @@ describe('qforge build of the fixture database', () => {
     expect(report.removed).toEqual([]);
     expect(report.changed.map((c: { name: string }) => c.name)).toEqual(['CO']);
     expect(report.changed[0].kind).toBe('properties');
-    expect(report.changed[0].inputChanged).toBe(true);
+    expect(report.changed[0].input_changed).toBe(true);
     expect(report.unchanged).toEqual(['Ar', 'H2O', 'N2', 'O']);
-    expect(report.changed[0].at.map((a: { T: number }) => a.T)).toEqual([298.15, 1000]);
+    expect(report.changed[0].at.map((a: { t: number }) => a.t)).toEqual([298.15, 1000]);
+    // Exactly the field that was edited, old -> new in its normalised unit; nothing else moved.
+    expect(report.changed[0].input_changes).toEqual([{ path: 'electronicStates[0].we', old: 2169.81358, new: 2171, unit: 'cm-1' }]);
+    expect(report.settings_changes).toEqual([]);
+    expect(report.code_changed).toBe(false);
 
     const text = await runCli(['diff', 'before', 'out'], ws.root);
     expect(text.stdout).toMatch(/~ CO: properties changed; input changed/);
+    expect(text.stdout).toMatch(/ {4}CO: electronicStates\[0\]\.we 2169\.81358 → 2171 cm-1; Cp\(1000 K\) [+-]\d+\.\d{4} J\/\(mol K\)\n/);
     expect(text.stdout).toMatch(/max \|dCp\|/);
     // The CI gate: the change is far above 1e-6 J/(mol K) and far below 10 J/(mol K).
     expect((await runCli(['diff', 'before', 'out', '--fail-above', 'cp=1e-6'], ws.root)).code).toBe(1);

@@ -21,8 +21,8 @@
 import type { Diagnostic } from '../core/diagnostics.js';
 import { ENERGY_UNITS_TO_CM1 } from '../../src/units.js';
 import type { LoadedDocument } from './load.js';
+import { diagnosticAt } from './located.js';
 import { PLAUSIBLE, type Bound } from './plausibility.js';
-import { formatFieldPath } from './schema-check.js';
 
 type Segment = string | number;
 type Obj = Record<string, unknown>;
@@ -43,14 +43,7 @@ export function checkBareUnits(doc: LoadedDocument, species: string | undefined)
   const input = doc.value;
   if (!isObj(input)) return out;
   const push = (at: Segment[], message: string, value: number, expected: string) => {
-    const d: Diagnostic = { severity: 'warning', code: BARE_UNIT_CODE, file: doc.file, path: formatFieldPath(at), message, value, expected };
-    const where = doc.locate(at);
-    if (where) {
-      d.line = where.line;
-      d.column = where.column;
-    }
-    if (species !== undefined) d.species = species;
-    out.push(d);
+    out.push(diagnosticAt(doc, species, at, { severity: 'warning', code: BARE_UNIT_CODE, message, value, expected }));
   };
   const energy = (at: Segment[], raw: unknown, what: string, other: 'kJ/mol' | 'eV', bound: Bound) => {
     if (typeof raw !== 'number' || !Number.isFinite(raw) || raw === 0) return;

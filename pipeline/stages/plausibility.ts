@@ -31,7 +31,7 @@ import {
   rotationalConstantFromInertia,
 } from '../../src/units.js';
 import type { LoadedDocument } from './load.js';
-import { formatFieldPath } from './schema-check.js';
+import { diagnosticAt } from './located.js';
 
 type Segment = string | number;
 type Obj = Record<string, unknown>;
@@ -84,14 +84,7 @@ export function checkPlausibility(doc: LoadedDocument, species: string | undefin
   const input = doc.value;
   if (!isObj(input)) return out;
   const push = (code: string, at: Segment[], message: string, value: unknown, expected: string) => {
-    const d: Diagnostic = { severity: 'error', code, file: doc.file, path: formatFieldPath(at), message, value, expected };
-    const where = doc.locate(at);
-    if (where) {
-      d.line = where.line;
-      d.column = where.column;
-    }
-    if (species !== undefined) d.species = species;
-    out.push(d);
+    out.push(diagnosticAt(doc, species, at, { severity: 'error', code: code, message, value, expected }));
   };
   const within = (x: number, b: Bound) => Number.isFinite(x) && (b.minInclusive ? x >= b.min : x > b.min) && x <= b.max;
   const range = (b: Bound) => `${b.minInclusive ? '' : 'above '}${show(b.min)} to ${show(b.max)} ${b.unit}`;

@@ -6,20 +6,11 @@
  * so its keys are converted generically.
  */
 import type { CompareReport } from './compare.js';
+import { snakeKeys } from '../core/snake-case.js';
 
 export const COMPARE_FORMAT = 'qforge-compare/2';
 
 const UNIT: Record<string, string> = { cp: 'J/(mol K)', s: 'J/(mol K)', h: 'kJ/mol' };
-
-/** camelCase (or a lone capital such as `T`) → snake_case. */
-export const snakeKey = (k: string): string => k.replace(/(?<=[a-z0-9])([A-Z])/g, '_$1').toLowerCase();
-
-/** Deep copy of a plain JSON value with every object key in snake_case. */
-export function snakeKeys(v: unknown): unknown {
-  if (Array.isArray(v)) return v.map(snakeKeys);
-  if (v && typeof v === 'object') return Object.fromEntries(Object.entries(v).map(([k, x]) => [snakeKey(k), snakeKeys(x)]));
-  return v;
-}
 
 export function compareGateResults(r: CompareReport) {
   return r.breaches.map((d) => ({

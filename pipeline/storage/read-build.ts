@@ -138,7 +138,8 @@ function fromThermoJson(text: string, origin: string, label: string, fromFolder:
     throw new ReadBuildError(`${origin}: not valid JSON (${(e as Error).message})`);
   }
   const d = db as { format?: unknown; species?: unknown; build_settings?: DatabaseSettings };
-  if (d?.format !== 'qforge-database/1' || !Array.isArray(d.species)) {
+  // /1 differs from /2 only in key spelling outside the fields read here.
+  if ((d?.format !== 'qforge-database/2' && d?.format !== 'qforge-database/1') || !Array.isArray(d.species)) {
     throw new ReadBuildError(`${origin}: not a qforge database (format ${JSON.stringify(d?.format)})`);
   }
   const species = new Map<string, NamedPolynomial>();

@@ -52,8 +52,8 @@ describe('qforge build of the fixture database', () => {
     expect(n2.input_hash).toMatch(/^sha256:[0-9a-f]{64}$/);
     expect(n2.sources.join(' ')).toMatch(/Huber & Herzberg/);
     // NIST-JANAF 4th ed. table N-023: S°(298.15) = 191.609 J/(mol K), Cp° = 29.124 J/(mol K).
-    expect(n2.at_298_15.entropy_J_per_mol_K).toBeCloseTo(191.609, 1);
-    expect(n2.at_298_15.heat_capacity_J_per_mol_K).toBeCloseTo(29.124, 1);
+    expect(n2.at_298_15.entropy_j_per_mol_k).toBeCloseTo(191.609, 1);
+    expect(n2.at_298_15.heat_capacity_j_per_mol_k).toBeCloseTo(29.124, 1);
     expect(summary.species.every((s: { status: string; cache_hit: boolean }) => s.status === 'ok' && !s.cache_hit)).toBe(true);
     expect(summary.species[0].timings_ms).toHaveProperty('fit');
 

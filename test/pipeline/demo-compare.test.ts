@@ -28,7 +28,7 @@ describe('compare of the demo database with its shipped references', () => {
     expect(text.code).toBe(0);
     expect(text.stderr).not.toMatch(/warning/); // no stale known deviation
     // H2O's harmonic model: Cp about 1 J/(mol K) low at 2000 K (JANAF from memory: 51.180).
-    const h2o = report.deviations.find((d: { species: string; quantity: string; T: number }) => d.species === 'H2O' && d.quantity === 'cp' && d.T === 2000);
+    const h2o = report.deviations.find((d: { species: string; quantity: string; t: number }) => d.species === 'H2O' && d.quantity === 'cp' && d.t === 2000);
     expect(h2o.deviation).toBeLessThan(-0.5);
     expect(h2o.deviation).toBeGreaterThan(-1.5);
     expect(h2o.status).toBe('known');

@@ -491,7 +491,7 @@ export async function buildOneSpecies(
     if (!rows) return out;
     table = rows;
   }
-  out.built = { name: v.name, file: v.file, species: v.species, inputHash, computed, fit, table };
+  out.built = { name: v.name, file: v.file, species: v.species, inputHash, input: v.normalisedInput, computed, fit, table };
   const tu = performance.now();
   try {
     out.built.uncertainty = computeUncertainty(v.species, plan.physics, plan.ranges, extra.uncertaintySamples);
@@ -805,6 +805,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     const summary: Summary = {
       format: 'qforge-summary/1',
       tool: { name: TOOL_NAME, version: TOOL_VERSION },
+      code_fingerprint: `sha256:${codeFingerprint()}`,
       database: opts.displayBase ? displayPath(opts.displayBase, opts.dir) : opts.dir,
       status,
       written: mayWrite,

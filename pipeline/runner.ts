@@ -325,7 +325,7 @@ export interface SpeciesOutcome {
 /** Cache keys of one species' stages; see plan.ts for what each depends on. */
 export function stageKeys(inputHash: string, species: Species, plan: SpeciesPlan, fitOptions: FitOptions) {
   const base = [TOOL_NAME, TOOL_VERSION, codeFingerprint(), CONSTANTS_EDITION, inputHash, species, plan.physics];
-  const samples = hashParts('samples', ...base, plan.sampleTemperatures);
+  const samples = hashParts('samples', ...base, plan.sampleTemperatures, plan.zoneTemperatures);
   return {
     samples,
     fit: hashParts('fit', TOOL_NAME, TOOL_VERSION, codeFingerprint(), samples, fitOptions),
@@ -463,7 +463,7 @@ export async function buildOneSpecies(
   const computed = await stage(
     'samples',
     keys.samples,
-    () => computeSamples(v.species, plan.physics, plan.sampleTemperatures),
+    () => computeSamples(v.species, plan.physics, plan.sampleTemperatures, plan.zoneTemperatures),
     '',
     'computing the properties',
   );
@@ -472,7 +472,7 @@ export async function buildOneSpecies(
   if (!fit) return out;
 
   const tv = performance.now();
-  const violations = verifySpecies(fit, computed.samples, plan.tolerances, fitOptions.continuityOrder, classicalCpFloor(v.species.structure), where);
+  const violations = verifySpecies(fit, computed.samples, plan.tolerances, fitOptions.continuityOrder, classicalCpFloor(v.species.structure), where, computed.extrapolationSamples);
   out.timings.verify = performance.now() - tv;
   if (violations.length) {
     out.diagnostics.push(...violations.map((d) => locateFitViolation(d, plan.tolerances, limitSource, v)));
@@ -491,7 +491,7 @@ export async function buildOneSpecies(
     if (!rows) return out;
     table = rows;
   }
-  out.built = { name: v.name, file: v.file, species: v.species, inputHash, computed, fit, table };
+  out.built = { name: v.name, file: v.file, species: v.species, inputHash, input: v.normalisedInput, computed, fit, table };
   const tu = performance.now();
   try {
     out.built.uncertainty = computeUncertainty(v.species, plan.physics, plan.ranges, extra.uncertaintySamples);
@@ -805,6 +805,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     const summary: Summary = {
       format: 'qforge-summary/1',
       tool: { name: TOOL_NAME, version: TOOL_VERSION },
+      code_fingerprint: `sha256:${codeFingerprint()}`,
       database: opts.displayBase ? displayPath(opts.displayBase, opts.dir) : opts.dir,
       status,
       written: mayWrite,

@@ -7,6 +7,9 @@ import { displayPath } from '../core/display-path.js';
 import { formatDiagnostic, hasErrors } from '../core/diagnostics.js';
 import type { CliIo } from './io.js';
 
+/** `cache prune --json` (schemas/cache-prune.schema.json). */
+export const PRUNE_FORMAT = 'qforge-cache-prune/1';
+
 const mb = (bytes: number) => `${(bytes / 1048576).toFixed(2)} MB`;
 
 export async function cachePruneCommand(io: CliIo, dir: string, dirLabel: string, o: { cacheDir?: string; json?: boolean }): Promise<number> {
@@ -14,7 +17,7 @@ export async function cachePruneCommand(io: CliIo, dir: string, dirLabel: string
   const shown = displayPath(io.cwd, cacheDir);
   if (!(await stat(cacheDir).then((s) => s.isDirectory(), () => false))) {
     io.stderr.write(`qforge: cache ${shown} does not exist; nothing to prune\n`);
-    if (o.json) io.stdout.write(`${JSON.stringify({ cache: shown, removed: 0, bytes_freed: 0, kept: 0 }, null, 2)}\n`);
+    if (o.json) io.stdout.write(`${JSON.stringify({ format: PRUNE_FORMAT, cache: shown, removed: 0, bytes_freed: 0, kept: 0 }, null, 2)}\n`);
     return 0;
   }
   const check = await checkDatabase({ dir, displayBase: io.cwd });
@@ -31,7 +34,7 @@ export async function cachePruneCommand(io: CliIo, dir: string, dirLabel: string
   );
   if (o.json) {
     io.stdout.write(
-      `${JSON.stringify({ cache: shown, removed: r.removed, bytes_freed: r.bytesFreed, kept: r.kept, other_databases: r.otherDatabases, stale_use_lists: r.staleUseLists }, null, 2)}\n`,
+      `${JSON.stringify({ format: PRUNE_FORMAT, cache: shown, removed: r.removed, bytes_freed: r.bytesFreed, kept: r.kept, other_databases: r.otherDatabases, stale_use_lists: r.staleUseLists }, null, 2)}\n`,
     );
   }
   return 0;

@@ -29,6 +29,7 @@
  * plain check. Entries naming a species absent from the build, covering no compared value, or no longer
  * needed (all their values within the normal tolerance) are warnings, so stale exceptions get removed.
  */
+import { compareJson } from './compare-json.js';
 import path from 'node:path';
 import { parseString } from 'fast-csv';
 import { T_REF } from '../../src/constants.js';
@@ -576,7 +577,7 @@ export async function compareCommand(
     const tables: ReferenceTable[] = [];
     for (const r of refs) tables.push(await loadReference(r, build));
     const report = compareWithReferences(build, tables, tolerances, { knownDeviations, strict: o.strict === true });
-    if (o.json) io.stdout.write(`${JSON.stringify({ format: 'qforge-compare/1', ...report }, null, 2)}\n`);
+    if (o.json) io.stdout.write(`${JSON.stringify(compareJson(report), null, 2)}\n`);
     else io.stdout.write(renderCompareText(report));
     for (const w of report.warnings) io.stderr.write(`qforge: warning: ${w}\n`);
     if (report.deviations.length === 0) {

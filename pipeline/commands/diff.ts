@@ -20,7 +20,9 @@ import { T_REF } from '../../src/constants.js';
 import type { Nasa7Polynomial } from '../../src/nasa7/types.js';
 import type { CliIo } from './io.js';
 import { diffGateResults } from './gate-results.js';
-import { formatFixed, polynomialProperties, readPolynomialSet, ReadBuildError, type PolynomialSet, type Properties } from '../storage/read-build.js';
+import { diffInputs, formatInputChange, type InputChange } from './input-diff.js';
+import { diffJson } from './diff-json.js';
+import { formatFixed, formatSigned, polynomialProperties, readPolynomialSet, ReadBuildError, type PolynomialSet, type Properties } from '../storage/read-build.js';
 import { compareText } from '../core/text.js';
 
 export const PROPERTY_CHANGE_THRESHOLDS = Object.freeze({ cp: 1e-3, h: 1e-3, s: 1e-3 });
@@ -43,6 +45,11 @@ export interface SpeciesChange {
   kind: 'properties' | 'coefficients';
   /** True/false when both sides carry an input hash, otherwise undefined. */
   inputChanged?: boolean;
+  /**
+   * The input fields that moved (normalised inputs recorded in both thermo.json files), or undefined when
+   * either side did not record its input ("inputs not recorded").
+   */
+  inputChanges?: InputChange[];
   rangesChanged: boolean;
   old: { low: number; mid: number; high: number };
   new: { low: number; mid: number; high: number };
@@ -63,6 +70,10 @@ export interface DiffReport {
   changed: SpeciesChange[];
   /** How the two sides were read when that matters (e.g. a folder's nasa7.txt instead of its thermo.json). */
   notes: string[];
+  /** Build settings that moved, or undefined when either side does not record its settings. */
+  settingsChanges?: InputChange[];
+  /** Whether the code fingerprints differ (a code or model change), or undefined when either is not recorded. */
+  codeChanged?: boolean;
 }
 
 export interface DiffOptions {
@@ -146,8 +157,14 @@ export function diffSets(a: PolynomialSet, b: PolynomialSet, options: DiffOption
     const y = b.species.get(name)!;
     const same = options.mixedPrecision ? sameWithinRounding(x.polynomial, y.polynomial) : samePolynomial(x.polynomial, y.polynomial);
     if (same) report.unchanged.push(name);
-    else report.changed.push(compareSpecies(name, x.polynomial, y.polynomial, [x.inputHash, y.inputHash]));
+    else {
+      const change = compareSpecies(name, x.polynomial, y.polynomial, [x.inputHash, y.inputHash]);
+      if (x.input !== undefined && y.input !== undefined) change.inputChanges = diffInputs(x.input, y.input);
+      report.changed.push(change);
+    }
   }
+  if (a.settings && b.settings) report.settingsChanges = diffInputs(a.settings, b.settings);
+  if (a.codeFingerprint && b.codeFingerprint) report.codeChanged = a.codeFingerprint !== b.codeFingerprint;
   return report;
 }
 
@@ -160,6 +177,8 @@ export function renderDiffText(r: DiffReport): string {
     `qforge diff ${r.old} -> ${r.new}: ${r.added.length} added, ${r.removed.length} removed, ${r.changed.length} changed, ${r.unchanged.length} unchanged`,
   ];
   for (const n of r.notes) lines.push(`note: ${n}`);
+  if (r.settingsChanges?.length) lines.push(`settings changed: ${r.settingsChanges.map(formatInputChange).join('; ')}`);
+  if (r.codeChanged === true) lines.push('code or model changed (code fingerprints differ)');
   for (const n of r.added) lines.push(`+ ${n}  (added)`);
   for (const n of r.removed) lines.push(`- ${n}  (removed)`);
   for (const c of r.changed) {
@@ -169,6 +188,7 @@ export function renderDiffText(r: DiffReport): string {
       c.rangesChanged ? `ranges ${c.old.low}/${c.old.mid}/${c.old.high} -> ${c.new.low}/${c.new.mid}/${c.new.high} K` : undefined,
     ].filter(Boolean);
     lines.push(`~ ${c.name}: ${why.join('; ')}`);
+    lines.push(`    ${c.name}: ${changeHeadline(c)}`);
     if (!c.common) {
       lines.push('    the temperature ranges do not overlap; nothing to compare');
       continue;
@@ -186,6 +206,21 @@ export function renderDiffText(r: DiffReport): string {
     }
   }
   return `${lines.join('\n')}\n`;
+}
+
+/**
+ * The one-line explanation a nightly report quotes: the input fields that moved (or "inputs not recorded")
+ * and the Cp change at 1000 K (or the largest one when 1000 K is outside the common range).
+ */
+export function changeHeadline(c: SpeciesChange): string {
+  const parts: string[] = [];
+  if (!c.inputChanges) parts.push('inputs not recorded');
+  else if (c.inputChanges.length) parts.push(...c.inputChanges.map(formatInputChange));
+  else parts.push('same input');
+  const at = c.at.find((p) => p.T === 1000);
+  if (at) parts.push(`Cp(1000 K) ${formatSigned(at.new.cp - at.old.cp, 4)} J/(mol K)`);
+  else if (c.common) parts.push(`max |dCp| ${sci(c.max.cp.value)} J/(mol K) at ${c.max.cp.T} K`);
+  return parts.join('; ');
 }
 
 /** Breaches of the --fail-above limits, as messages. */
@@ -258,7 +293,10 @@ export async function diffCommand(
     throw e;
   }
   const breaches = gateBreaches(report, o.failAbove ?? {}, !!o.failOnRemoved);
-  if (o.json) io.stdout.write(`${JSON.stringify({ format: 'qforge-diff/1', ...report, gate: { limits: o.failAbove ?? {}, breaches, results: diffGateResults(report, o.failAbove ?? {}, !!o.failOnRemoved) } }, null, 2)}\n`);
+  if (o.json) {
+    const gate = { limits: o.failAbove ?? {}, breaches, results: diffGateResults(report, o.failAbove ?? {}, !!o.failOnRemoved) };
+    io.stdout.write(`${JSON.stringify(diffJson(report, gate), null, 2)}\n`);
+  }
   else io.stdout.write(renderDiffText(report));
   if (breaches.length) {
     io.stderr.write(`qforge: diff gate FAILED (${breaches.length}):\n${breaches.map((x) => `  ${x}`).join('\n')}\n`);

@@ -1,6 +1,6 @@
 /**
  * Structured gate results of `qforge diff --fail-above` for JSON output: one object per breach with the
- * quantity, species, temperature, value and limit (and their unit), so a CI job reads numbers instead of
+ * quantity, species, temperature `t`, value and limit (and their unit), so a CI job reads numbers instead of
  * parsing the prose `breaches`. Same rules as diff.ts `gateBreaches`.
  */
 import type { DiffReport } from './diff.js';
@@ -10,7 +10,7 @@ export interface GateResult {
   /** cp, h, s; 'removed' for a removed species; 'range' when the ranges no longer overlap. */
   quantity: 'cp' | 'h' | 's' | 'removed' | 'range';
   /** K; absent for 'removed' and 'range'. */
-  T?: number;
+  t?: number;
   value?: number;
   limit?: number;
   unit?: string;
@@ -27,7 +27,7 @@ export function diffGateResults(r: DiffReport, limits: { cp?: number; h?: number
       continue;
     }
     for (const q of qs) {
-      if (c.max[q].value > limits[q]!) out.push({ species: c.name, quantity: q, T: c.max[q].T, value: c.max[q].value, limit: limits[q]!, unit: UNIT[q] });
+      if (c.max[q].value > limits[q]!) out.push({ species: c.name, quantity: q, t: c.max[q].T, value: c.max[q].value, limit: limits[q]!, unit: UNIT[q] });
     }
   }
   if (failOnRemoved) for (const n of r.removed) out.push({ species: n, quantity: 'removed' });

@@ -27,6 +27,10 @@ import type { DatabaseSettings } from '../core/settings.js';
 import { standardPressurePa } from '../core/settings.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from '../core/version.js';
 import { compareText } from '../core/text.js';
+import { snakeKeys } from '../core/snake-case.js';
+
+/** thermo.json's format; /2 made every key snake_case (read-build.ts still reads /1). */
+export const DATABASE_FORMAT = 'qforge-database/2';
 
 export const CAUTION =
   'CAUTION: these polynomials are valid only inside the temperature range they were fitted on; outside it ' +
@@ -72,6 +76,8 @@ export interface BuiltSpecies {
   species: Species;
   /** 'sha256:<hex>' of the species' normalised input. */
   inputHash: string;
+  /** The normalised input itself (what `inputHash` hashes), recorded so `diff` can name the fields that moved. */
+  input?: unknown;
   computed: ComputedSpecies;
   fit: FitResult;
   /** Computed properties on the table grid (empty when tables are not written). */
@@ -149,19 +155,20 @@ export function speciesJson(b: BuiltSpecies) {
     temperature_ranges: { low: p.tLow, mid: p.tMid, high: p.tHigh },
     coefficients: { low: [...p.low], high: [...p.high] },
     at_298_15: {
-      enthalpy_of_formation_kJ_per_mol: b.computed.enthalpyOfFormation298 / 1000,
-      entropy_J_per_mol_K: b.computed.at298.S,
-      heat_capacity_J_per_mol_K: b.computed.at298.Cp,
-      h298_minus_h0_kJ_per_mol: b.computed.h298MinusH0 / 1000,
+      enthalpy_of_formation_kj_per_mol: b.computed.enthalpyOfFormation298 / 1000,
+      entropy_j_per_mol_k: b.computed.at298.S,
+      heat_capacity_j_per_mol_k: b.computed.at298.Cp,
+      h298_minus_h0_kj_per_mol: b.computed.h298MinusH0 / 1000,
     },
     fit_metrics: fitMetricsJson(b.fit.metrics),
     model: {
       structure: b.computed.summary.structure,
       contributions: [...b.computed.summary.contributions],
-      options: { ...b.computed.summary.options },
+      options: snakeKeys(b.computed.summary.options) as Record<string, string | number | boolean>,
       notes: [...b.computed.summary.notes],
     },
     input_hash: b.inputHash,
+    ...(b.input !== undefined ? { input: b.input } : {}),
     sources: [...b.species.sources],
     ...(b.uncertainty ? { uncertainty: uncertaintyJson(b.uncertainty) } : {}),
   };
@@ -169,7 +176,7 @@ export function speciesJson(b: BuiltSpecies) {
 
 export function databaseJson(species: readonly BuiltSpecies[], settings: DatabaseSettings) {
   return {
-    format: 'qforge-database/1',
+    format: DATABASE_FORMAT,
     tool: { name: TOOL_NAME, version: TOOL_VERSION },
     constants_edition: CONSTANTS_EDITION,
     standard_pressure: { label: settings.standard_pressure, pascal: standardPressurePa(settings.standard_pressure) },

@@ -43,11 +43,11 @@ export function uncertaintyJson(u: SpeciesUncertainty) {
     method: UNCERTAINTY_METHOD,
     inputs: u.inputs.map((i) => ({ name: i.name, value: i.value, u: i.u, unit: i.unit, sensitivity: i.method ?? 'central-difference' })),
     points: u.points.map((p) => ({
-      T_K: p.T,
-      u_cp_J_per_mol_K: p.cp,
-      u_s_J_per_mol_K: p.s,
-      u_h_minus_h298_kJ_per_mol: p.hMinusH298,
-      u_h_kJ_per_mol: p.h,
+      t_k: p.T,
+      u_cp_j_per_mol_k: p.cp,
+      u_s_j_per_mol_k: p.s,
+      u_h_minus_h298_kj_per_mol: p.hMinusH298,
+      u_h_kj_per_mol: p.h,
       largest: {
         cp: contributorsJson(p.largest.cp),
         s: contributorsJson(p.largest.s),
@@ -58,13 +58,13 @@ export function uncertaintyJson(u: SpeciesUncertainty) {
     ...(u.monteCarlo
       ? {
           monte_carlo: u.monteCarlo.map((m) => ({
-            T_K: m.T,
+            t_k: m.T,
             samples: m.samples,
             seed: m.seed,
-            u_cp_J_per_mol_K: m.cp,
-            u_s_J_per_mol_K: m.s,
-            u_h_minus_h298_kJ_per_mol: m.hMinusH298,
-            u_h_kJ_per_mol: m.h,
+            u_cp_j_per_mol_k: m.cp,
+            u_s_j_per_mol_k: m.s,
+            u_h_minus_h298_kj_per_mol: m.hMinusH298,
+            u_h_kj_per_mol: m.h,
           })),
         }
       : {}),

@@ -22,6 +22,8 @@ export interface NamedPolynomial {
   polynomial: Nasa7Polynomial;
   /** 'sha256:…' of the input, when the set came from thermo.json. */
   inputHash?: string;
+  /** The normalised input recorded in thermo.json (absent in older builds and in 80-column files). */
+  input?: unknown;
 }
 
 export interface PolynomialSet {
@@ -35,6 +37,8 @@ export interface PolynomialSet {
   species: Map<string, NamedPolynomial>;
   /** Build settings, when the set came from thermo.json. */
   settings?: DatabaseSettings;
+  /** summary.json's `code_fingerprint`, when the set is a build folder whose summary records it. */
+  codeFingerprint?: string;
 }
 
 /** The path does not exist or is not something `diff`/`compare` can read: a usage error. */
@@ -134,11 +138,12 @@ function fromThermoJson(text: string, origin: string, label: string, fromFolder:
     throw new ReadBuildError(`${origin}: not valid JSON (${(e as Error).message})`);
   }
   const d = db as { format?: unknown; species?: unknown; build_settings?: DatabaseSettings };
-  if (d?.format !== 'qforge-database/1' || !Array.isArray(d.species)) {
+  // /1 differs from /2 only in key spelling outside the fields read here.
+  if ((d?.format !== 'qforge-database/2' && d?.format !== 'qforge-database/1') || !Array.isArray(d.species)) {
     throw new ReadBuildError(`${origin}: not a qforge database (format ${JSON.stringify(d?.format)})`);
   }
   const species = new Map<string, NamedPolynomial>();
-  d.species.forEach((s: { name?: unknown; temperature_ranges?: { low: number; mid: number; high: number }; coefficients?: { low: number[]; high: number[] }; input_hash?: string }, i: number) => {
+  d.species.forEach((s: { name?: unknown; temperature_ranges?: { low: number; mid: number; high: number }; coefficients?: { low: number[]; high: number[] }; input_hash?: string; input?: unknown }, i: number) => {
     const r = s.temperature_ranges;
     const c = s.coefficients;
     if (typeof s.name !== 'string' || !r || !c || c.low?.length !== 7 || c.high?.length !== 7) {
@@ -149,6 +154,7 @@ function fromThermoJson(text: string, origin: string, label: string, fromFolder:
       polynomial: { tLow: r.low, tMid: r.mid, tHigh: r.high, low: c.low as never, high: c.high as never },
     };
     if (s.input_hash) entry.inputHash = s.input_hash;
+    if (s.input !== undefined) entry.input = s.input;
     species.set(s.name, entry);
   });
   const set: PolynomialSet = { label, origin, format: 'thermo.json', fromFolder, species };
@@ -195,6 +201,27 @@ export async function readPolynomialSet(p: string, label: string, opts: ReadOpti
     const text = await readInputFile(dir, label, 'build file');
     return p.endsWith('.json') ? fromThermoJson(text, label, label, false) : fromNasa7(text, label, label, false);
   }
+  const set = await readBuildFolder(dir, label, opts);
+  const fingerprint = await summaryFingerprint(dir);
+  if (fingerprint) set.codeFingerprint = fingerprint;
+  return set;
+}
+
+/**
+ * summary.json's code fingerprint, or undefined when the summary is missing, unreadable or older than the
+ * field: only `diff`'s "code changed" line depends on it, so it never fails a read.
+ */
+async function summaryFingerprint(dir: string): Promise<string | undefined> {
+  try {
+    const text = await readInputFile(path.join(dir, 'summary.json'), 'summary.json', 'build file');
+    const f = (JSON.parse(text) as { code_fingerprint?: unknown }).code_fingerprint;
+    return typeof f === 'string' ? f : undefined;
+  } catch {
+    return undefined;
+  }
+}
+
+async function readBuildFolder(dir: string, label: string, opts: ReadOptions): Promise<PolynomialSet> {
   const json = path.join(dir, 'thermo.json');
   const nasa = path.join(dir, 'nasa7.txt');
   const jsonLabel = path.join(label, 'thermo.json');

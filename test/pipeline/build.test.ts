@@ -52,8 +52,8 @@ describe('qforge build of the fixture database', () => {
     expect(n2.input_hash).toMatch(/^sha256:[0-9a-f]{64}$/);
     expect(n2.sources.join(' ')).toMatch(/Huber & Herzberg/);
     // NIST-JANAF 4th ed. table N-023: S°(298.15) = 191.609 J/(mol K), Cp° = 29.124 J/(mol K).
-    expect(n2.at_298_15.entropy_J_per_mol_K).toBeCloseTo(191.609, 1);
-    expect(n2.at_298_15.heat_capacity_J_per_mol_K).toBeCloseTo(29.124, 1);
+    expect(n2.at_298_15.entropy_j_per_mol_k).toBeCloseTo(191.609, 1);
+    expect(n2.at_298_15.heat_capacity_j_per_mol_k).toBeCloseTo(29.124, 1);
     expect(summary.species.every((s: { status: string; cache_hit: boolean }) => s.status === 'ok' && !s.cache_hit)).toBe(true);
     expect(summary.species[0].timings_ms).toHaveProperty('fit');
 
@@ -141,12 +141,17 @@ describe('qforge build of the fixture database', () => {
     expect(report.removed).toEqual([]);
     expect(report.changed.map((c: { name: string }) => c.name)).toEqual(['CO']);
     expect(report.changed[0].kind).toBe('properties');
-    expect(report.changed[0].inputChanged).toBe(true);
+    expect(report.changed[0].input_changed).toBe(true);
     expect(report.unchanged).toEqual(['Ar', 'H2O', 'N2', 'O']);
-    expect(report.changed[0].at.map((a: { T: number }) => a.T)).toEqual([298.15, 1000]);
+    expect(report.changed[0].at.map((a: { t: number }) => a.t)).toEqual([298.15, 1000]);
+    // Exactly the field that was edited, old -> new in its normalised unit; nothing else moved.
+    expect(report.changed[0].input_changes).toEqual([{ path: 'electronicStates[0].we', old: 2169.81358, new: 2171, unit: 'cm-1' }]);
+    expect(report.settings_changes).toEqual([]);
+    expect(report.code_changed).toBe(false);
 
     const text = await runCli(['diff', 'before', 'out'], ws.root);
     expect(text.stdout).toMatch(/~ CO: properties changed; input changed/);
+    expect(text.stdout).toMatch(/ {4}CO: electronicStates\[0\]\.we 2169\.81358 → 2171 cm-1; Cp\(1000 K\) [+-]\d+\.\d{4} J\/\(mol K\)\n/);
     expect(text.stdout).toMatch(/max \|dCp\|/);
     // The CI gate: the change is far above 1e-6 J/(mol K) and far below 10 J/(mol K).
     expect((await runCli(['diff', 'before', 'out', '--fail-above', 'cp=1e-6'], ws.root)).code).toBe(1);

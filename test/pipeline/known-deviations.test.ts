@@ -94,10 +94,12 @@ describe('known deviations in qforge compare (NIST-JANAF 4th ed. N-023, C-093)',
     expect(report.strict).toBe(false);
     expect(report.breaches).toEqual([]);
     const n2 = report.known.find((d: { species: string }) => d.species === 'N2');
-    expect(n2).toMatchObject({ quantity: 'cp', T: 6000, status: 'known', ok: false, tolerance: 0.1, widenedTolerance: 0.25, knownDeviation: 0 });
-    expect(report.knownDeviations[0]).toMatchObject({ species: 'N2', from: 3000, reason: N2_REASON, recordedAt: 'db/qforge.yaml:17', needed: 1, exceeded: 0, unneeded: [] });
+    expect(n2).toMatchObject({ quantity: 'cp', t: 6000, status: 'known', ok: false, tolerance: 0.1, widened_tolerance: 0.25, known_deviation: 0 });
+    expect(report.known_deviations[0]).toMatchObject({ species: 'N2', from: 3000, reason: N2_REASON, recorded_at: 'db/qforge.yaml:17', needed: 1, exceeded: 0, unneeded: [] });
     // N2 Cp, S, H at 3000 and 6000 K lie in the window, but only Cp is widened: 2 values covered.
-    expect(report.knownDeviations[0].covered).toBe(2);
+    expect(report.known_deviations[0].covered).toBe(2);
+    expect(report.format).toBe('qforge-compare/2');
+    expect(report.gate.results).toEqual([]);
     expect(report.deviations.filter((d: { status: string }) => d.status === 'known').length).toBe(2);
   });
 
@@ -129,9 +131,14 @@ describe('known deviations in qforge compare (NIST-JANAF 4th ed. N-023, C-093)',
     const report = JSON.parse(r.stdout);
     expect(report.tolerances).toEqual({ cp: 0.01, s: 0.05, h: 0.05 });
     const at = (species: string, q: string, T: number) =>
-      report.deviations.find((d: { species: string; quantity: string; T: number }) => d.species === species && d.quantity === q && d.T === T);
+      report.deviations.find((d: { species: string; quantity: string; t: number }) => d.species === species && d.quantity === q && d.t === T);
     expect(at('N2', 'cp', 6000).status).toBe('known');
     expect(at('N2', 'cp', 1000).status).toBe('breach'); // +0.085, outside the window, against cp=0.01
+    // Structured gate results: one per breach with its number and the limit it failed.
+    expect(report.gate.results).toContainEqual({
+      species: 'N2', quantity: 'cp', t: 1000, value: at('N2', 'cp', 1000).deviation, limit: 0.01, unit: 'J/(mol K)', reference: at('N2', 'cp', 1000).reference,
+    });
+    expect(report.gate.results).toHaveLength(report.breaches.length);
     expect(at('Ar', 'cp', 1000).status).toBe('ok'); // Cp = 5/2 R exactly
   });
 

@@ -24,11 +24,11 @@ describe('uncertainty in a build', () => {
     expect(r.code, r.stderr).toBe(0);
     const db = await readJson(path.join(ws.out, 'thermo.json'));
     for (const s of db.species) {
-      expect(s.uncertainty.points.map((p: { T_K: number }) => p.T_K)).toEqual([298.15, 1000, 2000]);
+      expect(s.uncertainty.points.map((p: { t_k: number }) => p.t_k)).toEqual([298.15, 1000, 2000]);
       if (s.name !== 'H2O') {
         expect(s.uncertainty.declared).toBe(false);
         expect(s.uncertainty.inputs).toEqual([]);
-        expect(s.uncertainty.points[0].u_s_J_per_mol_K).toBe(0);
+        expect(s.uncertainty.points[0].u_s_j_per_mol_k).toBe(0);
         expect(s.uncertainty.monte_carlo).toBeUndefined();
       }
     }
@@ -37,10 +37,10 @@ describe('uncertainty in a build', () => {
     expect(h2o.inputs.map((i: { name: string }) => i.name)).toEqual(['vibration[0]', 'vibration[1]', 'vibration[2]', 'enthalpy_of_formation']);
     expect(h2o.inputs[3]).toMatchObject({ u: 40, unit: 'J/mol', sensitivity: 'central-difference' });
     const at1000 = h2o.points[1];
-    expect(at1000.u_cp_J_per_mol_K).toBeGreaterThan(0);
+    expect(at1000.u_cp_j_per_mol_k).toBeGreaterThan(0);
     expect(at1000.largest.cp.length).toBe(3);
     // u(H°) = sqrt(u(H−H298)² + u(ΔfH°)²): the formation enthalpy enters H° only.
-    expect(at1000.u_h_kJ_per_mol ** 2).toBeCloseTo(at1000.u_h_minus_h298_kJ_per_mol ** 2 + 0.04 ** 2, 12);
+    expect(at1000.u_h_kj_per_mol ** 2).toBeCloseTo(at1000.u_h_minus_h298_kj_per_mol ** 2 + 0.04 ** 2, 12);
     expect(h2o.monte_carlo.map((m: { samples: number }) => m.samples)).toEqual([30, 30, 30]);
     const html = await readFile(path.join(ws.out, 'report.html'), 'utf8');
     expect(html).toContain('Propagated uncertainty');

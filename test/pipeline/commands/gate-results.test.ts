@@ -14,7 +14,7 @@ const report = {
 describe('diffGateResults', () => {
   it('one object per breach, with its number and limit', () => {
     expect(diffGateResults(report, { cp: 0.01, s: 0.5 }, true)).toEqual([
-      { species: 'H2O2', quantity: 'cp', T: 1000, value: 0.04, limit: 0.01, unit: 'J/(mol K)' },
+      { species: 'H2O2', quantity: 'cp', t: 1000, value: 0.04, limit: 0.01, unit: 'J/(mol K)' },
       { species: 'NO', quantity: 'range' },
       { species: 'OLD', quantity: 'removed' },
     ]);

@@ -325,7 +325,7 @@ export interface SpeciesOutcome {
 /** Cache keys of one species' stages; see plan.ts for what each depends on. */
 export function stageKeys(inputHash: string, species: Species, plan: SpeciesPlan, fitOptions: FitOptions) {
   const base = [TOOL_NAME, TOOL_VERSION, codeFingerprint(), CONSTANTS_EDITION, inputHash, species, plan.physics];
-  const samples = hashParts('samples', ...base, plan.sampleTemperatures);
+  const samples = hashParts('samples', ...base, plan.sampleTemperatures, plan.zoneTemperatures);
   return {
     samples,
     fit: hashParts('fit', TOOL_NAME, TOOL_VERSION, codeFingerprint(), samples, fitOptions),
@@ -463,7 +463,7 @@ export async function buildOneSpecies(
   const computed = await stage(
     'samples',
     keys.samples,
-    () => computeSamples(v.species, plan.physics, plan.sampleTemperatures),
+    () => computeSamples(v.species, plan.physics, plan.sampleTemperatures, plan.zoneTemperatures),
     '',
     'computing the properties',
   );
@@ -472,7 +472,7 @@ export async function buildOneSpecies(
   if (!fit) return out;
 
   const tv = performance.now();
-  const violations = verifySpecies(fit, computed.samples, plan.tolerances, fitOptions.continuityOrder, classicalCpFloor(v.species.structure), where);
+  const violations = verifySpecies(fit, computed.samples, plan.tolerances, fitOptions.continuityOrder, classicalCpFloor(v.species.structure), where, computed.extrapolationSamples);
   out.timings.verify = performance.now() - tv;
   if (violations.length) {
     out.diagnostics.push(...violations.map((d) => locateFitViolation(d, plan.tolerances, limitSource, v)));

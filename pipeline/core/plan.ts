@@ -2,7 +2,7 @@
  * The per-species plan: everything a species' compute, fit, verify and table stages depend on, derived
  * once from the database settings and the species' own overrides. Each stage's cache key is a hash of
  * exactly the part of the plan it reads, so a changed setting invalidates only what it affects:
- *   compute ← input, physics options, sampling grid
+ *   compute ← input, physics options, sampling grid, extrapolation-zone grid
  *   fit     ← compute key, fit options
  *   table   ← input, physics options, table grid
  *   verify  ← tolerances (cheap; never cached)
@@ -14,6 +14,7 @@ import type { DatabaseSettings, FitTolerancesSetting } from './settings.js';
 import { fitLimitsFor, midSearchFor } from './fit-plan.js';
 import { standardPressurePa } from './settings.js';
 import { temperatureGrid, tidy } from './grid.js';
+import { extrapolationZoneTemperatures } from './zone-grid.js';
 
 export interface SpeciesPlan {
   ranges: { low: number; mid: number; high: number };
@@ -25,6 +26,8 @@ export interface SpeciesPlan {
   tolerances: FitTolerancesSetting;
   /** Temperatures (K) of tables/<name>.csv, inside the species' range, ascending. */
   tableTemperatures: number[];
+  /** Temperatures (K) just beyond the range where the extrapolated fit is checked (zone-grid.ts); never fitted. */
+  zoneTemperatures: number[];
 }
 
 export function planSpecies(species: Species, settings: DatabaseSettings): SpeciesPlan {
@@ -57,5 +60,6 @@ export function planSpecies(species: Species, settings: DatabaseSettings): Speci
   const tableTemperatures = [...new Set([...temperatureGrid(t.from, t.to, t.step), ...t.extra.map(tidy)])]
     .filter((x) => x >= ranges.low && x <= ranges.high)
     .sort((a, b) => a - b);
-  return { ranges, physics, sampleTemperatures, fitOptions, tolerances, tableTemperatures };
+  const zoneTemperatures = extrapolationZoneTemperatures(ranges.low, ranges.high);
+  return { ranges, physics, sampleTemperatures, fitOptions, tolerances, tableTemperatures, zoneTemperatures };
 }

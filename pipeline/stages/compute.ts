@@ -18,6 +18,11 @@ import { standardPropertiesOf } from '../../src/thermo/properties.js';
 export interface ComputedSpecies {
   /** Cp/R, H/RT (absolute), S/R on the sampling grid, ascending T. */
   samples: FitSample[];
+  /**
+   * Cp/R, H/RT, S/R at the extrapolation-zone temperatures just beyond the range (plan.zoneTemperatures),
+   * ascending. Only the verify stage reads them; the fit never sees them.
+   */
+  extrapolationSamples: FitSample[];
   /** The point at 298.15 K the fit reproduces exactly. */
   anchor: FitSample;
   /** Properties at 298.15 K in table units. */
@@ -79,7 +84,27 @@ function propertiesAt(ev: ThermoEvaluator, values: ThermoGrid, j: number): Stand
   return p;
 }
 
-export function computeSamples(species: Species, physics: PhysicsOptions, temperatures: readonly number[]): ComputedSpecies {
+/**
+ * The zone points are evaluated apart from the samples: with the samples' evaluator when its ceiling holds
+ * them, else with one built for their ceiling — so the samples (and hence the fit) are the numbers they
+ * would be without the zone, bit for bit.
+ */
+function zoneSamples(species: Species, physics: PhysicsOptions, ev: ThermoEvaluator, sampleTemperatures: readonly number[], zone: readonly number[]): FitSample[] {
+  if (zone.length === 0) return [];
+  const ceiling = evaluatorCeiling([...sampleTemperatures, ...zone]);
+  const zev = ceiling === evaluatorCeiling(sampleTemperatures) ? ev : createThermoEvaluator(species, physics, { maxTemperature: ceiling });
+  const values = zev.grid(zone);
+  const out: FitSample[] = new Array<FitSample>(values.T.length);
+  for (let j = 0; j < values.T.length; j++) out[j] = toSample(propertiesAt(zev, values, j));
+  return out;
+}
+
+export function computeSamples(
+  species: Species,
+  physics: PhysicsOptions,
+  temperatures: readonly number[],
+  zoneTemperatures: readonly number[] = [],
+): ComputedSpecies {
   const ev = evaluatorFor(species, physics, temperatures);
   const n = temperatures.length;
   const values = ev.grid([...temperatures, T_REF]);
@@ -92,6 +117,7 @@ export function computeSamples(species: Species, physics: PhysicsOptions, temper
   recent.push({ species, standardPressure: physics.standardPressure, ev, values, index });
   return {
     samples,
+    extrapolationSamples: zoneSamples(species, physics, ev, temperatures, zoneTemperatures),
     anchor: toSample(at298),
     at298,
     h298MinusH0: ev.h298MinusH0,

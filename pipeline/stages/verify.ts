@@ -20,15 +20,18 @@ export function verifySpecies(
   /** Classical Cp/R floor of the structure (5/2 atom, 7/2 linear or diatomic, 4 nonlinear). */
   cpFloor: number,
   where: { file: string; species: string; line?: number; column?: number },
+  /** Computed points just beyond the range (compute stage `extrapolationSamples`); checked, never fitted. */
+  beyond: readonly FitSample[] = [],
 ): Diagnostic[] {
   const { relative_to_cp: perCp, cp, h, s } = tolerances;
-  const violations = assessFit(fit, samples, { cp, h, s, perCp: { ...perCp }, continuityOrder, cpFloor });
+  const violations = assessFit(fit, samples, { cp, h, s, perCp: { ...perCp }, continuityOrder, cpFloor }, beyond);
   return violations.map((v) => ({
     severity: 'error' as const,
     code: `fit-${v.quantity}`,
     ...where,
-    // fit.cp / fit.cp.relative_to_cp: the quantity and the part of its limit that applied.
-    path: `fit.${v.quantity}${v.limitPart === 'perCp' ? '.relative_to_cp' : ''}`,
+    // fit.cp / fit.cp.relative_to_cp: the quantity and the part of its limit that applied (the departure
+    // check beyond the ends is a multiple of the Cp limit, so it names the Cp key).
+    path: `fit.${v.quantity === 'extrapolation-departs' ? 'cp' : v.quantity}${v.limitPart === 'perCp' ? '.relative_to_cp' : ''}`,
     message: v.message,
   }));
 }

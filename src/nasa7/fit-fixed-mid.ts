@@ -55,6 +55,7 @@ function minimaxCoefficients(
   options: FitOptions,
   temperatures: string,
   leastSquares: { f: FactoredProblem; z: Float64Array; up: number[] },
+  cutoff: number,
 ): number[] {
   const unit = options.weights.cp === 1 && options.weights.h === 1 && options.weights.s === 1;
   const f = unit
@@ -66,10 +67,10 @@ function minimaxCoefficients(
   const up = start.up!;
   const c = reducedTargets(f, y, up);
   const limits = sampleLimits([...ranges.low, ...ranges.high], options.limits);
-  return assembleSolution(f, up, minimaxReduced(f, c, limits, start.z!, 3, 3 * ranges.low.length).z);
+  return assembleSolution(f, up, minimaxReduced(f, c, limits, start.z!, 3, 3 * ranges.low.length, cutoff).z);
 }
 
-function constraintRhs(anchor: FitSample, m: number): number[] {
+export function constraintRhs(anchor: FitSample, m: number): number[] {
   const d = new Array<number>(m).fill(0);
   d[1] = anchor.sR;
   return d;
@@ -80,6 +81,27 @@ function constraintRhs(anchor: FitSample, m: number): number[] {
  * times (the midpoint search) so the key is built once.
  */
 export function fitAtFixedMid(samples: readonly FitSample[], anchor: FitSample, options: FitOptions, temperatures = temperatureKey(samples)): FitResult {
+  return withMetrics(fitWithoutMetrics(samples, anchor, options, temperatures), anchor);
+}
+
+/** A fit whose quality metrics are not computed yet (the midpoint search needs them for its winner only). */
+export interface UnmeasuredFit {
+  polynomial: Nasa7Polynomial;
+  ranges: SplitSamples;
+  solver: FitResult['solver'] & object;
+}
+
+/** Adds the metrics: exactly what `fitAtFixedMid` returns for the same fit. */
+export function withMetrics(fit: UnmeasuredFit, anchor: FitSample): FitResult {
+  return { polynomial: fit.polynomial, metrics: computeMetrics(fit.polynomial, fit.ranges, anchor), solver: fit.solver };
+}
+
+/**
+ * `fitAtFixedMid` without the metrics. `cutoff` (minimax only; see minimaxReduced): the caller discards
+ * the fit unless its worst limit ratio is below this, so the minimax iteration may stop once it has
+ * proved the optimum is not (the returned fit is then valid but not optimal, and its ratio ≥ cutoff).
+ */
+export function fitWithoutMetrics(samples: readonly FitSample[], anchor: FitSample, options: FitOptions, temperatures: string, cutoff = Infinity): UnmeasuredFit {
   const ranges = splitSamples(samples, anchor, options);
   const hShift = anchor.hRT * anchor.T;
   const f = factorisationFor({ temperatures, weights: options.weights, anchorT: anchor.T, tMid: options.tMid, continuityOrder: options.continuityOrder }, ranges, anchor);
@@ -89,14 +111,14 @@ export function fitAtFixedMid(samples: readonly FitSample[], anchor: FitSample, 
   if (options.method === 'minimax') {
     // Started from least squares and never worse than it on the measure the check uses.
     const lsWorst = worstLimitRatio(polynomial, ranges, options.limits).ratio;
-    const mm = finish(minimaxCoefficients(ranges, anchor, options, temperatures, { f, z: sol.z!, up: sol.up! }), anchor, options);
+    const mm = finish(minimaxCoefficients(ranges, anchor, options, temperatures, { f, z: sol.z!, up: sol.up! }, cutoff), anchor, options);
     const mmWorst = worstLimitRatio(mm, ranges, options.limits).ratio;
     if (mmWorst < lsWorst) polynomial = mm;
     worst = Math.min(lsWorst, mmWorst);
   }
   return {
     polynomial,
-    metrics: computeMetrics(polynomial, ranges, anchor),
+    ranges,
     solver: {
       conditionNumber: sol.conditionNumber,
       residualNorm: sol.residualNorm,

@@ -8,11 +8,16 @@
  *    the best minimax result kept. Including the fixed tMid makes the search never worse than minimax at
  *    that tMid; the least-squares ranking alone is a poor guide (on the synthetic set its favourite was
  *    often worse after minimax than 1000 K), and minimax at every candidate costs a full fit each.
+ * Cost: the least-squares ranking scores each candidate from its design-row residuals (ls-score.ts: one
+ * application of the cached factorisation, no polynomial, no metrics), and the quality metrics are
+ * computed for the winning fit only. Both change nothing but rounding-level ties of the ranking, so the
+ * search is as good as one that finishes and measures every candidate (tested in mid-search.test.ts).
  * Ties go to the lower candidate, so the choice is deterministic. Candidates that cannot be fitted (e.g.
  * too few samples on one side) are skipped; if none can, the first candidate's error is reported.
  */
 import { FitError } from './errors.js';
-import { fitAtFixedMid } from './fit-fixed-mid.js';
+import { fitAtFixedMid, fitWithoutMetrics, withMetrics, type UnmeasuredFit } from './fit-fixed-mid.js';
+import { leastSquaresScore } from './ls-score.js';
 import { worstLimitRatio } from './limit-ratio.js';
 import { temperatureKey } from './factor-cache.js';
 import type { FitOptions, FitResult, FitSample } from './types.js';
@@ -28,7 +33,7 @@ export function worstWeightedError(result: FitResult, weights: FitOptions['weigh
   return worst;
 }
 
-function ratioOf(result: FitResult, samples: readonly FitSample[], options: FitOptions): number {
+function ratioOf(result: Pick<FitResult, 'polynomial'>, samples: readonly FitSample[], options: FitOptions): number {
   const { tMid } = result.polynomial;
   const low = samples.filter((s) => s.T <= tMid);
   const high = samples.filter((s) => s.T >= tMid);
@@ -40,7 +45,11 @@ export function optimiseMid(samples: readonly FitSample[], anchor: FitSample, op
   const temperatures = temperatureKey(samples);
   if (!range) return fitAtFixedMid(samples, anchor, options, temperatures);
   const minimax = options.method === 'minimax';
-  const scored: Array<{ tMid: number; result: FitResult; score: number }> = [];
+  const w = options.weights;
+  // Without rows for every quantity the residuals do not give the limit ratio of all three; score such
+  // (unusual) options from the finished least-squares polynomial as the check would.
+  const cheap = !minimax || (w.cp > 0 && w.h > 0 && w.s > 0);
+  const scored: Array<{ tMid: number; score: number }> = [];
   let firstError: unknown;
   let tried = 0;
   const count = Math.floor((range.max - range.min) / range.step + 1e-9) + 1;
@@ -48,9 +57,13 @@ export function optimiseMid(samples: readonly FitSample[], anchor: FitSample, op
     const tMid = range.min + i * range.step;
     tried++;
     try {
-      const result = fitAtFixedMid(samples, anchor, { ...options, tMid, method: 'least-squares' }, temperatures);
-      const score = minimax ? ratioOf(result, samples, options) : worstWeightedError(result, options.weights);
-      scored.push({ tMid, result, score });
+      const at = { ...options, tMid, method: 'least-squares' as const };
+      let score: number;
+      if (cheap) {
+        const s = leastSquaresScore(samples, anchor, at, temperatures);
+        score = minimax ? s.limitRatio : s.weighted;
+      } else score = ratioOf(fitAtFixedMid(samples, anchor, at, temperatures), samples, options);
+      scored.push({ tMid, score });
     } catch (e) {
       if (!(e instanceof FitError)) throw e;
       firstError ??= e;
@@ -62,9 +75,9 @@ export function optimiseMid(samples: readonly FitSample[], anchor: FitSample, op
   }
   // Stable sort: equal scores keep ascending tMid.
   const ranked = [...scored].sort((a, b) => a.score - b.score);
-  let best = ranked[0]!;
+  let best: UnmeasuredFit | undefined;
   if (minimax) {
-    let refined: { result: FitResult; score: number } | undefined;
+    let refined: { fit: UnmeasuredFit; score: number } | undefined;
     const nearestFixed = [...scored].sort((a, b) => Math.abs(a.tMid - options.tMid) - Math.abs(b.tMid - options.tMid))[0]!;
     const chosen = new Set([nearestFixed.tMid, ...ranked.slice(0, MINIMAX_CANDIDATES - 1).map((c) => c.tMid)]);
     // The fixed midpoint first; another candidate must beat it by more than rounding noise (an atom's exact
@@ -72,14 +85,19 @@ export function optimiseMid(samples: readonly FitSample[], anchor: FitSample, op
     const order = [nearestFixed.tMid, ...[...chosen].filter((t) => t !== nearestFixed.tMid).sort((a, b) => a - b)];
     for (const tMid of order) {
       try {
-        const result = fitAtFixedMid(samples, anchor, { ...options, tMid }, temperatures);
-        const score = result.solver?.worstLimitRatio ?? ratioOf(result, samples, options);
-        if (!refined || score < refined.score * (1 - 1e-6) - 1e-9) refined = { result, score };
+        // A candidate must beat the best so far by the margin below; the minimax fit may stop as soon as
+        // it has proved it cannot (exact pruning, see minimaxReduced).
+        const cutoff = refined ? refined.score * (1 - 1e-6) - 1e-9 : Infinity;
+        const fit = fitWithoutMetrics(samples, anchor, { ...options, tMid }, temperatures, cutoff);
+        const score = fit.solver.worstLimitRatio ?? ratioOf({ polynomial: fit.polynomial }, samples, options);
+        if (!refined || score < refined.score * (1 - 1e-6) - 1e-9) refined = { fit, score };
       } catch (e) {
         if (!(e instanceof FitError)) throw e;
       }
     }
-    if (refined) best = { tMid: refined.result.polynomial.tMid, ...refined };
+    best = refined?.fit;
   }
-  return { ...best.result, solver: { ...best.result.solver!, midCandidates: tried } };
+  best ??= fitWithoutMetrics(samples, anchor, { ...options, tMid: ranked[0]!.tMid, method: 'least-squares' }, temperatures);
+  const result = withMetrics(best, anchor);
+  return { ...result, solver: { ...result.solver!, midCandidates: tried } };
 }

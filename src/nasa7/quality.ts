@@ -27,6 +27,17 @@
  *     below 200 K.)
  *     Measured on closed-form RRHO data (test/src/nasa7): careful fits of N2, CH4, H2O turn over by
  *     ≈ 0.006–0.06 in Cp/R near the ends (CH4: 0.055 at 5540–6000 K with E = 0.083) — the form's floor.
+ *  6. departure beyond the ends: at computed points just outside the range (the caller's extrapolation
+ *     samples, e.g. every 5 K over the 20 K below T_low and every 20 K over the 100 K above T_high — the
+ *     partition functions are valid there), |fitted − computed| Cp/R ≤ extrapolationDeparture × the Cp
+ *     limit at that point (limits.ts, from the computed Cp/R). Rules 3 and 5 bound the fit's shape; this
+ *     one bounds where it goes, so a fit that leaves the physics just past its end (a quartic that is
+ *     still rising and smooth but away from the true Cp) is caught. Why 3×: a fit inside its limit at the
+ *     end and following the data's slope stays well within it over these short zones; 3× leaves room for
+ *     the form's natural drift while a genuine turn-away exceeds it. Measured with default settings (worst
+ *     departure as a fraction of this limit): demo database worst 0.22 (CH3OH at 6100 K); 205 closed-form
+ *     RRHO species (seeded synthetic set, propane, benzene, n-C7, n-C16, n-C30) median 0.33, 90th
+ *     percentile 0.45, max 0.63 (benzene at 180 K). Extrapolation samples never enter the fit.
  */
 import { cpDerivative, cpSecondDerivative, evaluateNasa7, evaluateRange } from './evaluate.js';
 import { DEFAULT_FIT_LIMITS, limitAt, limitPart } from './limits.js';
@@ -53,6 +64,8 @@ export interface FitTolerances {
   extrapolation: number;
   /** How far below the low end Cp is checked, K (20 K: a large molecule's Cp falls fast at low T). */
   extrapolationBelow: number;
+  /** Allowed |fitted − computed| Cp/R at the extrapolation samples, as a multiple of the Cp limit there (rule 6). */
+  extrapolationDeparture: number;
   /**
    * Least Cp/R of the structure's classical limit: 5/2 atom, 7/2 linear, 4 nonlinear (translation plus
    * fully excited rotation; vibration only adds). The floor checked is min(this, least computed Cp/R)
@@ -75,6 +88,7 @@ export const DEFAULT_FIT_TOLERANCES: Readonly<FitTolerances> = Object.freeze({
   continuityOrder: 1,
   extrapolation: 100,
   extrapolationBelow: 20,
+  extrapolationDeparture: 3,
   cpFloor: 2.5,
 });
 
@@ -90,7 +104,8 @@ export type FitViolationQuantity =
   | 'anchor-h'
   | 'anchor-s'
   | 'cp-positive'
-  | 'cp-wiggle';
+  | 'cp-wiggle'
+  | 'extrapolation-departs';
 
 export interface FitViolation {
   quantity: FitViolationQuantity;
@@ -345,16 +360,56 @@ function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: 
   }
 }
 
+/** What to try when the fit leaves the computed Cp/R just beyond its range. */
+const DEPARTURE_REMEDY =
+  'the polynomial must not be used there; to cover that temperature, widen this species\' temperature_ranges (the computed values exist there), otherwise move or search its midpoint (fit.optimise_mid) or, if the computed data are right and the departure is acceptable, widen its Cp limits (tolerances in its own file)';
+
+function departureChecks(poly: Nasa7Polynomial, beyond: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
+  for (const end of ['low', 'high'] as const) {
+    let worst: { ratio: number; T: number; fitted: number; computed: number; err: number; limit: number } | undefined;
+    for (const smp of beyond) {
+      if (end === 'low' ? !(smp.T < poly.tLow) : !(smp.T > poly.tHigh)) continue;
+      const fitted = evaluateRange(end === 'low' ? poly.low : poly.high, smp.T).cpR;
+      const err = Number.isFinite(fitted) ? Math.abs(fitted - smp.cpR) : Infinity;
+      const limit = tol.extrapolationDeparture * limitAt({ absolute: tol.cp, perCp: tol.perCp.cp }, smp.cpR);
+      const ratio = err / limit;
+      if (!worst || ratio > worst.ratio) worst = { ratio, T: smp.T, fitted, computed: smp.cpR, err, limit };
+    }
+    if (!worst || !(worst.ratio > 1)) continue;
+    const spec = { absolute: tol.cp, perCp: tol.perCp.cp };
+    const part = limitPart(spec, worst.computed);
+    const tEnd = end === 'low' ? poly.tLow : poly.tHigh;
+    const setBy = part === 'perCp' ? `${fmt(tol.perCp.cp)} × Cp/R, the size-scaled part` : `the absolute part ${fmt(tol.cp)}`;
+    out.push({
+      quantity: 'extrapolation-departs',
+      range: 'extrapolation',
+      T: worst.T,
+      value: worst.err,
+      limit: worst.limit,
+      limitPart: part,
+      cpR: worst.computed,
+      message: `Cp/R of the fit is ${fmt(worst.fitted)} at ${fmt(worst.T)} K, ${fmt(Math.abs(worst.T - tEnd))} K beyond T_${end} = ${fmt(tEnd)} K, where the computed Cp/R is ${fmt(worst.computed)}: it departs by ${fmt(worst.err)}, ${fmt(worst.ratio)} × the limit ${fmt(worst.limit)} (${fmt(tol.extrapolationDeparture)} × the Cp limit ${fmt(limitAt(spec, worst.computed))} there, set by ${setBy}); ${DEPARTURE_REMEDY}`,
+    });
+  }
+}
+
 /**
  * All violations of the tolerances (defaults from DEFAULT_FIT_TOLERANCES for missing fields), in a fixed
- * order: errors (low, high; Cp, H, S), continuity, anchor, positivity, smoothness. Empty when the fit
- * passes.
+ * order: errors (low, high; Cp, H, S), continuity, anchor, positivity, smoothness, departure beyond the
+ * ends (low, high). Empty when the fit passes. `beyond`: computed points outside [tLow, tHigh] for rule
+ * 6 (points inside are ignored by it; none → rule 6 is not applied).
  */
-export function assessFit(result: FitResult, samples: readonly FitSample[], tolerances: Partial<FitTolerances> = {}): FitViolation[] {
+export function assessFit(
+  result: FitResult,
+  samples: readonly FitSample[],
+  tolerances: Partial<FitTolerances> = {},
+  beyond: readonly FitSample[] = [],
+): FitViolation[] {
   const tol = normaliseTolerances(tolerances);
   const out: FitViolation[] = [];
   errorChecks(result.polynomial, samples, tol, out);
   continuityChecks(result, tol, out);
   shapeChecks(result.polynomial, samples, tol, out);
+  departureChecks(result.polynomial, beyond, tol, out);
   return out;
 }

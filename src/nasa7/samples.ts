@@ -29,7 +29,10 @@ function describeSample(s: FitSample, i: number): string {
 }
 
 function distinctSorted(ts: number[]): number[] {
-  const sorted = [...ts].sort((a, b) => a - b);
+  // Samples usually arrive in ascending order (a grid): then the sort, which would not change them, is skipped.
+  let ascending = true;
+  for (let i = 1; i < ts.length && ascending; i++) ascending = ts[i - 1]! <= ts[i]!;
+  const sorted = ascending ? ts : [...ts].sort((a, b) => a - b);
   return sorted.filter((t, i) => i === 0 || t !== sorted[i - 1]);
 }
 
@@ -74,7 +77,9 @@ export function splitSamples(samples: readonly FitSample[], anchor: FitSample, o
   const low: FitSample[] = [];
   const high: FitSample[] = [];
   samples.forEach((s, i) => {
-    const bad = (['T', 'cpR', 'hRT', 'sR'] as const).filter((k) => !Number.isFinite(s[k]));
+    // The common all-finite case without building the list of bad keys (this runs per midpoint candidate).
+    const finite = Number.isFinite(s.T) && Number.isFinite(s.cpR) && Number.isFinite(s.hRT) && Number.isFinite(s.sR);
+    const bad = finite ? [] : (['T', 'cpR', 'hRT', 'sR'] as const).filter((k) => !Number.isFinite(s[k]));
     if (bad.length) {
       if (nonFinite++ < 5) problems.push(`${describeSample(s, i)}: ${bad.join(', ')} not finite (${bad.map((k) => String(s[k])).join(', ')})`);
       return;

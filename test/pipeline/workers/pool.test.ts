@@ -23,6 +23,19 @@ afterAll(async () => {
   await rm(root, { recursive: true, force: true });
 });
 
+/** A two-worker pool over the fixture database (no cache); `extra` goes into the workers' init. */
+async function fixturePool(extra: { testCrashOn?: string }) {
+  const check = await checkDatabase({ dir: path.join(root, 'fx') });
+  const cache = new StageCache(undefined);
+  const pool = createSpeciesPool({
+    jobs: 2,
+    init: { settings: check.settings, limits: { setAt: {} }, cacheDir: undefined, codeFingerprint: 'test', ...extra },
+    inline: (v) => buildOneSpecies(v, check.settings, cache, check),
+    crashed: (v, reason) => ({ valid: v, diagnostics: [{ severity: 'error', file: v.displayFile, path: '', message: reason }], cache: {}, cacheNotes: [], timings: {} }),
+  });
+  return { check, cache, pool };
+}
+
 describe('worker pool', () => {
   it('--jobs 1, 2 and 3 write the same bytes (demo and fixture databases)', async () => {
     for (const db of ['demo', 'fx']) {
@@ -47,15 +60,7 @@ describe('worker pool', () => {
   });
 
   it('a crashing worker fails its batch with a clear error and the pool goes on (no hang)', async () => {
-    const dir = path.join(root, 'fx');
-    const check = await checkDatabase({ dir });
-    const cache = new StageCache(undefined);
-    const pool = createSpeciesPool({
-      jobs: 2,
-      init: { settings: check.settings, limits: { setAt: {} }, cacheDir: undefined, codeFingerprint: 'test', testCrashOn: 'CO' },
-      inline: (v) => buildOneSpecies(v, check.settings, cache, check),
-      crashed: (v, reason) => ({ valid: v, diagnostics: [{ severity: 'error', file: v.displayFile, path: '', message: reason }], cache: {}, cacheNotes: [], timings: {} }),
-    });
+    const { check, pool } = await fixturePool({ testCrashOn: 'CO' });
     try {
       const batches = check.species.map((v) => [v]);
       const results = (await Promise.all(batches.map((b) => pool.run(b)))).flat();
@@ -64,6 +69,21 @@ describe('worker pool', () => {
       expect(co.built).toBeUndefined();
       expect(co.diagnostics[0]!.message).toMatch(/worker thread exited with code 70/);
       for (const o of results.filter((x) => x.valid.name !== 'CO')) expect(o.built, o.valid.name).toBeDefined();
+    } finally {
+      await pool.close();
+    }
+  }, 120_000);
+
+  it('a species built in a worker carries the extrapolation-zone points the verify stage checked, as inline', async () => {
+    const { check, cache, pool } = await fixturePool({});
+    try {
+      const results = (await Promise.all(check.species.map((v) => pool.run([v])))).flat();
+      for (const [i, o] of results.entries()) {
+        const inline = await buildOneSpecies(check.species[i]!, check.settings, cache, check);
+        const zone = o.built?.computed.extrapolationSamples;
+        expect(zone?.length, o.valid.name).toBeGreaterThan(0);
+        expect(zone).toEqual(inline.built!.computed.extrapolationSamples);
+      }
     } finally {
       await pool.close();
     }

@@ -19,6 +19,7 @@ import { continuityResiduals } from '../../../src/nasa7/metrics.js';
 import { assessFit } from '../../../src/nasa7/quality.js';
 import type { FitSample, PartialFitOptions } from '../../../src/nasa7/index.js';
 import { DEFAULT_SETTINGS } from '../../../pipeline/core/settings.js';
+import { extrapolationZoneTemperatures } from '../../../pipeline/core/zone-grid.js';
 import { BENZENE_RRHO, constructedAlkane, PROPANE_RRHO, syntheticSpecies } from '../../fixtures/nasa7/synthetic-set.js';
 import { grid, rrhoSample, type RrhoModel } from './synthetic.js';
 
@@ -44,6 +45,8 @@ const DEFAULTS: PartialFitOptions = {
 const LS_1000: PartialFitOptions = { tLow: low, tMid: 1000, tHigh: high, method: 'least-squares', limits: LIMITS };
 
 const TEMPERATURES = grid(low, high, S.fit.sampling_step);
+/** The computed points beyond the ends the build checks the fit against (never fitted). */
+const ZONE = extrapolationZoneTemperatures(low, high);
 
 function dataOf(model: RrhoModel): { samples: FitSample[]; anchor: FitSample } {
   return { samples: TEMPERATURES.map((T) => rrhoSample(model, T)), anchor: rrhoSample(model, T_REF) };
@@ -54,7 +57,8 @@ function build(model: RrhoModel, options: PartialFitOptions) {
   const fit = fitNasa7(samples, anchor, options);
   const p = fit.polynomial;
   const ratio = worstLimitRatio(p, { low: samples.filter((s) => s.T <= p.tMid), high: samples.filter((s) => s.T >= p.tMid) }, LIMITS).ratio;
-  return { fit, samples, anchor, ratio, violations: assessFit(fit, samples, TOLERANCES) };
+  const beyond = ZONE.map((T) => rrhoSample(model, T));
+  return { fit, samples, anchor, ratio, violations: assessFit(fit, samples, TOLERANCES, beyond) };
 }
 
 describe('default settings build every physically sound species', () => {

@@ -124,3 +124,49 @@ describe('assessFit', () => {
     expect(floorOf(3.5, samplesN2.map((s) => ({ ...s, cpR: s.cpR - 0.6 })))).toEqual([]);
   });
 });
+
+describe('departure beyond the ends (rule 6)', () => {
+  // Hand-made bend: Cp/R of RRHO N2 lowered by k·u², u = (T − 5000 K)/1000 K above 5000 K, with H/RT and
+  // S/R integrated from it in closed form, so the bent data is self-consistent and the fit follows it. The
+  // "computed" zone points beyond 6000 K are the unbent RRHO values: the fit turns away from them.
+  const a = 5000;
+  const w = 1000;
+  const k = -0.5;
+  const bent = (T: number) => {
+    const p = rrhoSample(N2_RRHO, T);
+    if (T <= a) return p;
+    const u = (T - a) / w;
+    const dS = (k / (w * w)) * ((T * T - a * a) / 2 - 2 * a * (T - a) + a * a * Math.log(T / a));
+    return { T, cpR: p.cpR + k * u * u, hRT: p.hRT + (k * w * u ** 3) / 3 / T, sR: p.sR + dS };
+  };
+  const zone = [180, 185, 190, 195, 6020, 6040, 6060, 6080, 6100];
+  const samples = grid(200, 6000, 10).map(bent);
+  const fit = fitNasa7(samples, bent(T_REF));
+
+  it('a fit that turns away just beyond T_high fails with the departure, naming T, values, limit and remedy', () => {
+    const truth = zone.map((T) => rrhoSample(N2_RRHO, T));
+    const inside = assessFit(fit, samples);
+    expect(inside).toEqual([]); // the bend alone passes every in-range check
+    const v = assessFit(fit, samples, {}, truth).filter((x) => x.quantity === 'extrapolation-departs');
+    expect(v).toHaveLength(1);
+    expect(v[0]!.range).toBe('extrapolation');
+    expect(v[0]!.T).toBe(6100);
+    expect(v[0]!.value).toBeGreaterThan(v[0]!.limit);
+    expect(v[0]!.limit).toBeCloseTo(3 * 0.1, 12); // 3 × max(0.1, 0.015 × Cp/R ≈ 4.5)
+    expect(v[0]!.limitPart).toBe('absolute');
+    expect(v[0]!.message).toMatch(/^Cp\/R of the fit is [\d.]+ at 6100 K, 100 K beyond T_high = 6000 K, where the computed Cp\/R is [\d.]+: it departs by [\d.]+, [\d.]+ × the limit 0\.3 \(3 × the Cp limit 0\.1 there, set by the absolute part 0\.1\); .*widen this species' temperature_ranges/);
+  });
+
+  it('the same fit passes when the computed values beyond the end follow its trend', () => {
+    expect(assessFit(fit, samples, {}, zone.map(bent))).toEqual([]);
+  });
+
+  it('a careful fit stays within the departure limit beyond both ends; points inside the range are ignored', () => {
+    const truth = [...zone, 500, 3000].map((T) => rrhoSample(N2_RRHO, T));
+    expect(assessFit(fitN2, samplesN2, {}, truth)).toEqual([]);
+    // A tight multiple shows the check reads both ends (low end first).
+    const tight = assessFit(fitN2, samplesN2, { extrapolationDeparture: 1e-6 }, truth).filter((x) => x.quantity === 'extrapolation-departs');
+    expect(tight.map((x) => x.T < 200)).toEqual([true, false]);
+  });
+});
+

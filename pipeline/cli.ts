@@ -66,7 +66,7 @@ Examples:
   qforge table species/O2.yaml --at 298.15,1000,2000
   qforge table test/fixtures/input/multi.yaml --name N2
   qforge table species/H2O.yaml --range 200:6000:100 --format csv > H2O.csv
-  qforge table build --name N2 --digits 6     the fitted polynomial a kinetics code reads
+  qforge table build --name N2 --digits 6     the fitted polynomial of a build
   qforge table build/nasa7.txt --name N2 --at 298.15,1000
 
 A build folder or an 80-column file prints the fitted polynomial (same columns;
@@ -89,7 +89,7 @@ Examples:
   qforge compare build --reference janaf/N2.csv janaf/O2.csv
   qforge compare build --reference tables.csv --tolerance cp=0.1,s=0.05,h=0.02
   qforge compare build --database species    references of species/qforge.yaml
-  qforge compare build --quiet                references recorded in the build (summary.json)
+  qforge compare build --quiet                references recorded in the build
   qforge compare build --database species --strict   ignore known deviations
 
 Reference CSV: one row per temperature; header names with units, e.g.
@@ -277,7 +277,7 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
 
   program
     .command('table')
-    .description("print one species' properties computed from its partition functions, or from the fitted polynomial of a build")
+    .description("print one species' properties from its partition functions, or a build's fitted polynomial")
     .argument('<file>', 'species YAML file, build folder or 80-column file')
     .option('-n, --name <name>', 'species to print when the file holds several')
     .option('--at <list>', 'comma-separated temperatures in K, e.g. 200,298.15,1000')

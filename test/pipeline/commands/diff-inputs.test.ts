@@ -39,6 +39,25 @@ afterEach(async () => {
 });
 
 describe('diff of two builds explains what moved', () => {
+  it('one changed vibration wavenumber is named exactly, old → new in cm-1, with the Cp change', async () => {
+    expect((await runCli(['build', 'db', '--out', 'before', '--quiet'], ws.root)).code).toBe(0);
+    const file = path.join(ws.db, 'H2O.yaml');
+    // A hand-made edit of the bending fundamental (1594.75 → 1600 cm-1).
+    await writeFile(file, (await readFile(file, 'utf8')).replace('vibrations: [3657.05, 1594.75, 3755.93]', 'vibrations: [3657.05, 1600, 3755.93]'));
+    expect((await runCli(['build', 'db', '--out', 'after', '--quiet'], ws.root)).code).toBe(0);
+    const report = JSON.parse((await runCli(['diff', 'before', 'after', '--json'], ws.root)).stdout);
+    expect(report.changed.map((c: { name: string }) => c.name)).toEqual(['H2O']);
+    const [h2o] = report.changed;
+    expect(h2o.input_changes).toHaveLength(1);
+    expect(h2o.input_changes[0]).toMatchObject({ old: 1594.75, new: 1600, unit: 'cm-1' });
+    expect(h2o.input_changes[0].path).toMatch(/^vibrations\[1\]/);
+    // A stiffer bend lowers Cp at 1000 K.
+    const at1000 = h2o.at.find((a: { t: number }) => a.t === 1000);
+    expect(at1000.new.cp).toBeLessThan(at1000.old.cp);
+    const text = (await runCli(['diff', 'before', 'after'], ws.root)).stdout;
+    expect(text).toMatch(/^ {4}H2O: vibrations\[1\]\S* 1594\.75 → 1600 cm-1; Cp\(1000 K\) -\d\.\d{4} J\/\(mol K\)$/m);
+  });
+
   it('a changed setting is named old → new; a build without recorded inputs says so instead of failing', async () => {
     expect((await runCli(['build', 'db', '--out', 'before', '--quiet'], ws.root)).code).toBe(0);
     const settings = path.join(ws.db, 'qforge.yaml');

@@ -66,6 +66,12 @@ Examples:
   qforge table species/O2.yaml --at 298.15,1000,2000
   qforge table test/fixtures/input/multi.yaml --name N2
   qforge table species/H2O.yaml --range 200:6000:100 --format csv > H2O.csv
+  qforge table build --name N2 --digits 6     the fitted polynomial a kinetics code reads
+  qforge table build/nasa7.txt --name N2 --at 298.15,1000
+
+A build folder or an 80-column file prints the fitted polynomial (same columns;
+H includes the enthalpy of formation, G = H - T S). Temperatures outside the
+record's fitted range are refused (exit 2); the default grid is cut to it.
 
 --name picks one species of a file holding several; a missing or wrong --name
 then is a usage error (exit 2), like a FILE that does not exist.`,
@@ -83,6 +89,7 @@ Examples:
   qforge compare build --reference janaf/N2.csv janaf/O2.csv
   qforge compare build --reference tables.csv --tolerance cp=0.1,s=0.05,h=0.02
   qforge compare build --database species    references of species/qforge.yaml
+  qforge compare build --quiet                references recorded in the build (summary.json)
   qforge compare build --database species --strict   ignore known deviations
 
 Reference CSV: one row per temperature; header names with units, e.g.
@@ -270,15 +277,16 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
 
   program
     .command('table')
-    .description("print one species' properties computed from its partition functions")
-    .argument('<file>', 'species YAML file')
+    .description("print one species' properties computed from its partition functions, or from the fitted polynomial of a build")
+    .argument('<file>', 'species YAML file, build folder or 80-column file')
     .option('-n, --name <name>', 'species to print when the file holds several')
     .option('--at <list>', 'comma-separated temperatures in K, e.g. 200,298.15,1000')
     .option('--range <from:to:step>', 'temperature grid in K, e.g. 200:6000:100')
     .addOption(new Option('--format <format>', 'output format').choices(['text', 'csv']).default('text'))
     .addOption(new Option('--pressure <p>', 'standard pressure').choices(['bar', 'atm']).default('bar'))
+    .option('--digits <n>', 'decimals printed (default 3)')
     .addHelpText('after', EXAMPLES.table)
-    .action(async (file: string, o: { name?: string; at?: string; range?: string; format: 'text' | 'csv'; pressure: 'bar' | 'atm' }) => {
+    .action(async (file: string, o: { name?: string; at?: string; range?: string; format: 'text' | 'csv'; pressure: 'bar' | 'atm'; digits?: string }) => {
       const { tableCommand } = await import('./commands/table.js');
       exitCode = await tableCommand(io, abs(file), file, o);
     });
@@ -306,8 +314,9 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('-t, --tolerance <limits>', 'largest accepted |deviation|: cp=J/(mol K),s=J/(mol K),h=kJ/mol', parseTriple)
     .option('--strict', 'ignore the known deviations of the settings: every value must meet the normal tolerance')
     .option('--json', 'print the report as JSON on stdout')
+    .option('-q, --quiet', 'print only the breaches and the summary line')
     .addHelpText('after', EXAMPLES.compare)
-    .action(async (build: string, o: { reference?: string[]; database?: string; tolerance?: { cp?: number; h?: number; s?: number }; strict?: boolean; json?: boolean }) => {
+    .action(async (build: string, o: { reference?: string[]; database?: string; tolerance?: { cp?: number; h?: number; s?: number }; strict?: boolean; json?: boolean; quiet?: boolean }) => {
       const { compareCommand } = await import('./commands/compare.js');
       exitCode = await compareCommand(io, abs(build), build, {
         ...o,

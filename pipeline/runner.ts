@@ -8,6 +8,7 @@
  */
 import { stat } from 'node:fs/promises';
 import path from 'node:path';
+import { recordedReferenceFiles } from './core/recorded-references.js';
 import pLimit from 'p-limit';
 import type { Species, StandardProperties } from '../src/model.js';
 import { Nasa7FormatError } from '../src/nasa7/errors.js';
@@ -831,6 +832,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
       },
     };
     if (shard) summary.shard = shardRecord(shard, check);
+    if (settings.references.files.length) summary.reference_files = recordedReferenceFiles(opts.dir, opts.out, settings.references.files);
 
     let replaced = false;
     (summary.timings_ms as Record<string, number>).total = ms(performance.now() - t0);

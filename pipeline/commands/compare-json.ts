@@ -10,7 +10,7 @@ import { snakeKeys } from '../core/snake-case.js';
 
 export const COMPARE_FORMAT = 'qforge-compare/2';
 
-const UNIT: Record<string, string> = { cp: 'J/(mol K)', s: 'J/(mol K)', h: 'kJ/mol' };
+const UNIT: Record<string, string> = { cp: 'J/(mol K)', s: 'J/(mol K)', h: 'kJ/mol', dfh: 'kJ/mol' };
 
 export function compareGateResults(r: CompareReport) {
   return r.breaches.map((d) => ({

@@ -9,7 +9,11 @@
  *   - an optional `species` column; without it, the file name without `.csv` is the species name
  *     (so `N2.csv` holds N2), which lets published tables be dropped in one per file;
  *   - lines starting with '#' are comments (name the source there); empty cells mean "no value";
- *   - every header cell must be one of these: an unrecognised one (`Cp (J/mol/K)`, `Cv [J/(mol K)]`, an
+ *   - a `ΔfH [kJ/mol]` column (ΔfH°, DfH) is compared on its 298.15 K row with the polynomial's absolute
+ *     H(298.15) (ΔfH° in the NASA convention), against the H tolerance; other rows are noted, not compared;
+ *   - columns compare knows but does not use (H, G, -(G-H298)/T, ΔfG, log Kf, and the fitted columns of
+ *     `build/tables/<name>.csv`, whose `computed` columns are read) are ignored and listed in a note;
+ *   - every other header cell must be one of these: an unrecognised one (`Cp (J/mol/K)`, `Cv [J/(mol K)]`, an
  *     empty cell), a property without a unit in brackets, or a header with no property column at all is an
  *     error naming the file, the header line and the column, with what is accepted. Units are never guessed;
  *   - messages give the line of the file (comment and blank lines counted), e.g. `N2.csv:5: ...`.
@@ -48,11 +52,16 @@ import {
 import { DEFAULT_SETTINGS, loadSettings, type KnownDeviation, type QuantityTriple } from '../core/settings.js';
 import { displayPath } from '../core/display-path.js';
 import { compareText } from '../core/text.js';
+import { FORMATION_ENTHALPY_NAMES, referenceHeaderAlias } from './reference-columns.js';
+import { referencesRecordedInBuild } from './recorded-references.js';
 
-export type RefQuantity = 'cp' | 's' | 'h';
-const QS: readonly RefQuantity[] = ['cp', 's', 'h'];
-const LABEL: Record<RefQuantity, string> = { cp: 'Cp', s: 'S', h: 'H-H298' };
-const UNIT: Record<RefQuantity, string> = { cp: 'J/(mol K)', s: 'J/(mol K)', h: 'kJ/mol' };
+/** dfh: ΔfH°(298.15), compared with the polynomial's absolute H(298.15) (the NASA convention). */
+export type RefQuantity = 'cp' | 's' | 'h' | 'dfh';
+/** The quantities with a tolerance of their own (and known deviations); dfh is judged by h's tolerance. */
+const QS: readonly Exclude<RefQuantity, 'dfh'>[] = ['cp', 's', 'h'];
+const COMPARED: readonly RefQuantity[] = [...QS, 'dfh'];
+const LABEL: Record<RefQuantity, string> = { cp: 'Cp', s: 'S', h: 'H-H298', dfh: 'ΔfH°' };
+const UNIT: Record<RefQuantity, string> = { cp: 'J/(mol K)', s: 'J/(mol K)', h: 'kJ/mol', dfh: 'kJ/mol' };
 
 /** Unit → factor into the internal unit of the column (J/(mol K) or kJ/mol). Thermochemical calorie. */
 const ENTROPY_UNITS: Record<string, number> = { 'J/(mol K)': 1, 'J/(mol*K)': 1, 'J/mol/K': 1, 'J mol-1 K-1': 1, 'cal/(mol K)': 4.184, 'cal/mol/K': 4.184 };
@@ -63,11 +72,15 @@ export interface ReferenceRow {
   cp?: number;
   s?: number;
   h?: number;
+  /** ΔfH°(298.15), kJ/mol: only on a 298.15 K row (see reference-columns.ts). */
+  dfh?: number;
 }
 
 export interface ReferenceTable {
   file: string;
   species: Map<string, ReferenceRow[]>;
+  /** Header cells of columns compare recognises but does not use (see reference-columns.ts). */
+  ignoredColumns?: string[];
 }
 
 export class ReferenceError extends Error {
@@ -77,12 +90,12 @@ export class ReferenceError extends Error {
   }
 }
 
-type Column = { kind: 'T' } | { kind: 'species' } | { kind: RefQuantity; factor: number };
+type Column = { kind: 'T' } | { kind: 'species' } | { kind: 'ignored' } | { kind: RefQuantity; factor: number };
 
-const PROPERTY_NAMES: Record<string, RefQuantity> = { Cp: 'cp', S: 's', 'H-H298': 'h', 'H-H(298.15)': 'h', 'H-H298.15': 'h' };
+const PROPERTY_NAMES: Record<string, RefQuantity> = { Cp: 'cp', S: 's', 'H-H298': 'h', 'H-H(298.15)': 'h', 'H-H298.15': 'h', ...FORMATION_ENTHALPY_NAMES };
 const ACCEPTED_HEADERS =
   `accepted headers: 'T [K]'; 'Cp [unit]' and 'S [unit]' with unit ${Object.keys(ENTROPY_UNITS).join(' | ')}; ` +
-  `'H-H298 [unit]' with unit ${Object.keys(ENTHALPY_UNITS).join(' | ')}; optional 'species' (or 'name')`;
+  `'H-H298 [unit]' and 'ΔfH [unit]' (or 'DfH') with unit ${Object.keys(ENTHALPY_UNITS).join(' | ')}; optional 'species' (or 'name')`;
 const EXAMPLE_HEADER = 'T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol]';
 
 /**
@@ -91,7 +104,9 @@ const EXAMPLE_HEADER = 'T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol]';
  * column nobody compared). Units are never guessed.
  */
 function parseHeaderCell(cell: string): Column | string {
-  const c = cell.trim();
+  const alias = referenceHeaderAlias(cell);
+  if (alias.ignored) return { kind: 'ignored' };
+  const c = alias.cell;
   if (c === '') return `empty header; every column needs one (${ACCEPTED_HEADERS})`;
   if (/^(species|name)$/i.test(c)) return { kind: 'species' };
   const m = /^(\S+?)\s*\[(.*)\]$/.exec(c);
@@ -101,17 +116,17 @@ function parseHeaderCell(cell: string): Column | string {
   const paren = /^(\S+?)\s*\((.*)\)$/.exec(c);
   if (!m && paren && (paren[1] === 'T' || PROPERTY_NAMES[paren[1]!] !== undefined)) {
     const name = paren[1]!;
-    return `header '${c}' has no unit in square brackets (a unit in parentheses is not read); units are never guessed: write e.g. '${name} [${name === 'T' ? 'K' : PROPERTY_NAMES[name] === 'h' ? 'kJ/mol' : 'J/(mol K)'}]'`;
+    return `header '${c}' has no unit in square brackets (a unit in parentheses is not read); units are never guessed: write e.g. '${name} [${name === 'T' ? 'K' : PROPERTY_NAMES[name] === 'h' || PROPERTY_NAMES[name] === 'dfh' ? 'kJ/mol' : 'J/(mol K)'}]'`;
   }
   if (what !== 'T' && q === undefined) {
     const looksLike = /^(t|cp|s|h)\b/i.test(c);
     return `header '${c}' is not recognised${looksLike ? ' (names are case-sensitive and units go in square brackets)' : ''}; ${ACCEPTED_HEADERS}`;
   }
   if (unit === undefined) {
-    return `header '${c}' has no unit; units are never guessed: write e.g. '${what} [${what === 'T' ? 'K' : q === 'h' ? 'kJ/mol' : 'J/(mol K)'}]'`;
+    return `header '${c}' has no unit; units are never guessed: write e.g. '${what} [${what === 'T' ? 'K' : q === 'h' || q === 'dfh' ? 'kJ/mol' : 'J/(mol K)'}]'`;
   }
   if (what === 'T') return unit === 'K' ? { kind: 'T' } : `header '${c}': temperatures must be in K, as 'T [K]'`;
-  const units = q === 'h' ? ENTHALPY_UNITS : ENTROPY_UNITS;
+  const units = q === 'h' || q === 'dfh' ? ENTHALPY_UNITS : ENTROPY_UNITS;
   const f = units[unit];
   if (f === undefined) return `header '${c}': unknown unit '${unit}'; expected one of ${Object.keys(units).join(', ')}`;
   return { kind: q!, factor: f };
@@ -126,6 +141,9 @@ async function csvRows(text: string): Promise<string[][]> {
       .on('end', () => resolve(rows));
   });
 }
+
+/** The row a ΔfH° value is compared on: 298.15 K (to the 0.005 K a table prints). */
+const isStandardTemperature = (T: number) => Math.abs(T - T_REF) < 0.005;
 
 const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 /** At most this many bad rows are listed in one error (the count says how many there were). */
@@ -165,11 +183,11 @@ export async function parseReferenceCsv(text: string, file: string): Promise<Ref
   const cols = parsed.map((c) => (typeof c === 'string' ? undefined : c));
   const kinds = cols.map((c) => c?.kind);
   kinds.forEach((k, j) => {
-    if (k !== undefined && kinds.indexOf(k) !== j) problems.push(`${file}:${headerLine}: column ${j + 1}: header '${header[j]}' repeats column ${kinds.indexOf(k) + 1} (each quantity once)`);
+    if (k !== undefined && k !== 'ignored' && kinds.indexOf(k) !== j) problems.push(`${file}:${headerLine}: column ${j + 1}: header '${header[j]}' repeats column ${kinds.indexOf(k) + 1} (each quantity once)`);
   });
   if (problems.length === 0) {
     if (!kinds.includes('T')) problems.push(`${file}:${headerLine}: no 'T [K]' column in the header; expected e.g. '${EXAMPLE_HEADER}'`);
-    if (!kinds.some((k) => k === 'cp' || k === 's' || k === 'h')) {
+    if (!kinds.some((k) => k === 'cp' || k === 's' || k === 'h' || k === 'dfh')) {
       problems.push(`${file}:${headerLine}: no property column (Cp, S or H-H298 with a unit) in the header, so nothing can be compared; expected e.g. '${EXAMPLE_HEADER}'`);
     }
   }
@@ -180,6 +198,7 @@ export async function parseReferenceCsv(text: string, file: string): Promise<Ref
   const fallbackName = path.basename(file).replace(/\.csv$/i, '');
   const species = new Map<string, ReferenceRow[]>();
   const rowErrors: string[] = [];
+  let dfhElsewhere = 0;
   rows.slice(1).forEach((r, i) => {
     const where = `${file}:${lines[i + 1]!.no}`;
     if (r.every((cell) => cell.trim() === '')) return;
@@ -200,9 +219,13 @@ export async function parseReferenceCsv(text: string, file: string): Promise<Ref
     }
     const row: ReferenceRow = { T };
     cols.forEach((c, j) => {
-      if (!c || (c.kind !== 'cp' && c.kind !== 's' && c.kind !== 'h')) return;
+      if (!c || (c.kind !== 'cp' && c.kind !== 's' && c.kind !== 'h' && c.kind !== 'dfh')) return;
       const cell = (r[j] ?? '').trim();
       if (cell === '') return;
+      if (c.kind === 'dfh' && !isStandardTemperature(T)) {
+        dfhElsewhere++;
+        return;
+      }
       const v = DECIMAL.test(cell) ? Number(cell) : NaN;
       if (!Number.isFinite(v)) {
         rowErrors.push(`${where}: ${header[j]} = '${cell}' is not a number`);
@@ -218,7 +241,9 @@ export async function parseReferenceCsv(text: string, file: string): Promise<Ref
     const more = rowErrors.length > MAX_LISTED_ROW_ERRORS ? `\n(${rowErrors.length - MAX_LISTED_ROW_ERRORS} more bad row(s) not listed)` : '';
     throw new ReferenceError(rowErrors.slice(0, MAX_LISTED_ROW_ERRORS).join('\n') + more);
   }
-  return { file, species };
+  const ignoredColumns = header.filter((_, j) => kinds[j] === 'ignored');
+  if (dfhElsewhere) ignoredColumns.push(`${header[kinds.indexOf('dfh')]} at temperatures other than 298.15 K (${dfhElsewhere} value(s); ΔfH(T) needs the elements' tables)`);
+  return ignoredColumns.length ? { file, species, ignoredColumns } : { file, species };
 }
 
 /** An 80-column file as a reference: its records evaluated on a 100 K grid over the common range. */
@@ -351,12 +376,13 @@ export function compareWithReferences(
           continue;
         }
         const p = polynomialProperties(b.polynomial, row.T);
-        const built: Record<RefQuantity, number> = { cp: p.cp, s: p.s, h: p.hMinusH298 };
-        for (const q of QS) {
+        const built: Record<RefQuantity, number> = { cp: p.cp, s: p.s, h: p.hMinusH298, dfh: p.h };
+        for (const q of COMPARED) {
           const rv = row[q];
           if (rv === undefined) continue;
           const deviation = built[q] - rv;
-          const ok = within(deviation, tolerances[q]);
+          const tolerance = tolerances[q === 'dfh' ? 'h' : q];
+          const ok = within(deviation, tolerance);
           const d: Deviation = {
             species: name,
             reference: ref.file,
@@ -365,20 +391,22 @@ export function compareWithReferences(
             referenceValue: rv,
             buildValue: built[q],
             deviation,
-            tolerance: tolerances[q],
+            tolerance,
             ok,
             status: ok ? 'ok' : 'breach',
           };
           // The settings rules forbid overlapping entries, so at most one covers a value.
-          const ki = report.knownDeviations.findIndex((k) => k.species === name && k.tolerances[q] !== undefined && inWindow(k, row.T));
-          if (ki >= 0) {
+          // Known deviations widen model limits (cp, s, h); a ΔfH° mismatch is an input question, never widened.
+          const kq = q === 'dfh' ? undefined : q;
+          const ki = kq ? report.knownDeviations.findIndex((k) => k.species === name && k.tolerances[kq] !== undefined && inWindow(k, row.T)) : -1;
+          if (kq && ki >= 0) {
             const k = report.knownDeviations[ki]!;
             d.knownDeviation = ki;
-            d.widenedTolerance = Math.max(k.tolerances[q]!, tolerances[q]);
+            d.widenedTolerance = Math.max(k.tolerances[kq]!, tolerance);
             k.covered++;
             if (!ok) {
               k.needed++;
-              neededBy[ki]!.add(q);
+              neededBy[ki]!.add(kq);
               if (!within(deviation, d.widenedTolerance)) k.exceeded++;
               else if (!strict) d.status = 'known';
             }
@@ -474,7 +502,7 @@ export function renderCompareText(r: CompareReport): string {
   const bySpecies = new Map<string, Deviation[]>();
   for (const d of r.deviations) bySpecies.set(d.species, [...(bySpecies.get(d.species) ?? []), d]);
   for (const [name, ds] of bySpecies) {
-    const worst = QS.map((q) => {
+    const worst = COMPARED.map((q) => {
       const of = ds.filter((d) => d.quantity === q);
       if (!of.length) return undefined;
       const w = of.reduce((a, b) => (Math.abs(b.deviation) > Math.abs(a.deviation) ? b : a));
@@ -538,7 +566,7 @@ export async function compareCommand(
   io: CliIo,
   buildPath: string,
   buildLabel: string,
-  o: { reference?: Array<{ path: string; label: string }>; database?: string; tolerance?: Partial<QuantityTriple>; strict?: boolean; json?: boolean },
+  o: { reference?: Array<{ path: string; label: string }>; database?: string; tolerance?: Partial<QuantityTriple>; strict?: boolean; json?: boolean; quiet?: boolean },
 ): Promise<number> {
   try {
     const build = await readPolynomialSet(buildPath, buildLabel);
@@ -570,16 +598,20 @@ export async function compareCommand(
     // --tolerance replaces the normal limits for every species; a known deviation still allows its own
     // widened limit where that is larger. --strict drops the known deviations altogether.
     tolerances = { ...tolerances, ...(o.tolerance ?? {}) };
+    if (!refs.length && !o.database && build.fromFolder) refs = await referencesRecordedInBuild(buildPath, buildLabel);
     if (!refs.length) {
-      io.stderr.write('qforge: error: no reference files: give --reference FILE... or --database DIR with references.files in its qforge.yaml\n');
+      io.stderr.write('qforge: error: no reference files: give --reference FILE... or --database DIR with references.files in its qforge.yaml (a build records the files of its settings in summary.json)\n');
       return 2;
     }
     const tables: ReferenceTable[] = [];
     for (const r of refs) tables.push(await loadReference(r, build));
     const report = compareWithReferences(build, tables, tolerances, { knownDeviations, strict: o.strict === true });
     if (o.json) io.stdout.write(`${JSON.stringify(compareJson(report), null, 2)}\n`);
-    else io.stdout.write(renderCompareText(report));
-    for (const w of report.warnings) io.stderr.write(`qforge: warning: ${w}\n`);
+    else if (!o.quiet) {
+      io.stdout.write(renderCompareText(report));
+      for (const t of tables) if (t.ignoredColumns) io.stdout.write(`note: ${t.file}: column(s) not compared (ignored): ${t.ignoredColumns.join(', ')}\n`);
+    }
+    if (!o.quiet) for (const w of report.warnings) io.stderr.write(`qforge: warning: ${w}\n`);
     if (report.deviations.length === 0) {
       io.stderr.write('qforge: compare FAILED: no reference value matched a species and temperature of the build\n');
       return 1;

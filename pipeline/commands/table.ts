@@ -1,5 +1,6 @@
 /**
- * `qforge table FILE`: one species' standard properties straight from its partition functions (no fit).
+ * `qforge table FILE`: one species' standard properties straight from its partition functions (no fit);
+ * for a build folder or an 80-column file, the fitted polynomial instead (see table-fitted.ts).
  * CSV header (exact): T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol],H [kJ/mol],G [kJ/mol]
  */
 import { stat } from 'node:fs/promises';
@@ -7,91 +8,56 @@ import { STANDARD_PRESSURE_ATM, STANDARD_PRESSURE_BAR } from '../../src/constant
 import type { StandardProperties } from '../../src/model.js';
 import type { CliIo } from './io.js';
 import { formatDiagnostic, hasErrors } from '../core/diagnostics.js';
-import { fixed } from '../stages/emit.js';
 import { computeTable } from '../stages/compute.js';
 import { loadYamlFile } from '../stages/load.js';
 import { validateSpecies } from '../stages/validate.js';
+import { fittedTableCommand } from './table-fitted.js';
+import { renderTableCsv, renderTableText, tableDigits, tableTemperatures } from './table-format.js';
 
-export const TABLE_CSV_HEADER = 'T [K],Cp [J/(mol K)],S [J/(mol K)],H-H298 [kJ/mol],H [kJ/mol],G [kJ/mol]';
+export {
+  DEFAULT_TABLE_DIGITS,
+  DEFAULT_TABLE_TEMPERATURES,
+  formatTableRows,
+  MAX_TABLE_DIGITS,
+  MAX_TABLE_ROWS,
+  renderTableCsv,
+  renderTableText,
+  TABLE_CSV_HEADER,
+  TableArgumentError,
+  tableDigits,
+  tableTemperatures,
+} from './table-format.js';
+export type { TableRow } from './table-format.js';
 
-/** Temperatures printed when neither --at nor --range is given, K. */
-export const DEFAULT_TABLE_TEMPERATURES = [200, 298.15, 300, 400, 500, 600, 800, 1000, 1500, 2000, 2500, 3000, 3500, 4000, 4500, 5000, 5500, 6000];
-
-/** Most rows a table may have (a typo like --range 200:6000:0.001 should not hang). */
-export const MAX_TABLE_ROWS = 100_000;
-
-export class TableArgumentError extends Error {
-  constructor(message: string) {
-    super(message);
-    this.name = 'TableArgumentError';
+/** A folder (a build) or a file that is not YAML (80-column records, thermo.json); false when absent. */
+async function isPolynomialSource(file: string): Promise<boolean> {
+  try {
+    return (await stat(file)).isDirectory() || !/\.ya?ml$/i.test(file);
+  } catch {
+    return false;
   }
-}
-
-const positiveT = (text: string, what: string): number => {
-  const n = Number(text);
-  if (text.trim() === '' || !Number.isFinite(n) || n <= 0) throw new TableArgumentError(`${what}: '${text}' is not a temperature in K > 0`);
-  return n;
-};
-
-/** Temperatures from --at and --range (both may be given), ascending and distinct. */
-export function tableTemperatures(at?: string, range?: string): number[] {
-  const out = new Set<number>();
-  if (at !== undefined) for (const part of at.split(',')) out.add(positiveT(part, '--at'));
-  if (range !== undefined) {
-    const parts = range.split(':');
-    if (parts.length !== 3) throw new TableArgumentError(`--range '${range}': expected FROM:TO:STEP, e.g. 200:6000:100`);
-    const [from, to, step] = parts.map((p, i) => positiveT(p, `--range ${['FROM', 'TO', 'STEP'][i]}`)) as [number, number, number];
-    if (!(from <= to)) throw new TableArgumentError(`--range '${range}': FROM must not exceed TO`);
-    const n = Math.floor((to - from) / step + 1e-9);
-    if (n + 1 > MAX_TABLE_ROWS) throw new TableArgumentError(`--range '${range}': ${n + 1} rows; at most ${MAX_TABLE_ROWS}`);
-    for (let k = 0; k <= n; k++) out.add(Math.round((from + k * step) * 1e6) / 1e6);
-  }
-  if (out.size === 0) return [...DEFAULT_TABLE_TEMPERATURES];
-  if (out.size > MAX_TABLE_ROWS) throw new TableArgumentError(`${out.size} temperatures; at most ${MAX_TABLE_ROWS}`);
-  return [...out].sort((a, b) => a - b);
-}
-
-/** Rows as the six formatted columns of the CSV header. */
-export function formatTableRows(rows: readonly StandardProperties[]): string[][] {
-  return rows.map((p) => [String(p.T), fixed(p.Cp, 3), fixed(p.S, 3), fixed(p.HminusH298, 3), fixed(p.H, 3), fixed(p.G, 3)]);
-}
-
-export function renderTableCsv(rows: readonly StandardProperties[]): string {
-  return `${[TABLE_CSV_HEADER, ...formatTableRows(rows).map((r) => r.join(','))].join('\n')}\n`;
-}
-
-export function renderTableText(name: string, pressureLabel: string, rows: readonly StandardProperties[]): string {
-  const header = TABLE_CSV_HEADER.split(',');
-  const body = formatTableRows(rows);
-  const widths = header.map((h, i) => Math.max(h.length, ...body.map((r) => r[i]!.length)));
-  const line = (cells: readonly string[]) => cells.map((c, i) => c.padStart(widths[i]!)).join('  ');
-  return [
-    `${name}: ideal gas, standard pressure ${pressureLabel}, computed from partition functions (not the fitted polynomial)`,
-    line(header),
-    ...body.map(line),
-    '',
-  ].join('\n');
 }
 
 export async function tableCommand(
   io: CliIo,
   file: string,
   fileLabel: string,
-  o: { name?: string; at?: string; range?: string; format: 'text' | 'csv'; pressure: 'bar' | 'atm' },
+  o: { name?: string; at?: string; range?: string; format: 'text' | 'csv'; pressure: 'bar' | 'atm'; digits?: string },
 ): Promise<number> {
   let temperatures: number[];
+  let digits: number;
   try {
+    digits = tableDigits(o.digits);
+    // A build folder or a polynomial file (anything but YAML): evaluate the fitted polynomial instead.
+    if (await isPolynomialSource(file)) return await fittedTableCommand(io, file, fileLabel, { ...o, digits });
     temperatures = tableTemperatures(o.at, o.range);
   } catch (e) {
     io.stderr.write(`qforge: error: ${(e as Error).message}\n`);
     return 2;
   }
-  // A FILE that is not there (or is a folder) is a bad path argument: usage, exit 2, like diff and compare.
+  // A FILE that is not there is a bad path argument: usage, exit 2, like diff and compare.
   try {
-    if ((await stat(file)).isDirectory()) {
-      io.stderr.write(`qforge: error: ${fileLabel} is a folder, not a species file\n`);
-      return 2;
-    }
+    await stat(file);
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
     if (code === 'ENOENT' || code === 'ENOTDIR') {
@@ -138,6 +104,6 @@ export async function tableCommand(
   if (outside.length) {
     io.stderr.write(`qforge: warning: ${outside.length} temperature(s) outside 200-6000 K, where the models are meant to be used\n`);
   }
-  io.stdout.write(o.format === 'csv' ? renderTableCsv(rows) : renderTableText(v.species.name, o.pressure === 'atm' ? '1 atm' : '1 bar', rows));
+  io.stdout.write(o.format === 'csv' ? renderTableCsv(rows, digits) : renderTableText(v.species.name, o.pressure === 'atm' ? '1 atm' : '1 bar', rows, digits));
   return 0;
 }

@@ -91,8 +91,11 @@ function propertiesAt(ev: ThermoEvaluator, values: ThermoGrid, j: number): Stand
  */
 function zoneSamples(species: Species, physics: PhysicsOptions, ev: ThermoEvaluator, sampleTemperatures: readonly number[], zone: readonly number[]): FitSample[] {
   if (zone.length === 0) return [];
-  const ceiling = evaluatorCeiling([...sampleTemperatures, ...zone]);
-  const zev = ceiling === evaluatorCeiling(sampleTemperatures) ? ev : createThermoEvaluator(species, physics, { maxTemperature: ceiling });
+  let zoneMax = T_REF;
+  for (const T of zone) if (T > zoneMax) zoneMax = T;
+  // Above the samples' ceiling: an evaluator built for exactly the zone's top (level lists no longer
+  // than these few points need; one for the next ceiling of CEILINGS would cost more than the samples).
+  const zev = zoneMax <= evaluatorCeiling(sampleTemperatures) ? ev : createThermoEvaluator(species, physics, { maxTemperature: zoneMax });
   const values = zev.grid(zone);
   const out: FitSample[] = new Array<FitSample>(values.T.length);
   for (let j = 0; j < values.T.length; j++) out[j] = toSample(propertiesAt(zev, values, j));

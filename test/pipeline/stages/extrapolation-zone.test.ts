@@ -45,7 +45,8 @@ describe('extrapolation zone', () => {
 
     expect(withZone.extrapolationSamples.map((s) => s.T)).toEqual(plan.zoneTemperatures);
     expect(withZone.extrapolationSamples.every((s) => s.T < plan.ranges.low || s.T > plan.ranges.high)).toBe(true);
-    const ev = createThermoEvaluator(species as Species, plan.physics, { maxTemperature: 10000 });
+    // Above the samples' 6000 K ceiling the zone has its own evaluator, built for the zone's top.
+    const ev = createThermoEvaluator(species as Species, plan.physics, { maxTemperature: Math.max(...plan.zoneTemperatures) });
     const fresh = ev.grid(plan.zoneTemperatures);
     expect(withZone.extrapolationSamples.map((s) => s.cpR)).toEqual(Array.from(fresh.cp));
     // A careful fit of these species keeps within the departure limit there.

@@ -33,7 +33,9 @@ function distinctSorted(ts: number[]): number[] {
   let ascending = true;
   for (let i = 1; i < ts.length && ascending; i++) ascending = ts[i - 1]! <= ts[i]!;
   const sorted = ascending ? ts : [...ts].sort((a, b) => a - b);
-  return sorted.filter((t, i) => i === 0 || t !== sorted[i - 1]);
+  let repeated = false;
+  for (let i = 1; i < sorted.length && !repeated; i++) repeated = sorted[i] === sorted[i - 1];
+  return repeated ? sorted.filter((t, i) => i === 0 || t !== sorted[i - 1]) : sorted;
 }
 
 function checkCoverage(name: string, ts: number[], from: number, to: number, problems: string[]): void {

@@ -61,16 +61,17 @@ describe('diff of two builds explains what moved', () => {
   it('a changed setting is named old → new; a build without recorded inputs says so instead of failing', async () => {
     expect((await runCli(['build', 'db', '--out', 'before', '--quiet'], ws.root)).code).toBe(0);
     const settings = path.join(ws.db, 'qforge.yaml');
-    await writeFile(settings, (await readFile(settings, 'utf8')).replace('weights: {cp: 1, h: 1, s: 1}', 'weights: {cp: 1, h: 2, s: 1}'));
+    await writeFile(settings, (await readFile(settings, 'utf8')).replace('sampling_step: 20', 'sampling_step: 25'));
     expect((await runCli(['build', 'db', '--out', 'after', '--quiet'], ws.root)).code).toBe(0);
 
     const report = JSON.parse((await runCli(['diff', 'before', 'after', '--json'], ws.root)).stdout);
     expect(report.format).toBe('qforge-diff/2');
-    expect(report.settings_changes).toEqual([{ path: 'fit.weights.h', old: 1, new: 2 }]);
+    expect(report.settings_changes).toEqual([{ path: 'fit.sampling_step', old: 20, new: 25, unit: 'K' }]);
+    expect(report.changed.length).toBeGreaterThan(0);
     expect(report.code_changed).toBe(false);
     for (const c of report.changed) expect(c.input_changes).toEqual([]);
     const text = (await runCli(['diff', 'before', 'after'], ws.root)).stdout;
-    expect(text).toMatch(/^settings changed: fit\.weights\.h 1 → 2$/m);
+    expect(text).toMatch(/^settings changed: fit\.sampling_step 20 → 25 K$/m);
 
     // An older build: thermo.json without `input`, summary.json without `code_fingerprint`.
     const thermo = path.join(ws.root, 'before', 'thermo.json');

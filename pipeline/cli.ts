@@ -45,7 +45,9 @@ and with --report (or outputs.report in qforge.yaml) report.html
 inputs). The cache lives in .qforge-cache/ inside the database folder
 (--cache-dir to move it; qforge cache prune drops entries no species uses).
 --jobs N runs compute, fit and verify on N worker threads (default: the
-number of cores); the outputs are the same bytes for every N.
+number of cores, at most one per 16 species to build, since a thread costs
+about a dozen small species to start); the outputs are the same bytes for
+every N.
 
 Sharding: --shard I/N builds only the species whose name hashes into shard I
 of N; qforge merge SHARD_DIR... --out OUT joins all N shard folders into the
@@ -226,7 +228,7 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('--no-cache', 'recompute and refit every species')
     .option('--cache-dir <dir>', 'cache folder (default: .qforge-cache inside the database folder)')
     .option('-k, --keep-going', 'write the species that succeeded even when others failed (exit code stays 1)')
-    .option('-j, --jobs <n>', 'worker threads for compute, fit and verify (default: the number of cores)', positiveInt)
+    .option('-j, --jobs <n>', 'worker threads for compute, fit and verify (default: the cores, at most one per 16 species)', positiveInt)
     .option('--shard <i/n>', 'build only shard I of N (by a stable hash of the species name); see qforge merge', shardArg)
     .option('-q, --quiet', 'no progress output')
     .option('--json', 'print the build summary as JSON on stdout')
@@ -474,7 +476,7 @@ async function buildCommand(
       dir,
       out,
       displayBase: io.cwd,
-      jobs: o.jobs ?? availableParallelism(),
+      ...(o.jobs !== undefined ? { jobs: o.jobs } : { maxThreads: availableParallelism() }),
       keepGoing: !!o.keepGoing,
       ...(o.shard ? { shard: o.shard } : {}),
       strict: !!o.strict,

@@ -72,6 +72,11 @@ export interface BuildOptions extends CheckOptions {
   report?: ReportRequest;
   /** Monte Carlo samples of the uncertainty check per species (none: linear propagation only). */
   uncertaintySamples?: number;
+  /**
+   * Worker threads for compute, fit and verify when `jobs` is not given: at most this many, and no more
+   * than one per SPECIES_PER_THREAD species to build (see autoThreads). Default 1.
+   */
+  maxThreads?: number;
 }
 
 /** One species document that passed validation. */
@@ -138,6 +143,17 @@ function positionsOf(doc: LoadedDocument): ValidSpecies['positions'] {
 }
 
 /** Load and validate a database folder: every problem of every file at once. */
+/**
+ * Starting a worker thread (loading the compiled modules, warming up) costs about as much as building a
+ * dozen small species, so a thread only pays for itself with enough species to share; below that the main
+ * thread is faster. Outputs never depend on the thread count (tested), only the time does.
+ */
+export const SPECIES_PER_THREAD = 16;
+
+export function autoThreads(speciesToBuild: number, maxThreads: number): number {
+  return Math.max(1, Math.min(maxThreads, Math.floor(speciesToBuild / SPECIES_PER_THREAD)));
+}
+
 export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   const dir = opts.dir;
   const limit = pLimit(Math.max(1, opts.jobs ?? 8));
@@ -582,8 +598,8 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   const reportWriter =
     check.settingsOk && (opts.report || settings.outputs.report) ? await ReportWriter.open(opts.report ?? {}, settings, opts.dir, opts.displayBase) : undefined;
 
-  const jobs = Math.max(1, opts.jobs ?? 1);
   const total = shardSpecies.length;
+  const jobs = opts.jobs !== undefined ? Math.max(1, opts.jobs) : autoThreads(total, opts.maxThreads ?? 1);
   let done = 0;
   const tStages = performance.now();
   let emitMs = 0;

@@ -1,0 +1,14 @@
+// The default thread count (no --jobs): our own rule, written by hand for this test (no external source).
+import { describe, expect, it } from 'vitest';
+import { autoThreads, SPECIES_PER_THREAD } from '../../../pipeline/runner.js';
+
+describe('default worker threads', () => {
+  it('stays on the main thread for small databases and grows one thread per SPECIES_PER_THREAD species up to the cores', () => {
+    expect(autoThreads(0, 2)).toBe(1);
+    expect(autoThreads(5, 2)).toBe(1);
+    expect(autoThreads(2 * SPECIES_PER_THREAD - 1, 2)).toBe(1);
+    expect(autoThreads(2 * SPECIES_PER_THREAD, 2)).toBe(2);
+    expect(autoThreads(10_000, 2)).toBe(2);
+    expect(autoThreads(10_000, 1)).toBe(1);
+  });
+});

@@ -8,19 +8,11 @@ import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { createWarningPolicy, STALE_ACCEPTANCE_CODE } from '../../pipeline/core/strict.js';
 import type { Diagnostic } from '../../pipeline/core/diagnostics.js';
+import { h2oInput } from '../support/h2o-input.js';
 import { REPO, runCli, tempWorkspace } from './helpers.js';
 
 /** H2O with one mode missing: the mode-count warning. */
-const FEW_MODES = [
-  'name: XH2O',
-  'composition: {H: 2, O: 1}',
-  'enthalpy_of_formation: -241.826',
-  'sources: ["H2O constants from memory (NIST CCCBDB, Shimanouchi), edited for a test"]',
-  'structure: nonlinear',
-  'symmetry_number: 2',
-  'rotational_constants: [27.8806, 14.5216, 9.2777]',
-  'vibrations: [3657.05, 1594.75]',
-].join('\n') + '\n';
+const FEW_MODES = h2oInput({ 8: 'vibrations: [3657.05, 1594.75]' });
 
 const warning = (code: string, species = 'A'): Diagnostic => ({ severity: 'warning', code, file: 'a.yaml', path: '', message: 'm', species });
 

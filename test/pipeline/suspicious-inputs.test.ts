@@ -13,25 +13,13 @@ import path from 'node:path';
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { h2oInput } from '../support/h2o-input.js';
 import { hashFolder, runCli, tempWorkspace, type Workspace } from './helpers.js';
 
 const lines = (...ls: string[]) => `${ls.join('\n')}\n`;
 
-/** Nonlinear base (lines 1-8); `over` replaces lines by number, extra lines are appended. */
-function h2o(over: Record<number, string> = {}, ...extra: string[]): string {
-  const base = [
-    'name: XH2O',
-    'composition: {H: 2, O: 1}',
-    'enthalpy_of_formation: -241.826',
-    'sources: ["H2O constants from memory (NIST CCCBDB, Shimanouchi), edited for a test"]',
-    'structure: nonlinear',
-    'symmetry_number: 2',
-    'rotational_constants: [27.8806, 14.5216, 9.2777]',
-    'vibrations: [3657.05, 1594.75, 3755.93]',
-  ];
-  for (const [k, v] of Object.entries(over)) base[Number(k) - 1] = v;
-  return lines(...base, ...extra);
-}
+/** The nonlinear base (test/support/h2o-input.ts): `over` replaces lines by number, extra lines are appended. */
+const h2o = h2oInput;
 
 /** Diatomic base (lines 1-9). */
 function n2(over: Record<number, string> = {}): string {

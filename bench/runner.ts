@@ -15,8 +15,8 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { writeSyntheticDatabase } from './synthetic.js';
 
-/** The same loosened tolerances as bench/run.ts, so nearly every synthetic species builds. */
-const BENCH_SETTINGS = 'tolerances: {cp: 2, h: 0.5, s: 0.5}';
+/** The same settings as bench/run.ts: the defaults. */
+const BENCH_SETTINGS = '';
 
 export interface RebuildFigures {
   tree: string;

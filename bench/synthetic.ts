@@ -154,7 +154,8 @@ function polyatomic(name: string, rnd: () => number): SyntheticSpecies {
       const fold = methyl ? 3 : 1 + Math.floor(rnd() * 2);
       const sigma = methyl ? 3 : 1;
       const inertia = methyl ? 2.5 + rnd() : 1 + rnd() * 15;
-      lines.push(`  - {barrier: ${num(200 + rnd() * 1800)}, foldedness: ${fold}, symmetry_number: ${sigma}, moment_of_inertia: ${num(inertia)}}`);
+      // Units written out, as the validator asks of a user (a bare number draws a bare-unit warning each).
+      lines.push(`  - {barrier: {value: ${num(200 + rnd() * 1800)}, unit: cm-1}, foldedness: ${fold}, symmetry_number: ${sigma}, moment_of_inertia: {value: ${num(inertia)}, unit: amu*angstrom^2}}`);
     }
   }
   return { name, kind: linear ? 'linear' : 'nonlinear', atoms, rotors, yaml: `${lines.join('\n')}\n` };

@@ -6,14 +6,20 @@
  *
  * Both grids are evaluated whole (`ThermoEvaluator.grid`: typed arrays, no object per temperature). Level
  * lists with a temperature ceiling (hindered and linear rotors) are built for the smallest ceiling of
- * CEILINGS that holds every temperature asked for, so the sampling and the table grid of the usual
- * settings (both within 200–6000 K) use the same lists and hence give the same numbers at shared points.
+ * CEILINGS that holds every temperature asked for, so the sampling grid with its extrapolation zone and
+ * the table grid of the usual settings (both within 200–6000 K, the zone up to 6100 K) use the same lists
+ * and hence give the same numbers at shared points. One evaluator serves the samples and the zone: building
+ * the level lists (rotor eigenvalues, diatomic levels) is most of a species' compute cost.
  */
 import { T_REF } from '../../src/constants.js';
 import type { ModelSummary, PhysicsOptions, Species, StandardProperties, ThermoEvaluator, ThermoGrid } from '../../src/model.js';
 import type { FitSample } from '../../src/nasa7/types.js';
 import { createThermoEvaluator } from '../../src/thermo/evaluator.js';
 import { standardPropertiesOf } from '../../src/thermo/properties.js';
+import { HINDERED_ROTOR_CEILING_TEMPERATURE } from '../../src/partition/hindered-rotor.js';
+import { DEFAULT_FIT_TOLERANCES } from '../../src/nasa7/quality.js';
+
+const ZONE_ABOVE = DEFAULT_FIT_TOLERANCES.extrapolation;
 
 export interface ComputedSpecies {
   /** Cp/R, H/RT (absolute), S/R on the sampling grid, ascending T. */
@@ -42,8 +48,12 @@ export class ComputeError extends Error {
   }
 }
 
-/** Temperature ceilings (K) of the evaluators: 6000 covers the usual fit range, 20000 the largest the settings accept. */
-const CEILINGS = [6000, 10000, 20000] as const;
+/**
+ * Temperature ceilings (K) of the evaluators: 6100 covers the usual fit range up to 6000 K with its
+ * extrapolation zone (zone-grid.ts), 10100 a range up to 10000 K, 20000 the largest the settings accept
+ * (the zone stops there too).
+ */
+const CEILINGS = [6000 + ZONE_ABOVE, 10000 + ZONE_ABOVE, HINDERED_ROTOR_CEILING_TEMPERATURE] as const;
 
 /** Species whose sampling grid is remembered for their table (a few per concurrent job is plenty). */
 const MEMO_SIZE = 32;
@@ -84,43 +94,30 @@ function propertiesAt(ev: ThermoEvaluator, values: ThermoGrid, j: number): Stand
   return p;
 }
 
-/**
- * The zone points are evaluated apart from the samples: with the samples' evaluator when its ceiling holds
- * them, else with one built for their ceiling — so the samples (and hence the fit) are the numbers they
- * would be without the zone, bit for bit.
- */
-function zoneSamples(species: Species, physics: PhysicsOptions, ev: ThermoEvaluator, sampleTemperatures: readonly number[], zone: readonly number[]): FitSample[] {
-  if (zone.length === 0) return [];
-  let zoneMax = T_REF;
-  for (const T of zone) if (T > zoneMax) zoneMax = T;
-  // Above the samples' ceiling: an evaluator built for exactly the zone's top (level lists no longer
-  // than these few points need; one for the next ceiling of CEILINGS would cost more than the samples).
-  const zev = zoneMax <= evaluatorCeiling(sampleTemperatures) ? ev : createThermoEvaluator(species, physics, { maxTemperature: zoneMax });
-  const values = zev.grid(zone);
-  const out: FitSample[] = new Array<FitSample>(values.T.length);
-  for (let j = 0; j < values.T.length; j++) out[j] = toSample(propertiesAt(zev, values, j));
-  return out;
-}
-
 export function computeSamples(
   species: Species,
   physics: PhysicsOptions,
   temperatures: readonly number[],
   zoneTemperatures: readonly number[] = [],
 ): ComputedSpecies {
-  const ev = evaluatorFor(species, physics, temperatures);
+  // Samples, the anchor and the zone in one grid evaluation of one evaluator (each temperature's numbers
+  // depend on that temperature and the level lists alone, so they are those of separate evaluations).
+  const all = [...temperatures, T_REF, ...zoneTemperatures];
+  const ev = evaluatorFor(species, physics, all);
   const n = temperatures.length;
-  const values = ev.grid([...temperatures, T_REF]);
+  const values = ev.grid(all);
   const samples: FitSample[] = new Array<FitSample>(n);
   for (let j = 0; j < n; j++) samples[j] = toSample(propertiesAt(ev, values, j));
   const at298 = propertiesAt(ev, values, n);
+  const extrapolationSamples: FitSample[] = new Array<FitSample>(zoneTemperatures.length);
+  for (let j = 0; j < zoneTemperatures.length; j++) extrapolationSamples[j] = toSample(propertiesAt(ev, values, n + 1 + j));
   const index = new Map<number, number>();
-  for (let j = 0; j <= n; j++) if (!index.has(values.T[j]!)) index.set(values.T[j]!, j);
+  for (let j = 0; j < values.T.length; j++) if (!index.has(values.T[j]!)) index.set(values.T[j]!, j);
   if (recent.length >= MEMO_SIZE) recent.shift();
   recent.push({ species, standardPressure: physics.standardPressure, ev, values, index });
   return {
     samples,
-    extrapolationSamples: zoneSamples(species, physics, ev, temperatures, zoneTemperatures),
+    extrapolationSamples,
     anchor: toSample(at298),
     at298,
     h298MinusH0: ev.h298MinusH0,

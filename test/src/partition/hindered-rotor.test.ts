@@ -114,6 +114,11 @@ describe('basis-size convergence', () => {
     ['H2O2-like, n = 2', { barrier: 1423, foldedness: 2, symmetryNumber: 1, rotationalConstant: 36.9 }],
     ['CH3-like, n = 3', { barrier: 1000, foldedness: 3, symmetryNumber: 3, rotationalConstant: 5.3 }],
     ['heavy top, n = 1', { barrier: 300, foldedness: 1, symmetryNumber: 1, rotationalConstant: 0.8 }],
+    // Written by hand to reach the corners of the basis criterion (hindered-rotor.ts): a high barrier over
+    // a small constant (x = √(V0/B)/(4√2 n) ≈ 10), a tiny barrier (x ≈ 0.1) and a heavy two-fold top.
+    ['high barrier, heavy, n = 1', { barrier: 6000, foldedness: 1, symmetryNumber: 1, rotationalConstant: 1.1 }],
+    ['tiny barrier, n = 3', { barrier: 2, foldedness: 3, symmetryNumber: 3, rotationalConstant: 5 }],
+    ['heavy two-fold top', { barrier: 2500, foldedness: 2, symmetryNumber: 2, rotationalConstant: 0.3 }],
   ] as const)('%s: twice the basis changes no thermodynamic function', (_name, rotor) => {
     const standard = hinderedRotorLevels(rotor);
     const larger = hinderedRotorLevels(rotor, { basisLimit: 2 * standard.basisLimit });

@@ -33,14 +33,14 @@ export interface LeastSquaresScore {
  * length nr) and h = (I − B B⁺) g, with g = A D⁻¹ u_p(e₂) the reduced target of a unit anchor S/R (the only
  * non-zero constraint value; the H anchor target is 0 because the fit uses the relative enthalpy).
  */
-interface Projector {
+export interface Projector {
   q1: Float64Array;
   h: Float64Array;
 }
 const projectors = new WeakMap<FactoredProblem, Projector>();
 
 /** z = R⁻¹ Q1ᵀ v (the least-squares coordinates of v) into `t` (length k). */
-function coordinates(f: FactoredProblem, q1: Float64Array, v: Float64Array, t: Float64Array): void {
+export function coordinates(f: FactoredProblem, q1: Float64Array, v: Float64Array, t: Float64Array): void {
   const k = f.n - f.m;
   const nr = f.scaledRows.length;
   for (let j = 0; j < k; j++) {
@@ -55,7 +55,7 @@ function coordinates(f: FactoredProblem, q1: Float64Array, v: Float64Array, t: F
   }
 }
 
-function projectorOf(f: FactoredProblem): Projector {
+export function projectorOf(f: FactoredProblem): Projector {
   const hit = projectors.get(f);
   if (hit) return hit;
   const k = f.n - f.m;

@@ -17,7 +17,7 @@
  */
 import { FitError } from './errors.js';
 import { fitAtFixedMid, fitWithoutMetrics, withMetrics, type UnmeasuredFit } from './fit-fixed-mid.js';
-import { fitPrepared, preparedFactorisation, preparedPathApplies, unmeasuredOf, type PreparedFit } from './fit-prepared.js';
+import { fitPrepared, measuredOf, preparedFactorisation, preparedPathApplies, type PreparedFit } from './fit-prepared.js';
 import { rankLeastSquares, type RankEntry } from './ls-rank.js';
 import { leastSquaresScore } from './ls-score.js';
 import { worstLimitRatio } from './limit-ratio.js';
@@ -150,7 +150,7 @@ function optimisePrepared(p: PreparedSamples, options: FitOptions, range: NonNul
   }
   rankLeastSquares(p, entries, options, minimax ? MINIMAX_CANDIDATES - 1 : 1, minimax ? 'limitRatio' : 'weighted');
   const ranked = [...scored].sort(byScore);
-  let best: UnmeasuredFit | undefined;
+  let best: PreparedFit | undefined;
   if (minimax) {
     let refined: { fit: PreparedFit; score: number } | undefined;
     const nearestFixed = [...scored].sort((a, b) => Math.abs(a.tMid - options.tMid) - Math.abs(b.tMid - options.tMid))[0]!;
@@ -168,13 +168,14 @@ function optimisePrepared(p: PreparedSamples, options: FitOptions, range: NonNul
         if (!(e instanceof FitError)) throw e;
       }
     }
-    if (refined) best = unmeasuredOf(p, refined.fit);
+    if (refined) best = refined.fit;
   }
-  if (!best) {
+  let result: FitResult;
+  if (best) result = measuredOf(p, best, options);
+  else {
     const at = { ...options, tMid: ranked[0]!.tMid, method: 'least-squares' as const };
     const fit = fitPrepared(p, at, temperatures);
-    best = fit ? unmeasuredOf(p, fit) : fitWithoutMetrics(samples, anchor, at, temperatures);
+    result = fit ? measuredOf(p, fit, at) : withMetrics(fitWithoutMetrics(samples, anchor, at, temperatures), anchor);
   }
-  const result = withMetrics(best, anchor);
   return { ...result, solver: { ...result.solver!, midCandidates: tried } };
 }

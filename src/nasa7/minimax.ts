@@ -147,14 +147,33 @@ function weightedSolve(
   }
 }
 
+/**
+ * |(b_i·z − c_i) / L_i| of row i, summed as −c_i + b_i0 z_0 + b_i1 z_1 + … in that order (unrolled for the
+ * usual k = 8: the same operations).
+ */
+function rowError(b: Float64Array, c: Float64Array, limits: Float64Array, k: number, z: Float64Array, i: number): number {
+  let v = -c[i]!;
+  const o = i * k;
+  if (k === 8) {
+    v += b[o]! * z[0]!;
+    v += b[o + 1]! * z[1]!;
+    v += b[o + 2]! * z[2]!;
+    v += b[o + 3]! * z[3]!;
+    v += b[o + 4]! * z[4]!;
+    v += b[o + 5]! * z[5]!;
+    v += b[o + 6]! * z[6]!;
+    v += b[o + 7]! * z[7]!;
+  } else {
+    for (let j = 0; j < k; j++) v += b[o + j]! * z[j]!;
+  }
+  return Math.abs(v / limits[i]!);
+}
+
 /** |e_i| of every row for z; returns the max. */
 function errorsOf(b: Float64Array, c: Float64Array, limits: Float64Array, k: number, z: Float64Array, e: Float64Array): number {
   let worst = 0;
   for (let i = 0; i < c.length; i++) {
-    let v = -c[i]!;
-    const o = i * k;
-    for (let j = 0; j < k; j++) v += b[o + j]! * z[j]!;
-    const a = Math.abs(v / limits[i]!);
+    const a = rowError(b, c, limits, k, z, i);
     e[i] = a;
     if (!(a <= worst)) worst = a;
   }
@@ -223,11 +242,7 @@ function lawsonOnSet(
     let bound = 0;
     let total = 0;
     for (let r = 0; r < n; r++) {
-      const i = set[r]!;
-      let v = -c[i]!;
-      const o = i * k;
-      for (let j = 0; j < k; j++) v += b[o + j]! * z[j]!;
-      const a = Math.abs(v / limits[i]!);
+      const a = rowError(b, c, limits, k, z, set[r]!);
       e[r] = a;
       if (!(a <= worst)) worst = a;
       bound += w[r]! * a * a;
@@ -331,11 +346,7 @@ export function minimaxReduced(
       break;
     }
     let setWorst = 0;
-    for (const i of ordered) {
-      let v = -c[i]!;
-      for (let j = 0; j < k; j++) v += b[i * k + j]! * r.z[j]!;
-      setWorst = Math.max(setWorst, Math.abs(v / limits[i]!));
-    }
+    for (const i of ordered) setWorst = Math.max(setWorst, rowError(b, c, limits, k, r.z, i));
     lowerBound = Math.max(lowerBound, setWorst * (1 - RELATIVE_GAP));
     const worst = errorsOf(b, c, limits, k, r.z, e);
     if (worst < best.worst) best = { z: r.z, worst };

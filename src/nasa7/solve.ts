@@ -203,9 +203,13 @@ export function solveFactored(f: FactoredProblem, rhs: ArrayLike<number>, constr
   return solveFactoredParts(f, rhs, constraintRhs, { residualNorm: true }).solution;
 }
 
+/** Work rows of `solveFactoredParts` (fully written before use; nothing returned points into it). */
+let scratchX0 = new Float64Array(0);
+
 /**
  * `solveFactored` with its by-products: with `targets`, also the reduced targets c = y − A D⁻¹ u_p (the
- * right-hand side of the reduced problem before the Householder steps, which the minimax fit starts from);
+ * right-hand side of the reduced problem before the Householder steps, which the minimax fit starts from;
+ * written into `targets` when it is an array of the right length, else into a new one);
  * without `residualNorm`, the residual pass is skipped and residualNorm is NaN (callers that need it for
  * one solution only compute it later with `residualNormOf`, the same arithmetic).
  */
@@ -213,7 +217,7 @@ export function solveFactoredParts(
   f: FactoredProblem,
   rhs: ArrayLike<number>,
   constraintRhs: readonly number[],
-  want: { targets?: boolean; residualNorm?: boolean },
+  want: { targets?: boolean | Float64Array; residualNorm?: boolean },
 ): { solution: ConstrainedSolution; targets?: Float64Array } {
   const { n } = f;
   const k = n - f.m;
@@ -222,14 +226,17 @@ export function solveFactoredParts(
   const first = f.rowFirst;
   const end = f.rowEnd;
   const up = particularSolution(f, constraintRhs);
-  const x0 = new Float64Array(nr);
+  if (scratchX0.length < nr) scratchX0 = new Float64Array(nr);
+  const x0 = scratchX0;
   for (let row = 0; row < nr; row++) {
     let pred = 0;
     const o = row * n;
     for (let j = first[row]!; j < end[row]!; j++) pred += a[o + j]! * up[j]!;
     x0[row] = rhs[row]! - pred;
   }
-  const targets = want.targets ? x0.slice() : undefined;
+  let targets: Float64Array | undefined;
+  if (want.targets instanceof Float64Array) (targets = want.targets).set(x0.subarray(0, nr));
+  else if (want.targets) targets = x0.slice(0, nr);
   const qr = f.qrColumns;
   for (let c = 0; c < k; c++) {
     const o = c * nr;

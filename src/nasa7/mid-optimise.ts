@@ -52,6 +52,16 @@ export function optimiseMid(samples: readonly FitSample[], anchor: FitSample, op
   if (!range) return fitAtFixedMid(samples, anchor, options, temperatures);
   const prepared = preparedPathApplies(options) ? prepareSamples(samples, anchor, options) : undefined;
   if (prepared) return optimisePrepared(prepared, options, range, temperatures);
+  return optimiseMidGeneral(samples, anchor, options, temperatures);
+}
+
+/**
+ * The search on the sample lists, for every input (the prepared path below covers the usual ones with
+ * bit-identical results; tests compare the two).
+ */
+export function optimiseMidGeneral(samples: readonly FitSample[], anchor: FitSample, options: FitOptions, temperatures = temperatureKey(samples)): FitResult {
+  const range = options.optimiseMid;
+  if (!range) return fitAtFixedMid(samples, anchor, options, temperatures);
   const minimax = options.method === 'minimax';
   const w = options.weights;
   // Without rows for every quantity the residuals do not give the limit ratio of all three; score such

@@ -102,6 +102,10 @@ export async function benchNasa7(): Promise<{ name: string; ms: number }[]> {
       fitNasa7(c16, c16Anchor, { method: 'minimax', optimiseMid: { min: 700, max: 2500, step: 100 } }),
     ),
   );
+  // CPU per species of the default fit on the seeded synthetic mix, as a build's fit stage sees it.
+  const mix = syntheticFitCases(200, 1);
+  cpuMsPerFit(fitNasa7, mix.slice(0, 20), 1);
+  results.push({ name: `nasa7 default fit, CPU per species, synthetic mix (${mix.length}, seed 1)`, ms: cpuMsPerFit(fitNasa7, mix, 1) });
   const poly = fitNasa7(samples, anchor).polynomial;
   const records: Nasa7Record[] = Array.from({ length: 1000 }, (_, i) => ({
     name: `S${i}`,

@@ -39,14 +39,16 @@ export function temperatureKey(samples: readonly FitSample[]): string {
   return key;
 }
 
+type SplitRanges = { low: readonly FitSample[]; high: readonly FitSample[] };
+
 /**
  * The factorisation for these ranges and options, from the cache or built now. `ranges` must be the split
- * of samples whose temperatures `parts.temperatures` identifies. Throws FitError like the solve itself
- * (failures are not cached).
+ * of samples whose temperatures `parts.temperatures` identifies (or a function returning it, called on a
+ * miss only). Throws FitError like the solve itself (failures are not cached).
  */
 export function factorisationFor(
   parts: FactorKeyParts,
-  ranges: { low: readonly FitSample[]; high: readonly FitSample[] },
+  ranges: SplitRanges | (() => SplitRanges),
   anchor: FitSample,
 ): FactoredProblem {
   const w = parts.weights;
@@ -59,7 +61,7 @@ export function factorisationFor(
     return hit;
   }
   const constraints = buildConstraints(anchor, { tMid: parts.tMid, continuityOrder: parts.continuityOrder });
-  const made = factorConstrainedProblem(designRows(ranges, w), constraints.rows, constraints.labels);
+  const made = factorConstrainedProblem(designRows(typeof ranges === 'function' ? ranges() : ranges, w), constraints.rows, constraints.labels);
   if (!inner) cache.set(parts.temperatures, (inner = new Map()));
   inner.set(key, made);
   order.set(made, [parts.temperatures, key]);

@@ -28,7 +28,8 @@ function pinEnthalpyAndEntropy(c: Coefficients7, T: number, hRT: number, sR: num
   return [c[0], c[1], c[2], c[3], c[4], (hRT - v.hRT) * T, sR - v.sR];
 }
 
-function finish(x: readonly number[], anchor: FitSample, options: FitOptions): Nasa7Polynomial {
+/** τ-form solution → T-form polynomial with a6, a7 re-derived (see the module comment). */
+export function finish(x: readonly number[], anchor: FitSample, options: FitOptions): Nasa7Polynomial {
   const low = pinEnthalpyAndEntropy(unscaleCoefficients(x.slice(0, 7)), anchor.T, anchor.hRT, anchor.sR);
   const lowAtMid = evaluateRange(low, options.tMid);
   const high = pinEnthalpyAndEntropy(unscaleCoefficients(x.slice(7, 14)), options.tMid, lowAtMid.hRT, lowAtMid.sR);

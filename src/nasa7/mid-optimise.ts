@@ -17,9 +17,12 @@
  */
 import { FitError } from './errors.js';
 import { fitAtFixedMid, fitWithoutMetrics, withMetrics, type UnmeasuredFit } from './fit-fixed-mid.js';
+import { fitPrepared, measuredOf, preparedFactorisation, preparedPathApplies, type PreparedFit } from './fit-prepared.js';
+import { rankLeastSquares, type RankEntry } from './ls-rank.js';
 import { leastSquaresScore } from './ls-score.js';
 import { worstLimitRatio } from './limit-ratio.js';
 import { temperatureKey } from './factor-cache.js';
+import { prepareSamples, splitAt, type PreparedSamples } from './prepared.js';
 import type { FitOptions, FitResult, FitSample } from './types.js';
 
 /** Candidates refined by the minimax fit after the least-squares ranking. */
@@ -40,9 +43,24 @@ function ratioOf(result: Pick<FitResult, 'polynomial'>, samples: readonly FitSam
   return worstLimitRatio(result.polynomial, { low, high }, options.limits).ratio;
 }
 
+/** Ascending by score (a stable sort keeps ascending tMid on ties); Infinity ties with Infinity. */
+const byScore = (a: { score: number }, b: { score: number }) => (a.score < b.score ? -1 : a.score > b.score ? 1 : 0);
+
 export function optimiseMid(samples: readonly FitSample[], anchor: FitSample, options: FitOptions): FitResult {
   const range = options.optimiseMid;
   const temperatures = temperatureKey(samples);
+  if (!range) return fitAtFixedMid(samples, anchor, options, temperatures);
+  const prepared = preparedPathApplies(options) ? prepareSamples(samples, anchor, options) : undefined;
+  if (prepared) return optimisePrepared(prepared, options, range, temperatures);
+  return optimiseMidGeneral(samples, anchor, options, temperatures);
+}
+
+/**
+ * The search on the sample lists, for every input (the prepared path below covers the usual ones with
+ * bit-identical results; tests compare the two).
+ */
+export function optimiseMidGeneral(samples: readonly FitSample[], anchor: FitSample, options: FitOptions, temperatures = temperatureKey(samples)): FitResult {
+  const range = options.optimiseMid;
   if (!range) return fitAtFixedMid(samples, anchor, options, temperatures);
   const minimax = options.method === 'minimax';
   const w = options.weights;
@@ -99,5 +117,75 @@ export function optimiseMid(samples: readonly FitSample[], anchor: FitSample, op
   }
   best ??= fitWithoutMetrics(samples, anchor, { ...options, tMid: ranked[0]!.tMid, method: 'least-squares' }, temperatures);
   const result = withMetrics(best, anchor);
+  return { ...result, solver: { ...result.solver!, midCandidates: tried } };
+}
+
+/**
+ * The search above on prepared samples (prepared.ts, fit-prepared.ts) with the pruned least-squares
+ * ranking (ls-rank.ts): the same candidates, the same choice and bit-identical results, at less cost.
+ * Candidates whose split fails the coverage rules, or that cannot be fitted, are handed to the general
+ * functions, which report them exactly as before.
+ */
+function optimisePrepared(p: PreparedSamples, options: FitOptions, range: NonNullable<FitOptions['optimiseMid']>, temperatures: string): FitResult {
+  const { samples, anchor } = p;
+  const minimax = options.method === 'minimax';
+  const scored: Array<{ tMid: number; score: number }> = [];
+  const entries: RankEntry[] = [];
+  let firstError: unknown;
+  let tried = 0;
+  const count = Math.floor((range.max - range.min) / range.step + 1e-9) + 1;
+  for (let i = 0; i < count; i++) {
+    const tMid = range.min + i * range.step;
+    tried++;
+    try {
+      const at = { ...options, tMid, method: 'least-squares' as const };
+      const split = splitAt(p, at);
+      if (!split) {
+        // The general scoring reports why (it throws the FitError of samples.ts).
+        const s = leastSquaresScore(samples, anchor, at, temperatures);
+        scored.push({ tMid, score: minimax ? s.limitRatio : s.weighted });
+        continue;
+      }
+      const entry: RankEntry = { tMid, split, f: preparedFactorisation(p, at, temperatures, split), score: NaN };
+      entries.push(entry);
+      scored.push(entry);
+    } catch (e) {
+      if (!(e instanceof FitError)) throw e;
+      firstError ??= e;
+    }
+  }
+  if (!scored.length) {
+    const why = firstError instanceof FitError ? firstError.message : String(firstError);
+    throw new FitError(`no midpoint in [${range.min}, ${range.max}] K could be fitted; first failure: ${why}`);
+  }
+  rankLeastSquares(p, entries, options, minimax ? MINIMAX_CANDIDATES - 1 : 1, minimax ? 'limitRatio' : 'weighted');
+  const ranked = [...scored].sort(byScore);
+  let best: PreparedFit | undefined;
+  if (minimax) {
+    let refined: { fit: PreparedFit; score: number } | undefined;
+    const nearestFixed = [...scored].sort((a, b) => Math.abs(a.tMid - options.tMid) - Math.abs(b.tMid - options.tMid))[0]!;
+    const chosen = new Set([nearestFixed.tMid, ...ranked.slice(0, MINIMAX_CANDIDATES - 1).map((c) => c.tMid)]);
+    const order = [nearestFixed.tMid, ...[...chosen].filter((t) => t !== nearestFixed.tMid).sort((a, b) => a - b)];
+    for (const tMid of order) {
+      try {
+        const cutoff = refined ? refined.score * (1 - 1e-6) - 1e-9 : Infinity;
+        const fit = fitPrepared(p, { ...options, tMid }, temperatures, cutoff);
+        // A split the coverage rules refuse: the general fit would throw a FitError, skipped alike.
+        if (!fit) continue;
+        const score = fit.worst!;
+        if (!refined || score < refined.score * (1 - 1e-6) - 1e-9) refined = { fit, score };
+      } catch (e) {
+        if (!(e instanceof FitError)) throw e;
+      }
+    }
+    if (refined) best = refined.fit;
+  }
+  let result: FitResult;
+  if (best) result = measuredOf(p, best, options);
+  else {
+    const at = { ...options, tMid: ranked[0]!.tMid, method: 'least-squares' as const };
+    const fit = fitPrepared(p, at, temperatures);
+    result = fit ? measuredOf(p, fit, at) : withMetrics(fitWithoutMetrics(samples, anchor, at, temperatures), anchor);
+  }
   return { ...result, solver: { ...result.solver!, midCandidates: tried } };
 }

@@ -51,8 +51,52 @@ export interface MinimaxResult {
 }
 
 /**
- * Weighted least squares min Σ (s_i (b_i·z − c_i))² over the rows listed in `active`, by Householder QR.
- * `work` has room for active.length × (k + 1) doubles. Returns z and writes nothing else.
+ * Work buffers of the iteration, grown on demand and reused by every call (the fit is synchronous and
+ * single-threaded per worker, so one set per module suffices). Reuse changes no arithmetic: every buffer
+ * is fully written before it is read.
+ */
+const scratch = {
+  work: new Float64Array(0),
+  s: new Float64Array(0),
+  w: new Float64Array(0),
+  e: new Float64Array(0),
+  activeA: new Int32Array(0),
+  activeB: new Int32Array(0),
+  posA: new Int32Array(0),
+  posB: new Int32Array(0),
+  rowErrors: new Float64Array(0),
+  inSet: new Uint8Array(0),
+  diag: new Float64Array(0),
+  z: new Float64Array(0),
+};
+
+function ensure(n: number, k: number, rows: number): void {
+  const sc = scratch;
+  if (sc.work.length < n * (k + 1)) sc.work = new Float64Array(n * (k + 1));
+  if (sc.s.length < n) {
+    sc.s = new Float64Array(n);
+    sc.w = new Float64Array(n);
+    sc.e = new Float64Array(n);
+    sc.activeA = new Int32Array(n);
+    sc.activeB = new Int32Array(n);
+    sc.posA = new Int32Array(n);
+    sc.posB = new Int32Array(n);
+  }
+  if (sc.rowErrors.length < rows) {
+    sc.rowErrors = new Float64Array(rows);
+    sc.inSet = new Uint8Array(rows);
+  }
+  if (sc.diag.length < k) {
+    sc.diag = new Float64Array(k);
+    sc.z = new Float64Array(k);
+  }
+}
+
+/**
+ * Weighted least squares min Σ (s_r (b_i·z − c_i))² over the rows i = active[r], r < count, by Householder
+ * QR; s is indexed by r. The work matrix is column-major (count rows, k + 1 columns) so every inner loop
+ * runs over consecutive doubles; the operations and their order are those of the row-major form. Writes z
+ * (length k) into `z`.
  */
 function weightedSolve(
   b: Float64Array,
@@ -62,54 +106,74 @@ function weightedSolve(
   count: number,
   k: number,
   work: Float64Array,
-): Float64Array {
-  const cols = k + 1;
+  diag: Float64Array,
+  z: Float64Array,
+): void {
   for (let r = 0; r < count; r++) {
     const i = active[r]!;
-    const si = s[i]!;
-    for (let j = 0; j < k; j++) work[r * cols + j] = si * b[i * k + j]!;
-    work[r * cols + k] = si * c[i]!;
+    const si = s[r]!;
+    const o = i * k;
+    for (let j = 0; j < k; j++) work[j * count + r] = si * b[o + j]!;
+    work[k * count + r] = si * c[i]!;
   }
-  const diag = new Float64Array(k);
   for (let j = 0; j < k; j++) {
     // Plain sum of squares, not Math.hypot (several times slower): the rows are scaled by √w_i / L_i with
     // Σ w_i = 1 and limit-relative targets, so the entries are far from overflow or underflow.
+    const oj = j * count;
     let sumSq = 0;
-    for (let r = j; r < count; r++) sumSq += work[r * cols + j]! * work[r * cols + j]!;
+    for (let r = j; r < count; r++) sumSq += work[oj + r]! * work[oj + r]!;
     const norm = Math.sqrt(sumSq);
     if (norm === 0) {
       diag[j] = 0;
       continue;
     }
-    const alpha = work[j * cols + j]! > 0 ? -norm : norm;
+    const alpha = work[oj + j]! > 0 ? -norm : norm;
     // v = x − alpha e1, stored in place; beta = 1 / (alpha (alpha − x0)).
-    work[j * cols + j]! -= alpha;
-    const vv = -alpha * work[j * cols + j]!;
-    for (let col = j + 1; col < cols; col++) {
+    work[oj + j]! -= alpha;
+    const vv = -alpha * work[oj + j]!;
+    for (let col = j + 1; col <= k; col++) {
+      const oc = col * count;
       let dot = 0;
-      for (let r = j; r < count; r++) dot += work[r * cols + j]! * work[r * cols + col]!;
+      for (let r = j; r < count; r++) dot += work[oj + r]! * work[oc + r]!;
       const f = dot / vv;
-      for (let r = j; r < count; r++) work[r * cols + col]! -= f * work[r * cols + j]!;
+      for (let r = j; r < count; r++) work[oc + r]! -= f * work[oj + r]!;
     }
     diag[j] = alpha;
   }
-  const z = new Float64Array(k);
   for (let j = k - 1; j >= 0; j--) {
-    let v = work[j * cols + k]!;
-    for (let col = j + 1; col < k; col++) v -= work[j * cols + col]! * z[col]!;
+    let v = work[k * count + j]!;
+    for (let col = j + 1; col < k; col++) v -= work[col * count + j]! * z[col]!;
     z[j] = diag[j] !== 0 ? v / diag[j]! : 0;
   }
-  return z;
+}
+
+/**
+ * |(b_i·z − c_i) / L_i| of row i, summed as −c_i + b_i0 z_0 + b_i1 z_1 + … in that order (unrolled for the
+ * usual k = 8: the same operations).
+ */
+function rowError(b: Float64Array, c: Float64Array, limits: Float64Array, k: number, z: Float64Array, i: number): number {
+  let v = -c[i]!;
+  const o = i * k;
+  if (k === 8) {
+    v += b[o]! * z[0]!;
+    v += b[o + 1]! * z[1]!;
+    v += b[o + 2]! * z[2]!;
+    v += b[o + 3]! * z[3]!;
+    v += b[o + 4]! * z[4]!;
+    v += b[o + 5]! * z[5]!;
+    v += b[o + 6]! * z[6]!;
+    v += b[o + 7]! * z[7]!;
+  } else {
+    for (let j = 0; j < k; j++) v += b[o + j]! * z[j]!;
+  }
+  return Math.abs(v / limits[i]!);
 }
 
 /** |e_i| of every row for z; returns the max. */
 function errorsOf(b: Float64Array, c: Float64Array, limits: Float64Array, k: number, z: Float64Array, e: Float64Array): number {
   let worst = 0;
   for (let i = 0; i < c.length; i++) {
-    let v = -c[i]!;
-    const o = i * k;
-    for (let j = 0; j < k; j++) v += b[o + j]! * z[j]!;
-    const a = Math.abs(v / limits[i]!);
+    const a = rowError(b, c, limits, k, z, i);
     e[i] = a;
     if (!(a <= worst)) worst = a;
   }
@@ -117,19 +181,30 @@ function errorsOf(b: Float64Array, c: Float64Array, limits: Float64Array, k: num
 }
 
 /**
- * Rows at which |e| has a local maximum along T within its series (one series per quantity and range:
- * rows are sample-major with `stride` quantities per sample, the low range's first `lowRows` rows).
+ * Marks the rows at which |e| has a local maximum along T within its series (one series per quantity and
+ * range: rows are sample-major with `stride` quantities per sample, the low range's first `lowRows` rows)
+ * and exceeds `above`; returns how many were not marked before. `rows` = e's length in use.
  */
-function localMaxima(e: Float64Array, stride: number, lowRows: number, into: Set<number>, above: number): void {
-  for (const [from, to] of [[0, lowRows], [lowRows, e.length]] as const) {
+function markLocalMaxima(e: Float64Array, rows: number, stride: number, lowRows: number, inSet: Uint8Array, above: number, list?: number[]): number {
+  let added = 0;
+  for (let part = 0; part < 2; part++) {
+    const from = part === 0 ? 0 : lowRows;
+    const to = part === 0 ? lowRows : rows;
     for (let q = 0; q < stride; q++) {
       for (let i = from + q; i < to; i += stride) {
         const prev = i - stride >= from ? e[i - stride]! : -Infinity;
         const next = i + stride < to ? e[i + stride]! : -Infinity;
-        if (e[i]! >= prev && e[i]! >= next && e[i]! > above) into.add(i);
+        if (e[i]! >= prev && e[i]! >= next && e[i]! > above) {
+          if (list) list.push(i);
+          else if (!inSet[i]) {
+            inSet[i] = 1;
+            added++;
+          }
+        }
       }
     }
   }
+  return added;
 }
 
 /**
@@ -141,31 +216,33 @@ function lawsonOnSet(
   limits: Float64Array,
   k: number,
   set: Int32Array,
-  work: Float64Array,
   cutoff: number,
 ): { z: Float64Array; iterations: number; cut: boolean } | undefined {
   const n = set.length;
-  const w = new Float64Array(n).fill(1 / n);
-  const s = new Float64Array(c.length);
-  const e = new Float64Array(n);
-  let active = set.slice();
+  ensure(n, k, c.length);
+  const { work, s, w, e, diag, z } = scratch;
+  let active = scratch.activeA;
+  let pos = scratch.posA;
+  let nextActive = scratch.activeB;
+  let nextPos = scratch.posB;
+  w.fill(1 / n, 0, n);
+  for (let r = 0; r < n; r++) {
+    active[r] = set[r]!;
+    pos[r] = r;
+  }
   let count = n;
-  let pos = new Int32Array(n);
-  for (let r = 0; r < n; r++) pos[r] = r;
-  let best: { z: Float64Array; worst: number } | undefined;
+  let bestZ: Float64Array | undefined;
+  let bestWorst = 0;
   let lowerBound = 0;
   let iterations = 0;
   for (; iterations < MAX_ITERATIONS; iterations++) {
-    for (let r = 0; r < count; r++) s[active[r]!] = Math.sqrt(w[pos[r]!]!) / limits[active[r]!]!;
-    const z = weightedSolve(b, c, s, active, count, k, work);
+    for (let r = 0; r < count; r++) s[r] = Math.sqrt(w[pos[r]!]!) / limits[active[r]!]!;
+    weightedSolve(b, c, s, active, count, k, work, diag, z);
     let worst = 0;
     let bound = 0;
     let total = 0;
     for (let r = 0; r < n; r++) {
-      const i = set[r]!;
-      let v = -c[i]!;
-      for (let j = 0; j < k; j++) v += b[i * k + j]! * z[j]!;
-      const a = Math.abs(v / limits[i]!);
+      const a = rowError(b, c, limits, k, z, set[r]!);
       e[r] = a;
       if (!(a <= worst)) worst = a;
       bound += w[r]! * a * a;
@@ -173,11 +250,15 @@ function lawsonOnSet(
     }
     if (!Number.isFinite(worst)) break;
     lowerBound = Math.max(lowerBound, Math.sqrt(bound));
-    if (!best || worst < best.worst) best = { z, worst };
+    if (!bestZ || worst < bestWorst) {
+      bestZ ??= new Float64Array(k);
+      bestZ.set(z.subarray(0, k));
+      bestWorst = worst;
+    }
     // The optimum on the set, hence on all rows, is at least lowerBound: at or above the cutoff this fit
     // cannot matter to the caller.
-    if (lowerBound >= cutoff) return { z: best.z, iterations: iterations + 1, cut: true };
-    if (best.worst - lowerBound <= RELATIVE_GAP * best.worst || total === 0) {
+    if (lowerBound >= cutoff) return { z: bestZ, iterations: iterations + 1, cut: true };
+    if (bestWorst - lowerBound <= RELATIVE_GAP * bestWorst || total === 0) {
       iterations++;
       break;
     }
@@ -191,8 +272,6 @@ function lawsonOnSet(
     for (let r = 0; r < n; r++) w[r] = w[r]! / wSum;
     wMax /= wSum;
     let kept = 0;
-    const nextActive = new Int32Array(n);
-    const nextPos = new Int32Array(n);
     for (let r = 0; r < n; r++) {
       if (w[r]! >= PRUNE_FRACTION * wMax) {
         nextActive[kept] = set[r]!;
@@ -200,13 +279,12 @@ function lawsonOnSet(
       } else w[r] = 0;
     }
     if (kept < k) break;
-    active = nextActive;
-    pos = nextPos;
+    [active, nextActive] = [nextActive, active];
+    [pos, nextPos] = [nextPos, pos];
     count = kept;
   }
-  return best ? { z: best.z, iterations, cut: false } : undefined;
+  return bestZ ? { z: bestZ, iterations, cut: false } : undefined;
 }
-
 /**
  * Minimax of the limit-relative residuals of the reduced rows of `f` (f.reduced, row-major, k = n − m
  * columns) with targets `c` and one limit per row. Rows are sample-major with `stride` quantities per
@@ -237,21 +315,29 @@ export function minimaxReduced(
   const k = f.n - f.m;
   const b = f.reduced;
   const rows = c.length;
-  const e = new Float64Array(rows);
+  ensure(0, k, rows);
+  const e = scratch.rowErrors;
+  const inSet = scratch.inSet;
+  inSet.fill(0, 0, rows);
   let best = { z: start, worst: errorsOf(b, c, limits, k, start, e) };
-  const set = new Set<number>();
   // Start from the larger local maxima of the starting error, but never fewer than 3k rows.
-  const maxima = new Set<number>();
-  localMaxima(e, stride, lowRows, maxima, -1);
-  const byError = [...maxima].sort((x, y) => e[y]! - e[x]! || x - y);
-  for (const i of byError) if (set.size < 3 * k || e[i]! > INITIAL_SET_FRACTION * best.worst) set.add(i);
-  const work = new Float64Array(rows * (k + 1));
+  const maxima: number[] = [];
+  markLocalMaxima(e, rows, stride, lowRows, inSet, -1, maxima);
+  maxima.sort((x, y) => e[y]! - e[x]! || x - y);
+  let size = 0;
+  for (const i of maxima) {
+    if (size < 3 * k || e[i]! > INITIAL_SET_FRACTION * best.worst) {
+      inSet[i] = 1;
+      size++;
+    }
+  }
   let iterations = 0;
   let lowerBound = 0;
   for (let round = 0; round < MAX_ROUNDS; round++) {
-    const ordered = Int32Array.from([...set].sort((x, y) => x - y));
-    if (ordered.length < k) break;
-    const r = lawsonOnSet(b, c, limits, k, ordered, work, cutoff);
+    if (size < k) break;
+    const ordered = new Int32Array(size);
+    for (let i = 0, o = 0; i < rows; i++) if (inSet[i]) ordered[o++] = i;
+    const r = lawsonOnSet(b, c, limits, k, ordered, cutoff);
     if (!r) break;
     iterations += r.iterations;
     if (r.cut) {
@@ -260,18 +346,14 @@ export function minimaxReduced(
       break;
     }
     let setWorst = 0;
-    for (const i of ordered) {
-      let v = -c[i]!;
-      for (let j = 0; j < k; j++) v += b[i * k + j]! * r.z[j]!;
-      setWorst = Math.max(setWorst, Math.abs(v / limits[i]!));
-    }
+    for (const i of ordered) setWorst = Math.max(setWorst, rowError(b, c, limits, k, r.z, i));
     lowerBound = Math.max(lowerBound, setWorst * (1 - RELATIVE_GAP));
     const worst = errorsOf(b, c, limits, k, r.z, e);
     if (worst < best.worst) best = { z: r.z, worst };
     if (worst <= setWorst * 1.001) break;
-    const before = set.size;
-    localMaxima(e, stride, lowRows, set, setWorst);
-    if (set.size === before) break;
+    const added = markLocalMaxima(e, rows, stride, lowRows, inSet, setWorst);
+    if (added === 0) break;
+    size += added;
   }
   return { z: best.z, worst: best.worst, lowerBound, iterations };
 }

@@ -74,6 +74,13 @@ export interface FactoredProblem {
   rowsFlat: Float64Array;
   /** Reduced matrix A D⁻¹ Q2 itself, row-major (the minimax fit reweights its rows). */
   reduced: Float64Array;
+  /**
+   * Per row, the first and one past the last column of A that is not exactly zero (a design row touches
+   * one range's seven coefficients only). Products with the exact zeros outside add nothing to a sum
+   * (x + ±0 = x for the x ≠ −0 such sums hold), so skipping them keeps every result bit-identical.
+   */
+  rowFirst: Int32Array;
+  rowEnd: Int32Array;
   conditionNumber: number;
 }
 
@@ -141,13 +148,24 @@ export function factorConstrainedProblem(
   const rDiagonal = Float64Array.from((reducedQr as unknown as { Rdiag: ArrayLike<number> }).Rdiag);
   const scaledFlat = new Float64Array(nr * n);
   const rowsFlat = new Float64Array(nr * n);
+  const rowFirst = new Int32Array(nr);
+  const rowEnd = new Int32Array(nr);
   for (let row = 0; row < nr; row++) {
+    let first = n;
+    let end = 0;
     for (let j = 0; j < n; j++) {
       scaledFlat[row * n + j] = a[row]![j]!;
       rowsFlat[row * n + j] = rows[row]![j]!;
+      // Both copies hold zeros at the same places: v / 2^p is zero exactly when v is.
+      if (rows[row]![j]! !== 0) {
+        if (first === n) first = j;
+        end = j + 1;
+      }
     }
+    rowFirst[row] = first === n ? 0 : first;
+    rowEnd[row] = end;
   }
-  return { n, m, rows, scale, scaledRows: a, q, r, reducedQr, qrColumns, rDiagonal, scaledFlat, rowsFlat, reduced, conditionNumber };
+  return { n, m, rows, scale, scaledRows: a, q, r, reducedQr, qrColumns, rDiagonal, scaledFlat, rowsFlat, reduced, rowFirst, rowEnd, conditionNumber };
 }
 
 /** u_p = Q1 R⁻ᵀ d: the scaled particular solution that satisfies the constraints. */
@@ -181,19 +199,44 @@ export function assembleSolution(f: FactoredProblem, up: readonly number[], z: A
  * arrays, exactly the arithmetic of ml-matrix's QrDecomposition.solve (Householder application, then back
  * substitution, in the same order), so the coefficients are bit-identical to a fresh solve.
  */
-export function solveFactored(f: FactoredProblem, rhs: readonly number[], constraintRhs: readonly number[]): ConstrainedSolution {
+export function solveFactored(f: FactoredProblem, rhs: ArrayLike<number>, constraintRhs: readonly number[]): ConstrainedSolution {
+  return solveFactoredParts(f, rhs, constraintRhs, { residualNorm: true }).solution;
+}
+
+/** Work rows of `solveFactoredParts` (fully written before use; nothing returned points into it). */
+let scratchX0 = new Float64Array(0);
+
+/**
+ * `solveFactored` with its by-products: with `targets`, also the reduced targets c = y − A D⁻¹ u_p (the
+ * right-hand side of the reduced problem before the Householder steps, which the minimax fit starts from;
+ * written into `targets` when it is an array of the right length, else into a new one);
+ * without `residualNorm`, the residual pass is skipped and residualNorm is NaN (callers that need it for
+ * one solution only compute it later with `residualNormOf`, the same arithmetic).
+ */
+export function solveFactoredParts(
+  f: FactoredProblem,
+  rhs: ArrayLike<number>,
+  constraintRhs: readonly number[],
+  want: { targets?: boolean | Float64Array; residualNorm?: boolean },
+): { solution: ConstrainedSolution; targets?: Float64Array } {
   const { n } = f;
   const k = n - f.m;
   const nr = f.scaledRows.length;
   const a = f.scaledFlat;
+  const first = f.rowFirst;
+  const end = f.rowEnd;
   const up = particularSolution(f, constraintRhs);
-  const x0 = new Float64Array(nr);
+  if (scratchX0.length < nr) scratchX0 = new Float64Array(nr);
+  const x0 = scratchX0;
   for (let row = 0; row < nr; row++) {
     let pred = 0;
     const o = row * n;
-    for (let j = 0; j < n; j++) pred += a[o + j]! * up[j]!;
+    for (let j = first[row]!; j < end[row]!; j++) pred += a[o + j]! * up[j]!;
     x0[row] = rhs[row]! - pred;
   }
+  let targets: Float64Array | undefined;
+  if (want.targets instanceof Float64Array) (targets = want.targets).set(x0.subarray(0, nr));
+  else if (want.targets) targets = x0.slice(0, nr);
   const qr = f.qrColumns;
   for (let c = 0; c < k; c++) {
     const o = c * nr;
@@ -208,16 +251,27 @@ export function solveFactored(f: FactoredProblem, rhs: readonly number[], constr
   }
   const z = x0.slice(0, k);
   const x = assembleSolution(f, up, z);
+  const residualNorm = want.residualNorm ? residualNormOf(f, rhs, x) : NaN;
+  const solution = { x, conditionNumber: f.conditionNumber, residualNorm, z, up };
+  return targets ? { solution, targets } : { solution };
+}
+
+/** ‖A x − y‖₂ of the weighted problem (the residual norm `solveFactored` reports, same arithmetic). */
+export function residualNormOf(f: FactoredProblem, rhs: ArrayLike<number>, x: readonly number[]): number {
+  const nr = f.scaledRows.length;
+  const { n } = f;
+  const first = f.rowFirst;
+  const end = f.rowEnd;
   let sumSq = 0;
   const rows = f.rowsFlat;
   for (let row = 0; row < nr; row++) {
     let pred = 0;
     const o = row * n;
-    for (let j = 0; j < n; j++) pred += rows[o + j]! * x[j]!;
+    for (let j = first[row]!; j < end[row]!; j++) pred += rows[o + j]! * x[j]!;
     const r = pred - rhs[row]!;
     sumSq += r * r;
   }
-  return { x, conditionNumber: f.conditionNumber, residualNorm: Math.sqrt(sumSq), z, up };
+  return Math.sqrt(sumSq);
 }
 
 export function solveConstrainedLeastSquares(p: ConstrainedProblem): ConstrainedSolution {

@@ -12,10 +12,11 @@
  * RSS. Per-stage species/s come from the per-species stage timings of the build's summary.json.
  *
  * Usage: node dist/bench/run.js [--sizes 1000,10000,50000] [--seed 1] [--jobs N] [--no-reference]
- *        [--no-nasa7] [--no-anharmonic] [--json FILE] [--check-targets]
+ *        [--no-nasa7] [--no-anharmonic] [--no-grid] [--grid-species N] [--json FILE] [--check-targets]
  *   --sizes      comma-separated database sizes (default 1000,10000,50000; e.g. --sizes 200 for a quick run)
  *   --json       where the results go (default bench/results/latest.json; the folder is gitignored)
  *   --check-targets  exit 1 when a target of the throughput issue is missed (else the table only says so)
+ *   --grid-species   species of the fit-node price table (bench/grid.ts; default 1000); --no-grid skips it
  * The synthetic database uses the default settings (minimax fit, T_mid searched per species, size-scaled
  * limits): the speed must not come from a weaker fit. Every species of the mix builds with them (the
  * table's "built" column says so); a rejected species would cost less and flatter the numbers.
@@ -228,6 +229,14 @@ async function main(): Promise<number> {
     }
     anharmonic = r;
   }
+  let grid: unknown;
+  if (!argv.includes('--no-grid')) {
+    const { benchGrid, formatGridTable } = await import('./grid.js');
+    const count = Number(option(argv, '--grid-species') ?? 1000);
+    const rows = await benchGrid(count, seed);
+    console.log(formatGridTable(rows, count));
+    grid = { species: count, rows };
+  }
   // `--before OTHER_TREE/dist/bench/child.js`: no-change rebuild and peak RSS of that tree and this one,
   // on the same files in this run (bench/runner.ts).
   let rebuildBeforeAfter: unknown;
@@ -243,7 +252,7 @@ async function main(): Promise<number> {
   await mkdir(path.dirname(jsonFile), { recursive: true });
   await writeFile(
     jsonFile,
-    `${JSON.stringify({ format: 'qforge-bench/1', seed, cores: cpus().length, node: process.version, settings: BENCH_SETTINGS, results, targets: checks, nasa7, anharmonic, rebuildBeforeAfter }, null, 2)}\n`,
+    `${JSON.stringify({ format: 'qforge-bench/1', seed, cores: cpus().length, node: process.version, settings: BENCH_SETTINGS, results, targets: checks, nasa7, anharmonic, grid, rebuildBeforeAfter }, null, 2)}\n`,
   );
   console.log(`results: ${jsonFile}`);
   const buildFailed = results.some((r) => [r.coldNoCache, r.coldFreshCache, r.rebuild].some((b) => b.exitCode > 1) || r.rebuild.cacheHits < r.rebuild.built);

@@ -3,13 +3,13 @@
  * once from the database settings and the species' own overrides. Each stage's cache key is a hash of
  * exactly the part of the plan it reads, so a changed setting invalidates only what it affects:
  *   compute ← input, physics options, sampling grid, extrapolation-zone grid
- *   fit     ← compute key, fit options
+ *   fit     ← compute key, fit options (the node set of fit.nodes included)
  *   table   ← input, physics options, table grid
  *   verify  ← tolerances (cheap; never cached)
  */
 import { T_REF } from '../../src/constants.js';
 import type { PhysicsOptions, Species } from '../../src/model.js';
-import type { PartialFitOptions } from '../../src/nasa7/options.js';
+import type { PartialFitStageOptions } from '../stages/fit.js';
 import type { DatabaseSettings, FitTolerancesSetting } from './settings.js';
 import { fitLimitsFor, midSearchFor } from './fit-plan.js';
 import { standardPressurePa } from './settings.js';
@@ -19,9 +19,13 @@ import { extrapolationZoneTemperatures } from './zone-grid.js';
 export interface SpeciesPlan {
   ranges: { low: number; mid: number; high: number };
   physics: PhysicsOptions;
-  /** Temperatures (K) of the computed points the fit uses, ascending, 298.15 and the midpoint included. */
+  /**
+   * Temperatures (K) of the computed points, ascending, 298.15 and the midpoint included: the check grid of
+   * the verify stage, and the points the fit's nodes are drawn from (fitOptions.nodes, core/fit-nodes.ts).
+   */
   sampleTemperatures: number[];
-  fitOptions: PartialFitOptions;
+  /** The fit options, the node set included (so the fit's cache key changes with it). */
+  fitOptions: PartialFitStageOptions;
   /** The species' fit limits: its own `tolerances` keys over the settings'. */
   tolerances: FitTolerancesSetting;
   /** Temperatures (K) of tables/<name>.csv, inside the species' range, ascending. */
@@ -39,7 +43,7 @@ export function planSpecies(species: Species, settings: DatabaseSettings): Speci
   };
   const physics: PhysicsOptions = { standardPressure: standardPressurePa(settings.standard_pressure) };
   const sampleTemperatures = temperatureGrid(ranges.low, ranges.high, settings.fit.sampling_step, [ranges.mid, T_REF]);
-  const fitOptions: PartialFitOptions = {
+  const fitOptions: PartialFitStageOptions = {
     tLow: ranges.low,
     tMid: ranges.mid,
     tHigh: ranges.high,
@@ -47,6 +51,7 @@ export function planSpecies(species: Species, settings: DatabaseSettings): Speci
     continuityOrder: settings.fit.continuity_order,
     anchorT: T_REF,
     method: settings.fit.method === 'least_squares' ? 'least-squares' : 'minimax',
+    nodes: settings.fit.nodes === 'all' ? 'all' : { ...settings.fit.nodes },
   };
   const tolerances = fitLimitsFor(settings.tolerances, species.fitLimits);
   fitOptions.limits = {

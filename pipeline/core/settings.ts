@@ -16,6 +16,7 @@ import { MAX_END_GAP_FRACTION, MAX_INNER_GAP_FRACTION, MIN_DISTINCT_TEMPERATURES
 import { MAX_ANCHOR_EXTRAPOLATION } from '../../src/nasa7/options.js';
 // plan.ts imports this module too; only functions cross the cycle, and only at call time.
 import { temperatureGrid } from './grid.js';
+import type { FitNodesSetting } from './fit-nodes.js';
 
 export { SETTINGS_FILE_NAME };
 
@@ -58,6 +59,8 @@ export interface DatabaseSettings {
     continuity_order: 1 | 2;
     optimise_mid: false | { min: number; max: number; step: number };
     sampling_step: number;
+    /** Which sampling points the fit is made from (core/fit-nodes.ts); the check always uses all of them. */
+    nodes: FitNodesSetting;
   };
   /** Dimensionless: |ΔCp/R|, |ΔH/RT|, |ΔS/R| (absolute parts) and multiples of Cp/R (relative_to_cp). */
   tolerances: FitTolerancesSetting;
@@ -92,6 +95,7 @@ export const DEFAULT_SETTINGS: Readonly<DatabaseSettings> = Object.freeze({
     continuity_order: 1,
     optimise_mid: { min: 700, max: 2500, step: 100 },
     sampling_step: 10,
+    nodes: 'all',
   },
   tolerances: { cp: 0.1, h: 0.02, s: 0.02, relative_to_cp: { cp: 0.015, h: 0.003, s: 0.003 } },
   outputs: { thermo_json: true, nasa7: true, tables: true, report: false },
@@ -100,6 +104,11 @@ export const DEFAULT_SETTINGS: Readonly<DatabaseSettings> = Object.freeze({
   strict: false,
   accepted_warnings: [],
 } satisfies DatabaseSettings);
+
+type FitNodeSpacingName = Exclude<FitNodesSetting, 'all'>['spacing'];
+
+/** Defaults of the keys of a written `fit.nodes` mapping (schemas/settings.schema.json). */
+const DEFAULT_NODE_SET: Readonly<Exclude<FitNodesSetting, 'all'>> = Object.freeze({ spacing: 'geometric', count: 40, exchange: true });
 
 /** Standard pressure in Pa for a settings label. */
 export function standardPressurePa(label: StandardPressureLabel): number {
@@ -123,6 +132,12 @@ export function withDefaults(input: unknown): DatabaseSettings {
   const merged = merge(DEFAULT_SETTINGS, isObject(input) ? input : {}) as DatabaseSettings;
   const om = merged.fit.optimise_mid;
   if (om !== false && isObject(om) && om.step === undefined) om.step = 100;
+  // A written node set over the default 'all' (a string, so nothing was merged into it) gets the schema's defaults.
+  const nodes = merged.fit.nodes as unknown;
+  if (isObject(nodes)) {
+    const d = DEFAULT_NODE_SET;
+    merged.fit.nodes = { spacing: (nodes.spacing as FitNodeSpacingName | undefined) ?? d.spacing, count: (nodes.count as number | undefined) ?? d.count, exchange: (nodes.exchange as boolean | undefined) ?? d.exchange };
+  }
   return merged;
 }
 

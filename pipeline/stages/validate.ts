@@ -972,23 +972,49 @@ export interface SpeciesSetEntry extends SpeciesValidation {
  * position.
  */
 export function checkUniqueNames(docs: readonly LoadedDocument[]): Diagnostic[] {
-  return nameFindings(docs, true);
+  return nameFindings(docs.map(nameFact), true);
 }
 
 /** Only the errors of `checkUniqueNames`: one per document reusing a name (each names the first use). */
 export function findDuplicateNames(docs: readonly LoadedDocument[]): Diagnostic[] {
-  return nameFindings(docs, false);
+  return nameFindings(docs.map(nameFact), false);
 }
 
-function nameFindings(docs: readonly LoadedDocument[], withCaseWarnings: boolean): Diagnostic[] {
+/**
+ * What the name checks need of one document: its file, position, `name` (when a string) and where that is
+ * written. Small enough to keep for every document of a large database after its YAML tree is dropped.
+ */
+export interface NameFact {
+  file: string;
+  index: number;
+  name?: string;
+  nameAt?: { line: number; column: number };
+}
+
+export function nameFact(doc: LoadedDocument): NameFact {
+  const f: NameFact = { file: doc.file, index: doc.index };
+  if (isObj(doc.value) && typeof doc.value.name === 'string') {
+    f.name = doc.value.name;
+    const at = doc.locate(['name']);
+    if (at) f.nameAt = { line: at.line, column: at.column };
+  }
+  return f;
+}
+
+/** `checkUniqueNames` on the name facts of the documents. */
+export function checkUniqueNameFacts(facts: readonly NameFact[]): Diagnostic[] {
+  return nameFindings(facts, true);
+}
+
+function nameFindings(docs: readonly NameFact[], withCaseWarnings: boolean): Diagnostic[] {
   const out: Diagnostic[] = [];
   const sorted = docs.slice().sort((a, b) => compareText(a.file, b.file) || a.index - b.index);
-  const exact = new Map<string, { doc: LoadedDocument; line?: number }>();
-  const folded = new Map<string, { doc: LoadedDocument; line?: number; name: string }>();
+  const exact = new Map<string, { doc: NameFact; line?: number }>();
+  const folded = new Map<string, { doc: NameFact; line?: number; name: string }>();
   for (const doc of sorted) {
-    const name = isObj(doc.value) && typeof doc.value.name === 'string' ? doc.value.name : undefined;
+    const name = doc.name;
     if (name === undefined) continue;
-    const where = doc.locate(['name']);
+    const where = doc.nameAt;
     const here = (d: Diagnostic): Diagnostic => {
       if (where) {
         d.line = where.line;

@@ -22,17 +22,15 @@ import { shardLabel, shardOf, shardRecord, type Shard } from './core/shard.js';
 import { StreamingEmitter } from './stages/emit-stream.js';
 import { batchesOf, createSpeciesPool } from './workers/pool.js';
 import { LIMIT_KEYS, type PlainLimitSource } from './workers/protocol.js';
-import { computeSamples, computeTable, type ComputedSpecies } from './stages/compute.js';
+import type { ComputedSpecies } from './stages/compute.js';
 import { compareDiagnostics, formatDiagnostic, hasErrors, type Diagnostic } from './core/diagnostics.js';
 import { byName, jsonText, validateSummaryJson, type BuiltSpecies } from './stages/emit.js';
-import { fitOptionsFor, fitSpecies } from './stages/fit.js';
 import { canonicalJson, hashParts, sha256Hex } from './storage/hash.js';
 import { discoverSpeciesFiles, loadYamlBytes, loadYamlFile, readNamedGeometryFile, readYamlFileBytes, type LoadedDocument } from './stages/load.js';
-import { planSpecies, type SpeciesPlan } from './core/plan.js';
+import type { SpeciesPlan } from './core/plan.js';
+import type { SpeciesValidation } from './stages/validate.js';
 import { checkSpeciesSampling, loadSettings, type DatabaseSettings, type FitTolerancesSetting } from './core/settings.js';
-import { checkUniqueNameFacts, nameFact, validateSpecies, type NameFact } from './stages/validate.js';
-import { classicalCpFloor, verifySpecies } from './stages/verify.js';
-import { computeUncertainty } from './stages/uncertainty.js';
+import { checkUniqueNameFacts, nameFact, type NameFact } from './stages/names.js';
 import { fitLimitOrigin, toleranceKeyPositions } from './stages/limit-origin.js';
 import { codeFingerprint } from './storage/code-fingerprint.js';
 import { createWarningPolicy } from './core/strict.js';
@@ -40,7 +38,31 @@ import { partialMark } from './stages/partial.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './core/version.js';
 import { displayPath } from './core/display-path.js';
 import { compareText, errorText } from './core/text.js';
-import { ReportWriter, type ReportRequest } from './report/build-report.js';
+import type { ReportRequest } from './report/build-report.js';
+
+/**
+ * The per-species stages and validation, loaded on first use: a rebuild that takes every species from the
+ * cache never needs them, and loading them is a good part of its start-up time.
+ */
+let speciesStages:
+  | Promise<{
+      compute: typeof import('./stages/compute.js');
+      fit: typeof import('./stages/fit.js');
+      plan: typeof import('./core/plan.js');
+      verify: typeof import('./stages/verify.js');
+      uncertainty: typeof import('./stages/uncertainty.js');
+    }>
+  | undefined;
+const stagesModules = () =>
+  (speciesStages ??= Promise.all([
+    import('./stages/compute.js'),
+    import('./stages/fit.js'),
+    import('./core/plan.js'),
+    import('./stages/verify.js'),
+    import('./stages/uncertainty.js'),
+  ]).then(([compute, fit, plan, verify, uncertainty]) => ({ compute, fit, plan, verify, uncertainty })));
+let validateModule: Promise<typeof import('./stages/validate.js')> | undefined;
+const validation = () => (validateModule ??= import('./stages/validate.js'));
 
 export type StageName = 'load' | 'validate' | 'compute' | 'fit' | 'verify' | 'emit';
 
@@ -238,7 +260,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   });
   discovered.diagnostics = policy.applyOther(discovered.diagnostics);
   settingsResult.diagnostics = policy.applyOther(settingsResult.diagnostics);
-  const validateWithPolicy = (doc: LoadedDocument, used: Set<number>) => {
+  const validateWithPolicy = (validateSpecies: (doc: LoadedDocument) => SpeciesValidation, doc: LoadedDocument, used: Set<number>) => {
     const r = validateSpecies(doc);
     const name = doc.value && typeof doc.value === 'object' ? (doc.value as { name?: unknown }).name : undefined;
     r.diagnostics = policy.applySpecies(
@@ -302,6 +324,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
       if (hit.outcome === 'corrupt') cacheNotes.push(`${show(f)}: cache entry for file rejected (${hit.reason}); checked again`);
     }
     const loaded = await loadYamlBytes(read.bytes, f, f);
+    const { validateSpecies } = await validation();
     const used = new Set<number>();
     const facts: FileFacts = { loadDiagnostics: policy.applyOther(loaded.diagnostics, used), documents: [], recovered: [], settingsUsed: [], geometry: [] };
     const loadMs = performance.now() - tl;
@@ -310,7 +333,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     const kept: Kept[] = [];
     for (const doc of loaded.documents) {
       const tv = performance.now();
-      const r = validateWithPolicy(doc, used);
+      const r = validateWithPolicy(validateSpecies, doc, used);
       validateMs += performance.now() - tv;
       const fact: DocumentFacts = { ...nameFact(doc), diagnostics: r.diagnostics };
       if (r.species && !hasErrors(r.diagnostics)) {
@@ -324,7 +347,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     // error of the file in one run; they are never built (one of their values is a guess).
     for (const doc of loaded.recoveredDocuments) {
       const tv = performance.now();
-      facts.recovered.push({ ...nameFact(doc), diagnostics: validateWithPolicy(doc, used).diagnostics, yamlErrors: [...(doc.yamlErrors ?? [])] });
+      facts.recovered.push({ ...nameFact(doc), diagnostics: validateWithPolicy(validateSpecies, doc, used).diagnostics, yamlErrors: [...(doc.yamlErrors ?? [])] });
       validateMs += performance.now() - tv;
     }
     facts.settingsUsed = [...used].sort((a, b) => a - b);
@@ -459,7 +482,7 @@ export async function speciesOf(v: ValidSpecies, spill?: SpillFile): Promise<Rea
   }
   const loaded = await loadYamlFile(v.source.path, v.source.path);
   const doc = loaded.documents.find((d) => d.index === v.source.index);
-  const r = doc ? validateSpecies(doc) : undefined;
+  const r = doc ? (await validation()).validateSpecies(doc) : undefined;
   if (!r?.species || hasErrors(r.diagnostics) || r.species.name !== v.name) {
     throw new Error(`${v.displayFile} changed during the build (species ${v.name} no longer reads as checked)`);
   }
@@ -499,7 +522,8 @@ function keyList(keys: ReturnType<typeof stageKeys>, settings: DatabaseSettings)
 }
 
 /** `kind/key` of the cache entries one species uses; undefined when it fails before using the cache. */
-export function speciesCacheKeys(v: ReadySpecies, settings: DatabaseSettings): string[] | undefined {
+export async function speciesCacheKeys(v: ReadySpecies, settings: DatabaseSettings): Promise<string[] | undefined> {
+  const { plan: { planSpecies }, fit: { fitOptionsFor } } = await stagesModules();
   const plan = planSpecies(v.species, settings);
   let fitOptions: FitOptions;
   try {
@@ -515,11 +539,13 @@ export function speciesCacheKeys(v: ReadySpecies, settings: DatabaseSettings): s
  * The cache entries the current species of a checked database use (what `qforge cache prune` keeps): their
  * stage entries and, when checked with `fastPath`, the file and result entries of the fast path.
  */
-export function currentCacheKeys(check: CheckReport): string[] {
-  return [
-    ...check.fileKeys,
-    ...check.species.flatMap((v) => [...(v.species !== undefined ? (speciesCacheKeys(v as ReadySpecies, check.settings) ?? []) : []), ...(v.resultKey !== undefined ? [`result/${v.resultKey}`] : [])]),
-  ];
+export async function currentCacheKeys(check: CheckReport): Promise<string[]> {
+  const keys = [...check.fileKeys];
+  for (const v of check.species) {
+    if (v.species !== undefined) keys.push(...((await speciesCacheKeys(v as ReadySpecies, check.settings)) ?? []));
+    if (v.resultKey !== undefined) keys.push(`result/${v.resultKey}`);
+  }
+  return keys;
 }
 
 /** Whether every stage result of every species of a batch is in the cache (then no worker is needed). */
@@ -527,7 +553,7 @@ async function allCached(cacheDir: string | undefined, batch: readonly ValidSpec
   if (cacheDir === undefined) return false;
   for (const v of batch) {
     if (v.species === undefined) return false;
-    const keys = speciesCacheKeys(v as ReadySpecies, settings);
+    const keys = await speciesCacheKeys(v as ReadySpecies, settings);
     if (!keys) return false;
     for (const k of keys) {
       const [kind, key] = k.split('/') as [CacheKind, string];
@@ -563,6 +589,13 @@ export async function buildOneSpecies(
   // The pool hands over species with their object (runner `speciesOf`); a bare one is a caller's bug.
   if (given.species === undefined) throw new Error(`buildOneSpecies: ${given.name} has no species object (see speciesOf)`);
   const v = given as ReadySpecies;
+  const {
+    compute: { computeSamples, computeTable },
+    fit: { fitOptionsFor, fitSpecies },
+    plan: { planSpecies },
+    verify: { classicalCpFloor, verifySpecies },
+    uncertainty: { computeUncertainty },
+  } = await stagesModules();
   const out: SpeciesOutcome = {
     valid: v,
     diagnostics: [],
@@ -770,7 +803,7 @@ async function buildChecked(
   });
   // Opened before the species run so that a missing --report-against build fails at once.
   const reportWriter =
-    check.settingsOk && (opts.report || settings.outputs.report) ? await ReportWriter.open(opts.report ?? {}, settings, opts.dir, opts.displayBase) : undefined;
+    check.settingsOk && (opts.report || settings.outputs.report) ? await (await import('./report/build-report.js')).ReportWriter.open(opts.report ?? {}, settings, opts.dir, opts.displayBase) : undefined;
   // A species is taken whole from its result entry unless the report needs its computed values.
   const useStored = cacheDir !== undefined && !reportWriter;
 

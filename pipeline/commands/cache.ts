@@ -27,7 +27,7 @@ export async function cachePruneCommand(io: CliIo, dir: string, dirLabel: string
     io.stderr.write(`qforge: error: ${dirLabel} has errors; fix them before pruning its cache (nothing deleted)\n`);
     return 1;
   }
-  const r = await pruneCache(cacheDir, dir, currentCacheKeys(check));
+  const r = await pruneCache(cacheDir, dir, await currentCacheKeys(check));
   io.stderr.write(
     `qforge: pruned ${shown}: removed ${r.removed} entr${r.removed === 1 ? 'y' : 'ies'} (${mb(r.bytesFreed)} freed), kept ${r.kept}` +
       `${r.otherDatabases ? ` (also used by ${r.otherDatabases} other database(s))` : ''}\n`,

@@ -32,14 +32,15 @@ import {
   renderTable,
   renderTablesReadme,
   speciesJson,
-  validateDatabaseJson,
+  validateDatabaseEnvelope,
   type BuiltSpecies,
 } from './emit.js';
 
 let speciesValidator: ReturnType<Ajv2020['compile']> | undefined;
 function validateSpeciesRecord(record: unknown): void {
   if (!speciesValidator) {
-    const ajv = new Ajv2020({ allErrors: true, strict: false });
+    // Our own fixed schemas (checked against the meta-schema by test/pipeline/fast-rebuild.test.ts).
+    const ajv = new Ajv2020({ allErrors: true, strict: false, validateSchema: false });
     ajv.addSchema(settingsSchema);
     ajv.addSchema(databaseSchema);
     speciesValidator = ajv.getSchema(`${databaseSchema.$id}#/$defs/species`)!;
@@ -118,7 +119,7 @@ export class StreamingEmitter {
     const tableFile = this.settings.outputs.tables ? this.namer.next(name) : undefined;
     if (this.nasa7) await this.nasa7.write(r.nasa7!);
     if (this.thermo) await this.thermo.write(this.count === 0 ? `\n${r.thermo!}` : `,\n${r.thermo!}`);
-    if (tableFile !== undefined) await this.staging.write(tableFile, r.table!);
+    if (tableFile !== undefined) await this.staging.writeOrReuse(tableFile, r.table!);
     this.count++;
   }
 
@@ -127,7 +128,7 @@ export class StreamingEmitter {
     if (this.thermo) {
       const envelope = databaseJson([], this.settings);
       if (mark) Object.assign(envelope, { partial: mark });
-      validateDatabaseJson(envelope);
+      validateDatabaseEnvelope(envelope);
       const text = jsonText(envelope);
       const at = text.lastIndexOf(EMPTY_SPECIES);
       if (at < 0) throw new Error('thermo.json envelope without a species list');
@@ -162,5 +163,6 @@ export class StreamingEmitter {
       await out.close();
     }
     await this.staging.dropScratch(rel);
+    await this.staging.reuseIfSame(rel);
   }
 }

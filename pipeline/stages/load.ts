@@ -23,6 +23,7 @@
  * database folder is followed (each real file is read once); one that resolves OUTSIDE the database folder is
  * refused with an error diagnostic, as is a broken link. Entries whose name starts with '.' are skipped.
  */
+import { readFileSync, statSync } from 'node:fs';
 import { readdir, readFile, realpath, stat } from 'node:fs/promises';
 import path from 'node:path';
 import {
@@ -475,10 +476,11 @@ export type YamlFileBytes = { bytes: Buffer; diagnostics?: undefined } | { bytes
 export async function readYamlFileBytes(filePath: string, displayPath: string, opts: ParseOptions = {}): Promise<YamlFileBytes> {
   const maxBytes = opts.maxBytes ?? DEFAULT_MAX_BYTES;
   try {
-    const info = await stat(filePath);
+    // Synchronous: a species file is small, and thread-pool round trips would cost more than reading it.
+    const info = statSync(filePath);
     if (!info.isFile()) return { diagnostics: [err(displayPath, 'not-a-file', 'not a regular file', { expected: 'a YAML file' })] };
     if (info.size > maxBytes) return { diagnostics: [sizeDiagnostic(displayPath, info.size, maxBytes)] };
-    return { bytes: await readFile(filePath) };
+    return { bytes: readFileSync(filePath) };
   } catch (e) {
     return { diagnostics: [readFailure(displayPath, e)] };
   }

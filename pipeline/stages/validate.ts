@@ -33,6 +33,7 @@ import { compareDiagnostics, type Diagnostic } from '../core/diagnostics.js';
 import type { LoadedDocument } from './load.js';
 import { checkPlausibility } from './plausibility.js';
 import { checkBareUnits } from './bare-units.js';
+import { nameFact, nameFindings } from './names.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from './schema-check.js';
 import {
   checkAnharmonicModel,
@@ -61,7 +62,10 @@ export interface SpeciesValidation {
   normalisedInput?: unknown;
 }
 
-const validateAgainstSpeciesSchema = createSchemaValidator(schema);
+// Compiled on first use: compiling the schema costs a few hundred ms, which a rebuild that takes every
+// file's findings from the cache never needs to pay.
+let speciesSchemaValidator: ReturnType<typeof createSchemaValidator> | undefined;
+const validateAgainstSpeciesSchema = () => (speciesSchemaValidator ??= createSchemaValidator(schema));
 
 /** More bound vibrational levels than any real diatomic has (I2 has about 110): a units mistake. */
 const MAX_VIBRATIONAL_LEVELS = 1000;
@@ -886,7 +890,7 @@ function readDiatomic(ctx: Ctx): DiatomicReading {
 export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
   const input = doc.value;
   const name = isObj(input) && typeof input.name === 'string' ? input.name : undefined;
-  const schemaDiagnostics = checkAgainstSchema(validateAgainstSpeciesSchema, doc, name === undefined ? {} : { species: name });
+  const schemaDiagnostics = checkAgainstSchema(validateAgainstSpeciesSchema(), doc, name === undefined ? {} : { species: name });
   if (!isObj(input)) return { diagnostics: schemaDiagnostics };
   // A field the schema already rejected is not reported again by the bounds.
   const rejected = schemaDiagnostics.map((d) => d.path);
@@ -971,6 +975,8 @@ export interface SpeciesSetEntry extends SpeciesValidation {
  * the 80-column format may not distinguish. Order-independent: documents are considered sorted by file and
  * position.
  */
+export { checkUniqueNameFacts, nameFact, type NameFact } from './names.js';
+
 export function checkUniqueNames(docs: readonly LoadedDocument[]): Diagnostic[] {
   return nameFindings(docs.map(nameFact), true);
 }
@@ -980,86 +986,6 @@ export function findDuplicateNames(docs: readonly LoadedDocument[]): Diagnostic[
   return nameFindings(docs.map(nameFact), false);
 }
 
-/**
- * What the name checks need of one document: its file, position, `name` (when a string) and where that is
- * written. Small enough to keep for every document of a large database after its YAML tree is dropped.
- */
-export interface NameFact {
-  file: string;
-  index: number;
-  name?: string;
-  nameAt?: { line: number; column: number };
-}
-
-export function nameFact(doc: LoadedDocument): NameFact {
-  const f: NameFact = { file: doc.file, index: doc.index };
-  if (isObj(doc.value) && typeof doc.value.name === 'string') {
-    f.name = doc.value.name;
-    const at = doc.locate(['name']);
-    if (at) f.nameAt = { line: at.line, column: at.column };
-  }
-  return f;
-}
-
-/** `checkUniqueNames` on the name facts of the documents. */
-export function checkUniqueNameFacts(facts: readonly NameFact[]): Diagnostic[] {
-  return nameFindings(facts, true);
-}
-
-function nameFindings(docs: readonly NameFact[], withCaseWarnings: boolean): Diagnostic[] {
-  const out: Diagnostic[] = [];
-  const sorted = docs.slice().sort((a, b) => compareText(a.file, b.file) || a.index - b.index);
-  const exact = new Map<string, { doc: NameFact; line?: number }>();
-  const folded = new Map<string, { doc: NameFact; line?: number; name: string }>();
-  for (const doc of sorted) {
-    const name = doc.name;
-    if (name === undefined) continue;
-    const where = doc.nameAt;
-    const here = (d: Diagnostic): Diagnostic => {
-      if (where) {
-        d.line = where.line;
-        d.column = where.column;
-      }
-      return d;
-    };
-    const first = exact.get(name);
-    if (first) {
-      const at = `${first.doc.file}${first.line !== undefined ? `:${first.line}` : ''}`;
-      out.push(
-        here({
-          severity: 'error',
-          code: 'duplicate-name',
-          file: doc.file,
-          path: 'name',
-          species: name,
-          message: `duplicate species name '${name}', already defined at ${at}`,
-          value: name,
-          expected: 'a name unique in the database',
-        }),
-      );
-      continue;
-    }
-    exact.set(name, { doc, line: where?.line });
-    const lower = name.toLowerCase();
-    const twin = folded.get(lower);
-    if (twin && withCaseWarnings) {
-      const at = `${twin.doc.file}${twin.line !== undefined ? `:${twin.line}` : ''}`;
-      out.push(
-        here({
-          severity: 'warning',
-          code: 'name-differs-in-case',
-          file: doc.file,
-          path: 'name',
-          species: name,
-          message: `species name '${name}' differs only in letter case from '${twin.name}' at ${at}`,
-          value: name,
-          expected: 'names that differ in more than case (some readers ignore case)',
-        }),
-      );
-    } else folded.set(lower, { doc, line: where?.line, name });
-  }
-  return out;
-}
 
 /**
  * Validates every document of a database and checks names across it. `results` are in the order of `docs`;

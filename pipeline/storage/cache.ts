@@ -18,7 +18,8 @@
  * Which entries a database uses is recorded per database (cache-uses.ts), so `qforge cache prune` can drop
  * the entries no database sharing the folder still uses.
  */
-import { mkdir, readFile } from 'node:fs/promises';
+import { readFileSync } from 'node:fs';
+import { mkdir } from 'node:fs/promises';
 import path from 'node:path';
 import { describeFsError, writeFileAtomic } from './atomic-write.js';
 import { canonicalCopy, canonicalJson, sha256Hex } from './hash.js';
@@ -73,7 +74,8 @@ export class StageCache {
     const file = cacheEntryPath(this.dir, kind, key);
     let bytes: Buffer;
     try {
-      bytes = await readFile(file);
+      // Synchronous: an entry is small, and a hit should cost a read, not thread-pool round trips.
+      bytes = readFileSync(file);
     } catch {
       return { outcome: 'miss' };
     }
@@ -98,7 +100,7 @@ export class StageCache {
     if (!this.dir) return { outcome: 'off' };
     let bytes: Buffer;
     try {
-      bytes = await readFile(cacheEntryPath(this.dir, kind, key));
+      bytes = readFileSync(cacheEntryPath(this.dir, kind, key));
     } catch {
       return { outcome: 'miss' };
     }

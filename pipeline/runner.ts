@@ -410,7 +410,8 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
         v.species = k.species;
         v.normalisedInput = k.normalisedInput;
       } else if (k) v.spilled = k;
-      if (key !== undefined) v.resultKey = hashParts('result', key, fact.index);
+      // The geometry files read (by hash) are inputs of the species' outputs too.
+      if (key !== undefined) v.resultKey = hashParts('result', key, facts.geometry, fact.index);
       valid.push({ fact, v });
     });
   }

@@ -767,12 +767,13 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   progress({ kind: 'stage', stage: 'load' });
   const cacheDir = opts.cacheDir === null ? undefined : (opts.cacheDir ?? defaultCacheDir(opts.dir));
   const cache = new StageCache(cacheDir);
-  // The validated species wait in a spill file for their turn (name order), not in memory.
-  const spill = await SpillFile.open();
+  // The validated species wait in a spill file for their turn (name order), not in memory; without a
+  // writable temporary folder they wait in memory (the build only needs more of it).
+  const spill = await SpillFile.open().catch(() => undefined);
   try {
     return await buildChecked(opts, t0, notes, cacheDir, cache, spill);
   } finally {
-    await spill.close();
+    await spill?.close();
   }
 }
 
@@ -782,12 +783,12 @@ async function buildChecked(
   notes: string[],
   cacheDir: string | undefined,
   cache: StageCache,
-  spill: SpillFile,
+  spill: SpillFile | undefined,
 ): Promise<BuildReport> {
   const progress = opts.onProgress ?? (() => {});
   const check = await checkDatabase({
     ...opts,
-    keep: spill,
+    keep: spill ?? 'memory',
     ...(cacheDir !== undefined ? { fastPath: { context: buildContext(opts), cache } } : {}),
   });
   const settings = check.settings;

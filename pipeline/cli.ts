@@ -537,7 +537,7 @@ async function buildCommand(
 async function checkCommand(io: CliIo, dir: string, o: { json?: boolean; strict?: boolean }): Promise<number> {
   await assertFolder(dir, `database folder ${displayPath(io.cwd, dir)}`);
   const [{ checkDatabase }, { formatDiagnostic, hasErrors, nonFiniteAsText }] = await Promise.all([import('./runner.js'), import('./core/diagnostics.js')]);
-  const report = await checkDatabase({ dir, displayBase: io.cwd, strict: !!o.strict });
+  const report = await checkDatabase({ dir, displayBase: io.cwd, strict: !!o.strict, keep: 'none' });
   printDiagnostics(io, report.diagnostics, formatDiagnostic);
   const errors = report.diagnostics.filter((d) => d.severity === 'error').length;
   const warnings = report.diagnostics.length - errors;

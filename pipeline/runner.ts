@@ -16,21 +16,21 @@ import type { FitOptions, FitResult } from '../src/nasa7/types.js';
 import { acquireOutputLock, OutputStaging, recoverOutputDir, type PublishHooks } from './storage/atomic-write.js';
 import { cached, cacheEntryPath, defaultCacheDir, StageCache, type CacheKind, type CacheOutcome } from './storage/cache.js';
 import { recordCacheUse } from './storage/cache-uses.js';
+import { readEntry, writeEntry, type DocumentFacts, type FileFacts, type Position, type RenderedSpecies, type StoredResult } from './storage/fast-entries.js';
+import { SpillFile, type SpillRef } from './storage/spill.js';
 import { shardLabel, shardOf, shardRecord, type Shard } from './core/shard.js';
 import { StreamingEmitter } from './stages/emit-stream.js';
 import { batchesOf, createSpeciesPool } from './workers/pool.js';
 import { LIMIT_KEYS, type PlainLimitSource } from './workers/protocol.js';
-import { computeSamples, computeTable, type ComputedSpecies } from './stages/compute.js';
+import type { ComputedSpecies } from './stages/compute.js';
 import { compareDiagnostics, formatDiagnostic, hasErrors, type Diagnostic } from './core/diagnostics.js';
 import { byName, jsonText, validateSummaryJson, type BuiltSpecies } from './stages/emit.js';
-import { fitOptionsFor, fitSpecies } from './stages/fit.js';
 import { canonicalJson, hashParts, sha256Hex } from './storage/hash.js';
-import { discoverSpeciesFiles, loadYamlFile, type LoadedDocument } from './stages/load.js';
-import { planSpecies, type SpeciesPlan } from './core/plan.js';
+import { discoverSpeciesFiles, loadYamlBytes, loadYamlFile, readNamedGeometryFile, readYamlFileBytes, type LoadedDocument } from './stages/load.js';
+import type { SpeciesPlan } from './core/plan.js';
+import type { SpeciesValidation } from './stages/validate.js';
 import { checkSpeciesSampling, loadSettings, type DatabaseSettings, type FitTolerancesSetting } from './core/settings.js';
-import { checkUniqueNames, validateSpecies } from './stages/validate.js';
-import { classicalCpFloor, verifySpecies } from './stages/verify.js';
-import { computeUncertainty } from './stages/uncertainty.js';
+import { checkUniqueNameFacts, nameFact, type NameFact } from './stages/names.js';
 import { fitLimitOrigin, toleranceKeyPositions } from './stages/limit-origin.js';
 import { codeFingerprint } from './storage/code-fingerprint.js';
 import { createWarningPolicy } from './core/strict.js';
@@ -38,7 +38,31 @@ import { partialMark } from './stages/partial.js';
 import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './core/version.js';
 import { displayPath } from './core/display-path.js';
 import { compareText, errorText } from './core/text.js';
-import { ReportWriter, type ReportRequest } from './report/build-report.js';
+import type { ReportRequest } from './report/build-report.js';
+
+/**
+ * The per-species stages and validation, loaded on first use: a rebuild that takes every species from the
+ * cache never needs them, and loading them is a good part of its start-up time.
+ */
+let speciesStages:
+  | Promise<{
+      compute: typeof import('./stages/compute.js');
+      fit: typeof import('./stages/fit.js');
+      plan: typeof import('./core/plan.js');
+      verify: typeof import('./stages/verify.js');
+      uncertainty: typeof import('./stages/uncertainty.js');
+    }>
+  | undefined;
+const stagesModules = () =>
+  (speciesStages ??= Promise.all([
+    import('./stages/compute.js'),
+    import('./stages/fit.js'),
+    import('./core/plan.js'),
+    import('./stages/verify.js'),
+    import('./stages/uncertainty.js'),
+  ]).then(([compute, fit, plan, verify, uncertainty]) => ({ compute, fit, plan, verify, uncertainty })));
+let validateModule: Promise<typeof import('./stages/validate.js')> | undefined;
+const validation = () => (validateModule ??= import('./stages/validate.js'));
 
 export type StageName = 'load' | 'validate' | 'compute' | 'fit' | 'verify' | 'emit';
 
@@ -47,17 +71,6 @@ export type ProgressEvent =
   | { kind: 'species-start'; total: number }
   | { kind: 'species-done'; name: string; ok: boolean; cacheHit: boolean; done: number; total: number }
   | { kind: 'note'; message: string };
-
-export interface CheckOptions {
-  /** Database folder. */
-  dir: string;
-  /** Diagnostics name files relative to this folder (the user's working folder). Default: as found. */
-  displayBase?: string;
-  /** Concurrency of file loading (default 8). */
-  jobs?: number;
-  /** Warnings are errors (also `strict: true` in the settings); see core/strict.ts. */
-  strict?: boolean;
-}
 
 export interface BuildOptions extends CheckOptions {
   out: string;
@@ -86,13 +99,25 @@ export interface ValidSpecies {
   file: string;
   /** Species file as shown in messages. */
   displayFile: string;
-  species: Species;
-  normalisedInput: unknown;
+  /**
+   * The species and its normalised input. Absent when the check kept them in a spill file (`spilled`) or
+   * took the file's findings from the cache; `speciesOf` gets them back.
+   */
+  species?: Species;
+  normalisedInput?: unknown;
+  spilled?: SpillRef;
+  /** The species file (as discovered) and the 0-based position of this species in it. */
+  source: { path: string; index: number };
+  /** Key of this species' result entry of the no-change fast path (storage/fast-entries.ts). */
+  resultKey?: string;
   /** Source positions for diagnostics of later stages: the species' `name` and `temperature_ranges`. */
   positions: Partial<Record<'name' | 'composition' | 'temperature_ranges' | `tolerances.${string}`, { line: number; column: number }>>;
   loadMs: number;
   validateMs: number;
 }
+
+/** A validated species with its species object at hand (what the per-species stages take). */
+export type ReadySpecies = ValidSpecies & { species: Species; normalisedInput: unknown };
 
 /** A species document that failed validation (or lost a duplicate-name clash): listed as failed. */
 export interface InvalidDocument {
@@ -125,6 +150,33 @@ export interface CheckReport {
   /** Files in which at least one species document failed validation or the file itself failed. */
   failedFiles: Set<string>;
   timings: { load: number; validate: number };
+  /** `file/<key>` of the fast-path file entries of this database (with `fastPath`), for the cache use list. */
+  fileKeys: string[];
+  /** Files whose findings came from the cache. */
+  cachedFiles: number;
+  /** Rejected fast-path file entries (`file: reason`), reported like rejected stage entries. */
+  cacheNotes: string[];
+}
+
+export interface CheckOptions {
+  /** Database folder. */
+  dir: string;
+  /** Diagnostics name files relative to this folder (the user's working folder). Default: as found. */
+  displayBase?: string;
+  /** Concurrency of file loading (default 8). */
+  jobs?: number;
+  /** Warnings are errors (also `strict: true` in the settings); see core/strict.ts. */
+  strict?: boolean;
+  /**
+   * What to keep of each valid species: 'memory' (default; `species` and `normalisedInput` set), 'none'
+   * (names and positions only, e.g. `qforge check`), or a spill file (the build: memory independent of N).
+   */
+  keep?: 'memory' | 'none' | SpillFile;
+  /**
+   * The no-change fast path: with `context` (what besides the settings changes per-species outputs) the
+   * file and result keys are computed; with `cache` too, file entries are looked up and stored.
+   */
+  fastPath?: { context: Record<string, unknown>; cache?: StageCache };
 }
 
 function positionsOf(doc: LoadedDocument): ValidSpecies['positions'] {
@@ -142,7 +194,6 @@ function positionsOf(doc: LoadedDocument): ValidSpecies['positions'] {
   return out;
 }
 
-/** Load and validate a database folder: every problem of every file at once. */
 /**
  * Starting a worker thread (loading the compiled modules, warming up) costs about as much as building a
  * dozen small species, so a thread only pays for itself with enough species to share; below that the main
@@ -154,29 +205,74 @@ export function autoThreads(speciesToBuild: number, maxThreads: number): number 
   return Math.max(1, Math.min(maxThreads, Math.floor(speciesToBuild / SPECIES_PER_THREAD)));
 }
 
+/** What a valid species' object is kept as until its turn: in memory, in the spill file, or not at all. */
+type Kept = { species: Species; normalisedInput: unknown } | SpillRef | undefined;
+
+/** One file as checked: its findings (from the cache or fresh) and, for fresh valid documents, what was kept. */
+interface CheckedFile {
+  file: string;
+  facts: FileFacts;
+  kept: Kept[];
+  key?: string;
+  loadMs: number;
+  validateMs: number;
+}
+
+/**
+ * sha256 of everything besides a species file's bytes that its check findings and its species' outputs
+ * depend on: tool and code, constants, settings, the warning policy, how paths are shown (messages quote
+ * them), where the settings set the quoted limits, and the build options in `extra`.
+ */
+function fileContextHash(p: {
+  settings: DatabaseSettings;
+  strict: boolean;
+  dir: string;
+  displayBase: string | undefined;
+  limits: PlainLimitSource;
+  extra: Record<string, unknown>;
+}): string {
+  return hashParts('file-context', TOOL_NAME, TOOL_VERSION, codeFingerprint(), CONSTANTS_EDITION, p.settings, p.strict, p.dir, p.displayBase ?? null, p.limits, p.extra);
+}
+
+/** Whether every geometry file a cached file entry read still reads the same. */
+async function geometryUnchanged(file: string, geometry: FileFacts['geometry']): Promise<boolean> {
+  for (const g of geometry) {
+    const now = await readNamedGeometryFile(file, file, g.name);
+    if (sha256Hex(canonicalJson(now)) !== g.hash) return false;
+  }
+  return true;
+}
+
+/** Load and validate a database folder: every problem of every file at once. */
 export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   const dir = opts.dir;
   const limit = pLimit(Math.max(1, opts.jobs ?? 8));
+  const keep = opts.keep ?? 'memory';
   const t0 = performance.now();
   const settingsResult = await loadSettings(dir, dir);
   const discovered = await discoverSpeciesFiles(dir);
+  const strict = opts.strict === true || settingsResult.settings.strict;
   const policy = createWarningPolicy({
-    strict: opts.strict === true || settingsResult.settings.strict,
+    strict,
     accepted: settingsResult.settings.accepted_warnings,
     ...(settingsResult.file !== undefined ? { settingsFile: settingsResult.file } : {}),
     ...(settingsResult.locate ? { settingsLocate: settingsResult.locate } : {}),
   });
   discovered.diagnostics = policy.applyOther(discovered.diagnostics);
   settingsResult.diagnostics = policy.applyOther(settingsResult.diagnostics);
-  const validateWithPolicy = (doc: LoadedDocument) => {
+  const validateWithPolicy = (validateSpecies: (doc: LoadedDocument) => SpeciesValidation, doc: LoadedDocument, used: Set<number>) => {
     const r = validateSpecies(doc);
     const name = doc.value && typeof doc.value === 'object' ? (doc.value as { name?: unknown }).name : undefined;
-    r.diagnostics = policy.applySpecies(r.diagnostics, {
-      raw: doc.value,
-      file: doc.file,
-      ...(typeof name === 'string' ? { name } : {}),
-      locate: (at) => doc.locate(at),
-    });
+    r.diagnostics = policy.applySpecies(
+      r.diagnostics,
+      {
+        raw: doc.value,
+        file: doc.file,
+        ...(typeof name === 'string' ? { name } : {}),
+        locate: (at) => doc.locate(at),
+      },
+      used,
+    );
     return r;
   };
   const diagnostics: Diagnostic[] = [...settingsResult.diagnostics, ...discovered.diagnostics];
@@ -192,105 +288,149 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
 
   const displayOf = (f: string) => (path.relative(dir, f) || f).split(path.sep).join('/');
   const show = (f: string) => (opts.displayBase && path.isAbsolute(f) ? displayPath(opts.displayBase, f) : f);
+  const settingsFileShown = settingsResult.file !== undefined ? show(settingsResult.file) : undefined;
+  const contextHash = opts.fastPath
+    ? fileContextHash({
+        settings: settingsResult.settings,
+        strict,
+        dir,
+        displayBase: opts.displayBase,
+        limits: plainLimitsOf(settingsFileShown, settingsResult.setAt),
+        extra: opts.fastPath.context,
+      })
+    : undefined;
+  const fastCache = opts.fastPath?.cache;
+  const cacheNotes: string[] = [];
   let validateTotal = 0;
-  const perFile = await Promise.all(
-    discovered.files.map((f) =>
-      limit(async () => {
-        const tl = performance.now();
-        const loaded = await loadYamlFile(f, f);
-        loaded.diagnostics = policy.applyOther(loaded.diagnostics);
-        const loadMs = performance.now() - tl;
-        const results = loaded.documents.map((doc: LoadedDocument) => {
-          const tv = performance.now();
-          const r = validateWithPolicy(doc);
-          const ms = performance.now() - tv;
-          validateTotal += ms;
-          return { doc, r, ms };
-        });
-        // Documents with only a duplicate key or an unknown tag are checked too, so the user sees every
-        // error of the file in one run; they are never built (one of their values is a guess).
-        const recovered = (loaded.recoveredDocuments ?? []).map((doc: LoadedDocument) => ({
-          doc,
-          diagnostics: validateWithPolicy(doc).diagnostics,
-        }));
-        return { file: f, loaded, results, recovered, loadMs };
-      }),
-    ),
-  );
+  let cachedFiles = 0;
+
+  // Each file is read, looked up or parsed and validated, and reduced to its findings at once: the YAML tree
+  // of a file never outlives its own check.
+  const checkFile = async (f: string): Promise<CheckedFile> => {
+    const tl = performance.now();
+    const read = await readYamlFileBytes(f, f);
+    if (read.bytes === undefined) {
+      const facts: FileFacts = { loadDiagnostics: policy.applyOther(read.diagnostics), documents: [], recovered: [], settingsUsed: [], geometry: [] };
+      return { file: f, facts, kept: [], loadMs: performance.now() - tl, validateMs: 0 };
+    }
+    const key = contextHash !== undefined ? hashParts('file', contextHash, f, sha256Hex(read.bytes)) : undefined;
+    if (fastCache && key !== undefined) {
+      const hit = await readEntry<FileFacts>(fastCache, 'file', key);
+      if (hit.outcome === 'hit' && (await geometryUnchanged(f, hit.value!.geometry))) {
+        policy.markUsed(hit.value!.settingsUsed);
+        cachedFiles++;
+        return { file: f, facts: hit.value!, kept: [], key, loadMs: performance.now() - tl, validateMs: 0 };
+      }
+      if (hit.outcome === 'corrupt') cacheNotes.push(`${show(f)}: cache entry for file rejected (${hit.reason}); checked again`);
+    }
+    const loaded = await loadYamlBytes(read.bytes, f, f);
+    const { validateSpecies } = await validation();
+    const used = new Set<number>();
+    const facts: FileFacts = { loadDiagnostics: policy.applyOther(loaded.diagnostics, used), documents: [], recovered: [], settingsUsed: [], geometry: [] };
+    const loadMs = performance.now() - tl;
+    // Validation is synchronous: its time is its own (the spill writes between documents are not).
+    let validateMs = 0;
+    const kept: Kept[] = [];
+    for (const doc of loaded.documents) {
+      const tv = performance.now();
+      const r = validateWithPolicy(validateSpecies, doc, used);
+      validateMs += performance.now() - tv;
+      const fact: DocumentFacts = { ...nameFact(doc), diagnostics: r.diagnostics };
+      if (r.species && !hasErrors(r.diagnostics)) {
+        fact.valid = { name: r.species.name, positions: positionsOf(doc) as Record<string, Position> };
+        const pair = { species: r.species, normalisedInput: r.normalisedInput ?? r.species };
+        kept.push(keep === 'memory' ? pair : keep === 'none' ? undefined : await keep.put(pair));
+      } else kept.push(undefined);
+      facts.documents.push(fact);
+    }
+    // Documents with only a duplicate key or an unknown tag are checked too, so the user sees every
+    // error of the file in one run; they are never built (one of their values is a guess).
+    for (const doc of loaded.recoveredDocuments) {
+      const tv = performance.now();
+      facts.recovered.push({ ...nameFact(doc), diagnostics: validateWithPolicy(validateSpecies, doc, used).diagnostics, yamlErrors: [...(doc.yamlErrors ?? [])] });
+      validateMs += performance.now() - tv;
+    }
+    facts.settingsUsed = [...used].sort((a, b) => a - b);
+    const geometry = new Map<string, string>();
+    for (const doc of [...loaded.documents, ...loaded.recoveredDocuments]) {
+      for (const [name, g] of Object.entries(doc.geometryFiles ?? {})) if (!geometry.has(name)) geometry.set(name, sha256Hex(canonicalJson(g)));
+    }
+    facts.geometry = [...geometry].map(([name, hash]) => ({ name, hash }));
+    if (fastCache && key !== undefined) await writeEntry(fastCache, 'file', key, facts);
+    return { file: f, facts, kept, ...(key !== undefined ? { key } : {}), loadMs, validateMs };
+  };
+  const perFile = await Promise.all(discovered.files.map((f) => limit(() => checkFile(f))));
+  for (const p of perFile) validateTotal += p.validateMs;
   const tLoad = performance.now() - t0 - validateTotal;
 
-  const valid: Array<{ doc: LoadedDocument; v: ValidSpecies }> = [];
-  const invalid: Array<{ doc: LoadedDocument; entry: InvalidDocument }> = [];
-  const nameOf = (doc: LoadedDocument): string | undefined => {
-    const n = doc.value && typeof doc.value === 'object' ? (doc.value as { name?: unknown }).name : undefined;
-    return typeof n === 'string' && n !== '' ? n : undefined;
-  };
-  const invalidEntry = (doc: LoadedDocument, file: string, ds: Diagnostic[]): InvalidDocument => {
-    const e: InvalidDocument = { file: displayOf(file), displayFile: show(file), document: doc.index + 1, diagnostics: ds };
-    const n = nameOf(doc);
-    if (n !== undefined) e.name = n;
+  const valid: Array<{ fact: DocumentFacts; v: ValidSpecies }> = [];
+  const invalid: Array<{ fact: DocumentFacts; entry: InvalidDocument }> = [];
+  const invalidEntry = (fact: DocumentFacts, file: string, ds: Diagnostic[]): InvalidDocument => {
+    const e: InvalidDocument = { file: displayOf(file), displayFile: show(file), document: fact.index + 1, diagnostics: ds };
+    if (fact.name !== undefined && fact.name !== '') e.name = fact.name;
     return e;
   };
-  for (const { file, loaded, results, recovered, loadMs } of perFile) {
-    loaded.diagnostics.forEach(addFileDiag);
-    diagnostics.push(...loaded.diagnostics);
-    for (const { doc, diagnostics: ds } of recovered) {
-      diagnostics.push(...ds);
-      ds.forEach(addFileDiag);
+  const nameFacts: NameFact[] = [];
+  for (const { file, facts, kept, key, loadMs, validateMs } of perFile) {
+    facts.loadDiagnostics.forEach(addFileDiag);
+    diagnostics.push(...facts.loadDiagnostics);
+    for (const fact of facts.recovered) {
+      nameFacts.push(fact);
+      diagnostics.push(...fact.diagnostics);
+      fact.diagnostics.forEach(addFileDiag);
       // It failed for its own YAML errors plus whatever validation found.
-      invalid.push({ doc, entry: invalidEntry(doc, file, [...(doc.yamlErrors ?? []), ...ds]) });
+      invalid.push({ fact, entry: invalidEntry(fact, file, [...(fact.yamlErrors ?? []), ...fact.diagnostics]) });
     }
-    if (loaded.documents.length === 0 && !hasErrors(loaded.diagnostics)) {
+    if (facts.documents.length === 0 && !hasErrors(facts.loadDiagnostics)) {
       for (const d of policy.applyOther([{ severity: 'warning', code: 'file-holds-no-species', file, path: '', message: 'file holds no species' }])) {
         diagnostics.push(d);
         addFileDiag(d);
       }
     }
-    const n = Math.max(1, results.length);
-    for (const { doc, r, ms: vms } of results) {
-      diagnostics.push(...r.diagnostics);
-      r.diagnostics.forEach(addFileDiag);
-      if (r.species && !hasErrors(r.diagnostics)) {
-        valid.push({
-          doc,
-          v: {
-            name: r.species.name,
-            file: displayOf(file),
-            displayFile: show(file),
-            species: r.species,
-            normalisedInput: r.normalisedInput ?? r.species,
-            positions: positionsOf(doc),
-            loadMs: loadMs / n,
-            validateMs: vms,
-          },
-        });
-      } else {
-        invalid.push({ doc, entry: invalidEntry(doc, file, [...r.diagnostics]) });
+    const n = Math.max(1, facts.documents.length);
+    facts.documents.forEach((fact, i) => {
+      nameFacts.push(fact);
+      diagnostics.push(...fact.diagnostics);
+      fact.diagnostics.forEach(addFileDiag);
+      if (!fact.valid) {
+        invalid.push({ fact, entry: invalidEntry(fact, file, [...fact.diagnostics]) });
+        return;
       }
-    }
+      const v: ValidSpecies = {
+        name: fact.valid.name,
+        file: displayOf(file),
+        displayFile: show(file),
+        source: { path: file, index: fact.index },
+        positions: fact.valid.positions,
+        loadMs: loadMs / n,
+        validateMs: validateMs / n,
+      };
+      const k = kept[i];
+      if (k && 'species' in k) {
+        v.species = k.species;
+        v.normalisedInput = k.normalisedInput;
+      } else if (k) v.spilled = k;
+      // The geometry files read (by hash) are inputs of the species' outputs too.
+      if (key !== undefined) v.resultKey = hashParts('result', key, facts.geometry, fact.index);
+      valid.push({ fact, v });
+    });
   }
   // Names must be unique across the database: the later duplicates fail (validate.ts names the first use).
-  const dup = policy.applyOther(checkUniqueNames(perFile.flatMap((p) => [...p.results.map((x) => x.doc), ...p.recovered.map((x) => x.doc)])));
+  const dup = policy.applyOther(checkUniqueNameFacts(nameFacts));
   diagnostics.push(...dup);
   dup.forEach(addFileDiag);
-  const isDuplicate = (doc: LoadedDocument, name: string) =>
-    dup.some((d) => d.severity === 'error' && d.file === doc.file && d.species === name && doc.locate(['name'])?.line === d.line);
+  const dupOf = (fact: DocumentFacts, name: string) =>
+    dup.filter((d) => d.file === fact.file && d.species === name && fact.nameAt?.line === d.line);
   const species: ValidSpecies[] = [];
-  for (const { doc, v } of valid) {
-    if (!isDuplicate(doc, v.name)) species.push(v);
-    else {
-      const ds = dup.filter((d) => d.file === doc.file && d.species === v.name && doc.locate(['name'])?.line === d.line);
-      invalid.push({ doc, entry: invalidEntry(doc, doc.file, ds) });
-    }
+  for (const { fact, v } of valid) {
+    const ds = dupOf(fact, v.name).filter((d) => d.severity === 'error');
+    if (ds.length === 0) species.push(v);
+    else invalid.push({ fact, entry: invalidEntry(fact, fact.file, dupOf(fact, v.name)) });
   }
-  for (const { doc, entry } of invalid) {
+  for (const { fact, entry } of invalid) {
     if (entry.name === undefined) continue;
     // A duplicate of an invalid document is reported with that document too.
-    for (const d of dup) {
-      if (d.file === doc.file && d.species === entry.name && doc.locate(['name'])?.line === d.line && !entry.diagnostics.includes(d)) {
-        entry.diagnostics.push(d);
-      }
-    }
+    for (const d of dupOf(fact, entry.name)) if (!entry.diagnostics.includes(d)) entry.diagnostics.push(d);
   }
   if (discovered.files.length === 0 && !hasErrors(discovered.diagnostics)) {
     diagnostics.push({
@@ -309,6 +449,8 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   const invalidDocs = invalid
     .map(({ entry }) => entry)
     .sort((a, b) => compareText(a.file, b.file) || a.document - b.document);
+  // `show` is idempotent; entries may hold copies of diagnostics (a cached file's YAML errors).
+  for (const e of invalidDocs) for (const d of e.diagnostics) d.file = show(d.file);
   for (const e of invalidDocs) e.diagnostics.sort(compareDiagnostics);
   const report: CheckReport = {
     settings: settingsResult.settings,
@@ -320,10 +462,32 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     fileDiagnostics,
     failedFiles,
     timings: { load: tLoad, validate: validateTotal },
+    fileKeys: perFile.flatMap((p) => (p.key !== undefined ? [`file/${p.key}`] : [])),
+    cachedFiles,
+    cacheNotes,
   };
-  if (settingsResult.file !== undefined) report.settingsFile = show(settingsResult.file);
+  if (settingsFileShown !== undefined) report.settingsFile = settingsFileShown;
   if (settingsResult.setAt) report.settingsSetAt = settingsResult.setAt;
   return report;
+}
+
+/**
+ * A validated species with its species object: as kept by the check, read back from the spill file, or —
+ * when the check took its file's findings from the cache — loaded and validated again from its file.
+ */
+export async function speciesOf(v: ValidSpecies, spill?: SpillFile): Promise<ReadySpecies> {
+  if (v.species !== undefined) return v as ReadySpecies;
+  if (v.spilled && spill) {
+    const kept = await spill.get<{ species: Species; normalisedInput: unknown }>(v.spilled);
+    return { ...v, species: kept.species, normalisedInput: kept.normalisedInput };
+  }
+  const loaded = await loadYamlFile(v.source.path, v.source.path);
+  const doc = loaded.documents.find((d) => d.index === v.source.index);
+  const r = doc ? (await validation()).validateSpecies(doc) : undefined;
+  if (!r?.species || hasErrors(r.diagnostics) || r.species.name !== v.name) {
+    throw new Error(`${v.displayFile} changed during the build (species ${v.name} no longer reads as checked)`);
+  }
+  return { ...v, species: r.species, normalisedInput: r.normalisedInput ?? r.species };
 }
 
 // ---------------------------------------------------------------------------------------------------------
@@ -331,6 +495,8 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
 export interface SpeciesOutcome {
   valid: ValidSpecies;
   built?: BuiltSpecies;
+  /** A species taken whole from its result entry (the no-change fast path): what emit and summary need. */
+  stored?: StoredResult;
   diagnostics: Diagnostic[];
   cache: Partial<Record<CacheKind, CacheOutcome>>;
   cacheNotes: string[];
@@ -357,7 +523,8 @@ function keyList(keys: ReturnType<typeof stageKeys>, settings: DatabaseSettings)
 }
 
 /** `kind/key` of the cache entries one species uses; undefined when it fails before using the cache. */
-export function speciesCacheKeys(v: ValidSpecies, settings: DatabaseSettings): string[] | undefined {
+export async function speciesCacheKeys(v: ReadySpecies, settings: DatabaseSettings): Promise<string[] | undefined> {
+  const { plan: { planSpecies }, fit: { fitOptionsFor } } = await stagesModules();
   const plan = planSpecies(v.species, settings);
   let fitOptions: FitOptions;
   try {
@@ -369,16 +536,25 @@ export function speciesCacheKeys(v: ValidSpecies, settings: DatabaseSettings): s
   return keyList(stageKeys(inputHash, v.species, plan, fitOptions), settings);
 }
 
-/** The cache entries the current species of a checked database use (what `qforge cache prune` keeps). */
-export function currentCacheKeys(check: CheckReport): string[] {
-  return check.species.flatMap((v) => speciesCacheKeys(v, check.settings) ?? []);
+/**
+ * The cache entries the current species of a checked database use (what `qforge cache prune` keeps): their
+ * stage entries and, when checked with `fastPath`, the file and result entries of the fast path.
+ */
+export async function currentCacheKeys(check: CheckReport): Promise<string[]> {
+  const keys = [...check.fileKeys];
+  for (const v of check.species) {
+    if (v.species !== undefined) keys.push(...((await speciesCacheKeys(v as ReadySpecies, check.settings)) ?? []));
+    if (v.resultKey !== undefined) keys.push(`result/${v.resultKey}`);
+  }
+  return keys;
 }
 
 /** Whether every stage result of every species of a batch is in the cache (then no worker is needed). */
 async function allCached(cacheDir: string | undefined, batch: readonly ValidSpecies[], settings: DatabaseSettings): Promise<boolean> {
   if (cacheDir === undefined) return false;
   for (const v of batch) {
-    const keys = speciesCacheKeys(v, settings);
+    if (v.species === undefined) return false;
+    const keys = await speciesCacheKeys(v as ReadySpecies, settings);
     if (!keys) return false;
     for (const k of keys) {
       const [kind, key] = k.split('/') as [CacheKind, string];
@@ -399,18 +575,28 @@ export interface LimitSource {
  * settings key that set the limit: "… exceeds the tolerance 1e-06 by …; limit set by tolerances.cp in
  * db/qforge.yaml:11:17".
  */
-export function locateFitViolation(d: Diagnostic, tolerances: FitTolerancesSetting, source: LimitSource, species?: ValidSpecies): Diagnostic {
+export function locateFitViolation(d: Diagnostic, tolerances: FitTolerancesSetting, source: LimitSource, species?: ReadySpecies): Diagnostic {
   return { ...d, path: '', message: `fit check: ${d.message}; ${fitLimitOrigin(d.path, tolerances, source, species)}` };
 }
 
 /** compute → fit → verify (and the table points) of one species, through the cache. */
 export async function buildOneSpecies(
-  v: ValidSpecies,
+  given: ValidSpecies,
   settings: DatabaseSettings,
   cache: StageCache,
   limitSource: LimitSource = {},
   extra: { uncertaintySamples?: number } = {},
 ): Promise<SpeciesOutcome> {
+  // The pool hands over species with their object (runner `speciesOf`); a bare one is a caller's bug.
+  if (given.species === undefined) throw new Error(`buildOneSpecies: ${given.name} has no species object (see speciesOf)`);
+  const v = given as ReadySpecies;
+  const {
+    compute: { computeSamples, computeTable },
+    fit: { fitOptionsFor, fitSpecies },
+    plan: { planSpecies },
+    verify: { classicalCpFloor, verifySpecies },
+    uncertainty: { computeUncertainty },
+  } = await stagesModules();
   const out: SpeciesOutcome = {
     valid: v,
     diagnostics: [],
@@ -579,7 +765,32 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   for (const n of notes) progress({ kind: 'note', message: n });
 
   progress({ kind: 'stage', stage: 'load' });
-  const check = await checkDatabase(opts);
+  const cacheDir = opts.cacheDir === null ? undefined : (opts.cacheDir ?? defaultCacheDir(opts.dir));
+  const cache = new StageCache(cacheDir);
+  // The validated species wait in a spill file for their turn (name order), not in memory; without a
+  // writable temporary folder they wait in memory (the build only needs more of it).
+  const spill = await SpillFile.open().catch(() => undefined);
+  try {
+    return await buildChecked(opts, t0, notes, cacheDir, cache, spill);
+  } finally {
+    await spill?.close();
+  }
+}
+
+async function buildChecked(
+  opts: BuildOptions,
+  t0: number,
+  notes: string[],
+  cacheDir: string | undefined,
+  cache: StageCache,
+  spill: SpillFile | undefined,
+): Promise<BuildReport> {
+  const progress = opts.onProgress ?? (() => {});
+  const check = await checkDatabase({
+    ...opts,
+    keep: spill ?? 'memory',
+    ...(cacheDir !== undefined ? { fastPath: { context: buildContext(opts), cache } } : {}),
+  });
   const settings = check.settings;
   // A shard builds the species (and reports the invalid documents) whose name hashes into it.
   const shard = opts.shard;
@@ -592,11 +803,11 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     stage: 'validate',
     detail: `${check.species.length} species in ${check.files.length} files${shard ? `; shard ${shardLabel(shard)}: ${shardSpecies.length} species` : ''}`,
   });
-  const cacheDir = opts.cacheDir === null ? undefined : (opts.cacheDir ?? defaultCacheDir(opts.dir));
-  const cache = new StageCache(cacheDir);
   // Opened before the species run so that a missing --report-against build fails at once.
   const reportWriter =
-    check.settingsOk && (opts.report || settings.outputs.report) ? await ReportWriter.open(opts.report ?? {}, settings, opts.dir, opts.displayBase) : undefined;
+    check.settingsOk && (opts.report || settings.outputs.report) ? await (await import('./report/build-report.js')).ReportWriter.open(opts.report ?? {}, settings, opts.dir, opts.displayBase) : undefined;
+  // A species is taken whole from its result entry unless the report needs its computed values.
+  const useStored = cacheDir !== undefined && !reportWriter;
 
   const total = shardSpecies.length;
   const jobs = opts.jobs !== undefined ? Math.max(1, opts.jobs) : autoThreads(total, opts.maxThreads ?? 1);
@@ -618,7 +829,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   }
   const summarySpecies: SummarySpecies[] = [];
   const speciesDiagnostics: Diagnostic[] = [];
-  const warnings: string[] = [];
+  const warnings: string[] = [...check.cacheNotes];
   let processed = 0;
   let failedCount = 0;
   const usedKeys: string[] = [];
@@ -637,23 +848,48 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     },
     inline: (v) => buildOneSpecies(v, settings, cache, check, opts.uncertaintySamples !== undefined ? { uncertaintySamples: opts.uncertaintySamples } : {}),
     cheap: (batch) => allCached(cacheDir, batch, settings),
-    crashed: (v, reason) => ({
-      valid: v,
-      diagnostics: [
-        {
-          severity: 'error',
-          file: v.displayFile,
-          species: v.name,
-          ...(v.positions.name ?? {}),
-          path: '',
-          message: `internal error: ${reason} while building this species' batch; it was not built`,
-        },
-      ],
-      cache: {},
-      cacheNotes: [],
-      timings: { load: v.loadMs, validate: v.validateMs },
-    }),
+    crashed: (v, reason) => failedOutcome(v, `internal error: ${reason} while building this species' batch; it was not built`),
   });
+
+  // A batch: the species whose result entry is in the cache are taken from it, the others are built (on
+  // the pool) from their species object; the order of the batch is kept.
+  const resolveBatch = async (batch: readonly ValidSpecies[]): Promise<SpeciesOutcome[]> => {
+    const outs: Array<SpeciesOutcome | undefined> = new Array(batch.length);
+    const todo: ReadySpecies[] = [];
+    const at: number[] = [];
+    const resultOutcome = new Map<number, { outcome: CacheOutcome; reason?: string }>();
+    for (let i = 0; i < batch.length; i++) {
+      const v = batch[i]!;
+      if (useStored && v.resultKey !== undefined) {
+        const tr = performance.now();
+        const r = await readEntry<StoredResult>(cache, 'result', v.resultKey);
+        if (r.outcome === 'hit') {
+          outs[i] = storedOutcome(v, r.value!, performance.now() - tr);
+          continue;
+        }
+        resultOutcome.set(i, r);
+      }
+      try {
+        todo.push(await speciesOf(v, spill));
+        at.push(i);
+      } catch (e) {
+        outs[i] = failedOutcome(v, errorText(e), 'species-file-changed');
+      }
+    }
+    if (todo.length > 0) {
+      const built = await pool.run(todo);
+      built.forEach((o, k) => {
+        const i = at[k]!;
+        const r = resultOutcome.get(i);
+        if (r) {
+          o.cache.result = r.outcome;
+          if (r.outcome === 'corrupt') o.cacheNotes.unshift(`cache entry for result rejected (${r.reason}); recomputed`);
+        }
+        outs[i] = o;
+      });
+    }
+    return outs as SpeciesOutcome[];
+  };
   let emitter: StreamingEmitter | undefined;
   try {
     emitter = staging ? await StreamingEmitter.open(staging, settings) : undefined;
@@ -662,9 +898,11 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
     const sink = async (o: SpeciesOutcome): Promise<void> => {
       const te = performance.now();
       let tableMs = 0;
+      let rendered: RenderedSpecies | undefined;
+      if (o.stored?.built && emitter) await emitter.addRendered(o.valid.name, o.stored.built.rendered);
       if (o.built && emitter) {
         try {
-          tableMs = await emitter.add(o.built);
+          ({ tableMs, rendered } = await emitter.add(o.built));
         } catch (e) {
           if (!(e instanceof Nasa7FormatError) || e.record !== o.valid.name) throw e;
           o.diagnostics.push({
@@ -679,10 +917,15 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
           delete o.built;
         }
       }
+      // What a rebuild with nothing changed takes instead of building this species again.
+      if (emitter && !o.stored && o.valid.resultKey !== undefined && storable(o)) {
+        await writeEntry(cache, 'result', o.valid.resultKey, toStored(o, rendered));
+      }
       emitMs += performance.now() - te;
       processed++;
-      if (!o.built) failedCount++;
+      if (!isBuilt(o)) failedCount++;
       if (o.keys) usedKeys.push(...o.keys);
+      if (o.valid.resultKey !== undefined) usedKeys.push(`result/${o.valid.resultKey}`);
       speciesDiagnostics.push(...o.diagnostics);
       for (const n of o.cacheNotes) warnings.push(`${o.valid.name}: ${n}`);
       const s = summaryEntry(o, ownDiagnostics.get(speciesKey(o.valid.displayFile, o.valid.name)) ?? [], tableMs);
@@ -691,7 +934,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
         name: o.valid.name,
         file: o.valid.file,
         status: s.status,
-        species: o.valid.species,
+        species: o.valid.species!,
         ...(o.built ? { computed: o.built.computed, fit: o.built.fit } : {}),
         ...(o.built?.uncertainty ? { uncertainty: o.built.uncertainty } : {}),
         warnings: s.warnings,
@@ -712,10 +955,10 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
       };
       for (const batch of batches) {
         inflight.push(
-          pool.run(batch).then((outs) => {
+          resolveBatch(batch).then((outs) => {
             for (const o of outs) {
               done++;
-              progress({ kind: 'species-done', name: o.valid.name, ok: !!o.built, cacheHit: isCacheHit(o), done, total });
+              progress({ kind: 'species-done', name: o.valid.name, ok: isBuilt(o), cacheHit: isCacheHit(o), done, total });
             }
             return outs;
           }),
@@ -802,7 +1045,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
 
     // Cache problems: once per build for an unwritable cache, one line per species for rejected entries.
     if (cache.writeProblem) warnings.unshift(`cache: not writable: ${cache.dir}: ${cache.writeProblem}; every species is recomputed on each build`);
-    if (cacheDir !== undefined && check.settingsOk && !shard) await recordCacheUse(cacheDir, opts.dir, usedKeys).catch((e) => cache.noteWriteFailure(e));
+    if (cacheDir !== undefined && check.settingsOk && !shard) await recordCacheUse(cacheDir, opts.dir, [...check.fileKeys, ...usedKeys]).catch((e) => cache.noteWriteFailure(e));
     // Files whose problems are not tied to a species that validated (syntax errors, invalid documents, …).
     const validKeys = new Set((check.settingsOk ? check.species : []).map((v) => speciesKey(v.displayFile, v.name)));
     const summaryFiles = [...check.fileDiagnostics.entries()]
@@ -880,40 +1123,100 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
 
 /** The summary entry of one species (its warnings: the validation ones of its file, then its own). */
 function summaryEntry(o: SpeciesOutcome, own: readonly Diagnostic[], emitMs: number): SummarySpecies {
-  const fm = o.built?.fit.metrics;
   const s: SummarySpecies = {
     name: o.valid.name,
     file: o.valid.file,
-    status: o.built ? 'ok' : 'failed',
+    status: isBuilt(o) ? 'ok' : 'failed',
     warnings: [...own, ...o.diagnostics].filter((d) => d.severity === 'warning').map(formatDiagnostic).concat(o.cacheNotes),
     errors: o.diagnostics.filter((d) => d.severity === 'error').map(formatDiagnostic),
     cache: o.cache,
     cache_hit: isCacheHit(o),
     timings_ms: Object.fromEntries(Object.entries({ ...o.timings, emit: emitMs }).map(([k, v]) => [k, ms(v)])),
   };
-  if (fm && o.built) {
-    s.fit_metrics = {
-      max_abs_cp: Math.max(fm.low.maxAbs.cp, fm.high.maxAbs.cp),
-      max_abs_h: Math.max(fm.low.maxAbs.h, fm.high.maxAbs.h),
-      max_abs_s: Math.max(fm.low.maxAbs.s, fm.high.maxAbs.s),
-      t_mid: o.built.fit.polynomial.tMid,
-    };
-  }
+  const fm = o.stored ? o.stored.built?.fitMetrics : fitMetricsOf(o);
+  if (fm) s.fit_metrics = fm;
   return s;
 }
 
-/** The settings positions the per-species stages quote, as plain data for the workers. */
-function plainLimits(check: CheckReport): PlainLimitSource {
-  const setAt: PlainLimitSource['setAt'] = {};
-  for (const segments of LIMIT_KEYS) {
-    const at = check.settingsSetAt?.([...segments]);
-    if (at) setAt[segments.join('.')] = { line: at.line, column: at.column };
-  }
-  return { setAt, ...(check.settingsFile !== undefined ? { settingsFile: check.settingsFile } : {}) };
+/** The summary's fit metrics of a built species: largest errors over both ranges, and T_mid. */
+function fitMetricsOf(o: SpeciesOutcome): SummarySpecies['fit_metrics'] {
+  const fm = o.built?.fit.metrics;
+  if (!fm || !o.built) return undefined;
+  return {
+    max_abs_cp: Math.max(fm.low.maxAbs.cp, fm.high.maxAbs.cp),
+    max_abs_h: Math.max(fm.low.maxAbs.h, fm.high.maxAbs.h),
+    max_abs_s: Math.max(fm.low.maxAbs.s, fm.high.maxAbs.s),
+    t_mid: o.built.fit.polynomial.tMid,
+  };
 }
 
+/** Whether the species was built and written (freshly or from its result entry). */
+function isBuilt(o: SpeciesOutcome): boolean {
+  return o.stored ? o.stored.built !== undefined : o.built !== undefined;
+}
+
+/** The outcome of a species that failed before it was built, with one error. */
+function failedOutcome(v: ValidSpecies, message: string, code?: string): SpeciesOutcome {
+  return {
+    valid: v,
+    diagnostics: [{ severity: 'error', ...(code !== undefined ? { code } : {}), file: v.displayFile, species: v.name, ...(v.positions.name ?? {}), path: '', message }],
+    cache: {},
+    cacheNotes: [],
+    timings: { load: v.loadMs, validate: v.validateMs },
+  };
+}
+
+/** The options of a build, besides the settings, that change what a species' outputs hold. */
+export function buildContext(opts: { uncertaintySamples?: number }): Record<string, unknown> {
+  return opts.uncertaintySamples !== undefined ? { uncertaintySamples: opts.uncertaintySamples } : {};
+}
+
+/** A species taken from its result entry: reported as a hit of each stage it went through. */
+function storedOutcome(v: ValidSpecies, s: StoredResult, ms: number): SpeciesOutcome {
+  const cache: SpeciesOutcome['cache'] = {};
+  for (const k of s.stages) cache[k] = 'hit';
+  cache.result = 'hit';
+  const o: SpeciesOutcome = { valid: v, stored: s, diagnostics: [...s.diagnostics], cache, cacheNotes: [], timings: { load: v.loadMs, validate: v.validateMs, result: ms } };
+  if (s.keys) o.keys = s.keys;
+  return o;
+}
+
+/**
+ * Whether an outcome may be stored as a result entry: not one that failed because something went wrong
+ * while building it (a crash, a thrown stage, a file that changed meanwhile), which another run may not
+ * repeat; fit-check failures and unwritable records are results like any other.
+ */
+function storable(o: SpeciesOutcome): boolean {
+  return o.diagnostics.every((d) => (d.severity === 'warning' || d.code !== undefined) && !(d.code !== undefined && /-failed$|^species-file-changed$/.test(d.code)));
+}
+
+function toStored(o: SpeciesOutcome, rendered: RenderedSpecies | undefined): StoredResult {
+  const s: StoredResult = { diagnostics: o.diagnostics, stages: STAGE_KINDS.filter((k) => o.cache[k] !== undefined) };
+  if (o.keys) s.keys = o.keys;
+  const fitMetrics = fitMetricsOf(o);
+  if (o.built && rendered) s.built = { rendered, ...(fitMetrics ? { fitMetrics } : {}) };
+  return s;
+}
+
+const STAGE_KINDS = ['samples', 'fit', 'table'] as const;
+
+/** The settings positions the per-species stages quote, as plain data for the workers. */
+function plainLimits(check: CheckReport): PlainLimitSource {
+  return plainLimitsOf(check.settingsFile, check.settingsSetAt);
+}
+
+function plainLimitsOf(settingsFile: string | undefined, settingsSetAt: CheckReport['settingsSetAt']): PlainLimitSource {
+  const setAt: PlainLimitSource['setAt'] = {};
+  for (const segments of LIMIT_KEYS) {
+    const at = settingsSetAt?.([...segments]);
+    if (at) setAt[segments.join('.')] = { line: at.line, column: at.column };
+  }
+  return { setAt, ...(settingsFile !== undefined ? { settingsFile } : {}) };
+}
+
+/** Cache hit: nothing of the species was recomputed (its stage results, or its whole result, from the cache). */
 function isCacheHit(o: SpeciesOutcome): boolean {
-  const v = Object.values(o.cache);
+  const v = STAGE_KINDS.flatMap((k) => (o.cache[k] !== undefined ? [o.cache[k]] : []));
   return v.length > 0 && v.every((x) => x === 'hit');
 }
 

@@ -1,6 +1,6 @@
 /** `qforge cache prune`: drops the cache entries no current species uses (see storage/cache-uses.ts). */
 import { stat } from 'node:fs/promises';
-import { checkDatabase, currentCacheKeys } from '../runner.js';
+import { buildContext, checkDatabase, currentCacheKeys } from '../runner.js';
 import { defaultCacheDir } from '../storage/cache.js';
 import { pruneCache } from '../storage/cache-uses.js';
 import { displayPath } from '../core/display-path.js';
@@ -20,14 +20,15 @@ export async function cachePruneCommand(io: CliIo, dir: string, dirLabel: string
     if (o.json) io.stdout.write(`${JSON.stringify({ format: PRUNE_FORMAT, cache: shown, removed: 0, bytes_freed: 0, kept: 0 }, null, 2)}\n`);
     return 0;
   }
-  const check = await checkDatabase({ dir, displayBase: io.cwd });
+  // The fast-path keys as a build with the default options from this folder computes them.
+  const check = await checkDatabase({ dir, displayBase: io.cwd, keep: 'memory', fastPath: { context: buildContext({}) } });
   // Without a complete list of the current species, pruning would delete entries still needed.
   if (!check.settingsOk || hasErrors(check.diagnostics)) {
     for (const d of check.diagnostics) if (d.severity === 'error') io.stderr.write(`${formatDiagnostic(d)}\n`);
     io.stderr.write(`qforge: error: ${dirLabel} has errors; fix them before pruning its cache (nothing deleted)\n`);
     return 1;
   }
-  const r = await pruneCache(cacheDir, dir, currentCacheKeys(check));
+  const r = await pruneCache(cacheDir, dir, await currentCacheKeys(check));
   io.stderr.write(
     `qforge: pruned ${shown}: removed ${r.removed} entr${r.removed === 1 ? 'y' : 'ies'} (${mb(r.bytesFreed)} freed), kept ${r.kept}` +
       `${r.otherDatabases ? ` (also used by ${r.otherDatabases} other database(s))` : ''}\n`,

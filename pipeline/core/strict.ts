@@ -24,9 +24,14 @@ const PLACEHOLDER_REASON = /^\s*(todo|tbd|tba|fixme|xxx|n\/?a|none|unknown|accep
 
 export interface WarningPolicy {
   /** A species document's diagnostics with its own and the settings' acceptances applied (strict: warnings → errors). */
-  applySpecies(ds: readonly Diagnostic[], species: { raw: unknown; file: string; name?: string; locate: Locator }): Diagnostic[];
+  applySpecies(ds: readonly Diagnostic[], species: { raw: unknown; file: string; name?: string; locate: Locator }, used?: Set<number>): Diagnostic[];
   /** Diagnostics not of one species document (files, settings, names across the database). */
-  applyOther(ds: readonly Diagnostic[]): Diagnostic[];
+  applyOther(ds: readonly Diagnostic[], used?: Set<number>): Diagnostic[];
+  /**
+   * Counts settings acceptances as used, as if they had matched here: a file whose checked diagnostics
+   * were taken from the cache reports the indices its first check matched (`used` of the apply calls).
+   */
+  markUsed(indices: Iterable<number>): void;
   /** Warnings for settings acceptances that matched nothing (call once, after every document). */
   staleSettingsEntries(): Diagnostic[];
 }
@@ -38,11 +43,12 @@ export function createWarningPolicy(opts: {
   settingsLocate?: Locator;
 }): WarningPolicy {
   const used = new Set<number>();
-  const settingsMatch = (d: Diagnostic): boolean => {
+  const settingsMatch = (d: Diagnostic, track?: Set<number>): boolean => {
     let hit = false;
     opts.accepted.forEach((a, i) => {
       if (a.code === d.code && (a.species === undefined || a.species === d.species)) {
         used.add(i);
+        track?.add(i);
         hit = true;
       }
     });
@@ -51,11 +57,11 @@ export function createWarningPolicy(opts: {
   const harden = (d: Diagnostic): Diagnostic =>
     opts.strict && d.severity === 'warning' ? { ...d, severity: 'error', message: `${STRICT_PREFIX}${d.message}` } : d;
 
-  const finish = (ds: readonly Diagnostic[], own: (d: Diagnostic) => boolean): Diagnostic[] =>
-    ds.filter((d) => !(d.severity === 'warning' && d.code !== undefined && (own(d) || settingsMatch(d)))).map(harden);
+  const finish = (ds: readonly Diagnostic[], own: (d: Diagnostic) => boolean, track?: Set<number>): Diagnostic[] =>
+    ds.filter((d) => !(d.severity === 'warning' && d.code !== undefined && (own(d) || settingsMatch(d, track)))).map(harden);
 
   return {
-    applySpecies(ds, species) {
+    applySpecies(ds, species, track) {
       const list = Array.isArray((species.raw as { accepted_warnings?: unknown })?.accepted_warnings)
         ? ((species.raw as { accepted_warnings: unknown[] }).accepted_warnings as Array<{ code?: unknown; reason?: unknown }>)
         : [];
@@ -69,7 +75,7 @@ export function createWarningPolicy(opts: {
           }
         });
         return hit;
-      });
+      }, track);
       const extra: Diagnostic[] = [];
       list.forEach((a, i) => {
         if (!a || typeof a.code !== 'string' || typeof a.reason !== 'string') return; // the schema reports it
@@ -84,8 +90,11 @@ export function createWarningPolicy(opts: {
       });
       return [...out, ...extra];
     },
-    applyOther(ds) {
-      return finish(ds, () => false);
+    applyOther(ds, track) {
+      return finish(ds, () => false, track);
+    },
+    markUsed(indices) {
+      for (const i of indices) used.add(i);
     },
     staleSettingsEntries() {
       const out: Diagnostic[] = [];

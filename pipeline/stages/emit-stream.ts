@@ -21,6 +21,7 @@ import { markPartialNasa7, type PartialMark } from './partial.js';
 import type { OutputStaging, StagedStream } from '../storage/atomic-write.js';
 import { sha256Hex } from '../storage/hash.js';
 import type { DatabaseSettings } from '../core/settings.js';
+import type { RenderedSpecies } from '../storage/fast-entries.js';
 import { speciesFileStem } from './emit.js';
 import {
   databaseJson,
@@ -31,14 +32,15 @@ import {
   renderTable,
   renderTablesReadme,
   speciesJson,
-  validateDatabaseJson,
+  validateDatabaseEnvelope,
   type BuiltSpecies,
 } from './emit.js';
 
 let speciesValidator: ReturnType<Ajv2020['compile']> | undefined;
 function validateSpeciesRecord(record: unknown): void {
   if (!speciesValidator) {
-    const ajv = new Ajv2020({ allErrors: true, strict: false });
+    // Our own fixed schemas (checked against the meta-schema by test/pipeline/fast-rebuild.test.ts).
+    const ajv = new Ajv2020({ allErrors: true, strict: false, validateSchema: false });
     ajv.addSchema(settingsSchema);
     ajv.addSchema(databaseSchema);
     speciesValidator = ajv.getSchema(`${databaseSchema.$id}#/$defs/species`)!;
@@ -59,13 +61,6 @@ export class TableNamer {
     this.taken.add(stem.toLowerCase());
     return `tables/${stem}.csv`;
   }
-}
-
-/** One species' rendered outputs (rendering can fail; writing starts only when all of it succeeded). */
-interface Rendered {
-  thermo?: string;
-  nasa7?: string;
-  table?: { file: string; text: string };
 }
 
 export class StreamingEmitter {
@@ -93,28 +88,39 @@ export class StreamingEmitter {
 
   /**
    * Renders and writes one species (in name order). Throws before writing anything when a record cannot
-   * be rendered (a Nasa7FormatError: the runner fails that species). Returns the time spent on its table.
+   * be rendered (a Nasa7FormatError: the runner fails that species). Returns the rendered texts (the
+   * no-change fast path stores them) and the time spent on its table.
    */
-  async add(b: BuiltSpecies): Promise<number> {
-    const r: Rendered = {};
+  async add(b: BuiltSpecies): Promise<{ rendered: RenderedSpecies; tableMs: number }> {
+    const r: RenderedSpecies = {};
     if (this.nasa7) r.nasa7 = `${formatNasa7Record(nasa7Record(b, this.settings.record_identifier)).join('\n')}\n`;
     if (this.thermo) {
       const record = speciesJson(b);
       validateSpeciesRecord(record);
-      const body = JSON.stringify(record, null, 2).replace(/^/gm, '    ');
-      r.thermo = this.count === 0 ? `\n${body}` : `,\n${body}`;
+      r.thermo = JSON.stringify(record, null, 2).replace(/^/gm, '    ');
     }
     let tableMs = 0;
     if (this.settings.outputs.tables) {
       const t0 = performance.now();
-      r.table = { file: this.namer.next(b.name), text: await renderTable(b) };
+      r.table = await renderTable(b);
       tableMs = performance.now() - t0;
     }
-    if (r.nasa7 !== undefined) await this.nasa7!.write(r.nasa7);
-    if (r.thermo !== undefined) await this.thermo!.write(r.thermo);
-    if (r.table) await this.staging.write(r.table.file, r.table.text);
+    await this.addRendered(b.name, r);
+    return { rendered: r, tableMs };
+  }
+
+  /**
+   * Writes one species from texts `add` rendered (in name order; taken from the cache on a no-change
+   * rebuild). An output the settings do not write is ignored; one they write must be present.
+   */
+  async addRendered(name: string, r: RenderedSpecies): Promise<void> {
+    const missing = [this.nasa7 && r.nasa7 === undefined && 'nasa7', this.thermo && r.thermo === undefined && 'thermo', this.settings.outputs.tables && r.table === undefined && 'table'].filter(Boolean);
+    if (missing.length) throw new Error(`rendered outputs of ${name} lack ${missing.join(', ')}`);
+    const tableFile = this.settings.outputs.tables ? this.namer.next(name) : undefined;
+    if (this.nasa7) await this.nasa7.write(r.nasa7!);
+    if (this.thermo) await this.thermo.write(this.count === 0 ? `\n${r.thermo!}` : `,\n${r.thermo!}`);
+    if (tableFile !== undefined) await this.staging.writeOrReuse(tableFile, r.table!);
     this.count++;
-    return tableMs;
   }
 
   /** Writes the framed thermo.json and nasa7.txt and tables/README.txt; `mark` flags a partial database. */
@@ -122,7 +128,7 @@ export class StreamingEmitter {
     if (this.thermo) {
       const envelope = databaseJson([], this.settings);
       if (mark) Object.assign(envelope, { partial: mark });
-      validateDatabaseJson(envelope);
+      validateDatabaseEnvelope(envelope);
       const text = jsonText(envelope);
       const at = text.lastIndexOf(EMPTY_SPECIES);
       if (at < 0) throw new Error('thermo.json envelope without a species list');
@@ -157,5 +163,6 @@ export class StreamingEmitter {
       await out.close();
     }
     await this.staging.dropScratch(rel);
+    await this.staging.reuseIfSame(rel);
   }
 }

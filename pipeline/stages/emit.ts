@@ -10,7 +10,6 @@
  *                      output that differs from run to run
  */
 import { Ajv2020 } from 'ajv/dist/2020.js';
-import { writeToString } from 'fast-csv';
 import databaseSchema from '../../schemas/database.schema.json' with { type: 'json' };
 import settingsSchema from '../../schemas/settings.schema.json' with { type: 'json' };
 import summarySchema from '../../schemas/summary.schema.json' with { type: 'json' };
@@ -187,14 +186,25 @@ export function databaseJson(species: readonly BuiltSpecies[], settings: Databas
   };
 }
 
-let validators: { database: ReturnType<Ajv2020['compile']>; summary: ReturnType<Ajv2020['compile']> } | undefined;
+// Each compiled on first use (a no-change rebuild validates only its summary).
+let databaseValidator: ReturnType<Ajv2020['compile']> | undefined;
+let summaryValidator: ReturnType<Ajv2020['compile']> | undefined;
+function outputAjv(): Ajv2020 {
+  // Our own fixed schemas: checking them against the meta-schema on every run would cost more than the
+  // validation itself (test/pipeline/fast-rebuild.test.ts checks them).
+  const ajv = new Ajv2020({ allErrors: true, strict: false, validateSchema: false });
+  ajv.addSchema(settingsSchema);
+  return ajv;
+}
 function outputValidators() {
-  if (!validators) {
-    const ajv = new Ajv2020({ allErrors: true, strict: false });
-    ajv.addSchema(settingsSchema);
-    validators = { database: ajv.compile(databaseSchema), summary: ajv.compile(summarySchema) };
-  }
-  return validators;
+  return {
+    get database() {
+      return (databaseValidator ??= outputAjv().compile(databaseSchema));
+    },
+    get summary() {
+      return (summaryValidator ??= outputAjv().compile(summarySchema));
+    },
+  };
 }
 
 /** Thrown when a rendered output does not match its own schema: a bug, never written to disk. */
@@ -203,6 +213,22 @@ export class OutputSchemaError extends Error {
     super(`${file} does not match its schema (not written): ${JSON.stringify(errors).slice(0, 2000)}`);
     this.name = 'OutputSchemaError';
   }
+}
+
+let envelopeValidator: ReturnType<Ajv2020['compile']> | undefined;
+
+/**
+ * Validates thermo.json without its species (the streaming emit validates each species record on its own):
+ * the database schema with the species list required to be empty, which compiles in a fraction of the time
+ * of the whole schema.
+ */
+export function validateDatabaseEnvelope(value: unknown): void {
+  envelopeValidator ??= outputAjv().compile({
+    ...databaseSchema,
+    $id: `${databaseSchema.$id}-envelope`,
+    properties: { ...databaseSchema.properties, species: { type: 'array', maxItems: 0 } },
+  });
+  if (!envelopeValidator(value)) throw new OutputSchemaError('thermo.json', envelopeValidator.errors);
 }
 
 export function validateDatabaseJson(value: unknown): void {
@@ -312,6 +338,8 @@ export function tableRows(b: BuiltSpecies): string[][] {
 }
 
 export async function renderTable(b: BuiltSpecies): Promise<string> {
+  // Loaded on first use: a rebuild that takes every table from the cache never renders one.
+  const { writeToString } = await import('fast-csv');
   const text = await writeToString([[...TABLE_HEADERS], ...tableRows(b)], { headers: false, rowDelimiter: '\n' });
   return `${text}\n`;
 }

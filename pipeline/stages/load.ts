@@ -23,6 +23,7 @@
  * database folder is followed (each real file is read once); one that resolves OUTSIDE the database folder is
  * refused with an error diagnostic, as is a broken link. Entries whose name starts with '.' are skipped.
  */
+import { readFileSync, statSync } from 'node:fs';
 import { readdir, readFile, realpath, stat } from 'node:fs/promises';
 import path from 'node:path';
 import {
@@ -465,28 +466,40 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
   return result;
 }
 
+/** A species file's bytes as read, or the diagnostics that stopped reading it (see `loadYamlFile`). */
+export type YamlFileBytes = { bytes: Buffer; diagnostics?: undefined } | { bytes?: undefined; diagnostics: Diagnostic[] };
+
 /**
- * Reads and parses one YAML file. The size is checked before reading, so a huge file is never loaded into
+ * Reads one YAML file's bytes. The size is checked before reading, so a huge file is never loaded into
  * memory. Read failures become diagnostics, never exceptions.
  */
-export async function loadYamlFile(
-  filePath: string,
-  displayPath: string,
-  opts: ParseOptions = {},
-): Promise<LoadResult> {
+export async function readYamlFileBytes(filePath: string, displayPath: string, opts: ParseOptions = {}): Promise<YamlFileBytes> {
+  const maxBytes = opts.maxBytes ?? DEFAULT_MAX_BYTES;
+  try {
+    // Synchronous: a species file is small, and thread-pool round trips would cost more than reading it.
+    const info = statSync(filePath);
+    if (!info.isFile()) return { diagnostics: [err(displayPath, 'not-a-file', 'not a regular file', { expected: 'a YAML file' })] };
+    if (info.size > maxBytes) return { diagnostics: [sizeDiagnostic(displayPath, info.size, maxBytes)] };
+    return { bytes: readFileSync(filePath) };
+  } catch (e) {
+    return { diagnostics: [readFailure(displayPath, e)] };
+  }
+}
+
+function readFailure(displayPath: string, e: unknown): Diagnostic {
+  const code = (e as NodeJS.ErrnoException).code;
+  const reason = code === 'ENOENT' ? 'file not found' : `cannot read file (${code ?? String(e)})`;
+  return err(displayPath, code === 'ENOENT' ? 'file-not-found' : 'file-unreadable', reason);
+}
+
+/**
+ * Parses the bytes of one YAML file (read by `readYamlFileBytes`) and reads the geometry files its
+ * documents name. Problems become diagnostics, never exceptions.
+ */
+export async function loadYamlBytes(bytes: Buffer, filePath: string, displayPath: string, opts: ParseOptions = {}): Promise<LoadResult> {
   const maxBytes = opts.maxBytes ?? DEFAULT_MAX_BYTES;
   const empty: LoadResult = { file: displayPath, documents: [], recoveredDocuments: [], diagnostics: [], text: '' };
   try {
-    const info = await stat(filePath);
-    if (!info.isFile()) {
-      empty.diagnostics.push(err(displayPath, 'not-a-file', 'not a regular file', { expected: 'a YAML file' }));
-      return empty;
-    }
-    if (info.size > maxBytes) {
-      empty.diagnostics.push(sizeDiagnostic(displayPath, info.size, maxBytes));
-      return empty;
-    }
-    const bytes = await readFile(filePath);
     const text = decodeUtf8Text(bytes);
     if (text === undefined) {
       empty.diagnostics.push(
@@ -500,11 +513,38 @@ export async function loadYamlFile(
     await attachGeometryFiles([...result.documents, ...result.recoveredDocuments], filePath, displayPath, maxBytes);
     return result;
   } catch (e) {
-    const code = (e as NodeJS.ErrnoException).code;
-    const reason = code === 'ENOENT' ? 'file not found' : `cannot read file (${code ?? String(e)})`;
-    empty.diagnostics.push(err(displayPath, code === 'ENOENT' ? 'file-not-found' : 'file-unreadable', reason));
+    empty.diagnostics.push(readFailure(displayPath, e));
     return empty;
   }
+}
+
+/**
+ * Reads and parses one YAML file. The size is checked before reading, so a huge file is never loaded into
+ * memory. Read failures become diagnostics, never exceptions.
+ */
+export async function loadYamlFile(
+  filePath: string,
+  displayPath: string,
+  opts: ParseOptions = {},
+): Promise<LoadResult> {
+  const read = await readYamlFileBytes(filePath, displayPath, opts);
+  if (read.bytes === undefined) return { file: displayPath, documents: [], recoveredDocuments: [], diagnostics: read.diagnostics, text: '' };
+  return loadYamlBytes(read.bytes, filePath, displayPath, opts);
+}
+
+/** The `geometry_file` names a species document refers to (its own, then its conformers'), as written. */
+export function geometryFileNames(value: unknown): string[] {
+  const v = value as { geometry_file?: unknown; conformers?: unknown } | null;
+  const conformers = Array.isArray(v?.conformers) ? (v.conformers as Array<{ geometry_file?: unknown } | null>) : [];
+  return [v?.geometry_file, ...conformers.map((c) => c?.geometry_file)].filter((n): n is string => typeof n === 'string' && n !== '');
+}
+
+/**
+ * One geometry file named by a species file, read exactly as `loadYamlFile` reads it (same checks, same
+ * diagnostics), so a cached load can tell whether it still reads the same.
+ */
+export function readNamedGeometryFile(speciesFile: string, displayPath: string, name: string, opts: ParseOptions = {}): Promise<LoadedGeometryFile> {
+  return readGeometryFile(path.dirname(speciesFile), name, path.join(path.dirname(displayPath), name), opts.maxBytes ?? DEFAULT_MAX_BYTES);
 }
 
 /**
@@ -515,10 +555,7 @@ export async function loadYamlFile(
 async function attachGeometryFiles(docs: LoadedDocument[], filePath: string, displayPath: string, maxBytes: number): Promise<void> {
   const folder = path.dirname(filePath);
   for (const doc of docs) {
-    const value = doc.value as { geometry_file?: unknown; conformers?: unknown } | null;
-    const conformers = Array.isArray(value?.conformers) ? (value.conformers as Array<{ geometry_file?: unknown } | null>) : [];
-    const names = [value?.geometry_file, ...conformers.map((c) => c?.geometry_file)].filter((n): n is string => typeof n === 'string' && n !== '');
-    for (const name of names) {
+    for (const name of geometryFileNames(doc.value)) {
       doc.geometryFiles ??= {};
       doc.geometryFiles[name] ??= await readGeometryFile(folder, name, path.join(path.dirname(displayPath), name), maxBytes);
     }

@@ -33,6 +33,7 @@ import { compareDiagnostics, type Diagnostic } from '../core/diagnostics.js';
 import type { LoadedDocument } from './load.js';
 import { checkPlausibility } from './plausibility.js';
 import { checkBareUnits } from './bare-units.js';
+import { nameFact, nameFindings } from './names.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from './schema-check.js';
 import {
   checkAnharmonicModel,
@@ -61,7 +62,10 @@ export interface SpeciesValidation {
   normalisedInput?: unknown;
 }
 
-const validateAgainstSpeciesSchema = createSchemaValidator(schema);
+// Compiled on first use: compiling the schema costs a few hundred ms, which a rebuild that takes every
+// file's findings from the cache never needs to pay.
+let speciesSchemaValidator: ReturnType<typeof createSchemaValidator> | undefined;
+const validateAgainstSpeciesSchema = () => (speciesSchemaValidator ??= createSchemaValidator(schema));
 
 /** More bound vibrational levels than any real diatomic has (I2 has about 110): a units mistake. */
 const MAX_VIBRATIONAL_LEVELS = 1000;
@@ -886,7 +890,7 @@ function readDiatomic(ctx: Ctx): DiatomicReading {
 export function validateSpecies(doc: LoadedDocument): SpeciesValidation {
   const input = doc.value;
   const name = isObj(input) && typeof input.name === 'string' ? input.name : undefined;
-  const schemaDiagnostics = checkAgainstSchema(validateAgainstSpeciesSchema, doc, name === undefined ? {} : { species: name });
+  const schemaDiagnostics = checkAgainstSchema(validateAgainstSpeciesSchema(), doc, name === undefined ? {} : { species: name });
   if (!isObj(input)) return { diagnostics: schemaDiagnostics };
   // A field the schema already rejected is not reported again by the bounds.
   const rejected = schemaDiagnostics.map((d) => d.path);
@@ -971,69 +975,17 @@ export interface SpeciesSetEntry extends SpeciesValidation {
  * the 80-column format may not distinguish. Order-independent: documents are considered sorted by file and
  * position.
  */
+export { checkUniqueNameFacts, nameFact, type NameFact } from './names.js';
+
 export function checkUniqueNames(docs: readonly LoadedDocument[]): Diagnostic[] {
-  return nameFindings(docs, true);
+  return nameFindings(docs.map(nameFact), true);
 }
 
 /** Only the errors of `checkUniqueNames`: one per document reusing a name (each names the first use). */
 export function findDuplicateNames(docs: readonly LoadedDocument[]): Diagnostic[] {
-  return nameFindings(docs, false);
+  return nameFindings(docs.map(nameFact), false);
 }
 
-function nameFindings(docs: readonly LoadedDocument[], withCaseWarnings: boolean): Diagnostic[] {
-  const out: Diagnostic[] = [];
-  const sorted = docs.slice().sort((a, b) => compareText(a.file, b.file) || a.index - b.index);
-  const exact = new Map<string, { doc: LoadedDocument; line?: number }>();
-  const folded = new Map<string, { doc: LoadedDocument; line?: number; name: string }>();
-  for (const doc of sorted) {
-    const name = isObj(doc.value) && typeof doc.value.name === 'string' ? doc.value.name : undefined;
-    if (name === undefined) continue;
-    const where = doc.locate(['name']);
-    const here = (d: Diagnostic): Diagnostic => {
-      if (where) {
-        d.line = where.line;
-        d.column = where.column;
-      }
-      return d;
-    };
-    const first = exact.get(name);
-    if (first) {
-      const at = `${first.doc.file}${first.line !== undefined ? `:${first.line}` : ''}`;
-      out.push(
-        here({
-          severity: 'error',
-          code: 'duplicate-name',
-          file: doc.file,
-          path: 'name',
-          species: name,
-          message: `duplicate species name '${name}', already defined at ${at}`,
-          value: name,
-          expected: 'a name unique in the database',
-        }),
-      );
-      continue;
-    }
-    exact.set(name, { doc, line: where?.line });
-    const lower = name.toLowerCase();
-    const twin = folded.get(lower);
-    if (twin && withCaseWarnings) {
-      const at = `${twin.doc.file}${twin.line !== undefined ? `:${twin.line}` : ''}`;
-      out.push(
-        here({
-          severity: 'warning',
-          code: 'name-differs-in-case',
-          file: doc.file,
-          path: 'name',
-          species: name,
-          message: `species name '${name}' differs only in letter case from '${twin.name}' at ${at}`,
-          value: name,
-          expected: 'names that differ in more than case (some readers ignore case)',
-        }),
-      );
-    } else folded.set(lower, { doc, line: where?.line, name });
-  }
-  return out;
-}
 
 /**
  * Validates every document of a database and checks names across it. `results` are in the order of `docs`;

@@ -19,6 +19,7 @@
  * without a marker is never replaced. (A marker of an older qforge, without a list, is trusted as before.)
  */
 import { randomBytes } from 'node:crypto';
+import { closeSync, linkSync, lstatSync, openSync, readFileSync, readSync, renameSync, rmSync, writeFileSync, writeSync } from 'node:fs';
 import { lstat, mkdir, open, readdir, readFile, rename, rm, stat, type FileHandle } from 'node:fs/promises';
 import path from 'node:path';
 import { compareText } from '../core/text.js';
@@ -309,17 +310,61 @@ export interface StagedStream {
   close(): Promise<void>;
 }
 
-/** A file handle as a StagedStream whose close may be called more than once. */
+/** Whether two files of equal size hold the same bytes (read in 1 MiB chunks). */
+function sameBytes(a: string, b: string): boolean {
+  const fa = openSync(a, 'r');
+  try {
+    const fb = openSync(b, 'r');
+    try {
+      const ba = Buffer.allocUnsafe(1 << 20);
+      const bb = Buffer.allocUnsafe(1 << 20);
+      for (;;) {
+        const na = readSync(fa, ba, 0, ba.length, null);
+        const nb = readSync(fb, bb, 0, bb.length, null);
+        if (na !== nb) return false;
+        if (na === 0) return true;
+        if (!ba.subarray(0, na).equals(bb.subarray(0, nb))) return false;
+      }
+    } finally {
+      closeSync(fb);
+    }
+  } finally {
+    closeSync(fa);
+  }
+}
+
+/** Bytes a StagedStream gathers before it writes them (one write per species would cost a system call each). */
+const STREAM_BUFFER = 1 << 20;
+
+/**
+ * A file handle as a buffered StagedStream whose close may be called more than once. The buffer is
+ * written synchronously: the pieces are small and a thread-pool round trip per write costs more than it.
+ */
 function closeOnce(fh: FileHandle): StagedStream {
   let closed = false;
+  let pending: string[] = [];
+  let size = 0;
+  const flush = () => {
+    if (pending.length === 0) return;
+    const data = Buffer.from(pending.join(''), 'utf8');
+    pending = [];
+    size = 0;
+    for (let off = 0; off < data.length; ) off += writeSync(fh.fd, data, off, data.length - off);
+  };
   return {
     write: async (text: string) => {
-      await fh.write(text);
+      pending.push(text);
+      size += text.length;
+      if (size >= STREAM_BUFFER) flush();
     },
     close: async () => {
       if (closed) return;
       closed = true;
-      await fh.close();
+      try {
+        flush();
+      } finally {
+        await fh.close();
+      }
     },
   };
 }
@@ -332,6 +377,8 @@ function closeOnce(fh: FileHandle): StagedStream {
  */
 export class OutputStaging {
   private readonly files = new Set<string>();
+  /** Files hard-linked from the previous OUT (already durable there: no fsync needed). */
+  private readonly linked = new Set<string>();
   private readonly dirs: Set<string>;
   private constructor(
     readonly out: string,
@@ -368,16 +415,61 @@ export class OutputStaging {
   }
 
   async write(rel: string, data: string | Uint8Array): Promise<void> {
-    const fh = await open(await this.target(rel), 'wx');
+    // Synchronous: a small file costs less than the thread-pool round trips of open, write and close.
+    writeFileSync(await this.target(rel), data, { flag: 'wx' });
+  }
+
+  /**
+   * Stages `rel` with content `data`: when the previous OUT holds exactly these bytes under the same name
+   * (a rebuild that changed nothing there), that file is hard-linked instead of written — the bytes are
+   * compared, never assumed — so it needs no new write and no new fsync. Otherwise as `write`.
+   */
+  async writeOrReuse(rel: string, data: string): Promise<void> {
+    const target = await this.target(rel);
+    const previous = safeJoin(siblings(this.out).abs, rel);
     try {
-      await fh.writeFile(data);
-    } finally {
-      await fh.close();
+      const st = lstatSync(previous, { throwIfNoEntry: false });
+      if (st?.isFile() && st.size === Buffer.byteLength(data, 'utf8') && readFileSync(previous).equals(Buffer.from(data, 'utf8'))) {
+        linkSync(previous, target);
+        this.linked.add(rel);
+        return;
+      }
+    } catch {
+      // No previous file, another file system, links refused: write it.
+    }
+    writeFileSync(target, data, { flag: 'wx' });
+  }
+
+  /**
+   * After `rel` is completely staged: when the previous OUT holds the same bytes under that name, the
+   * staged copy is replaced by a hard link to it (already durable there, so publishing needs no fsync of
+   * it). The files are compared in full, in chunks.
+   */
+  async reuseIfSame(rel: string): Promise<void> {
+    if (!this.files.has(rel) || this.linked.has(rel)) return;
+    const target = safeJoin(this.dir, rel);
+    const previous = safeJoin(siblings(this.out).abs, rel);
+    try {
+      const a = lstatSync(previous, { throwIfNoEntry: false });
+      if (!a?.isFile() || a.size !== lstatSync(target).size || !sameBytes(previous, target)) return;
+      const aside = `${target}.qforge-replaced`;
+      renameSync(target, aside);
+      try {
+        linkSync(previous, target);
+      } catch {
+        renameSync(aside, target);
+        return;
+      }
+      rmSync(aside, { force: true });
+      this.linked.add(rel);
+    } catch {
+      // Keep the staged copy.
     }
   }
 
   /** Removes a staged file again (a species that failed after its table was staged). */
   async remove(rel: string): Promise<void> {
+    this.linked.delete(rel);
     if (!this.files.delete(rel)) return;
     await rm(safeJoin(this.dir, rel), { force: true });
   }
@@ -411,7 +503,7 @@ export class OutputStaging {
       } finally {
         await fh.close();
       }
-      const all = [...this.files].map((rel) => safeJoin(this.dir, rel));
+      const all = [...this.files].filter((rel) => !this.linked.has(rel)).map((rel) => safeJoin(this.dir, rel));
       all.push(markerFile);
       await forEachBounded(all, FILE_CONCURRENCY, async (file) => {
         const h = await open(file, 'r+');
@@ -431,7 +523,7 @@ export class OutputStaging {
       await hooks.midSwap?.();
       await rename(this.dir, s.abs);
       await fsyncDir(s.parent);
-      if (hadOld) await rm(s.old, { recursive: true, force: true });
+      if (hadOld) rmSync(s.old, { recursive: true, force: true });
       return { replaced: hadOld };
     } catch (err) {
       await this.discard();

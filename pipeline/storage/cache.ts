@@ -10,10 +10,16 @@
  * over a re-canonicalised parse — so a hit costs one hash and one JSON.parse. Writes go through a temp file
  * and a rename.
  *
+ * The no-change fast path adds two kinds keyed by the sha256 of a species file's bytes and the build context
+ * (see runner.ts `fileContextHash`): 'file' (the load and validation findings of the file) and 'result'
+ * (one species' rendered outputs), so a rebuild with nothing changed neither parses YAML nor validates
+ * nor re-hashes normalised input.
+ *
  * Which entries a database uses is recorded per database (cache-uses.ts), so `qforge cache prune` can drop
  * the entries no database sharing the folder still uses.
  */
-import { mkdir, readFile } from 'node:fs/promises';
+import { readFileSync } from 'node:fs';
+import { mkdir } from 'node:fs/promises';
 import path from 'node:path';
 import { describeFsError, writeFileAtomic } from './atomic-write.js';
 import { canonicalCopy, canonicalJson, sha256Hex } from './hash.js';
@@ -22,8 +28,13 @@ export const CACHE_FORMAT = 'qforge-cache/2';
 /** Name of the default cache folder, created inside the database folder (discovery skips dot-folders). */
 export const CACHE_DIR_NAME = '.qforge-cache';
 
-export type CacheKind = 'samples' | 'fit' | 'table';
-export const CACHE_KINDS: readonly CacheKind[] = ['samples', 'fit', 'table'];
+/**
+ * Stage results (samples, fit, table), and the two entries of the no-change fast path (stages/cached-load.ts):
+ * 'file' holds what loading and validating a species file found, 'result' what emitting and summarising one
+ * of its species needs (rendered output text, diagnostics, fit metrics).
+ */
+export type CacheKind = 'samples' | 'fit' | 'table' | 'file' | 'result';
+export const CACHE_KINDS: readonly CacheKind[] = ['samples', 'fit', 'table', 'file', 'result'];
 export type CacheOutcome = 'hit' | 'miss' | 'corrupt' | 'off';
 
 export interface CacheLookup<T> {
@@ -63,19 +74,13 @@ export class StageCache {
     const file = cacheEntryPath(this.dir, kind, key);
     let bytes: Buffer;
     try {
-      bytes = await readFile(file);
+      // Synchronous: an entry is small, and a hit should cost a read, not thread-pool round trips.
+      bytes = readFileSync(file);
     } catch {
       return { outcome: 'miss' };
     }
-    const eol = bytes.indexOf(NEWLINE);
-    const header = (eol < 0 ? bytes : bytes.subarray(0, eol)).toString('latin1').split(' ');
-    if (eol < 0 || header.length !== 4) return { outcome: 'corrupt', reason: 'no entry header' };
-    const [format, entryKind, entryKey, checksum] = header as [string, string, string, string];
-    if (format !== CACHE_FORMAT) return { outcome: 'corrupt', reason: `foreign format ${JSON.stringify(format.slice(0, 40))}` };
-    if (entryKind !== kind) return { outcome: 'corrupt', reason: `entry of kind ${JSON.stringify(entryKind.slice(0, 40))}` };
-    if (entryKey !== key) return { outcome: 'corrupt', reason: 'entry holds a different key' };
-    const payload = bytes.subarray(eol + 1);
-    if (sha256Hex(payload) !== checksum) return { outcome: 'corrupt', reason: 'checksum mismatch' };
+    const payload = checkedPayload(bytes, kind, key);
+    if (typeof payload === 'string') return { outcome: 'corrupt', reason: payload };
     try {
       return { outcome: 'hit', value: JSON.parse(payload.toString('utf8')) as T };
     } catch {
@@ -84,13 +89,49 @@ export class StageCache {
   }
 
   async put(kind: CacheKind, key: string, payload: unknown): Promise<void> {
+    await this.putText(kind, key, canonicalJson(payload));
+  }
+
+  /**
+   * The payload text of an entry, checked like `get` but not parsed (for kinds with their own JSON
+   * encoding, see storage/fast-entries.ts).
+   */
+  async getText(kind: CacheKind, key: string): Promise<CacheLookup<string>> {
+    if (!this.dir) return { outcome: 'off' };
+    let bytes: Buffer;
+    try {
+      bytes = readFileSync(cacheEntryPath(this.dir, kind, key));
+    } catch {
+      return { outcome: 'miss' };
+    }
+    const payload = checkedPayload(bytes, kind, key);
+    if (typeof payload === 'string') return { outcome: 'corrupt', reason: payload };
+    return { outcome: 'hit', value: payload.toString('utf8') };
+  }
+
+  /** Stores an entry whose payload is the given text (see `getText`). */
+  async putText(kind: CacheKind, key: string, text: string): Promise<void> {
     if (!this.dir) return;
     const file = cacheEntryPath(this.dir, kind, key);
     await mkdir(path.dirname(file), { recursive: true });
-    const body = Buffer.from(canonicalJson(payload), 'utf8');
+    const body = Buffer.from(text, 'utf8');
     const header = Buffer.from(`${CACHE_FORMAT} ${kind} ${key} ${sha256Hex(body)}\n`, 'latin1');
     await writeFileAtomic(file, Buffer.concat([header, body]), { sync: false });
   }
+}
+
+/** The payload bytes of an entry whose header and checksum are right, else why the entry is rejected. */
+function checkedPayload(bytes: Buffer, kind: CacheKind, key: string): Buffer | string {
+  const eol = bytes.indexOf(NEWLINE);
+  const header = (eol < 0 ? bytes : bytes.subarray(0, eol)).toString('latin1').split(' ');
+  if (eol < 0 || header.length !== 4) return 'no entry header';
+  const [format, entryKind, entryKey, checksum] = header as [string, string, string, string];
+  if (format !== CACHE_FORMAT) return `foreign format ${JSON.stringify(format.slice(0, 40))}`;
+  if (entryKind !== kind) return `entry of kind ${JSON.stringify(entryKind.slice(0, 40))}`;
+  if (entryKey !== key) return 'entry holds a different key';
+  const payload = bytes.subarray(eol + 1);
+  if (sha256Hex(payload) !== checksum) return 'checksum mismatch';
+  return payload;
 }
 
 /**

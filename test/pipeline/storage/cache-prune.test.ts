@@ -8,6 +8,7 @@ import { cp, mkdtemp, readdir, readFile, rm, stat, writeFile } from 'node:fs/pro
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { CACHE_KINDS } from '../../../pipeline/storage/cache.js';
 import { FIXTURE_DB, runCli } from '../helpers.js';
 
 let root: string;
@@ -22,7 +23,7 @@ afterEach(async () => {
 
 async function entries(cacheDir: string): Promise<string[]> {
   const out: string[] = [];
-  for (const kind of ['samples', 'fit', 'table']) {
+  for (const kind of CACHE_KINDS) {
     const k = path.join(cacheDir, kind);
     for (const sub of await readdir(k).catch(() => [])) for (const f of await readdir(path.join(k, sub))) out.push(`${kind}/${f}`);
   }

@@ -1,0 +1,56 @@
+/**
+ * A scratch file that holds values the build needs again later (the validated species, between the check of
+ * every file and their turn to be built in name order), so the memory of a build does not grow with the
+ * number of species: each value is written once with v8.serialize (structured clone: doubles bit for bit)
+ * and read back by its offset. The file lives in the operating system's temporary folder and is removed by
+ * `close`.
+ */
+import { mkdtemp, open, rm, type FileHandle } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { deserialize, serialize } from 'node:v8';
+
+/** Where a value lies in the spill file. */
+export interface SpillRef {
+  offset: number;
+  length: number;
+}
+
+export class SpillFile {
+  private end = 0;
+  private closed = false;
+
+  private constructor(
+    private readonly dir: string,
+    private readonly fh: FileHandle,
+  ) {}
+
+  static async open(): Promise<SpillFile> {
+    const dir = await mkdtemp(path.join(tmpdir(), 'qforge-spill-'));
+    return new SpillFile(dir, await open(path.join(dir, 'values'), 'w+'));
+  }
+
+  /** Stores a value; concurrent calls are safe (each reserves its own range before writing). */
+  async put(value: unknown): Promise<SpillRef> {
+    const bytes = serialize(value);
+    const ref = { offset: this.end, length: bytes.length };
+    this.end += bytes.length;
+    await this.fh.write(bytes, 0, bytes.length, ref.offset);
+    return ref;
+  }
+
+  async get<T>(ref: SpillRef): Promise<T> {
+    const buf = Buffer.allocUnsafe(ref.length);
+    const { bytesRead } = await this.fh.read(buf, 0, ref.length, ref.offset);
+    if (bytesRead !== ref.length) throw new Error(`spill file: read ${bytesRead} of ${ref.length} bytes at ${ref.offset}`);
+    return deserialize(buf) as T;
+  }
+
+  /** Closes and deletes the file (idempotent). */
+  async close(): Promise<void> {
+    if (this.closed) return;
+    this.closed = true;
+    await this.fh.close().catch(() => {});
+    await rm(this.dir, { recursive: true, force: true });
+  }
+}

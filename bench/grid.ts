@@ -93,10 +93,10 @@ async function prepare(count: number, seed: number): Promise<Prepared[]> {
     await writeSyntheticDatabase(dir, count, seed);
     const check = await checkDatabase({ dir });
     return check.species.map((v) => {
-      const plan = planSpecies(v.species, check.settings);
+      const plan = planSpecies(v.species!, check.settings);
       return {
         name: v.name,
-        computed: computeSamples(v.species, plan.physics, plan.sampleTemperatures, plan.zoneTemperatures),
+        computed: computeSamples(v.species!, plan.physics, plan.sampleTemperatures, plan.zoneTemperatures),
         options: fitOptionsFor(plan.fitOptions),
       };
     });

@@ -219,8 +219,8 @@ describe('the study: every candidate node set against the fit from all 10 K poin
   await writeSyntheticDatabase(dir, 40, STUDY_SEED);
   const check = await checkDatabase({ dir });
   const prepared: Array<{ name: string; samples: FitSample[]; anchor: FitSample; options: FitStageOptions }> = check.species.map((v) => {
-    const plan = planSpecies(v.species, check.settings);
-    const c = computeSamples(v.species, plan.physics, plan.sampleTemperatures, plan.zoneTemperatures);
+    const plan = planSpecies(v.species!, check.settings);
+    const c = computeSamples(v.species!, plan.physics, plan.sampleTemperatures, plan.zoneTemperatures);
     return { name: v.name, samples: c.samples, anchor: c.anchor, options: fitOptionsFor(plan.fitOptions) };
   });
   for (const [name, m] of [

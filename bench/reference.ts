@@ -4,7 +4,7 @@
  *   read each species file → partition functions on the 10 K grid 200–6000 K (direct sums, typed arrays)
  *   → constrained two-range least-squares NASA-7 fit (KKT normal equations, Gaussian elimination)
  *   → one line per species (name and the 14 coefficients).
- * It reads only what bench/synthetic.ts writes (bare numbers in cm⁻¹ and amu·Å², kJ/mol at 298.15 K) and
+ * It reads only what bench/synthetic.ts writes (numbers in cm⁻¹ and amu·Å², bare or as {value, unit}; kJ/mol at 298.15 K) and
  * is not part of qforge. Physics as in McQuarrie, Statistical Mechanics (1976): Sackur–Tetrode
  * translation, rigid rotors (classical nonlinear, direct-sum linear), harmonic oscillators, electronic and
  * rovibronic level sums, and hindered rotors by Sturm-sequence bisection of the free-rotor-basis matrix.
@@ -179,8 +179,11 @@ function properties(doc: Doc, T: Float64Array): Moments {
       m.varU[t]! += (dg * x * x * e) / ((1 - e) * (1 - e));
     }
   }
-  for (const r of list<{ barrier: number; foldedness: number; symmetry_number: number; moment_of_inertia: number }>(doc.internal_rotors)) {
-    const e = hinderedRotorEnergies(r.barrier, r.foldedness, B_FROM_INERTIA / r.moment_of_inertia);
+  // The generator writes the rotor quantities with their units ({value, unit: cm-1 / amu*angstrom^2}).
+  const valueOf = (x: number | { value: number }) => (typeof x === 'number' ? x : x.value);
+  type Quantity = number | { value: number };
+  for (const r of list<{ barrier: Quantity; foldedness: number; symmetry_number: number; moment_of_inertia: Quantity }>(doc.internal_rotors)) {
+    const e = hinderedRotorEnergies(valueOf(r.barrier), r.foldedness, B_FROM_INERTIA / valueOf(r.moment_of_inertia));
     addLevelSum(m, T, shiftedKelvin(e), new Float64Array(e.length).fill(1 / r.symmetry_number));
   }
   return m;

@@ -130,9 +130,14 @@ async function benchSize(work: string, n: number, seed: number, jobs: string[], 
   if (reference) {
     const c0 = process.cpuUsage();
     const t0 = performance.now();
-    await runReference(dir, path.join(work, `reference-${n}.txt`));
+    const refOut = path.join(work, `reference-${n}.txt`);
+    await runReference(dir, refOut);
     const wallS = (performance.now() - t0) / 1000;
     const c = process.cpuUsage(c0);
+    // A reference that silently skipped work (e.g. an input form it cannot read gives NaN) would flatter
+    // the ratio: refuse to report it.
+    const refText = await readFile(refOut, 'utf8');
+    if (/NaN|Infinity/.test(refText)) throw new Error(`the reference implementation produced non-finite coefficients (${refOut}); the ratio would be meaningless`);
     ref = { wallS, cpuS: (c.user + c.system) / 1e6, speciesPerS: n / wallS };
   }
   await rm(out, { recursive: true, force: true });

@@ -72,16 +72,17 @@ function rowLimits(p: PreparedSamples, split: RangeSplit): Float64Array {
   return out;
 }
 
+/**
+ * The quotients evaluate.ts forms at every T (H/RT: a_k/k; S/R: a_k/(k−1)), formed once per range: the same
+ * doubles, so the prepared path stays bit-identical to evaluate.ts.
+ */
+function hornerQuotients(c: Readonly<Coefficients7>) {
+  return { h2: c[1] / 2, h3: c[2] / 3, h4: c[3] / 4, h5: c[4] / 5, s3: c[2] / 2, s4: c[3] / 3, s5: c[4] / 4 };
+}
+
 function worstOfRange(c: Readonly<Coefficients7>, p: PreparedSamples, from: number, to: number, worst: number): number {
   const [a1, a2, a3, a4, a5, a6, a7] = c;
-  // The quotients evaluate.ts forms at every T, formed once: the same doubles.
-  const h2 = a2 / 2;
-  const h3 = a3 / 3;
-  const h4 = a4 / 4;
-  const h5 = a5 / 5;
-  const s3 = a3 / 2;
-  const s4 = a4 / 3;
-  const s5 = a5 / 4;
+  const { h2, h3, h4, h5, s3, s4, s5 } = hornerQuotients(c);
   for (let i = from; i < to; i++) {
     const T = p.T[i]!;
     const cpR = a1 + T * (a2 + T * (a3 + T * (a4 + T * a5)));
@@ -180,13 +181,7 @@ function solverOf(p: PreparedSamples, fit: PreparedFit, options: FitOptions): Un
 /** metrics.ts `rangeMetrics` of samples [from, to), same arithmetic (evaluate.ts's Horner forms). */
 function rangeMetricsPrepared(c: Readonly<Coefficients7>, p: PreparedSamples, from: number, to: number): RangeMetrics {
   const [a1, a2, a3, a4, a5, a6, a7] = c;
-  const h2 = a2 / 2;
-  const h3 = a3 / 3;
-  const h4 = a4 / 4;
-  const h5 = a5 / 5;
-  const s3 = a3 / 2;
-  const s4 = a4 / 3;
-  const s5 = a5 / 4;
+  const { h2, h3, h4, h5, s3, s4, s5 } = hornerQuotients(c);
   let mc = 0, mh = 0, ms = 0, qc = 0, qh = 0, qs = 0, tc = NaN, th = NaN, ts = NaN; // prettier-ignore
   for (let i = from; i < to; i++) {
     const T = p.T[i]!;

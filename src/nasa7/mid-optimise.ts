@@ -51,6 +51,35 @@ function ratioOf(result: Pick<FitResult, 'polynomial'>, samples: readonly FitSam
 /** Ascending by score (a stable sort keeps ascending tMid on ties); Infinity ties with Infinity. */
 const byScore = (a: { score: number }, b: { score: number }) => (a.score < b.score ? -1 : a.score > b.score ? 1 : 0);
 
+/**
+ * The minimax refinement of both searches: the candidate nearest the fixed tMid first, then the
+ * MINIMAX_CANDIDATES − 1 best-ranked in ascending tMid; a later candidate must beat the best so far by more
+ * than rounding noise (an atom's exact fit scores ~1e-12 everywhere and keeps the fixed midpoint), and its
+ * minimax fit may stop as soon as it has proved it cannot (the cutoff; exact pruning, see minimaxReduced).
+ * Candidates that cannot be fitted (a FitError, or undefined from `fitAt`) are skipped.
+ */
+function refineBest<F>(
+  scored: ReadonlyArray<{ tMid: number }>,
+  ranked: ReadonlyArray<{ tMid: number }>,
+  fixedMid: number,
+  fitAt: (tMid: number, cutoff: number) => { fit: F; score: number } | undefined,
+): F | undefined {
+  let refined: { fit: F; score: number } | undefined;
+  const nearestFixed = [...scored].sort((a, b) => Math.abs(a.tMid - fixedMid) - Math.abs(b.tMid - fixedMid))[0]!;
+  const chosen = new Set([nearestFixed.tMid, ...ranked.slice(0, MINIMAX_CANDIDATES - 1).map((c) => c.tMid)]);
+  const order = [nearestFixed.tMid, ...[...chosen].filter((t) => t !== nearestFixed.tMid).sort((a, b) => a - b)];
+  for (const tMid of order) {
+    try {
+      const cutoff = refined ? refined.score * (1 - 1e-6) - 1e-9 : Infinity;
+      const r = fitAt(tMid, cutoff);
+      if (r && (!refined || r.score < refined.score * (1 - 1e-6) - 1e-9)) refined = r;
+    } catch (e) {
+      if (!(e instanceof FitError)) throw e;
+    }
+  }
+  return refined?.fit;
+}
+
 export function optimiseMid(samples: readonly FitSample[], anchor: FitSample, options: FitOptions): FitResult {
   const range = options.optimiseMid;
   const temperatures = temperatureKey(samples);
@@ -100,25 +129,10 @@ export function optimiseMidGeneral(samples: readonly FitSample[], anchor: FitSam
   const ranked = [...scored].sort((a, b) => a.score - b.score);
   let best: UnmeasuredFit | undefined;
   if (minimax) {
-    let refined: { fit: UnmeasuredFit; score: number } | undefined;
-    const nearestFixed = [...scored].sort((a, b) => Math.abs(a.tMid - options.tMid) - Math.abs(b.tMid - options.tMid))[0]!;
-    const chosen = new Set([nearestFixed.tMid, ...ranked.slice(0, MINIMAX_CANDIDATES - 1).map((c) => c.tMid)]);
-    // The fixed midpoint first; another candidate must beat it by more than rounding noise (an atom's exact
-    // fit scores ~1e-12 everywhere and keeps the fixed midpoint).
-    const order = [nearestFixed.tMid, ...[...chosen].filter((t) => t !== nearestFixed.tMid).sort((a, b) => a - b)];
-    for (const tMid of order) {
-      try {
-        // A candidate must beat the best so far by the margin below; the minimax fit may stop as soon as
-        // it has proved it cannot (exact pruning, see minimaxReduced).
-        const cutoff = refined ? refined.score * (1 - 1e-6) - 1e-9 : Infinity;
-        const fit = fitWithoutMetrics(samples, anchor, { ...options, tMid }, temperatures, cutoff);
-        const score = fit.solver.worstLimitRatio ?? ratioOf({ polynomial: fit.polynomial }, samples, options);
-        if (!refined || score < refined.score * (1 - 1e-6) - 1e-9) refined = { fit, score };
-      } catch (e) {
-        if (!(e instanceof FitError)) throw e;
-      }
-    }
-    best = refined?.fit;
+    best = refineBest(scored, ranked, options.tMid, (tMid, cutoff) => {
+      const fit = fitWithoutMetrics(samples, anchor, { ...options, tMid }, temperatures, cutoff);
+      return { fit, score: fit.solver.worstLimitRatio ?? ratioOf({ polynomial: fit.polynomial }, samples, options) };
+    });
   }
   best ??= fitWithoutMetrics(samples, anchor, { ...options, tMid: ranked[0]!.tMid, method: 'least-squares' }, temperatures);
   const result = withMetrics(best, anchor);
@@ -167,23 +181,11 @@ function optimisePrepared(p: PreparedSamples, options: FitOptions, range: NonNul
   const ranked = [...scored].sort(byScore);
   let best: PreparedFit | undefined;
   if (minimax) {
-    let refined: { fit: PreparedFit; score: number } | undefined;
-    const nearestFixed = [...scored].sort((a, b) => Math.abs(a.tMid - options.tMid) - Math.abs(b.tMid - options.tMid))[0]!;
-    const chosen = new Set([nearestFixed.tMid, ...ranked.slice(0, MINIMAX_CANDIDATES - 1).map((c) => c.tMid)]);
-    const order = [nearestFixed.tMid, ...[...chosen].filter((t) => t !== nearestFixed.tMid).sort((a, b) => a - b)];
-    for (const tMid of order) {
-      try {
-        const cutoff = refined ? refined.score * (1 - 1e-6) - 1e-9 : Infinity;
-        const fit = fitPrepared(p, { ...options, tMid }, temperatures, cutoff);
-        // A split the coverage rules refuse: the general fit would throw a FitError, skipped alike.
-        if (!fit) continue;
-        const score = fit.worst!;
-        if (!refined || score < refined.score * (1 - 1e-6) - 1e-9) refined = { fit, score };
-      } catch (e) {
-        if (!(e instanceof FitError)) throw e;
-      }
-    }
-    if (refined) best = refined.fit;
+    best = refineBest(scored, ranked, options.tMid, (tMid, cutoff) => {
+      const fit = fitPrepared(p, { ...options, tMid }, temperatures, cutoff);
+      // A split the coverage rules refuse: the general fit would throw a FitError, skipped alike.
+      return fit ? { fit, score: fit.worst! } : undefined;
+    });
   }
   let result: FitResult;
   if (best) result = measuredOf(p, best, options);

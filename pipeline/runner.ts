@@ -845,6 +845,7 @@ async function buildChecked(
       cacheDir,
       codeFingerprint: codeFingerprint(),
       ...(opts.uncertaintySamples !== undefined ? { uncertaintySamples: opts.uncertaintySamples } : {}),
+      keepSamples: reportWriter !== undefined,
     },
     inline: (v) => buildOneSpecies(v, settings, cache, check, opts.uncertaintySamples !== undefined ? { uncertaintySamples: opts.uncertaintySamples } : {}),
     cheap: (batch) => allCached(cacheDir, batch, settings),

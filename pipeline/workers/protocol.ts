@@ -24,6 +24,12 @@ export interface WorkerInit {
   testCrashOn?: string;
   /** Monte Carlo samples of the uncertainty check (build --uncertainty-samples). */
   uncertaintySamples?: number;
+  /**
+   * Whether the main thread needs each species' computed sample points (only the HTML report draws them).
+   * Without it the worker drops them from the reply: they are about 60 % of a reply's bytes, and copying
+   * them between threads and holding them until emit costs time and memory for nothing.
+   */
+  keepSamples?: boolean;
 }
 
 export interface BatchRequest {

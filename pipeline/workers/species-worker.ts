@@ -27,7 +27,9 @@ parentPort!.on('message', (req: BatchRequest) => {
       const outcomes = [];
       for (const v of req.species) {
         if (init.testCrashOn !== undefined && v.name === init.testCrashOn) process.exit(70);
-        outcomes.push(await buildOneSpecies(v, init.settings, cache, limits, uncertaintyOptions));
+        const o = await buildOneSpecies(v, init.settings, cache, limits, uncertaintyOptions);
+        if (o.built && init.keepSamples !== true) o.built.computed = { ...o.built.computed, samples: [], extrapolationSamples: [] };
+        outcomes.push(o);
       }
       reply = { id: req.id, outcomes };
       if (cache.writeProblem !== undefined) reply.cacheWriteProblem = cache.writeProblem;

@@ -24,7 +24,7 @@ afterAll(async () => {
 });
 
 /** A two-worker pool over the fixture database (no cache); `extra` goes into the workers' init. */
-async function fixturePool(extra: { testCrashOn?: string }) {
+async function fixturePool(extra: { testCrashOn?: string; keepSamples?: boolean }) {
   const check = await checkDatabase({ dir: path.join(root, 'fx') });
   const cache = new StageCache(undefined);
   const pool = createSpeciesPool({
@@ -74,8 +74,31 @@ describe('worker pool', () => {
     }
   }, 120_000);
 
+  it('with the report, the sample points come back from the workers: report.html is the same for --jobs 1 and 2', async () => {
+    const pages: Array<Awaited<ReturnType<typeof deterministicOutputs>>> = [];
+    for (const jobs of ['1', '2']) {
+      const r = await runCli(['build', 'demo', '--out', `demo-report-${jobs}`, '--no-cache', '--jobs', jobs, '--quiet', '--report'], root);
+      expect(r.code, r.stderr).toBe(0);
+      pages.push(await deterministicOutputs(path.join(root, `demo-report-${jobs}`)));
+    }
+    expect(pages[0]!.has('report.html')).toBe(true);
+    expect(pages[1]).toEqual(pages[0]);
+  }, 240_000);
+
+  it('without the report, a worker drops the sample points from its reply (the outputs above do not need them)', async () => {
+    const { check, pool } = await fixturePool({});
+    try {
+      const [o] = await pool.run([check.species[0]!]);
+      expect(o!.built).toBeDefined();
+      expect(o!.built!.computed.samples).toEqual([]);
+      expect(o!.built!.fit.polynomial.tMid).toBeGreaterThan(0);
+    } finally {
+      await pool.close();
+    }
+  }, 120_000);
+
   it('a species built in a worker carries the extrapolation-zone points the verify stage checked, as inline', async () => {
-    const { check, cache, pool } = await fixturePool({});
+    const { check, cache, pool } = await fixturePool({ keepSamples: true });
     try {
       const results = (await Promise.all(check.species.map((v) => pool.run([v])))).flat();
       for (const [i, o] of results.entries()) {

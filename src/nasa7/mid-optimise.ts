@@ -52,6 +52,35 @@ function ratioOf(result: Pick<FitResult, 'polynomial'>, samples: readonly FitSam
 const byScore = (a: { score: number }, b: { score: number }) => (a.score < b.score ? -1 : a.score > b.score ? 1 : 0);
 
 /**
+ * Visits every candidate tMid = min, min + step, … ≤ max with least-squares options at it; a candidate whose
+ * visit throws a FitError is skipped. Throws when no candidate was scored (naming the first failure).
+ * Returns the number of candidates tried.
+ */
+function scanCandidates(
+  range: NonNullable<FitOptions['optimiseMid']>,
+  options: FitOptions,
+  scored: ReadonlyArray<unknown>,
+  visit: (tMid: number, at: FitOptions) => void,
+): number {
+  let firstError: unknown;
+  const count = Math.floor((range.max - range.min) / range.step + 1e-9) + 1;
+  for (let i = 0; i < count; i++) {
+    const tMid = range.min + i * range.step;
+    try {
+      visit(tMid, { ...options, tMid, method: 'least-squares' as const });
+    } catch (e) {
+      if (!(e instanceof FitError)) throw e;
+      firstError ??= e;
+    }
+  }
+  if (!scored.length) {
+    const why = firstError instanceof FitError ? firstError.message : String(firstError);
+    throw new FitError(`no midpoint in [${range.min}, ${range.max}] K could be fitted; first failure: ${why}`);
+  }
+  return count;
+}
+
+/**
  * The minimax refinement of both searches: the candidate nearest the fixed tMid first, then the
  * MINIMAX_CANDIDATES − 1 best-ranked in ascending tMid; a later candidate must beat the best so far by more
  * than rounding noise (an atom's exact fit scores ~1e-12 everywhere and keeps the fixed midpoint), and its
@@ -102,29 +131,14 @@ export function optimiseMidGeneral(samples: readonly FitSample[], anchor: FitSam
   // (unusual) options from the finished least-squares polynomial as the check would.
   const cheap = !minimax || (w.cp > 0 && w.h > 0 && w.s > 0);
   const scored: Array<{ tMid: number; score: number }> = [];
-  let firstError: unknown;
-  let tried = 0;
-  const count = Math.floor((range.max - range.min) / range.step + 1e-9) + 1;
-  for (let i = 0; i < count; i++) {
-    const tMid = range.min + i * range.step;
-    tried++;
-    try {
-      const at = { ...options, tMid, method: 'least-squares' as const };
-      let score: number;
-      if (cheap) {
-        const s = leastSquaresScore(samples, anchor, at, temperatures);
-        score = minimax ? s.limitRatio : s.weighted;
-      } else score = ratioOf(fitAtFixedMid(samples, anchor, at, temperatures), samples, options);
-      scored.push({ tMid, score });
-    } catch (e) {
-      if (!(e instanceof FitError)) throw e;
-      firstError ??= e;
-    }
-  }
-  if (!scored.length) {
-    const why = firstError instanceof FitError ? firstError.message : String(firstError);
-    throw new FitError(`no midpoint in [${range.min}, ${range.max}] K could be fitted; first failure: ${why}`);
-  }
+  const tried = scanCandidates(range, options, scored, (tMid, at) => {
+    let score: number;
+    if (cheap) {
+      const s = leastSquaresScore(samples, anchor, at, temperatures);
+      score = minimax ? s.limitRatio : s.weighted;
+    } else score = ratioOf(fitAtFixedMid(samples, anchor, at, temperatures), samples, options);
+    scored.push({ tMid, score });
+  });
   // Stable sort: equal scores keep ascending tMid.
   const ranked = [...scored].sort((a, b) => a.score - b.score);
   let best: UnmeasuredFit | undefined;
@@ -150,33 +164,18 @@ function optimisePrepared(p: PreparedSamples, options: FitOptions, range: NonNul
   const minimax = options.method === 'minimax';
   const scored: Array<{ tMid: number; score: number }> = [];
   const entries: RankEntry[] = [];
-  let firstError: unknown;
-  let tried = 0;
-  const count = Math.floor((range.max - range.min) / range.step + 1e-9) + 1;
-  for (let i = 0; i < count; i++) {
-    const tMid = range.min + i * range.step;
-    tried++;
-    try {
-      const at = { ...options, tMid, method: 'least-squares' as const };
-      const split = splitAt(p, at);
-      if (!split) {
-        // The general scoring reports why (it throws the FitError of samples.ts).
-        const s = leastSquaresScore(samples, anchor, at, temperatures);
-        scored.push({ tMid, score: minimax ? s.limitRatio : s.weighted });
-        continue;
-      }
-      const entry: RankEntry = { tMid, split, f: preparedFactorisation(p, at, temperatures, split), score: NaN };
-      entries.push(entry);
-      scored.push(entry);
-    } catch (e) {
-      if (!(e instanceof FitError)) throw e;
-      firstError ??= e;
+  const tried = scanCandidates(range, options, scored, (tMid, at) => {
+    const split = splitAt(p, at);
+    if (!split) {
+      // The general scoring reports why (it throws the FitError of samples.ts).
+      const s = leastSquaresScore(samples, anchor, at, temperatures);
+      scored.push({ tMid, score: minimax ? s.limitRatio : s.weighted });
+      return;
     }
-  }
-  if (!scored.length) {
-    const why = firstError instanceof FitError ? firstError.message : String(firstError);
-    throw new FitError(`no midpoint in [${range.min}, ${range.max}] K could be fitted; first failure: ${why}`);
-  }
+    const entry: RankEntry = { tMid, split, f: preparedFactorisation(p, at, temperatures, split), score: NaN };
+    entries.push(entry);
+    scored.push(entry);
+  });
   rankLeastSquares(p, entries, options, minimax ? MINIMAX_CANDIDATES - 1 : 1, minimax ? 'limitRatio' : 'weighted');
   const ranked = [...scored].sort(byScore);
   let best: PreparedFit | undefined;

@@ -234,11 +234,13 @@ function fileContextHash(p: {
   return hashParts('file-context', TOOL_NAME, TOOL_VERSION, codeFingerprint(), CONSTANTS_EDITION, p.settings, p.strict, p.dir, p.displayBase ?? null, p.limits, p.extra);
 }
 
+/** The hash a file entry records of one geometry file: of what load attaches to the document for it. */
+const geometryHash = (read: unknown): string => sha256Hex(canonicalJson(read));
+
 /** Whether every geometry file a cached file entry read still reads the same. */
 async function geometryUnchanged(file: string, geometry: FileFacts['geometry']): Promise<boolean> {
   for (const g of geometry) {
-    const now = await readNamedGeometryFile(file, file, g.name);
-    if (sha256Hex(canonicalJson(now)) !== g.hash) return false;
+    if (geometryHash(await readNamedGeometryFile(file, file, g.name)) !== g.hash) return false;
   }
   return true;
 }
@@ -353,7 +355,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     facts.settingsUsed = [...used].sort((a, b) => a - b);
     const geometry = new Map<string, string>();
     for (const doc of [...loaded.documents, ...loaded.recoveredDocuments]) {
-      for (const [name, g] of Object.entries(doc.geometryFiles ?? {})) if (!geometry.has(name)) geometry.set(name, sha256Hex(canonicalJson(g)));
+      for (const [name, g] of Object.entries(doc.geometryFiles ?? {})) if (!geometry.has(name)) geometry.set(name, geometryHash(g));
     }
     facts.geometry = [...geometry].map(([name, hash]) => ({ name, hash }));
     if (fastCache && key !== undefined) await writeEntry(fastCache, 'file', key, facts);

@@ -13,9 +13,8 @@
  * `renderNasa7` of the whole set (tested against them).
  */
 import { createReadStream } from 'node:fs';
-import { Ajv2020 } from 'ajv/dist/2020.js';
+import type { Ajv2020 } from 'ajv/dist/2020.js';
 import databaseSchema from '../../schemas/database.schema.json' with { type: 'json' };
-import settingsSchema from '../../schemas/settings.schema.json' with { type: 'json' };
 import { formatNasa7Record } from '../../src/nasa7/format.js';
 import { markPartialNasa7, type PartialMark } from './partial.js';
 import type { OutputStaging, StagedStream } from '../storage/atomic-write.js';
@@ -26,6 +25,7 @@ import { speciesFileStem } from './emit.js';
 import {
   databaseJson,
   jsonText,
+  outputAjv,
   nasa7Record,
   OutputSchemaError,
   renderNasa7,
@@ -39,9 +39,7 @@ import {
 let speciesValidator: ReturnType<Ajv2020['compile']> | undefined;
 function validateSpeciesRecord(record: unknown): void {
   if (!speciesValidator) {
-    // Our own fixed schemas (checked against the meta-schema by test/pipeline/fast-rebuild.test.ts).
-    const ajv = new Ajv2020({ allErrors: true, strict: false, validateSchema: false });
-    ajv.addSchema(settingsSchema);
+    const ajv = outputAjv();
     ajv.addSchema(databaseSchema);
     speciesValidator = ajv.getSchema(`${databaseSchema.$id}#/$defs/species`)!;
   }

@@ -186,26 +186,18 @@ export function databaseJson(species: readonly BuiltSpecies[], settings: Databas
   };
 }
 
-// Each compiled on first use (a no-change rebuild validates only its summary).
-let databaseValidator: ReturnType<Ajv2020['compile']> | undefined;
-let summaryValidator: ReturnType<Ajv2020['compile']> | undefined;
-function outputAjv(): Ajv2020 {
-  // Our own fixed schemas: checking them against the meta-schema on every run would cost more than the
-  // validation itself (test/pipeline/fast-rebuild.test.ts checks them).
+/**
+ * An Ajv instance for our own output schemas (the settings schema added, which they refer to). Our schemas
+ * are fixed: checking them against the meta-schema on every run would cost more than the validation itself
+ * (test/pipeline/fast-rebuild.test.ts checks them). Each validator is compiled on first use (a no-change
+ * rebuild validates only its summary).
+ */
+export function outputAjv(): Ajv2020 {
   const ajv = new Ajv2020({ allErrors: true, strict: false, validateSchema: false });
   ajv.addSchema(settingsSchema);
   return ajv;
 }
-function outputValidators() {
-  return {
-    get database() {
-      return (databaseValidator ??= outputAjv().compile(databaseSchema));
-    },
-    get summary() {
-      return (summaryValidator ??= outputAjv().compile(summarySchema));
-    },
-  };
-}
+let summaryValidator: ReturnType<Ajv2020['compile']> | undefined;
 
 /** Thrown when a rendered output does not match its own schema: a bug, never written to disk. */
 export class OutputSchemaError extends Error {
@@ -231,13 +223,8 @@ export function validateDatabaseEnvelope(value: unknown): void {
   if (!envelopeValidator(value)) throw new OutputSchemaError('thermo.json', envelopeValidator.errors);
 }
 
-export function validateDatabaseJson(value: unknown): void {
-  const v = outputValidators().database;
-  if (!v(value)) throw new OutputSchemaError('thermo.json', v.errors);
-}
-
 export function validateSummaryJson(value: unknown): void {
-  const v = outputValidators().summary;
+  const v = (summaryValidator ??= outputAjv().compile(summarySchema));
   if (!v(value)) throw new OutputSchemaError('summary.json', v.errors);
 }
 

@@ -969,14 +969,14 @@ export interface SpeciesSetEntry extends SpeciesValidation {
   doc: LoadedDocument;
 }
 
+export { checkUniqueNameFacts, nameFact, type NameFact } from './names.js';
+
 /**
  * Record names must be unique in a database: reports every document whose name was already used (naming
  * the first use's file and line), and warns about names that differ only in letter case, which readers of
  * the 80-column format may not distinguish. Order-independent: documents are considered sorted by file and
  * position.
  */
-export { checkUniqueNameFacts, nameFact, type NameFact } from './names.js';
-
 export function checkUniqueNames(docs: readonly LoadedDocument[]): Diagnostic[] {
   return nameFindings(docs.map(nameFact), true);
 }

@@ -20,7 +20,7 @@
  * computed. Stored through StageCache.putText/getText (header, checksum of the stored bytes).
  */
 import type { Diagnostic } from '../core/diagnostics.js';
-import type { NameFact } from '../stages/validate.js';
+import type { NameFact } from '../stages/names.js';
 import type { StageCache, CacheLookup } from './cache.js';
 
 export type Position = { line: number; column: number };

@@ -4,7 +4,7 @@
  * file system, and checks one Cp chart per species, no console errors, no network requests, the filter
  * script, and a readable layout; saves a screenshot to .ci/out/report-screenshot.png (gitignored) for a
  * person to look at. Skipped, with the reason printed, where /usr/bin/chromium is not installed (.ci/run
- * installs it).
+ * installs it). Holds no reference values: it checks the page's structure and behaviour, not numbers.
  */
 import { existsSync } from 'node:fs';
 import { mkdir, readFile } from 'node:fs/promises';

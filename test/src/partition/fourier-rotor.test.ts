@@ -2,6 +2,8 @@
  * The general Fourier torsion: band reduction against ml-matrix (a general-purpose npm library), the
  * single-cosine rotor it generalises (same levels), the phase-shift identity of a cosine plus a sine term
  * (trigonometry), and the free-rotor and harmonic limits of Pitzer & Gwinn, J. Chem. Phys. 10, 428 (1942).
+ * The rotor constants and Fourier terms are written by hand for these tests (no molecule's published
+ * values); the expected numbers come from ml-matrix and the closed-form limits above.
  */
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';

@@ -24,7 +24,8 @@ import { batchesOf, createSpeciesPool } from './workers/pool.js';
 import { LIMIT_KEYS, type PlainLimitSource } from './workers/protocol.js';
 import type { ComputedSpecies } from './stages/compute.js';
 import { compareDiagnostics, formatDiagnostic, hasErrors, type Diagnostic } from './core/diagnostics.js';
-import { byName, jsonText, validateSummaryJson, type BuiltSpecies } from './stages/emit.js';
+import { byName, type BuiltSpecies } from './stages/emit.js';
+import { SummaryEntries, type SummarySpecies } from './stages/emit-summary.js';
 import { canonicalJson, hashParts, sha256Hex } from './storage/hash.js';
 import { discoverSpeciesFiles, loadYamlBytes, loadYamlFile, readNamedGeometryFile, readYamlFileBytes, type LoadedDocument } from './stages/load.js';
 import type { SpeciesPlan } from './core/plan.js';
@@ -733,21 +734,6 @@ export type Summary = Record<string, unknown> & {
   species: SummarySpecies[];
 };
 
-interface SummarySpecies {
-  /** Absent only for a document without a usable name (then `document` tells which one it is). */
-  name?: string;
-  file: string;
-  /** 1-based position within the file; given for species that failed validation. */
-  document?: number;
-  status: 'ok' | 'failed';
-  warnings: string[];
-  errors: string[];
-  cache: Partial<Record<CacheKind, CacheOutcome>>;
-  cache_hit: boolean;
-  fit_metrics?: { max_abs_cp: number; max_abs_h: number; max_abs_s: number; t_mid: number };
-  timings_ms: Record<string, number>;
-}
-
 const ms = (x: number) => Math.round(x * 1000) / 1000;
 
 /** Runs a whole build. Writes OUT only when the build may be published (see the module comment of cli). */
@@ -829,7 +815,7 @@ async function buildChecked(
       else ownDiagnostics.set(k, [d]);
     }
   }
-  const summarySpecies: SummarySpecies[] = [];
+  const summaryEntries = new SummaryEntries();
   const speciesDiagnostics: Diagnostic[] = [];
   const warnings: string[] = [...check.cacheNotes];
   let processed = 0;
@@ -932,7 +918,7 @@ async function buildChecked(
       speciesDiagnostics.push(...o.diagnostics);
       for (const n of o.cacheNotes) warnings.push(`${o.valid.name}: ${n}`);
       const s = summaryEntry(o, ownDiagnostics.get(speciesKey(o.valid.displayFile, o.valid.name)) ?? [], tableMs);
-      summarySpecies.push(s);
+      summaryEntries.add(s);
       reportWriter?.add({
         name: o.valid.name,
         file: o.valid.file,
@@ -1005,7 +991,7 @@ async function buildChecked(
     const mark =
       status === 'partial'
         ? partialMark(
-            [...summarySpecies.filter((x) => x.status === 'failed').flatMap((x) => (x.name === undefined ? [] : [x.name])), ...shardInvalid.flatMap((e) => (e.name === undefined ? [] : [e.name]))],
+            [...summaryEntries.failedNames(), ...shardInvalid.flatMap((e) => (e.name === undefined ? [] : [e.name]))],
             [...check.failedFiles].map((f) => (opts.displayBase && path.isAbsolute(f) ? displayPath(opts.displayBase, f) : f)),
           )
         : undefined;
@@ -1022,7 +1008,7 @@ async function buildChecked(
     emitMs += performance.now() - tEmit;
 
     for (const inv of shardInvalid) {
-      summarySpecies.push({
+      summaryEntries.add({
         ...(inv.name !== undefined ? { name: inv.name } : {}),
         file: inv.file,
         document: inv.document,
@@ -1034,17 +1020,8 @@ async function buildChecked(
         timings_ms: {},
       });
     }
-    // Name order (unnamed documents last), then file and document: independent of completion order.
-    const nameKey = (x: SummarySpecies) => (x.name === undefined ? '\uffff' : x.name);
-    summarySpecies.sort(
-      (a, b) =>
-        compareText(nameKey(a), nameKey(b)) ||
-        compareText(a.file, b.file) ||
-        (a.document ?? 0) - (b.document ?? 0),
-    );
-    const failedLabels = summarySpecies
-      .filter((x) => x.status === 'failed')
-      .map((x) => x.name ?? `${x.file}#${x.document}`);
+    summaryEntries.sort();
+    const failedLabels = summaryEntries.failedLabels();
 
     // Cache problems: once per build for an unwritable cache, one line per species for rejected entries.
     if (cache.writeProblem) warnings.unshift(`cache: not writable: ${cache.dir}: ${cache.writeProblem}; every species is recomputed on each build`);
@@ -1077,13 +1054,13 @@ async function buildChecked(
         species: processed + shardInvalid.length,
         ok: good,
         failed: failedCount + shardInvalid.length,
-        cache_hits: summarySpecies.filter((s) => s.cache_hit).length,
+        cache_hits: summaryEntries.cacheHits,
         files: check.files.length,
         files_failed: check.failedFiles.size,
       },
       warnings,
       settings_diagnostics: check.diagnostics.filter((d) => path.basename(d.file) === 'qforge.yaml').map(formatDiagnostic),
-      species: summarySpecies,
+      species: [],
       files: summaryFiles,
       timings_ms: {
         load: ms(check.timings.load),
@@ -1099,16 +1076,26 @@ async function buildChecked(
     let replaced = false;
     (summary.timings_ms as Record<string, number>).total = ms(performance.now() - t0);
     if (finalStaging) {
-      validateSummaryJson(summary);
-      await finalStaging.write('summary.json', jsonText(summary));
+      const out = await finalStaging.stream('summary.json');
+      try {
+        await summaryEntries.write(out, summary);
+      } finally {
+        await out.close();
+      }
       published = true;
       replaced = (await finalStaging.publish(opts.hooks)).replaced;
+    }
+    // The species entries are parsed back only for a caller that reads them (--json, tests).
+    const summaryWithSpecies = {} as Summary;
+    for (const [k, v] of Object.entries(summary)) {
+      if (k === 'species') Object.defineProperty(summaryWithSpecies, k, { get: () => summaryEntries.species(), enumerable: true });
+      else summaryWithSpecies[k] = v;
     }
     const report: BuildReport = {
       exitCode: anyError ? 1 : 0,
       written: mayWrite,
       replaced,
-      summary,
+      summary: summaryWithSpecies,
       diagnostics: allDiagnostics,
       notes,
       warnings,

@@ -22,17 +22,33 @@ export function canonicalCopy<T>(value: T): T {
 }
 
 function sortKeys(value: unknown): unknown {
-  if (Array.isArray(value)) return value.map((v) => (v === undefined ? null : sortKeys(v)));
+  if (Array.isArray(value)) {
+    const out = new Array<unknown>(value.length);
+    for (let i = 0; i < value.length; i++) {
+      const v: unknown = value[i];
+      out[i] = v === undefined ? null : typeof v === 'number' ? (v === 0 ? 0 : v) : sortKeys(v);
+    }
+    return out;
+  }
   if (value !== null && typeof value === 'object') {
     const out: Record<string, unknown> = {};
-    for (const k of Object.keys(value as Record<string, unknown>).sort()) {
+    const keys = Object.keys(value as Record<string, unknown>);
+    // Most stage objects (a sample {T, cpR, hRT, sR}, …) are built with their keys in order already.
+    if (!inOrder(keys)) keys.sort();
+    for (const k of keys) {
       const v = (value as Record<string, unknown>)[k];
       if (v !== undefined) out[k] = sortKeys(v);
     }
     return out;
   }
-  if (typeof value === 'number' && Object.is(value, -0)) return 0;
+  if (typeof value === 'number' && value === 0) return 0; // -0 as 0
   return value;
+}
+
+/** Whether `keys` is in the order `Array.prototype.sort` would give (UTF-16 code units). */
+function inOrder(keys: readonly string[]): boolean {
+  for (let i = 1; i < keys.length; i++) if (keys[i - 1]! > keys[i]!) return false;
+  return true;
 }
 
 /** sha256 of a string or bytes, lower-case hex. */

@@ -295,38 +295,61 @@ export const TABLE_HEADERS = [
 /** Fixed decimals, never "-0.000". */
 export function fixed(x: number, decimals: number): string {
   const s = x.toFixed(decimals);
-  return /^-0\.?0*$/.test(s) ? s.slice(1) : s;
+  // Only a negative number can print as "-0.000…"; then it reads back as (negative) zero.
+  return x < 0 && Number(s) === 0 ? s.slice(1) : s;
 }
 
 /** Fitted properties in table units at T (K). */
 export function fittedProperties(poly: Nasa7Polynomial, T: number): { Cp: number; S: number; H: number; HminusH298: number; G: number } {
+  return fittedPropertiesFrom(poly, T, enthalpyAt298(poly));
+}
+
+/** H(298.15 K) of the polynomial, kJ/mol. */
+function enthalpyAt298(poly: Nasa7Polynomial): number {
+  return (evaluateNasa7(poly, T_REF).hRT * GAS_CONSTANT * T_REF) / 1000;
+}
+
+function fittedPropertiesFrom(poly: Nasa7Polynomial, T: number, H298: number): { Cp: number; S: number; H: number; HminusH298: number; G: number } {
   const R = GAS_CONSTANT;
   const v = evaluateNasa7(poly, T);
-  const ref = evaluateNasa7(poly, T_REF);
   const H = (v.hRT * R * T) / 1000;
-  const H298 = (ref.hRT * R * T_REF) / 1000;
   const S = v.sR * R;
   return { Cp: v.cpR * R, S, H, HminusH298: H - H298, G: H - (T * S) / 1000 };
 }
 
 export function tableRows(b: BuiltSpecies): string[][] {
+  const H298 = enthalpyAt298(b.fit.polynomial);
   return b.table.map((c) => {
-    const f = fittedProperties(b.fit.polynomial, c.T);
-    const triple = (computed: number, fitted: number, d: number) => [fixed(computed, d), fixed(fitted, d), fixed(fitted - computed, d)];
+    const f = fittedPropertiesFrom(b.fit.polynomial, c.T, H298);
     return [
       String(c.T),
-      ...triple(c.Cp, f.Cp, 4),
-      ...triple(c.S, f.S, 4),
-      ...triple(c.HminusH298, f.HminusH298, 5),
-      ...triple(c.H, f.H, 5),
-      ...triple(c.G, f.G, 5),
-    ];
+      fixed(c.Cp, 4), fixed(f.Cp, 4), fixed(f.Cp - c.Cp, 4),
+      fixed(c.S, 4), fixed(f.S, 4), fixed(f.S - c.S, 4),
+      fixed(c.HminusH298, 5), fixed(f.HminusH298, 5), fixed(f.HminusH298 - c.HminusH298, 5),
+      fixed(c.H, 5), fixed(f.H, 5), fixed(f.H - c.H, 5),
+      fixed(c.G, 5), fixed(f.G, 5), fixed(f.G - c.G, 5),
+    ]; // prettier-ignore
   });
 }
 
+/** A CSV cell that fast-csv would write as it stands (no quote, separator or line break in it). */
+const PLAIN_CELL = /^[^",\r\n]*$/;
+
+/**
+ * tables/<name>.csv. Its cells are decimal numbers and the fixed headers, which CSV writes unquoted, so
+ * the text is joined directly (fast-csv's stream costs ~0.4 ms per species, most of a table's emit time);
+ * a table with any cell that would need quoting goes through fast-csv (tested: the same bytes either way).
+ */
 export async function renderTable(b: BuiltSpecies): Promise<string> {
-  // Loaded on first use: a rebuild that takes every table from the cache never renders one.
+  const rows = [[...TABLE_HEADERS], ...tableRows(b)];
+  if (rows.every((r) => r.every((cell) => PLAIN_CELL.test(cell)))) return `${rows.map((r) => r.join(',')).join('\n')}\n`;
+  return csvText(rows);
+}
+
+/** CSV text of `rows` as fast-csv writes it (quoting where needed), one row per line, final newline. */
+export async function csvText(rows: readonly (readonly string[])[]): Promise<string> {
+  // Loaded on first use: most builds never need it.
   const { writeToString } = await import('fast-csv');
-  const text = await writeToString([[...TABLE_HEADERS], ...tableRows(b)], { headers: false, rowDelimiter: '\n' });
+  const text = await writeToString(rows.map((r) => [...r]), { headers: false, rowDelimiter: '\n' });
   return `${text}\n`;
 }

@@ -644,8 +644,9 @@ export async function buildOneSpecies(
     return out;
   }
   const inputHash = `sha256:${sha256Hex(canonicalJson(v.normalisedInput))}`;
-  const keys = stageKeys(inputHash, v.species, plan, fitOptions);
-  out.keys = keyList(keys, settings);
+  // Without a cache the keys address nothing (hashing the species and its grids costs ~0.3 ms).
+  const keys = cache.dir !== undefined ? stageKeys(inputHash, v.species, plan, fitOptions) : { samples: '', fit: '', table: '' };
+  if (cache.dir !== undefined) out.keys = keyList(keys, settings);
 
   // One cached stage: its result, or undefined after recording the failure (the species stops there).
   const stage = async <T>(

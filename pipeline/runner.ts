@@ -836,7 +836,13 @@ async function buildChecked(
       ...(opts.uncertaintySamples !== undefined ? { uncertaintySamples: opts.uncertaintySamples } : {}),
       keepSamples: reportWriter !== undefined,
     },
-    inline: (v) => buildOneSpecies(v, settings, cache, check, opts.uncertaintySamples !== undefined ? { uncertaintySamples: opts.uncertaintySamples } : {}),
+    inline: async (v) => {
+      const o = await buildOneSpecies(v, settings, cache, check, opts.uncertaintySamples !== undefined ? { uncertaintySamples: opts.uncertaintySamples } : {});
+      // As a worker's reply: the sample points only while the report needs them.
+      if (o.built && !reportWriter) o.built.computed = { ...o.built.computed, samples: [], extrapolationSamples: [] };
+      return o;
+    },
+    shareThisThread: true,
     cheap: (batch) => allCached(cacheDir, batch, settings),
     crashed: (v, reason) => failedOutcome(v, `internal error: ${reason} while building this species' batch; it was not built`),
   });

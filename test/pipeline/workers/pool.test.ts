@@ -24,7 +24,7 @@ afterAll(async () => {
 });
 
 /** A two-worker pool over the fixture database (no cache); `extra` goes into the workers' init. */
-async function fixturePool(extra: { testCrashOn?: string; keepSamples?: boolean }) {
+async function fixturePool(extra: { testCrashOn?: string; keepSamples?: boolean }, shareThisThread = false) {
   const check = await checkDatabase({ dir: path.join(root, 'fx') });
   const cache = new StageCache(undefined);
   const pool = createSpeciesPool({
@@ -32,6 +32,7 @@ async function fixturePool(extra: { testCrashOn?: string; keepSamples?: boolean 
     init: { settings: check.settings, limits: { setAt: {} }, cacheDir: undefined, codeFingerprint: 'test', ...extra },
     inline: (v) => buildOneSpecies(v, check.settings, cache, check),
     crashed: (v, reason) => ({ valid: v, diagnostics: [{ severity: 'error', file: v.displayFile, path: '', message: reason }], cache: {}, cacheNotes: [], timings: {} }),
+    shareThisThread,
   });
   return { check, cache, pool };
 }
@@ -69,6 +70,20 @@ describe('worker pool', () => {
       expect(co.built).toBeUndefined();
       expect(co.diagnostics[0]!.message).toMatch(/worker thread exited with code 70/);
       for (const o of results.filter((x) => x.valid.name !== 'CO')) expect(o.built, o.valid.name).toBeDefined();
+    } finally {
+      await pool.close();
+    }
+  }, 120_000);
+
+  it('sharing this thread: jobs 2 starts one worker and builds a batch here while it is busy', async () => {
+    // The worker would exit on CO; the second batch, CO's, is built on this thread, so nothing crashes.
+    const { check, pool } = await fixturePool({ testCrashOn: 'CO' }, true);
+    try {
+      const co = check.species.findIndex((v) => v.name === 'CO');
+      const others = check.species.filter((_, i) => i !== co);
+      const results = (await Promise.all([pool.run(others), pool.run([check.species[co]!])])).flat();
+      expect(results.map((o) => o.valid.name)).toEqual([...others, check.species[co]!].map((v) => v.name));
+      for (const o of results) expect(o.built, o.valid.name).toBeDefined();
     } finally {
       await pool.close();
     }

@@ -18,10 +18,9 @@
  * Which entries a database uses is recorded per database (cache-uses.ts), so `qforge cache prune` can drop
  * the entries no database sharing the folder still uses.
  */
-import { readFileSync } from 'node:fs';
-import { mkdir } from 'node:fs/promises';
+import { mkdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
-import { describeFsError, writeFileAtomic } from './atomic-write.js';
+import { describeFsError, writeFileAtomicNoSync } from './atomic-write.js';
 import { canonicalCopy, canonicalJson, sha256Hex } from './hash.js';
 
 export const CACHE_FORMAT = 'qforge-cache/2';
@@ -60,6 +59,9 @@ export class StageCache {
    * The build goes on (a cache only saves time) but reports it, so a cache that never fills is not silent.
    */
   writeProblem: string | undefined;
+
+  /** Entry folders made (or found) during this build: a recursive mkdir per entry cost ~1 ms each. */
+  private readonly madeDirs = new Set<string>();
 
   /** `dir` undefined disables the cache (every lookup is 'off', nothing is written). */
   constructor(readonly dir: string | undefined) {}
@@ -113,10 +115,21 @@ export class StageCache {
   async putText(kind: CacheKind, key: string, text: string): Promise<void> {
     if (!this.dir) return;
     const file = cacheEntryPath(this.dir, kind, key);
-    await mkdir(path.dirname(file), { recursive: true });
+    const folder = path.dirname(file);
     const body = Buffer.from(text, 'utf8');
-    const header = Buffer.from(`${CACHE_FORMAT} ${kind} ${key} ${sha256Hex(body)}\n`, 'latin1');
-    await writeFileAtomic(file, Buffer.concat([header, body]), { sync: false });
+    const bytes = Buffer.concat([Buffer.from(`${CACHE_FORMAT} ${kind} ${key} ${sha256Hex(body)}\n`, 'latin1'), body]);
+    if (!this.madeDirs.has(folder)) {
+      mkdirSync(folder, { recursive: true });
+      this.madeDirs.add(folder);
+    }
+    try {
+      writeFileAtomicNoSync(file, bytes);
+    } catch (err) {
+      // The folder went away during the build (a `cache prune`, a cleanup): make it again, once.
+      if ((err as NodeJS.ErrnoException).code !== 'ENOENT') throw err;
+      mkdirSync(folder, { recursive: true });
+      writeFileAtomicNoSync(file, bytes);
+    }
   }
 }
 

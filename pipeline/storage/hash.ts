@@ -9,40 +9,57 @@ import { createHash } from 'node:crypto';
 
 /** Deterministic JSON text of a JSON-like value (sorted keys; arrays keep their order). */
 export function canonicalJson(value: unknown): string {
-  return JSON.stringify(sortKeys(value));
+  return JSON.stringify(canonical(value));
 }
 
 /**
- * The value `JSON.parse(canonicalJson(value))` would give, without the text: a structural copy with sorted
- * keys, `undefined` members dropped and -0 as 0. Stage results go through it, fresh or cached alike, so
- * their key order (which reaches thermo.json) never depends on whether the cache was used.
+ * The value `JSON.parse(canonicalJson(value))` would give, without the text: sorted keys, `undefined`
+ * members dropped (`null` in arrays) and -0 as 0. Stage results go through it, fresh or cached alike, so
+ * their key order (which reaches thermo.json) never depends on whether the cache was used. Parts that are
+ * canonical already (a sample {T, cpR, hRT, sR}, an array of them, a list of numbers) are returned as they
+ * are rather than copied — most of a stage result; copying the whole cost ~0.3 ms per species — so the
+ * result may share them with `value`: callers hand over a value they no longer change.
  */
 export function canonicalCopy<T>(value: T): T {
-  return sortKeys(value) as T;
+  return canonical(value) as T;
 }
 
-function sortKeys(value: unknown): unknown {
+/** Strictly negative zero (`-0 === 0`, so it needs its own test). */
+const isNegativeZero = (v: number) => v === 0 && 1 / v < 0;
+
+function canonical(value: unknown): unknown {
+  if (typeof value !== 'object' || value === null) return typeof value === 'number' && isNegativeZero(value) ? 0 : value;
   if (Array.isArray(value)) {
-    const out = new Array<unknown>(value.length);
+    // Copied from the first element that changes on; an array that is canonical already is kept.
+    let out: unknown[] | undefined;
     for (let i = 0; i < value.length; i++) {
       const v: unknown = value[i];
-      out[i] = v === undefined ? null : typeof v === 'number' ? (v === 0 ? 0 : v) : sortKeys(v);
+      const c = v === undefined ? null : typeof v === 'number' ? (isNegativeZero(v) ? 0 : v) : canonical(v);
+      if (out !== undefined) out.push(c);
+      else if (c !== v || (typeof v === 'number' && isNegativeZero(v))) {
+        out = value.slice(0, i);
+        out.push(c);
+      }
     }
-    return out;
+    return out ?? value;
   }
-  if (value !== null && typeof value === 'object') {
-    const out: Record<string, unknown> = {};
-    const keys = Object.keys(value as Record<string, unknown>);
-    // Most stage objects (a sample {T, cpR, hRT, sR}, …) are built with their keys in order already.
-    if (!inOrder(keys)) keys.sort();
-    for (const k of keys) {
-      const v = (value as Record<string, unknown>)[k];
-      if (v !== undefined) out[k] = sortKeys(v);
+  const obj = value as Record<string, unknown>;
+  const keys = Object.keys(obj);
+  if (inOrder(keys)) {
+    let same = true;
+    for (let i = 0; i < keys.length && same; i++) {
+      const v = obj[keys[i]!];
+      same = v !== undefined && (typeof v === 'number' ? !isNegativeZero(v) : canonical(v) === v);
     }
-    return out;
+    if (same) return value;
+  } else keys.sort();
+  const out: Record<string, unknown> = {};
+  for (let i = 0; i < keys.length; i++) {
+    const k = keys[i]!;
+    const v = obj[k];
+    if (v !== undefined) out[k] = canonical(v);
   }
-  if (typeof value === 'number' && value === 0) return 0; // -0 as 0
-  return value;
+  return out;
 }
 
 /** Whether `keys` is in the order `Array.prototype.sort` would give (UTF-16 code units). */

@@ -1,6 +1,7 @@
 /**
  * Canonical JSON (pipeline/storage/hash.ts): the cache writes a fresh stage result as the plain JSON of
- * its canonical copy, which must be exactly its canonical JSON. Values written by hand for this test (no
+ * its canonical copy, which must be exactly its canonical JSON; the copy itself is checked against
+ * expectations written by hand (key order, -0, undefined, which parts are shared). Values written by hand for this test (no
  * external source): unsorted and nested keys, undefined members and array slots, -0, non-finite numbers.
  */
 import { describe, expect, it } from 'vitest';
@@ -20,5 +21,30 @@ describe('canonical JSON', () => {
   });
   it('sorts keys at every depth and drops undefined members', () => {
     expect(canonicalJson({ b: 1, a: { d: 2, c: undefined } })).toBe('{"a":{"d":2},"b":1}');
+  });
+  it('the copy: keys in order at every depth, -0 as 0, undefined dropped (null in arrays); the input unchanged', () => {
+    const input = { b: [{ z: -0, y: undefined, x: 1 }, undefined, -0], a: { d: [1, 2], c: 'x' } };
+    const before = JSON.stringify(input);
+    const c = canonicalCopy(input) as { a: { c: string; d: number[] }; b: [Record<string, number>, null, number] };
+    // Expected values written by hand from the rules above.
+    expect(Object.keys(c)).toEqual(['a', 'b']);
+    expect(Object.keys(c.a)).toEqual(['c', 'd']);
+    expect(Object.keys(c.b[0])).toEqual(['x', 'z']);
+    expect(Object.is(c.b[0].z, 0)).toBe(true);
+    expect(c.b[1]).toBeNull();
+    expect(Object.is(c.b[2], 0)).toBe(true);
+    expect(JSON.stringify(input)).toBe(before);
+    expect(Object.keys(input.b[0]!)).toEqual(['z', 'y', 'x']);
+  });
+  it('parts that are canonical already are kept, not copied; a part that is not is copied', () => {
+    const samples = [{ T: 200, cpR: 1, hRT: 2, sR: 3 }];
+    const value = { samples, anchor: { sR: 3, T: 298.15 }, zeros: [1, -0] };
+    const c = canonicalCopy(value);
+    expect(c).not.toBe(value); // its keys were not in order
+    expect(c.samples).toBe(samples);
+    expect(c.anchor).not.toBe(value.anchor);
+    expect(c.zeros).not.toBe(value.zeros);
+    expect(Object.is(c.zeros[1], 0)).toBe(true);
+    expect(Object.is(value.zeros[1], -0)).toBe(true);
   });
 });

@@ -11,7 +11,9 @@ import schema from '../../schemas/settings.schema.json' with { type: 'json' };
 import { STANDARD_PRESSURE_ATM, STANDARD_PRESSURE_BAR, T_REF } from '../../src/constants.js';
 import type { Diagnostic } from './diagnostics.js';
 import { SETTINGS_FILE_NAME, loadYamlFile, type LoadedDocument } from '../stages/load.js';
-import { checkAgainstSchema, createSchemaValidator, formatFieldPath } from '../stages/schema-check.js';
+import type { ValidateFunction } from 'ajv';
+import { validateSettingsInput } from '../generated/settings-validator.js';
+import { checkAgainstSchema, formatFieldPath } from '../stages/schema-check.js';
 import { MAX_END_GAP_FRACTION, MAX_INNER_GAP_FRACTION, MIN_DISTINCT_TEMPERATURES } from '../../src/nasa7/samples.js';
 import { MAX_ANCHOR_EXTRAPOLATION } from '../../src/nasa7/options.js';
 // plan.ts imports this module too; only functions cross the cycle, and only at call time.
@@ -141,9 +143,9 @@ export function withDefaults(input: unknown): DatabaseSettings {
   return merged;
 }
 
-let validator: ReturnType<typeof createSchemaValidator> | undefined;
-function settingsValidator(): ReturnType<typeof createSchemaValidator> {
-  validator ??= createSchemaValidator(schema);
+// Compiled ahead of time (scripts/generate-validators.mjs); the messages look subschemas up from the root.
+const validator = Object.assign(validateSettingsInput, { schema }) as unknown as ValidateFunction;
+function settingsValidator(): ValidateFunction {
   return validator;
 }
 

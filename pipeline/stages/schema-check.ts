@@ -17,16 +17,22 @@ import type { Diagnostic } from '../core/diagnostics.js';
 import { compareText } from '../core/text.js';
 import type { LoadedDocument, SourcePosition } from './load.js';
 
-/** The ajv options every qforge schema is compiled with (the messages below rely on `verbose`). */
+/**
+ * The ajv options every input schema is compiled with (the messages below rely on `verbose`). The species
+ * and settings schemas are compiled ahead of time with them (scripts/generate-validators.mjs →
+ * pipeline/generated/input-validators.ts, checked for drift by a test).
+ */
+export const INPUT_AJV_OPTIONS = Object.freeze({
+  allErrors: true,
+  verbose: true,
+  strict: true,
+  strictRequired: false,
+  allowUnionTypes: true,
+});
+
+/** A validator for `schema` compiled now, with the input options (for schemas not compiled ahead of time). */
 export function createSchemaValidator(schema: object): ValidateFunction {
-  const ajv = new Ajv2020({
-    allErrors: true,
-    verbose: true,
-    strict: true,
-    strictRequired: false,
-    allowUnionTypes: true,
-  });
-  return ajv.compile(schema);
+  return new Ajv2020({ ...INPUT_AJV_OPTIONS }).compile(schema);
 }
 
 export interface SchemaCheckOptions {

@@ -12,6 +12,8 @@ import { parseYamlText } from '../../../pipeline/stages/load.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from '../../../pipeline/stages/schema-check.js';
 import { ENERGY_UNITS_TO_CM1, ENTHALPY_UNITS_TO_J_PER_MOL, INERTIA_UNITS_TO_KG_M2, ROTATIONAL_UNITS_TO_CM1 } from '../../../src/units.js';
 import { OUTPUT_PATH, generateSpeciesInputTypes } from '../../../scripts/generate-types.mjs';
+import { VALIDATORS, generateValidator, readSchema } from '../../../scripts/generate-validators.mjs';
+import { INPUT_AJV_OPTIONS } from '../../../pipeline/stages/schema-check.js';
 
 type Obj = Record<string, unknown>;
 const defs = (schema as unknown as { $defs: Record<string, Obj> }).$defs;
@@ -26,6 +28,13 @@ describe('species schema', () => {
     const generated = await generateSpeciesInputTypes(schema);
     expect(generated).toBe(readFileSync(OUTPUT_PATH, 'utf8'));
   });
+
+  it.each(VALIDATORS.map((v) => [v.schema, v] as const))(
+    'the validator compiled ahead of time from %s matches the committed file (run `node scripts/generate-validators.mjs` after a schema change)',
+    async (_f, v) => {
+      expect(generateValidator(await readSchema(v.schema), v.schema, v.name, INPUT_AJV_OPTIONS)).toBe(readFileSync(v.output, 'utf8'));
+    },
+  );
 
   it('lists exactly the units src/units.ts converts', () => {
     const energy = Object.keys(ENERGY_UNITS_TO_CM1).sort();

@@ -1,0 +1,62 @@
+#!/usr/bin/env node
+/**
+ * Compiles the input schemas (schemas/species.schema.json, schemas/settings.schema.json) to standalone
+ * validation code with ajv's own code generator, with the options every input check uses
+ * (stages/schema-check.ts INPUT_AJV_OPTIONS), and writes pipeline/generated/species-validator.ts and
+ * settings-validator.ts (committed).
+ * ajv compiling the two schemas at run time cost 0.3–0.5 s of every build and check; loading the code
+ * costs milliseconds. Two modules, so that a run that reads only the settings (a no-change rebuild) does not
+ * load the species validator. A test regenerates them in memory and fails when a committed file has drifted
+ * from its schema or the options.
+ *
+ * Usage: node scripts/generate-validators.mjs
+ */
+import { readFile, writeFile } from 'node:fs/promises';
+import { fileURLToPath } from 'node:url';
+import { Ajv2020 } from 'ajv/dist/2020.js';
+import standaloneCode from 'ajv/dist/standalone/index.js';
+
+const ROOT = fileURLToPath(new URL('..', import.meta.url));
+/** Output file, schema file and export name of each validator. */
+export const VALIDATORS = [
+  { output: `${ROOT}pipeline/generated/species-validator.ts`, schema: 'species.schema.json', name: 'validateSpeciesInput' },
+  { output: `${ROOT}pipeline/generated/settings-validator.ts`, schema: 'settings.schema.json', name: 'validateSettingsInput' },
+];
+
+const banner = (schemaFile) => `// @ts-nocheck
+/* eslint-disable */
+/**
+ * GENERATED from schemas/${schemaFile} by scripts/generate-validators.mjs (ajv standalone code). Do not
+ * edit by hand: change the schema and run \`node scripts/generate-validators.mjs\`. A test fails when this
+ * file drifts.
+ */
+import { createRequire } from 'node:module';
+const require = createRequire(import.meta.url);
+`;
+
+/** The generated module text: `name`, the validator of `schema` compiled with the ajv `options`. */
+export function generateValidator(schema, schemaFile, name, options) {
+  const ajv = new Ajv2020({ ...options, code: { source: true, esm: true, lines: true } });
+  ajv.addSchema(schema);
+  return `${banner(schemaFile)}${standaloneCode.default(ajv, { [name]: schema.$id }).replace(/^"use strict";/, '')}\n`;
+}
+
+/** The schema object of a file in schemas/. */
+export async function readSchema(schemaFile) {
+  return JSON.parse(await readFile(`${ROOT}schemas/${schemaFile}`, 'utf8'));
+}
+
+async function main() {
+  const { INPUT_AJV_OPTIONS } = await import(`${ROOT}dist/pipeline/stages/schema-check.js`);
+  for (const v of VALIDATORS) {
+    await writeFile(v.output, generateValidator(await readSchema(v.schema), v.schema, v.name, INPUT_AJV_OPTIONS));
+    process.stdout.write(`wrote ${v.output}\n`);
+  }
+}
+
+if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
+  main().catch((err) => {
+    process.stderr.write(`${err && err.stack ? err.stack : err}\n`);
+    process.exitCode = 1;
+  });
+}

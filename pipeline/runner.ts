@@ -944,7 +944,7 @@ async function buildChecked(
       progress({ kind: 'species-start', total });
       // Batches go out in name order and are consumed in that order; at most `window` are in flight.
       const batches = batchesOf(shardSpecies, jobs);
-      const window = Math.max(2, jobs * 2);
+      const window = Math.max(2, jobs * 4);
       const inflight: Array<Promise<SpeciesOutcome[]>> = [];
       const consume = async () => {
         for (const o of await inflight.shift()!) await sink(o);

@@ -82,6 +82,11 @@ export function createSpeciesPool(opts: PoolOptions): SpeciesPool {
   return new ThreadPool(opts);
 }
 
+/** This thread's share of the batches (shareThisThread): start, bounds. */
+const INITIAL_SHARE = 1 / 3;
+const MIN_SHARE = 1 / 8;
+const MAX_SHARE = 1 / 2;
+
 interface Job {
   req: BatchRequest;
   resolve: (o: SpeciesOutcome[]) => void;
@@ -102,9 +107,10 @@ class ThreadPool implements SpeciesPool {
   private readonly entry: URL;
   private readonly maxWorkers: number;
   private inlineBusy = false;
-  /** Batches given to workers and built here (for this thread's share, see `pump`). */
+  /** Batches given to workers and built here, and the share of batches this thread may take (see `pump`). */
   private toWorkers = 0;
   private here = 0;
+  private share = INITIAL_SHARE;
 
   constructor(private readonly opts: PoolOptions) {
     this.entry = workerEntry();
@@ -131,10 +137,16 @@ class ThreadPool implements SpeciesPool {
       let slot = [...this.slots].find((s) => s.job === undefined);
       if (!slot && this.slots.size < this.maxWorkers) slot = this.spawn();
       if (!slot) {
-        // This thread also reads the species back and emits every one of them (about a third of a
-        // species' cost), so it takes one batch for every two a worker takes: more would make it the
-        // bottleneck and leave the workers waiting (measured: a worker idle 11 % when it took every other).
-        if (!this.opts.shareThisThread || this.inlineBusy || this.here * 2 * this.maxWorkers > this.toWorkers) return;
+        // This thread also reads every species back and emits it, so it may take only part of the batches,
+        // `share`, adjusted as the build goes: taking every other batch left a worker idle 11 % of the time
+        // (this thread became the bottleneck), one in three left this thread idle 15 % (2,000 synthetic
+        // species, two cores). It grows a little whenever this thread would idle with batches waiting and
+        // shrinks whenever a worker runs dry while this thread holds a batch. Only the timing depends on it.
+        if (!this.opts.shareThisThread || this.inlineBusy) return;
+        if (this.here > this.share * (this.here + this.toWorkers)) {
+          this.share = Math.min(MAX_SHARE, this.share * 1.05);
+          return;
+        }
         this.inlineBusy = true;
         this.here++;
         const job = this.queue.shift()!;
@@ -175,6 +187,7 @@ class ThreadPool implements SpeciesPool {
       const job = slot.job;
       if (!job || job.req.id !== reply.id) return;
       slot.job = undefined;
+      if (this.queue.length === 0 && this.inlineBusy) this.share = Math.max(MIN_SHARE, this.share * 0.8);
       if ('error' in reply) job.resolve(this.failed(job, `a worker failed: ${reply.error}`));
       else {
         if (reply.cacheWriteProblem !== undefined) this.cacheWriteProblem ??= reply.cacheWriteProblem;

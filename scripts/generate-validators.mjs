@@ -9,7 +9,10 @@
  * load the species validator. A test regenerates them in memory and fails when a committed file has drifted
  * from its schema or the options.
  *
- * Usage: node scripts/generate-validators.mjs
+ * Also the output validators of the streamed files (pipeline/core/output-schemas.ts says which), which cost
+ * another ~0.2 s to compile at run time; they are written to pipeline/generated/output-validators.ts.
+ *
+ * Usage: npm run build && node scripts/generate-validators.mjs (the options are read from dist/)
  */
 import { readFile, writeFile } from 'node:fs/promises';
 import { fileURLToPath } from 'node:url';
@@ -46,12 +49,40 @@ export async function readSchema(schemaFile) {
   return JSON.parse(await readFile(`${ROOT}schemas/${schemaFile}`, 'utf8'));
 }
 
+/** Output file of the output validators (thermo.json's records and frame, summary.json's entries and frame). */
+export const OUTPUT_VALIDATORS_PATH = `${ROOT}pipeline/generated/output-validators.ts`;
+
+/**
+ * The generated module of the output validators: `schemas` added to one ajv with `options`, one export per
+ * entry of `targets` (export name → schema id or ref); see pipeline/core/output-schemas.ts.
+ */
+export function generateOutputValidators(schemas, targets, options) {
+  const ajv = new Ajv2020({ ...options, code: { source: true, esm: true, lines: true } });
+  for (const s of schemas) ajv.addSchema(s);
+  const banner = `// @ts-nocheck
+/* eslint-disable */
+/**
+ * GENERATED from schemas/database.schema.json, summary.schema.json and settings.schema.json (as
+ * pipeline/core/output-schemas.ts derives them) by scripts/generate-validators.mjs (ajv standalone code).
+ * Do not edit by hand: run \`npm run build && node scripts/generate-validators.mjs\`. A test fails when
+ * this file drifts.
+ */
+import { createRequire } from 'node:module';
+const require = createRequire(import.meta.url);
+`;
+  return `${banner}${standaloneCode.default(ajv, { ...targets }).replace(/^"use strict";/, '')}\n`;
+}
+
 async function main() {
   const { INPUT_AJV_OPTIONS } = await import(`${ROOT}dist/pipeline/stages/schema-check.js`);
   for (const v of VALIDATORS) {
     await writeFile(v.output, generateValidator(await readSchema(v.schema), v.schema, v.name, INPUT_AJV_OPTIONS));
     process.stdout.write(`wrote ${v.output}\n`);
   }
+  const out = await import(`${ROOT}dist/pipeline/core/output-schemas.js`);
+  const code = generateOutputValidators(out.outputValidatorSchemas(await readSchema('settings.schema.json')), out.OUTPUT_VALIDATOR_TARGETS, out.OUTPUT_AJV_OPTIONS);
+  await writeFile(OUTPUT_VALIDATORS_PATH, code);
+  process.stdout.write(`wrote ${OUTPUT_VALIDATORS_PATH}\n`);
 }
 
 if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {

@@ -6,12 +6,12 @@
  * empty species list; the bytes are those of `jsonText` of the whole summary (tested). The objects are
  * parsed back only when a caller asks for them (`species`: `qforge build --json`, tests).
  */
-import type { Ajv2020 } from 'ajv/dist/2020.js';
-import summarySchema from '../../schemas/summary.schema.json' with { type: 'json' };
+import type { ValidateFunction } from 'ajv';
+import { validateSummaryEntry, validateSummaryEnvelope } from '../generated/output-validators.js';
 import type { CacheKind, CacheOutcome } from '../storage/cache.js';
 import type { StagedStream } from '../storage/atomic-write.js';
 import { compareText } from '../core/text.js';
-import { jsonText, outputAjv, OutputSchemaError } from './emit.js';
+import { jsonText, OutputSchemaError } from './emit.js';
 
 /** One species' entry of summary.json (schemas/summary.schema.json, `species` items). */
 export interface SummarySpecies {
@@ -39,21 +39,16 @@ interface Row {
   text: string;
 }
 
-let entryValidator: ReturnType<Ajv2020['compile']> | undefined;
-let envelopeValidator: ReturnType<Ajv2020['compile']> | undefined;
+// Compiled ahead of time (core/output-schemas.ts, scripts/generate-validators.mjs).
+const entryValidator = validateSummaryEntry as unknown as ValidateFunction;
+const envelopeValidator = validateSummaryEnvelope as unknown as ValidateFunction;
 
 function validateEntry(entry: SummarySpecies): void {
-  entryValidator ??= outputAjv().compile({ ...summarySchema.properties.species.items, $id: `${summarySchema.$id}-species` });
   if (!entryValidator(entry)) throw new OutputSchemaError('summary.json (species entry)', entryValidator.errors);
 }
 
 /** Validates summary.json without its species (each entry was validated when it was added). */
 function validateEnvelope(envelope: unknown): void {
-  envelopeValidator ??= outputAjv().compile({
-    ...summarySchema,
-    $id: `${summarySchema.$id}-envelope`,
-    properties: { ...summarySchema.properties, species: { type: 'array', maxItems: 0 } },
-  });
   if (!envelopeValidator(envelope)) throw new OutputSchemaError('summary.json', envelopeValidator.errors);
 }
 

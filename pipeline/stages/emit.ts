@@ -10,8 +10,10 @@
  *                      output that differs from run to run
  */
 import { Ajv2020 } from 'ajv/dist/2020.js';
-import databaseSchema from '../../schemas/database.schema.json' with { type: 'json' };
 import settingsSchema from '../../schemas/settings.schema.json' with { type: 'json' };
+import type { ValidateFunction } from 'ajv';
+import { OUTPUT_AJV_OPTIONS } from '../core/output-schemas.js';
+import { validateDatabaseEnvelope as generatedDatabaseEnvelope } from '../generated/output-validators.js';
 import summarySchema from '../../schemas/summary.schema.json' with { type: 'json' };
 import { GAS_CONSTANT, T_REF } from '../../src/constants.js';
 import type { Species, StandardProperties } from '../../src/model.js';
@@ -189,11 +191,11 @@ export function databaseJson(species: readonly BuiltSpecies[], settings: Databas
 /**
  * An Ajv instance for our own output schemas (the settings schema added, which they refer to). Our schemas
  * are fixed: checking them against the meta-schema on every run would cost more than the validation itself
- * (test/pipeline/fast-rebuild.test.ts checks them). Each validator is compiled on first use (a no-change
- * rebuild validates only its summary).
+ * (test/pipeline/fast-rebuild.test.ts checks them). The streamed files' validators are compiled ahead of time
+ * (core/output-schemas.ts); this one compiles the rest on first use (the whole summary of `qforge merge`).
  */
 export function outputAjv(): Ajv2020 {
-  const ajv = new Ajv2020({ allErrors: true, strict: false, validateSchema: false });
+  const ajv = new Ajv2020({ ...OUTPUT_AJV_OPTIONS });
   ajv.addSchema(settingsSchema);
   return ajv;
 }
@@ -207,20 +209,14 @@ export class OutputSchemaError extends Error {
   }
 }
 
-let envelopeValidator: ReturnType<Ajv2020['compile']> | undefined;
-
 /**
  * Validates thermo.json without its species (the streaming emit validates each species record on its own):
- * the database schema with the species list required to be empty, which compiles in a fraction of the time
- * of the whole schema.
+ * the database schema with the species list required to be empty, compiled ahead of time
+ * (core/output-schemas.ts, scripts/generate-validators.mjs).
  */
+const compiledDatabaseEnvelope = generatedDatabaseEnvelope as unknown as ValidateFunction;
 export function validateDatabaseEnvelope(value: unknown): void {
-  envelopeValidator ??= outputAjv().compile({
-    ...databaseSchema,
-    $id: `${databaseSchema.$id}-envelope`,
-    properties: { ...databaseSchema.properties, species: { type: 'array', maxItems: 0 } },
-  });
-  if (!envelopeValidator(value)) throw new OutputSchemaError('thermo.json', envelopeValidator.errors);
+  if (!compiledDatabaseEnvelope(value)) throw new OutputSchemaError('thermo.json', compiledDatabaseEnvelope.errors);
 }
 
 export function validateSummaryJson(value: unknown): void {

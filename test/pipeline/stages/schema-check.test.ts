@@ -12,7 +12,8 @@ import { parseYamlText } from '../../../pipeline/stages/load.js';
 import { checkAgainstSchema, createSchemaValidator, formatFieldPath, nearestKey } from '../../../pipeline/stages/schema-check.js';
 import { ENERGY_UNITS_TO_CM1, ENTHALPY_UNITS_TO_J_PER_MOL, INERTIA_UNITS_TO_KG_M2, ROTATIONAL_UNITS_TO_CM1 } from '../../../src/units.js';
 import { OUTPUT_PATH, generateSpeciesInputTypes } from '../../../scripts/generate-types.mjs';
-import { VALIDATORS, generateValidator, readSchema } from '../../../scripts/generate-validators.mjs';
+import { OUTPUT_VALIDATORS_PATH, VALIDATORS, generateOutputValidators, generateValidator, readSchema } from '../../../scripts/generate-validators.mjs';
+import { OUTPUT_AJV_OPTIONS, OUTPUT_VALIDATOR_TARGETS, outputValidatorSchemas } from '../../../pipeline/core/output-schemas.js';
 import { INPUT_AJV_OPTIONS } from '../../../pipeline/stages/schema-check.js';
 
 type Obj = Record<string, unknown>;
@@ -35,6 +36,11 @@ describe('species schema', () => {
       expect(generateValidator(await readSchema(v.schema), v.schema, v.name, INPUT_AJV_OPTIONS)).toBe(readFileSync(v.output, 'utf8'));
     },
   );
+
+  it('the output validators compiled ahead of time match the committed file', async () => {
+    const generated = generateOutputValidators(outputValidatorSchemas(await readSchema('settings.schema.json')), OUTPUT_VALIDATOR_TARGETS, OUTPUT_AJV_OPTIONS);
+    expect(generated).toBe(readFileSync(OUTPUT_VALIDATORS_PATH, 'utf8'));
+  });
 
   it('lists exactly the units src/units.ts converts', () => {
     const energy = Object.keys(ENERGY_UNITS_TO_CM1).sort();

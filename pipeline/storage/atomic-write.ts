@@ -18,11 +18,12 @@
  * file a user put into OUT (notes, a species file) stops the build instead of vanishing. A non-empty folder
  * without a marker is never replaced. (A marker of an older qforge, without a list, is trusted as before.)
  */
-import { randomBytes } from 'node:crypto';
+import { createHash, randomBytes } from 'node:crypto';
 import { closeSync, linkSync, lstatSync, openSync, readFileSync, readSync, renameSync, rmSync, writeFileSync, writeSync } from 'node:fs';
 import { lstat, mkdir, open, readdir, readFile, rename, rm, stat, type FileHandle } from 'node:fs/promises';
 import path from 'node:path';
 import { compareText } from '../core/text.js';
+import type { Digest } from './hash.js';
 
 /** Marker file that identifies a folder as a qforge build output; it lists the files written (sorted). */
 export const BUILD_MARKER = '.qforge-build';
@@ -333,6 +334,36 @@ function sameBytes(a: string, b: string): boolean {
   }
 }
 
+/** Whether the file holds exactly the bytes of `digest` (read in 1 MiB chunks). */
+export function digestMatches(file: string, digest: Digest): boolean {
+  try {
+    return sameDigest(fileDigest(file), digest);
+  } catch {
+    return false;
+  }
+}
+
+const sameDigest = (a: Digest, b: Digest) => a.bytes === b.bytes && a.hash === b.hash;
+
+/** sha256 and length of a file's bytes (read in 1 MiB chunks, so a large file needs no buffer of its size). */
+export function fileDigest(file: string): Digest {
+  const fd = openSync(file, 'r');
+  try {
+    const h = createHash('sha256');
+    const buf = Buffer.allocUnsafe(1 << 20);
+    let bytes = 0;
+    for (;;) {
+      const n = readSync(fd, buf, 0, buf.length, null);
+      if (n === 0) break;
+      h.update(buf.subarray(0, n));
+      bytes += n;
+    }
+    return { hash: h.digest('hex'), bytes };
+  } finally {
+    closeSync(fd);
+  }
+}
+
 /** Bytes a StagedStream gathers before it writes them (one write per species would cost a system call each). */
 const STREAM_BUFFER = 1 << 20;
 
@@ -402,7 +433,7 @@ export class OutputStaging {
     return this.files;
   }
 
-  private async target(rel: string): Promise<string> {
+  private async target(rel: string, register = true): Promise<string> {
     if (this.files.has(rel) || rel === BUILD_MARKER) throw new OutputFolderError(`output file ${rel} written twice`);
     const target = safeJoin(this.dir, rel);
     const dir = path.dirname(target);
@@ -410,8 +441,65 @@ export class OutputStaging {
       await mkdir(dir, { recursive: true });
       this.dirs.add(dir);
     }
-    this.files.add(rel);
+    if (register) this.files.add(rel);
     return target;
+  }
+
+  /** The previous OUT's `rel` (it may not exist). */
+  previousPath(rel: string): string {
+    return safeJoin(siblings(this.out).abs, rel);
+  }
+
+  /**
+   * Stages `rel` as a hard link to the previous OUT's `rel` when that file holds bytes of the given digest
+   * (the build pack's record of what this build would write). The digest is taken of the bytes read through
+   * the new link, so what was checked is what gets published; a previous file that was modified, replaced or
+   * truncated hashes differently and is not linked (false: nothing staged).
+   */
+  async reuseByDigest(rel: string, digest: Digest): Promise<boolean> {
+    const previous = this.previousPath(rel);
+    const st = lstatSync(previous, { throwIfNoEntry: false });
+    if (!st?.isFile() || st.size !== digest.bytes) return false;
+    const target = await this.target(rel, false);
+    try {
+      linkSync(previous, target);
+    } catch {
+      return false;
+    }
+    if (!digestMatches(target, digest)) {
+      rmSync(target, { force: true });
+      return false;
+    }
+    this.files.add(rel);
+    this.linked.add(rel);
+    return true;
+  }
+
+  /**
+   * Hard-links the previous OUT's `rel` to the unlisted scratch path `dest` when it holds bytes of the given
+   * digest, checked through the link as in `reuseByDigest`; `adoptScratch` later stages it under its name.
+   */
+  async linkPreviousAs(rel: string, dest: string, digest: Digest): Promise<boolean> {
+    const previous = this.previousPath(rel);
+    const st = lstatSync(previous, { throwIfNoEntry: false });
+    if (!st?.isFile() || st.size !== digest.bytes) return false;
+    try {
+      linkSync(previous, dest);
+    } catch {
+      return false;
+    }
+    if (!digestMatches(dest, digest)) {
+      rmSync(dest, { force: true });
+      return false;
+    }
+    return true;
+  }
+
+  /** Stages a scratch file made by `linkPreviousAs` as `rel` (a link: published without fsync). */
+  async adoptScratch(scratch: string, rel: string): Promise<void> {
+    const target = await this.target(rel);
+    renameSync(scratch, target);
+    this.linked.add(rel);
   }
 
   async write(rel: string, data: string | Uint8Array): Promise<void> {

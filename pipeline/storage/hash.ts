@@ -60,3 +60,14 @@ export function sha256Hex(data: string | Uint8Array): string {
 export function hashParts(...parts: unknown[]): string {
   return sha256Hex(canonicalJson(parts));
 }
+
+/** sha256 (lower-case hex) and length in bytes of a text (UTF-8) or file. */
+export interface Digest {
+  hash: string;
+  bytes: number;
+}
+
+/** The Digest of a text as written in UTF-8. */
+export function textDigest(text: string): Digest {
+  return { hash: sha256Hex(text), bytes: Buffer.byteLength(text, 'utf8') };
+}

@@ -26,13 +26,14 @@
  * that did not change, so a no-change rebuild re-encodes nothing.
  */
 import { readFileSync, realpathSync } from 'node:fs';
+import { open } from 'node:fs/promises';
 import { mkdir } from 'node:fs/promises';
 import path from 'node:path';
 import { writeFileAtomic } from './atomic-write.js';
 import { sha256Hex, type Digest } from './hash.js';
 
 export const PACK_FORMAT = 'qforge-pack/1';
-const PACK_DIR = 'pack';
+export const PACK_DIR = 'pack';
 const KEY = /^[0-9a-f]{64}$/;
 
 
@@ -91,6 +92,24 @@ interface PackHeader {
   context?: unknown;
   sha256?: unknown;
   bytes?: unknown;
+}
+
+/** The header of a pack file (its first line, at most 64 KiB), or undefined when it has none. */
+export async function packHeader(file: string): Promise<{ database?: unknown; out?: unknown } | undefined> {
+  try {
+    const fh = await open(file, 'r');
+    try {
+      const buf = Buffer.alloc(1 << 16);
+      const { bytesRead } = await fh.read(buf, 0, buf.length, 0);
+      const eol = buf.subarray(0, bytesRead).indexOf(0x0a);
+      const h = JSON.parse(buf.subarray(0, eol < 0 ? bytesRead : eol).toString('utf8')) as PackHeader;
+      return h !== null && typeof h === 'object' && h.format === PACK_FORMAT ? h : undefined;
+    } finally {
+      await fh.close();
+    }
+  } catch {
+    return undefined;
+  }
 }
 
 /** Reads and checks the pack of `id` for build context `context` (see the module comment). */

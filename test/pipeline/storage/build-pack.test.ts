@@ -151,6 +151,26 @@ describe('build pack', () => {
   }, 240_000);
 });
 
+describe('build packs and cache prune', () => {
+  it('prune keeps the pack of a live output folder and drops the pack of one that is gone', async () => {
+    await build('out');
+    await build('gone');
+    const cacheDir = path.join(root, 'db', '.qforge-cache');
+    const gonePack = packFile(cacheDir, packIdentity(path.join(root, 'db'), path.join(root, 'gone')));
+    expect((await stat(gonePack)).isFile()).toBe(true);
+    await rm(path.join(root, 'gone'), { recursive: true });
+    const r = await runCli(['cache', 'prune', 'db', '--json'], root);
+    expect(r.code, r.stderr).toBe(0);
+    expect(JSON.parse(r.stdout).removed).toBe(1);
+    await expect(stat(gonePack)).rejects.toThrow();
+    expect((await stat(thePack())).isFile()).toBe(true);
+    const inodes = await inode(path.join(root, 'out', 'thermo.json'));
+    const s = await build('out');
+    expect(allHit(s)).toBe(true);
+    expect(await inode(path.join(root, 'out', 'thermo.json'))).toBe(inodes);
+  }, 180_000);
+});
+
 describe('readPack', () => {
   const id = { database: '/d', out: '/o' };
   const written = async (dir: string) => {

@@ -479,6 +479,7 @@ export class OutputStaging {
    */
   async reuseByDigest(rel: string, digest: Digest): Promise<boolean> {
     const previous = this.previousPath(rel);
+    // Only a regular file (not a symbolic link, which link(2) would copy as a link) of the recorded size.
     const st = lstatSync(previous, { throwIfNoEntry: false });
     if (!st?.isFile() || st.size !== digest.bytes) return false;
     const target = await this.target(rel, false);

@@ -27,7 +27,8 @@ async function databaseId(databaseDir: string): Promise<{ id: string; real: stri
 export async function recordCacheUse(cacheDir: string, databaseDir: string, keys: readonly string[]): Promise<void> {
   const { id, real } = await databaseId(databaseDir);
   await mkdir(path.join(cacheDir, USES), { recursive: true });
-  const body = [...new Set(keys)].sort(compareText).join('\n');
+  // The default sort compares UTF-16 code units, as compareText does, without a call per comparison.
+  const body = [...new Set(keys)].sort().join('\n');
   await writeFileAtomic(path.join(cacheDir, USES, id), `${real}\n${body}${body ? '\n' : ''}`, { sync: false });
 }
 

@@ -19,7 +19,7 @@
  * without a marker is never replaced. (A marker of an older qforge, without a list, is trusted as before.)
  */
 import { createHash, hash as oneShotHash, randomBytes } from 'node:crypto';
-import { closeSync, linkSync, lstatSync, openSync, readFileSync, readSync, renameSync, rmSync, writeFileSync, writeSync } from 'node:fs';
+import { closeSync, linkSync, lstatSync, openSync, readdirSync, readFileSync, readSync, renameSync, rmdirSync, rmSync, unlinkSync, writeFileSync, writeSync } from 'node:fs';
 import { lstat, mkdir, open, readdir, readFile, rename, rm, stat, type FileHandle } from 'node:fs/promises';
 import path from 'node:path';
 import { compareText } from '../core/text.js';
@@ -347,9 +347,39 @@ function sameBytes(a: string, b: string): boolean {
 /** Whether the file holds exactly the bytes of `digest` (read in 1 MiB chunks). */
 export function digestMatches(file: string, digest: Digest): boolean {
   try {
+    if (digest.bytes < DIGEST_BUFFER) {
+      // A small file: one read of one byte more than expected tells both its length and its bytes.
+      const buf = (digestBuffer ??= Buffer.allocUnsafe(DIGEST_BUFFER));
+      const fd = openSync(file, 'r');
+      let n: number;
+      try {
+        n = readSync(fd, buf, 0, digest.bytes + 1, 0);
+      } finally {
+        closeSync(fd);
+      }
+      return n === digest.bytes && oneShotHash('sha256', buf.subarray(0, n), 'hex') === digest.hash;
+    }
     return sameDigest(fileDigest(file), digest);
   } catch {
     return false;
+  }
+}
+
+/**
+ * Removes a folder tree qforge wrote (the previous OUT after the swap): one readdir per folder and one unlink
+ * per file, where `rmSync` also lstats every entry (10,000 tables: ~50 ms). Symbolic links are unlinked, never
+ * followed. Anything unexpected is left to `rmSync`.
+ */
+function removeTree(dir: string): void {
+  try {
+    for (const e of readdirSync(dir, { withFileTypes: true })) {
+      const p = path.join(dir, e.name);
+      if (e.isDirectory()) removeTree(p);
+      else unlinkSync(p);
+    }
+    rmdirSync(dir);
+  } catch {
+    rmSync(dir, { recursive: true, force: true });
   }
 }
 
@@ -357,6 +387,7 @@ const sameDigest = (a: Digest, b: Digest) => a.bytes === b.bytes && a.hash === b
 
 /** The read buffer of `fileDigest` (synchronous, so one buffer serves every call of the thread). */
 let digestBuffer: Buffer | undefined;
+const DIGEST_BUFFER = 1 << 20;
 
 /**
  * sha256 and length of a file's bytes, read in 1 MiB chunks into one reused buffer: a large file needs no
@@ -365,7 +396,7 @@ let digestBuffer: Buffer | undefined;
 export function fileDigest(file: string): Digest {
   const fd = openSync(file, 'r');
   try {
-    const buf = (digestBuffer ??= Buffer.allocUnsafe(1 << 20));
+    const buf = (digestBuffer ??= Buffer.allocUnsafe(DIGEST_BUFFER));
     const first = readSync(fd, buf, 0, buf.length, null);
     // A file smaller than the buffer (every table): one read, the end confirmed, a one-shot hash.
     if (first < buf.length && readSync(fd, buf, first, 1, null) === 0) return { hash: oneShotHash('sha256', buf.subarray(0, first), 'hex'), bytes: first };
@@ -633,7 +664,7 @@ export class OutputStaging {
       await hooks.midSwap?.();
       await rename(this.dir, s.abs);
       await fsyncDir(s.parent);
-      if (hadOld) rmSync(s.old, { recursive: true, force: true });
+      if (hadOld) removeTree(s.old);
       return { replaced: hadOld };
     } catch (err) {
       await this.discard();

@@ -16,7 +16,8 @@ import type { FitOptions, FitResult } from '../src/nasa7/types.js';
 import { acquireOutputLock, OutputStaging, recoverOutputDir, type PublishHooks } from './storage/atomic-write.js';
 import { cached, cacheEntryPath, defaultCacheDir, StageCache, type CacheKind, type CacheOutcome } from './storage/cache.js';
 import { recordCacheUse } from './storage/cache-uses.js';
-import { readEntry, writeEntry, type DocumentFacts, type FileFacts, type Position, type RenderedSpecies, type StoredResult } from './storage/fast-entries.js';
+import { decodeEntry, encodeEntry, readEntry, writeEntry, writeEntryText, type DocumentFacts, type FileFacts, type Position, type RenderedDigests, type RenderedSpecies, type StoredResult } from './storage/fast-entries.js';
+import { packFile, packIdentity, PackWriter, readPack, type LoadedPack, type PackIdentity } from './storage/build-pack.js';
 import { SpillFile, type SpillRef } from './storage/spill.js';
 import { shardLabel, shardOf, shardRecord, type Shard } from './core/shard.js';
 import { StreamingEmitter } from './stages/emit-stream.js';
@@ -157,6 +158,12 @@ export interface CheckReport {
   cachedFiles: number;
   /** Rejected fast-path file entries (`file: reason`), reported like rejected stage entries. */
   cacheNotes: string[];
+  /** With `fastPath`: the build context hash the file and result keys are made from. */
+  fastContext?: string;
+  /** With `fastPath.pack`: the build pack read (storage/build-pack.ts), when there was a valid one. */
+  pack?: LoadedPack;
+  /** With `fastPath`: each file's key and the JSON text of its findings, for the next build pack. */
+  packFiles: Array<[string, string]>;
 }
 
 export interface CheckOptions {
@@ -177,7 +184,7 @@ export interface CheckOptions {
    * The no-change fast path: with `context` (what besides the settings changes per-species outputs) the
    * file and result keys are computed; with `cache` too, file entries are looked up and stored.
    */
-  fastPath?: { context: Record<string, unknown>; cache?: StageCache };
+  fastPath?: { context: Record<string, unknown>; cache?: StageCache; pack?: PackIdentity };
 }
 
 function positionsOf(doc: LoadedDocument): ValidSpecies['positions'] {
@@ -213,6 +220,8 @@ type Kept = { species: Species; normalisedInput: unknown } | SpillRef | undefine
 interface CheckedFile {
   file: string;
   facts: FileFacts;
+  /** The findings as stored (JSON text, taken before the check's display paths are applied to them). */
+  factsText?: string;
   kept: Kept[];
   key?: string;
   loadMs: number;
@@ -304,6 +313,12 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     : undefined;
   const fastCache = opts.fastPath?.cache;
   const cacheNotes: string[] = [];
+  let pack: LoadedPack | undefined;
+  if (fastCache?.dir !== undefined && opts.fastPath?.pack && contextHash !== undefined) {
+    const r = readPack(fastCache.dir, opts.fastPath.pack, contextHash);
+    pack = r.pack;
+    if (r.rejected !== undefined) cacheNotes.push(`cache: build pack ${show(packFile(fastCache.dir, opts.fastPath.pack))} rejected (${r.rejected}); every species taken from its own entries`);
+  }
   let validateTotal = 0;
   let cachedFiles = 0;
 
@@ -317,12 +332,35 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
       return { file: f, facts, kept: [], loadMs: performance.now() - tl, validateMs: 0 };
     }
     const key = contextHash !== undefined ? hashParts('file', contextHash, f, sha256Hex(read.bytes)) : undefined;
-    if (fastCache && key !== undefined) {
-      const hit = await readEntry<FileFacts>(fastCache, 'file', key);
-      if (hit.outcome === 'hit' && (await geometryUnchanged(f, hit.value!.geometry))) {
-        policy.markUsed(hit.value!.settingsUsed);
+    const packed = key !== undefined ? pack?.files.get(key) : undefined;
+    if (packed !== undefined) {
+      let facts: FileFacts | undefined;
+      try {
+        facts = decodeEntry<FileFacts>(packed);
+      } catch {
+        // A line of a pack whose checksum held cannot fail to parse unless written wrong: checked again.
+      }
+      if (facts && (await geometryUnchanged(f, facts.geometry))) {
+        policy.markUsed(facts.settingsUsed);
         cachedFiles++;
-        return { file: f, facts: hit.value!, kept: [], key, loadMs: performance.now() - tl, validateMs: 0 };
+        return { file: f, facts, factsText: packed, kept: [], key: key!, loadMs: performance.now() - tl, validateMs: 0 };
+      }
+    }
+    if (fastCache && key !== undefined) {
+      const hit = await fastCache.getText('file', key);
+      let facts: FileFacts | undefined;
+      if (hit.outcome === 'hit') {
+        try {
+          facts = decodeEntry<FileFacts>(hit.value!);
+        } catch {
+          hit.outcome = 'corrupt';
+          hit.reason = 'not valid JSON';
+        }
+      }
+      if (facts && (await geometryUnchanged(f, facts.geometry))) {
+        policy.markUsed(facts.settingsUsed);
+        cachedFiles++;
+        return { file: f, facts, factsText: hit.value!, kept: [], key, loadMs: performance.now() - tl, validateMs: 0 };
       }
       if (hit.outcome === 'corrupt') cacheNotes.push(`${show(f)}: cache entry for file rejected (${hit.reason}); checked again`);
     }
@@ -359,8 +397,9 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
       for (const [name, g] of Object.entries(doc.geometryFiles ?? {})) if (!geometry.has(name)) geometry.set(name, geometryHash(g));
     }
     facts.geometry = [...geometry].map(([name, hash]) => ({ name, hash }));
-    if (fastCache && key !== undefined) await writeEntry(fastCache, 'file', key, facts);
-    return { file: f, facts, kept, ...(key !== undefined ? { key } : {}), loadMs, validateMs };
+    const factsText = key !== undefined ? encodeEntry(facts) : undefined;
+    if (fastCache && key !== undefined) await writeEntryText(fastCache, 'file', key, factsText!);
+    return { file: f, facts, kept, ...(key !== undefined ? { key, factsText } : {}), loadMs, validateMs };
   };
   const perFile = await Promise.all(discovered.files.map((f) => limit(() => checkFile(f))));
   for (const p of perFile) validateTotal += p.validateMs;
@@ -468,7 +507,10 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     fileKeys: perFile.flatMap((p) => (p.key !== undefined ? [`file/${p.key}`] : [])),
     cachedFiles,
     cacheNotes,
+    packFiles: perFile.flatMap((p) => (p.key !== undefined && p.factsText !== undefined ? [[p.key, p.factsText] as [string, string]] : [])),
   };
+  if (contextHash !== undefined) report.fastContext = contextHash;
+  if (pack) report.pack = pack;
   if (settingsFileShown !== undefined) report.settingsFile = settingsFileShown;
   if (settingsResult.setAt) report.settingsSetAt = settingsResult.setAt;
   return report;
@@ -506,6 +548,8 @@ export interface SpeciesOutcome {
   timings: Record<string, number>;
   /** Cache entries this species uses (`kind/key`), for `qforge cache prune`. */
   keys?: string[];
+  /** The build pack line `stored` came from (written into the next pack as it is). */
+  packLine?: string;
 }
 
 /** Cache keys of one species' stages; see plan.ts for what each depends on. */
@@ -778,7 +822,8 @@ async function buildChecked(
   const check = await checkDatabase({
     ...opts,
     keep: spill ?? 'memory',
-    ...(cacheDir !== undefined ? { fastPath: { context: buildContext(opts), cache } } : {}),
+    // A shard does not use the build pack (its outputs are merged, not rebuilt in place).
+    ...(cacheDir !== undefined ? { fastPath: { context: buildContext(opts), cache, ...(opts.shard ? {} : { pack: packIdentity(opts.dir, opts.out) }) } } : {}),
   });
   const settings = check.settings;
   // A shard builds the species (and reports the invalid documents) whose name hashes into it.
@@ -858,6 +903,17 @@ async function buildChecked(
       const v = batch[i]!;
       if (useStored && v.resultKey !== undefined) {
         const tr = performance.now();
+        const line = check.pack?.results.get(v.resultKey);
+        if (line !== undefined) {
+          try {
+            const o = storedOutcome(v, decodeEntry<StoredResult>(line), performance.now() - tr);
+            o.packLine = line;
+            outs[i] = o;
+            continue;
+          } catch {
+            // Unreadable line: the result entry decides.
+          }
+        }
         const r = await readEntry<StoredResult>(cache, 'result', v.resultKey);
         if (r.outcome === 'hit') {
           outs[i] = storedOutcome(v, r.value!, performance.now() - tr);
@@ -886,19 +942,50 @@ async function buildChecked(
     }
     return outs as SpeciesOutcome[];
   };
+  // The texts of a species taken from the build pack, when the emitter needs them: from its result entry,
+  // else (missing, rejected) the species is built again and its lookup reported.
+  const textsOf = async (o: SpeciesOutcome, lookup: { outcome?: CacheOutcome; reason?: string }): Promise<RenderedSpecies | undefined> => {
+    const r = await readEntry<StoredResult>(cache, 'result', o.valid.resultKey!);
+    Object.assign(lookup, r.outcome === 'hit' && !r.value?.built?.rendered ? { outcome: 'corrupt', reason: 'no rendered outputs' } : { outcome: r.outcome, reason: r.reason });
+    return r.outcome === 'hit' ? r.value?.built?.rendered : undefined;
+  };
+  const rebuilt = async (o: SpeciesOutcome, lookup: { outcome?: CacheOutcome; reason?: string }): Promise<SpeciesOutcome> => {
+    let ready: ReadySpecies;
+    try {
+      ready = await speciesOf(o.valid, spill);
+    } catch (e) {
+      return failedOutcome(o.valid, errorText(e), 'species-file-changed');
+    }
+    const [fresh] = await pool.run([ready]);
+    fresh!.cache.result = lookup.outcome === 'corrupt' ? 'corrupt' : 'miss';
+    if (lookup.outcome === 'corrupt') fresh!.cacheNotes.unshift(`cache entry for result rejected (${lookup.reason}); recomputed`);
+    return fresh!;
+  };
+  const pack = cacheDir !== undefined && !shard ? new PackWriter() : undefined;
+  if (pack) for (const [key, text] of check.packFiles) pack.addFile(key, text);
   let emitter: StreamingEmitter | undefined;
+  const emitterOptions = { digests: pack !== undefined, ...(check.pack ? { previous: check.pack.outputs } : {}) };
   try {
-    emitter = staging ? await StreamingEmitter.open(staging, settings) : undefined;
+    emitter = staging ? await StreamingEmitter.open(staging, settings, emitterOptions) : undefined;
 
     // In name order: emit (a record the 80-column layout cannot hold fails its species), then summarise.
-    const sink = async (o: SpeciesOutcome): Promise<void> => {
+    const sink = async (given: SpeciesOutcome): Promise<void> => {
+      let o = given;
       const te = performance.now();
       let tableMs = 0;
       let rendered: RenderedSpecies | undefined;
-      if (o.stored?.built && emitter) await emitter.addRendered(o.valid.name, o.stored.built.rendered);
+      let digests: RenderedDigests | undefined;
+      if (o.stored?.built && emitter) {
+        if (o.stored.built.rendered) digests = await emitter.addRendered(o.valid.name, o.stored.built.rendered);
+        else {
+          const lookup: { outcome?: CacheOutcome; reason?: string } = {};
+          digests = await emitter.addDigested(o.valid.name, o.stored.built.digests ?? {}, () => textsOf(o, lookup));
+          if (!digests) o = await rebuilt(o, lookup);
+        }
+      }
       if (o.built && emitter) {
         try {
-          ({ tableMs, rendered } = await emitter.add(o.built));
+          ({ tableMs, rendered, digests } = await emitter.add(o.built));
         } catch (e) {
           if (!(e instanceof Nasa7FormatError) || e.record !== o.valid.name) throw e;
           o.diagnostics.push({
@@ -916,6 +1003,11 @@ async function buildChecked(
       // What a rebuild with nothing changed takes instead of building this species again.
       if (emitter && !o.stored && o.valid.resultKey !== undefined && storable(o)) {
         await writeEntry(cache, 'result', o.valid.resultKey, toStored(o, rendered));
+      }
+      // And the same without the texts, for the build pack of the next build.
+      if (pack && emitter && o.valid.resultKey !== undefined && storable(o)) {
+        const line = o.packLine ?? packLineOf(o, digests);
+        if (line !== undefined) pack.addResult(o.valid.resultKey, line);
       }
       emitMs += performance.now() - te;
       processed++;
@@ -1005,6 +1097,12 @@ async function buildChecked(
     if (finalStaging) {
       emitter ??= await StreamingEmitter.open(finalStaging, settings);
       await emitter.finish(mark);
+      // Written before the swap so that a failure is reported; should the swap fail, the pack still says
+      // only what is checked before use (its outputs are compared by digest with whatever OUT then holds).
+      if (pack && check.fastContext !== undefined) {
+        for (const r of emitter.records) pack.addOutput(r);
+        await pack.write(cacheDir!, packIdentity(opts.dir, opts.out), check.fastContext).catch((e) => cache.noteWriteFailure(e));
+      }
     }
     if (finalStaging && reportWriter) {
       const report = reportWriter.finish(status, shardInvalid.map((i) => `${i.file}#${i.document}: ${i.diagnostics.find((d) => d.severity === 'error')?.message ?? 'invalid'}`));
@@ -1193,6 +1291,22 @@ function toStored(o: SpeciesOutcome, rendered: RenderedSpecies | undefined): Sto
   const fitMetrics = fitMetricsOf(o);
   if (o.built && rendered) s.built = { rendered, ...(fitMetrics ? { fitMetrics } : {}) };
   return s;
+}
+
+/**
+ * The build pack line of a species (storage/build-pack.ts): its stored result with the digests of its texts
+ * instead of the texts; undefined for a built species whose digests are unknown.
+ */
+function packLineOf(o: SpeciesOutcome, digests: RenderedDigests | undefined): string | undefined {
+  const s: StoredResult = o.stored
+    ? { diagnostics: o.stored.diagnostics, stages: o.stored.stages, ...(o.stored.keys ? { keys: o.stored.keys } : {}) }
+    : toStored(o, undefined);
+  if (isBuilt(o)) {
+    if (!digests) return undefined;
+    const fitMetrics = o.stored ? o.stored.built?.fitMetrics : fitMetricsOf(o);
+    s.built = { digests, ...(fitMetrics ? { fitMetrics } : {}) };
+  }
+  return encodeEntry(s);
 }
 
 const STAGE_KINDS = ['samples', 'fit', 'table'] as const;

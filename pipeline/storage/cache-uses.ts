@@ -13,6 +13,7 @@ import path from 'node:path';
 import { writeFileAtomic } from './atomic-write.js';
 import { CACHE_KINDS, type CacheKind } from './cache.js';
 import { sha256Hex } from './hash.js';
+import { PACK_DIR, packHeader } from './build-pack.js';
 import { compareText } from '../core/text.js';
 
 const USES = 'uses';
@@ -26,7 +27,8 @@ async function databaseId(databaseDir: string): Promise<{ id: string; real: stri
 export async function recordCacheUse(cacheDir: string, databaseDir: string, keys: readonly string[]): Promise<void> {
   const { id, real } = await databaseId(databaseDir);
   await mkdir(path.join(cacheDir, USES), { recursive: true });
-  const body = [...new Set(keys)].sort(compareText).join('\n');
+  // The default sort compares UTF-16 code units, as compareText does, without a call per comparison.
+  const body = [...new Set(keys)].sort().join('\n');
   await writeFileAtomic(path.join(cacheDir, USES, id), `${real}\n${body}${body ? '\n' : ''}`, { sync: false });
 }
 
@@ -84,5 +86,25 @@ export async function pruneCache(cacheDir: string, databaseDir: string, keys: re
       if ((await readdir(subDir).catch(() => ['x'])).length === 0) await rm(subDir, { recursive: true, force: true });
     }
   }
+  // Build packs (storage/build-pack.ts) of output folders or databases that are gone serve no build again.
+  for (const stale of await stalePacks(cacheDir)) {
+    result.removed++;
+    result.bytesFreed += stale.size;
+    await rm(stale.file, { force: true });
+  }
   return result;
+}
+
+/** The build packs whose database folder or output folder no longer exists (or that have no readable header). */
+async function stalePacks(cacheDir: string): Promise<Array<{ file: string; size: number }>> {
+  const dir = path.join(cacheDir, PACK_DIR);
+  const out: Array<{ file: string; size: number }> = [];
+  const isDir = (p: unknown) => typeof p === 'string' && stat(p).then((s) => s.isDirectory(), () => false);
+  for (const name of (await readdir(dir).catch(() => [] as string[])).sort(compareText)) {
+    const file = path.join(dir, name);
+    const header = await packHeader(file);
+    if (header && (await isDir(header.database)) && (await isDir(header.out))) continue;
+    out.push({ file, size: await stat(file).then((s) => s.size, () => 0) });
+  }
+  return out;
 }

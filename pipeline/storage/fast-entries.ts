@@ -22,6 +22,7 @@
 import type { Diagnostic } from '../core/diagnostics.js';
 import type { NameFact } from '../stages/names.js';
 import type { StageCache, CacheLookup } from './cache.js';
+import type { Digest } from './hash.js';
 
 export type Position = { line: number; column: number };
 
@@ -47,6 +48,13 @@ export interface FileFacts {
   geometry: Array<{ name: string; hash: string }>;
 }
 
+/** Digests of the rendered outputs of one built species (what the build pack stores instead of the texts). */
+export interface RenderedDigests {
+  nasa7?: Digest;
+  thermo?: Digest;
+  table?: Digest;
+}
+
 /** The rendered outputs of one built species (thermo without its list separator). */
 export interface RenderedSpecies {
   nasa7?: string;
@@ -63,7 +71,9 @@ export interface StoredResult {
   stages: Array<'samples' | 'fit' | 'table'>;
   /** Present when the species was built and written. */
   built?: {
-    rendered: RenderedSpecies;
+    /** The texts (a result entry), or only their digests (a line of the build pack, storage/build-pack.ts). */
+    rendered?: RenderedSpecies;
+    digests?: RenderedDigests;
     fitMetrics?: { max_abs_cp: number; max_abs_h: number; max_abs_s: number; t_mid: number };
   };
 }
@@ -101,8 +111,13 @@ export async function readEntry<T>(cache: StageCache, kind: 'file' | 'result', k
 
 /** Stores a fast-path entry; a failed write is noted on the cache (it only costs time on the next build). */
 export async function writeEntry(cache: StageCache, kind: 'file' | 'result', key: string, value: unknown): Promise<void> {
+  await writeEntryText(cache, kind, key, encodeEntry(value));
+}
+
+/** Stores a fast-path entry of `encodeEntry` text. */
+export async function writeEntryText(cache: StageCache, kind: 'file' | 'result', key: string, text: string): Promise<void> {
   try {
-    await cache.putText(kind, key, encodeEntry(value));
+    await cache.putText(kind, key, text);
   } catch (e) {
     cache.noteWriteFailure(e);
   }

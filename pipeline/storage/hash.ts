@@ -5,7 +5,7 @@
  * (shortest round-trip form, so equal doubles always give equal text). Two inputs that differ only in key
  * order or YAML layout therefore hash the same.
  */
-import { createHash } from 'node:crypto';
+import { hash } from 'node:crypto';
 
 /** Deterministic JSON text of a JSON-like value (sorted keys; arrays keep their order). */
 export function canonicalJson(value: unknown): string {
@@ -68,12 +68,24 @@ function inOrder(keys: readonly string[]): boolean {
   return true;
 }
 
-/** sha256 of a string or bytes, lower-case hex. */
+/** sha256 of a string (UTF-8) or bytes, lower-case hex. */
 export function sha256Hex(data: string | Uint8Array): string {
-  return createHash('sha256').update(data).digest('hex');
+  // One-shot: no Hash object per call (a rebuild hashes a few small texts per species).
+  return hash('sha256', data, 'hex');
 }
 
 /** sha256 of the canonical JSON of `parts` (an array so that the order of the parts matters). */
 export function hashParts(...parts: unknown[]): string {
   return sha256Hex(canonicalJson(parts));
+}
+
+/** sha256 (lower-case hex) and length in bytes of a text (UTF-8) or file. */
+export interface Digest {
+  hash: string;
+  bytes: number;
+}
+
+/** The Digest of a text as written in UTF-8. */
+export function textDigest(text: string): Digest {
+  return { hash: sha256Hex(text), bytes: Buffer.byteLength(text, 'utf8') };
 }

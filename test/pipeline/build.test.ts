@@ -231,8 +231,10 @@ describe('qforge build of the fixture database', () => {
     const e1 = await readFile(entries[1]!, 'utf8');
     await writeFile(entries[1]!, e1.replace(/"low":\[(-?)(\d)/, (_m, sign: string, d: string) => `"low":[${sign}${(Number(d) + 1) % 10}`));
     await writeFile(entries[2]!, await readFile(entries[3]!, 'utf8'));
-    // Without the whole-species result entries (test/pipeline/fast-rebuild.test.ts), so the fit entries are read.
+    // Without the whole-species result entries (test/pipeline/fast-rebuild.test.ts) and the build pack that
+    // holds the same results (test/pipeline/storage/build-pack.test.ts), so the fit entries are read.
     await rm(path.join(cacheRoot, 'result'), { recursive: true, force: true });
+    await rm(path.join(cacheRoot, 'pack'), { recursive: true, force: true });
     const r = await build('--json', '--quiet');
     expect(r.code).toBe(0);
     const summary = JSON.parse(r.stdout);

@@ -3,6 +3,7 @@
  */
 import { C2_CM_K } from '../constants.js';
 import type { Vibration } from '../model.js';
+import { expNeg, expNegPairSmall } from './exp-neg.js';
 import type { GridMoments, TemperatureGrid } from './grid-moments.js';
 import type { PartitionMoments } from './moments.js';
 
@@ -30,13 +31,15 @@ export function harmonicMoments(vibrations: readonly Vibration[], T: number): Pa
 
 /**
  * Grid form of `harmonicMoments`, adding into `into` at every temperature of `grid` (the same formula).
- * Method: per mode and temperature ONE exponential: e = e^{−x} when x ≥ ln 2, else 1 − e = −expm1(−x); the
- * other of the pair is one subtraction whose result lies in [½, 1], so both carry ≤ 1 ulp relative error.
- * lnQ = −Σ d ln(1 − e) is one logarithm per temperature, of the running product Π (1 − e)^d (flushed into
- * the logarithm before it can underflow).
- * Accuracy (stated, tested against harmonicMoments): meanU and varU within a few ulps relative per mode;
- * lnQ within (number of factors + 2) ulps of 1 absolute, i.e. ~4e-14 for 180 modes — below 1e-14 of S/R,
- * which always holds the translational lnQ ≥ 10.
+ * Method: per mode and temperature one table-driven exponential (exp-neg.ts, no Math.exp call):
+ * e = e^{−x} when x ≥ ln 2, and 1 − e the subtraction whose result lies in [½, 1]; when x < ln 2 both e and
+ * 1 − e from `expNegPairSmall`, so 1 − e keeps its relative accuracy however small x is. One division per
+ * mode (1/(1 − e)). lnQ = −Σ d ln(1 − e) is one logarithm per temperature, of the running product
+ * Π (1 − e)^d (flushed into the logarithm before it can underflow).
+ * Accuracy (stated, tested against harmonicMoments at 1e-13): e and 1 − e within 4 ulps (exp-neg.ts), so
+ * meanU and varU within about 10 ulps relative per mode; lnQ within (number of factors + 2) ulps of 1
+ * absolute plus 4 ulps relative per factor, i.e. ~1e-13 for 180 modes — below 1e-14 of S/R, which always
+ * holds the translational lnQ ≥ 10.
  */
 export function addHarmonicGrid(vibrations: readonly Vibration[], grid: TemperatureGrid, into: GridMoments): void {
   const modes = vibrations.length;
@@ -46,6 +49,7 @@ export function addHarmonicGrid(vibrations: readonly Vibration[], grid: Temperat
     theta[k] = C2_CM_K * vibrations[k]!.wavenumber;
     degeneracy[k] = vibrations[k]!.degeneracy;
   }
+  const pair = new Float64Array(2);
   const { T, invT } = grid;
   for (let j = 0; j < T.length; j++) {
     const y = invT[j]!;
@@ -59,15 +63,17 @@ export function addHarmonicGrid(vibrations: readonly Vibration[], grid: Temperat
       let e: number;
       let oneMinusE: number;
       if (x >= Math.LN2) {
-        e = Math.exp(-x);
+        e = expNeg(x);
         oneMinusE = 1 - e;
       } else {
-        oneMinusE = -Math.expm1(-x);
-        e = 1 - oneMinusE;
+        expNegPairSmall(x, pair);
+        e = pair[0]!;
+        oneMinusE = pair[1]!;
       }
-      const ratio = e / oneMinusE;
-      meanU += d * x * ratio;
-      varU += (d * x * x * ratio) / oneMinusE;
+      const inv = 1 / oneMinusE;
+      const xRatio = d * x * e * inv;
+      meanU += xRatio;
+      varU += xRatio * x * inv;
       if (d === 1) product *= oneMinusE;
       else if (Number.isInteger(d) && d <= 8) for (let r = 0; r < d; r++) product *= oneMinusE;
       else logSum += d * Math.log(oneMinusE);

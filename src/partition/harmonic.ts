@@ -49,17 +49,22 @@ export function addHarmonicGrid(vibrations: readonly Vibration[], grid: Temperat
     theta[k] = C2_CM_K * vibrations[k]!.wavenumber;
     degeneracy[k] = vibrations[k]!.degeneracy;
   }
-  const pair = new Float64Array(2);
+  // Mode by mode over the whole grid (each temperature's sums are independent, so the processor overlaps
+  // them), with the running product Π (1 − e)^d per temperature; the order of the additions into each
+  // temperature's sums is the mode order, whatever the grid.
   const { T, invT } = grid;
-  for (let j = 0; j < T.length; j++) {
-    const y = invT[j]!;
-    let logSum = 0;
-    let product = 1;
-    let meanU = 0;
-    let varU = 0;
-    for (let k = 0; k < modes; k++) {
-      const x = theta[k]! * y;
-      const d = degeneracy[k]!;
+  const n = T.length;
+  const meanU = new Float64Array(n);
+  const varU = new Float64Array(n);
+  const product = new Float64Array(n).fill(1);
+  const logSum = new Float64Array(n);
+  const pair = new Float64Array(2);
+  for (let k = 0; k < modes; k++) {
+    const th = theta[k]!;
+    const d = degeneracy[k]!;
+    const powers = d === 1 ? 1 : Number.isInteger(d) && d <= 8 ? d : 0;
+    for (let j = 0; j < n; j++) {
+      const x = th * invT[j]!;
       let e: number;
       let oneMinusE: number;
       if (x >= Math.LN2) {
@@ -72,18 +77,22 @@ export function addHarmonicGrid(vibrations: readonly Vibration[], grid: Temperat
       }
       const inv = 1 / oneMinusE;
       const xRatio = d * x * e * inv;
-      meanU += xRatio;
-      varU += xRatio * x * inv;
-      if (d === 1) product *= oneMinusE;
-      else if (Number.isInteger(d) && d <= 8) for (let r = 0; r < d; r++) product *= oneMinusE;
-      else logSum += d * Math.log(oneMinusE);
-      if (product < 1e-250) {
-        logSum += Math.log(product);
-        product = 1;
+      meanU[j]! += xRatio;
+      varU[j]! += xRatio * x * inv;
+      let p = product[j]!;
+      if (powers === 1) p *= oneMinusE;
+      else if (powers > 1) for (let r = 0; r < powers; r++) p *= oneMinusE;
+      else logSum[j]! += d * Math.log(oneMinusE);
+      if (p < 1e-250) {
+        logSum[j]! += Math.log(p);
+        p = 1;
       }
+      product[j] = p;
     }
-    into.lnQ[j]! -= logSum + Math.log(product);
-    into.meanU[j]! += meanU;
-    into.varU[j]! += varU;
+  }
+  for (let j = 0; j < n; j++) {
+    into.lnQ[j]! -= logSum[j]! + Math.log(product[j]!);
+    into.meanU[j]! += meanU[j]!;
+    into.varU[j]! += varU[j]!;
   }
 }

@@ -168,7 +168,7 @@ function splitBlock(d: Float64Array, e: Float64Array, split: LadderSplit, top: n
 export interface HinderedRotorLevels {
   /** Energies above the lowest level, cm⁻¹, ascending, all 2π-periodic levels (before dividing by σ). */
   readonly energies: Float64Array;
-  /** The level list summed by `hinderedRotorMoments`: every level with weight 1/σ. */
+  /** The level list summed by `hinderedRotorMoments`: every level with weight 1/σ (equal energies merged). */
   readonly list: LevelList;
   /** Largest |m| of the free-rotor basis used. */
   readonly basisLimit: number;
@@ -302,7 +302,18 @@ export function hinderedRotorLevels(
   }
   merged.sort();
   const energies = merged.map((x) => x - lowest).filter((x) => x <= ceiling);
-  const list = createLevelList(energies, new Float64Array(energies.length).fill(1 / sigma), C2_CM_K);
+  // Mirror blocks (r and n − r) give every one of their levels twice, bit for bit: one entry of weight
+  // 2/σ instead of two of 1/σ is the same sum with one exponential fewer (exact; only the order of two
+  // equal additions changes, a rounding-level difference).
+  let distinct = 0;
+  for (let i = 0; i < energies.length; i++) if (i === 0 || energies[i] !== energies[i - 1]) distinct++;
+  const levelEnergies = new Float64Array(distinct);
+  const levelWeights = new Float64Array(distinct);
+  for (let i = 0, k = -1; i < energies.length; i++) {
+    if (i === 0 || energies[i] !== energies[i - 1]) levelEnergies[++k] = energies[i]!;
+    levelWeights[k]! += 1 / sigma;
+  }
+  const list = createLevelList(levelEnergies, levelWeights, C2_CM_K);
   return { energies, list, basisLimit: mMax, zeroPointEnergy: lowest };
 }
 

@@ -3,6 +3,7 @@
  */
 import { C2_CM_K } from '../constants.js';
 import type { Vibration } from '../model.js';
+import { expNeg, expNegPairSmall } from './exp-neg.js';
 import type { GridMoments, TemperatureGrid } from './grid-moments.js';
 import type { PartitionMoments } from './moments.js';
 
@@ -30,13 +31,15 @@ export function harmonicMoments(vibrations: readonly Vibration[], T: number): Pa
 
 /**
  * Grid form of `harmonicMoments`, adding into `into` at every temperature of `grid` (the same formula).
- * Method: per mode and temperature ONE exponential: e = e^{−x} when x ≥ ln 2, else 1 − e = −expm1(−x); the
- * other of the pair is one subtraction whose result lies in [½, 1], so both carry ≤ 1 ulp relative error.
- * lnQ = −Σ d ln(1 − e) is one logarithm per temperature, of the running product Π (1 − e)^d (flushed into
- * the logarithm before it can underflow).
- * Accuracy (stated, tested against harmonicMoments): meanU and varU within a few ulps relative per mode;
- * lnQ within (number of factors + 2) ulps of 1 absolute, i.e. ~4e-14 for 180 modes — below 1e-14 of S/R,
- * which always holds the translational lnQ ≥ 10.
+ * Method: per mode and temperature one table-driven exponential (exp-neg.ts, no Math.exp call):
+ * e = e^{−x} when x ≥ ln 2, and 1 − e the subtraction whose result lies in [½, 1]; when x < ln 2 both e and
+ * 1 − e from `expNegPairSmall`, so 1 − e keeps its relative accuracy however small x is. One division per
+ * mode (1/(1 − e)). lnQ = −Σ d ln(1 − e) is one logarithm per temperature, of the running product
+ * Π (1 − e)^d (flushed into the logarithm before it can underflow).
+ * Accuracy (stated, tested against harmonicMoments at 1e-13): e and 1 − e within 4 ulps (exp-neg.ts), so
+ * meanU and varU within about 10 ulps relative per mode; lnQ within (number of factors + 2) ulps of 1
+ * absolute plus 4 ulps relative per factor, i.e. ~1e-13 for 180 modes — below 1e-14 of S/R, which always
+ * holds the translational lnQ ≥ 10.
  */
 export function addHarmonicGrid(vibrations: readonly Vibration[], grid: TemperatureGrid, into: GridMoments): void {
   const modes = vibrations.length;
@@ -46,38 +49,50 @@ export function addHarmonicGrid(vibrations: readonly Vibration[], grid: Temperat
     theta[k] = C2_CM_K * vibrations[k]!.wavenumber;
     degeneracy[k] = vibrations[k]!.degeneracy;
   }
+  // Mode by mode over the whole grid (each temperature's sums are independent, so the processor overlaps
+  // them), with the running product Π (1 − e)^d per temperature; the order of the additions into each
+  // temperature's sums is the mode order, whatever the grid.
   const { T, invT } = grid;
-  for (let j = 0; j < T.length; j++) {
-    const y = invT[j]!;
-    let logSum = 0;
-    let product = 1;
-    let meanU = 0;
-    let varU = 0;
-    for (let k = 0; k < modes; k++) {
-      const x = theta[k]! * y;
-      const d = degeneracy[k]!;
+  const n = T.length;
+  const meanU = new Float64Array(n);
+  const varU = new Float64Array(n);
+  const product = new Float64Array(n).fill(1);
+  const logSum = new Float64Array(n);
+  const pair = new Float64Array(2);
+  for (let k = 0; k < modes; k++) {
+    const th = theta[k]!;
+    const d = degeneracy[k]!;
+    const powers = d === 1 ? 1 : Number.isInteger(d) && d <= 8 ? d : 0;
+    for (let j = 0; j < n; j++) {
+      const x = th * invT[j]!;
       let e: number;
       let oneMinusE: number;
       if (x >= Math.LN2) {
-        e = Math.exp(-x);
+        e = expNeg(x);
         oneMinusE = 1 - e;
       } else {
-        oneMinusE = -Math.expm1(-x);
-        e = 1 - oneMinusE;
+        expNegPairSmall(x, pair);
+        e = pair[0]!;
+        oneMinusE = pair[1]!;
       }
-      const ratio = e / oneMinusE;
-      meanU += d * x * ratio;
-      varU += (d * x * x * ratio) / oneMinusE;
-      if (d === 1) product *= oneMinusE;
-      else if (Number.isInteger(d) && d <= 8) for (let r = 0; r < d; r++) product *= oneMinusE;
-      else logSum += d * Math.log(oneMinusE);
-      if (product < 1e-250) {
-        logSum += Math.log(product);
-        product = 1;
+      const inv = 1 / oneMinusE;
+      const xRatio = d * x * e * inv;
+      meanU[j]! += xRatio;
+      varU[j]! += xRatio * x * inv;
+      let p = product[j]!;
+      if (powers === 1) p *= oneMinusE;
+      else if (powers > 1) for (let r = 0; r < powers; r++) p *= oneMinusE;
+      else logSum[j]! += d * Math.log(oneMinusE);
+      if (p < 1e-250) {
+        logSum[j]! += Math.log(p);
+        p = 1;
       }
+      product[j] = p;
     }
-    into.lnQ[j]! -= logSum + Math.log(product);
-    into.meanU[j]! += meanU;
-    into.varU[j]! += varU;
+  }
+  for (let j = 0; j < n; j++) {
+    into.lnQ[j]! -= logSum[j]! + Math.log(product[j]!);
+    into.meanU[j]! += meanU[j]!;
+    into.varU[j]! += varU[j]!;
   }
 }

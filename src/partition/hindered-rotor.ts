@@ -7,6 +7,7 @@ import { createLevelList, levelSumMoments, type LevelList } from './level-sum.js
 import { fourierRotorEigenvalues } from './fourier-rotor.js';
 import { LevelSumError, type PartitionMoments } from './moments.js';
 import { symmetricTridiagonalEigenvalues } from './tridiagonal-eigenvalues.js';
+import { eigenvaluesBelow, windowEigenvalue } from './tridiagonal-window.js';
 
 export { symmetricTridiagonalEigenvalues };
 
@@ -87,11 +88,87 @@ export function hinderedRotorBasisSize(rotor: Pick<InternalRotor, 'barrier' | 'r
   return 2 * hinderedRotorBasisLimit(rotor) + 1;
 }
 
+/** Where a rotor's blocks are split between the QL iteration (below) and the level-by-level ladder (above). */
+interface LadderSplit {
+  /** Absolute energy (cm⁻¹, from the potential minimum) separating the two parts. */
+  energy: number;
+  /** Largest |m| whose basis functions the lower part keeps (converges every level up to `energy`). */
+  lowerLimit: number;
+  /** Barrier V0, cm⁻¹. */
+  barrier: number;
+  /** Half-width cap of a window: four times the Combes–Thomas step count of `hinderedRotorBasisLimit`. */
+  reach: number;
+  rotationalConstant: number;
+  foldedness: number;
+}
+
+/**
+ * The split of `hinderedRotorLevels`, or undefined when the whole blocks are small enough for QL alone.
+ * The ladder starts where B m² ≥ V0 and neighbouring diagonal entries of a block differ by at least V0/2
+ * (two couplings): there every level is one basis function dressed by a fast-decaying tail.
+ */
+function ladderSplit(rotor: InternalRotor, mMax: number, ceilingTemperature: number): LadderSplit | undefined {
+  const { barrier: v0, rotationalConstant: b, foldedness: n } = rotor;
+  const mStart = Math.max(Math.sqrt(v0 / b), v0 / (4 * b * n) + n / 2);
+  const energy = b * mStart * mStart + v0 / 2;
+  // Basis converging every level ≤ energy (hinderedRotorBasisLimit with that keep energy, in its units).
+  const lowerLimit = hinderedRotorBasisLimit(rotor, Math.min(ceilingTemperature, (energy * C2_CM_K) / KEPT_U_AT_CEILING));
+  if (energy >= hinderedRotorEnergyCeiling(ceilingTemperature) || lowerLimit + 8 * n >= mMax) return undefined;
+  const x = Math.sqrt(v0 / b) / (4 * Math.SQRT2 * n);
+  return { energy, lowerLimit, barrier: v0, reach: 4 * (Math.ceil(2 * Math.E * x) + 12), rotationalConstant: b, foldedness: n };
+}
+
+/**
+ * Eigenvalues of one block (diagonal d, couplings e; d is B m² + V0/2 along a residue class of m, so its
+ * entries with |m| ≤ lowerLimit are one contiguous run): QL on that run, keeping the values ≤ split.energy
+ * (converged, by the basis argument of `hinderedRotorBasisLimit`), and `windowEigenvalue` for every index
+ * whose diagonal lies in (split.energy − V0/2, top], keeping the values > split.energy. Accepted only if a
+ * Sturm count of the whole block finds exactly as many eigenvalues ≤ split.energy, every ladder value is
+ * certified, and no two ladder values are closer than twice their error bound (so each is a different
+ * eigenvalue); the count up to the ceiling is checked by the caller. Undefined when a check fails.
+ */
+function splitBlock(d: Float64Array, e: Float64Array, split: LadderSplit, top: number): { lower: Float64Array; upper: Float64Array } | undefined {
+  const size = d.length;
+  let maxD = 0;
+  for (let k = 0; k < size; k++) maxD = Math.max(maxD, Math.abs(d[k]!));
+  const tolerance = 4 * 2 ** -52 * maxD;
+  // Rows of the lower run: diagonal ≤ B·lowerLimit² + V0/2 + (a rounding margin).
+  const v0Half = split.barrier / 2;
+  const runTop = split.rotationalConstant * split.lowerLimit * split.lowerLimit + v0Half + 1e-9 * maxD;
+  let from = -1;
+  let to = -1;
+  for (let k = 0; k < size; k++) {
+    if (d[k]! <= runTop) {
+      if (from < 0) from = k;
+      to = k + 1;
+    }
+  }
+  if (from < 0 || to - from >= size - 4) return undefined;
+  const subD = d.slice(from, to);
+  const subE = e.slice(from, to);
+  subE[subE.length - 1] = 0;
+  const sub = symmetricTridiagonalEigenvalues(subD, subE);
+  let below = 0;
+  while (below < sub.length && sub[below]! <= split.energy) below++;
+  if (eigenvaluesBelow(d, e, split.energy) !== below) return undefined;
+  const ladder: number[] = [];
+  const low = split.energy - v0Half;
+  for (let k = 0; k < size; k++) {
+    if (!(d[k]! > low && d[k]! <= top)) continue;
+    const mu = windowEigenvalue(d, e, k, tolerance, split.reach);
+    if (Number.isNaN(mu)) return undefined;
+    if (mu > split.energy) ladder.push(mu);
+  }
+  const upper = Float64Array.from(ladder).sort();
+  for (let i = 1; i < upper.length; i++) if (upper[i]! - upper[i - 1]! <= 2 * tolerance) return undefined;
+  return { lower: sub.subarray(0, below), upper };
+}
+
 /** The levels of one hindered rotor, built once. */
 export interface HinderedRotorLevels {
   /** Energies above the lowest level, cm⁻¹, ascending, all 2π-periodic levels (before dividing by σ). */
   readonly energies: Float64Array;
-  /** The level list summed by `hinderedRotorMoments`: every level with weight 1/σ. */
+  /** The level list summed by `hinderedRotorMoments`: every level with weight 1/σ (equal energies merged). */
   readonly list: LevelList;
   /** Largest |m| of the free-rotor basis used. */
   readonly basisLimit: number;
@@ -111,6 +188,15 @@ export interface HinderedRotorLevels {
  * keeps every level with u ≤ 50 there and shrinks the basis as √ of the ceiling), each with weight 1/σ: the levels of the full
  * 2π period are counted once and the rotor symmetry number σ removes the configurations that are the same
  * (σ = n for a symmetric top such as CH3; σ = 1 with n = 2 for a two-well torsion of distinguishable wells).
+ * Cost: the QL iteration is O(size²) per block, and most of a block lies far above the barrier. So (single
+ * cosine, V0 > 0) each block is split at E_s = B m_s² + V0/2, m_s = max(√(V0/B), V0/(4Bn) + n/2) (above the
+ * barrier, where neighbouring diagonal entries differ by at least two couplings): QL on the rows with
+ * |m| ≤ the basis limit for E_s (the same convergence argument as `hinderedRotorBasisLimit`) gives the
+ * levels up to E_s, and every level above is found on its own from a window of the block
+ * (tridiagonal-window.ts), certified to within 4ε·max|diagonal| by its residual — the accuracy class of QL
+ * on the whole block. Sturm counts of the whole block at E_s and at the ceiling must match the numbers of
+ * levels found, and no two window values may coincide; otherwise that block is diagonalised whole. Tested
+ * against whole-block QL (level counts equal, energies within 1e-13 of the ceiling energy).
  * Units: B (reduced rotational constant ħ²/(2 I_red hc)) and V0 in cm⁻¹. Valid for a torsion separable
  * from the other modes, with a constant reduced moment and a pure n-fold cosine potential; complete up to
  * HINDERED_ROTOR_CEILING_TEMPERATURE. Limits: V0 → 0 gives the free rotor (levels B m²), V0 ≫ kT the
@@ -121,14 +207,15 @@ export interface HinderedRotorLevels {
  */
 export function hinderedRotorLevels(
   rotor: InternalRotor,
-  options: { basisLimit?: number; ceilingTemperature?: number } = {},
+  options: { basisLimit?: number; ceilingTemperature?: number; fullDiagonalisation?: boolean } = {},
 ): HinderedRotorLevels {
   const { barrier: v0, foldedness: n, symmetryNumber: sigma, rotationalConstant: b } = rotor;
   if (!(Number.isFinite(v0) && v0 >= 0)) throw new LevelSumError(`hindered rotor: barrier ${v0} cm-1; expected >= 0`);
   if (!(Number.isInteger(n) && n >= 1)) throw new LevelSumError(`hindered rotor: foldedness ${n}; expected a whole number >= 1`);
   if (!(Number.isInteger(sigma) && sigma >= 1)) throw new LevelSumError(`hindered rotor: symmetry number ${sigma}; expected a whole number >= 1`);
   if (!(Number.isFinite(b) && b > 0)) throw new LevelSumError(`hindered rotor: rotational constant ${b} cm-1; expected > 0`);
-  // `basisLimit` (a larger |m| than needed) exists for the convergence tests only.
+  // `basisLimit` (a larger |m| than needed) and `fullDiagonalisation` (QL on every whole block, no
+  // level-by-level upper ladder) exist for the tests only.
   const ceilingTemperature = options.ceilingTemperature ?? HINDERED_ROTOR_CEILING_TEMPERATURE;
   if (!(ceilingTemperature > 0 && ceilingTemperature <= HINDERED_ROTOR_CEILING_TEMPERATURE)) {
     throw new LevelSumError(`hindered rotor: ceiling temperature ${ceilingTemperature} K; expected > 0 and <= ${HINDERED_ROTOR_CEILING_TEMPERATURE}`);
@@ -140,12 +227,23 @@ export function hinderedRotorLevels(
     );
   }
   const parts: Float64Array[] = [];
+  const ceiling = hinderedRotorEnergyCeiling(ceilingTemperature);
+  const split = options.fullDiagonalisation || v0 === 0 ? undefined : ladderSplit(rotor, mMax, ceilingTemperature);
+  /** Blocks whose upper ladder was found level by level, checked by Sturm counts once the lowest level is known. */
+  const windowed: Array<{ d: Float64Array; e: Float64Array; below: number; upper: Float64Array; copies: number }> = [];
   const eigenvaluesOf = (diagonal: (k: number) => number, firstCoupling: number, size: number, copies: number) => {
     const d = new Float64Array(size);
     const e = new Float64Array(size).fill(-v0 / 4);
     for (let k = 0; k < size; k++) d[k] = diagonal(k);
     e[0] = size > 1 ? firstCoupling : 0;
-    const values = symmetricTridiagonalEigenvalues(d, e);
+    e[size - 1] = 0;
+    const ladder = split ? splitBlock(d, e, split, ceiling + v0) : undefined;
+    if (ladder) {
+      for (let c = 0; c < copies; c++) parts.push(ladder.lower);
+      windowed.push({ d, e, below: ladder.lower.length, upper: ladder.upper, copies });
+      return;
+    }
+    const values = symmetricTridiagonalEigenvalues(d.slice(), e.slice());
     for (let c = 0; c < copies; c++) parts.push(values);
   };
   const diagonalAt = (m: number) => b * m * m + v0 / 2;
@@ -181,9 +279,41 @@ export function hinderedRotorLevels(
   }
   all.sort();
   const lowest = all[0]!;
-  const ceiling = hinderedRotorEnergyCeiling(ceilingTemperature);
-  const energies = all.map((x) => x - lowest).filter((x) => x <= ceiling);
-  const list = createLevelList(energies, new Float64Array(energies.length).fill(1 / sigma), C2_CM_K);
+  // Upper ladders: keep a block's level-by-level values only if the Sturm count of the whole block finds
+  // exactly as many eigenvalues up to the ceiling; otherwise diagonalise that block after all.
+  const upper: Float64Array[] = [];
+  for (const w of windowed) {
+    const top = lowest + ceiling;
+    let kept = 0;
+    for (let i = 0; i < w.upper.length; i++) if (w.upper[i]! <= top) kept++;
+    if (eigenvaluesBelow(w.d, w.e, top) - w.below === kept) {
+      for (let c = 0; c < w.copies; c++) upper.push(w.upper);
+    } else {
+      const values = symmetricTridiagonalEigenvalues(w.d.slice(), w.e.slice());
+      for (let c = 0; c < w.copies; c++) upper.push(values.subarray(w.below));
+    }
+  }
+  const merged = new Float64Array(all.length + upper.reduce((t, x) => t + x.length, 0));
+  merged.set(all);
+  let at = all.length;
+  for (const x of upper) {
+    merged.set(x, at);
+    at += x.length;
+  }
+  merged.sort();
+  const energies = merged.map((x) => x - lowest).filter((x) => x <= ceiling);
+  // Mirror blocks (r and n − r) give every one of their levels twice, bit for bit: one entry of weight
+  // 2/σ instead of two of 1/σ is the same sum with one exponential fewer (exact; only the order of two
+  // equal additions changes, a rounding-level difference).
+  let distinct = 0;
+  for (let i = 0; i < energies.length; i++) if (i === 0 || energies[i] !== energies[i - 1]) distinct++;
+  const levelEnergies = new Float64Array(distinct);
+  const levelWeights = new Float64Array(distinct);
+  for (let i = 0, k = -1; i < energies.length; i++) {
+    if (i === 0 || energies[i] !== energies[i - 1]) levelEnergies[++k] = energies[i]!;
+    levelWeights[k]! += 1 / sigma;
+  }
+  const list = createLevelList(levelEnergies, levelWeights, C2_CM_K);
   return { energies, list, basisLimit: mMax, zeroPointEnergy: lowest };
 }
 

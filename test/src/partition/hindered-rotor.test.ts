@@ -154,3 +154,45 @@ describe('impossible requests', () => {
     expect(() => hinderedRotorLevels(rotor)).toThrow(LevelSumError);
   });
 });
+
+describe('upper ladder level by level (tridiagonal-window.ts) = QL on the whole blocks', () => {
+  // A sweep written here (our own grid of constants, not data from anywhere): light to heavy tops, free to
+  // high barriers, one- to six-fold, both ceilings the compute stage uses (6100 K) and the largest.
+  const rotors: Array<[InternalRotor, number]> = [];
+  for (const rotationalConstant of [0.1, 0.45, 1.7, 5.3, 20])
+    for (const barrier of [0.5, 40, 700, 2600, 9000])
+      for (const foldedness of [1, 2, 3, 6])
+        for (const ceiling of [6100, HINDERED_ROTOR_CEILING_TEMPERATURE]) {
+          const rotor = { barrier, foldedness, symmetryNumber: foldedness, rotationalConstant };
+          if (rotationalConstant === 0.1 && ceiling > 6100) continue; // keep the whole-block QL reference quick
+          rotors.push([rotor, ceiling]);
+        }
+  it('gives the same number of levels, each within 1e-13 of the ceiling energy, for 170+ rotors', () => {
+    let worst = 0;
+    for (const [rotor, ceiling] of rotors) {
+      const whole = hinderedRotorLevels(rotor, { ceilingTemperature: ceiling, fullDiagonalisation: true });
+      const split = hinderedRotorLevels(rotor, { ceilingTemperature: ceiling });
+      expect(split.energies.length).toBe(whole.energies.length);
+      const scale = whole.energies[whole.energies.length - 1]!;
+      for (let i = 0; i < whole.energies.length; i++) worst = Math.max(worst, Math.abs(split.energies[i]! - whole.energies[i]!) / scale);
+    }
+    expect(worst).toBeLessThan(1e-13);
+  });
+  // Both are QL-accurate (about 4ε·max|diagonal| ≈ 1e-10 cm-1 per level, the reference on the larger
+  // whole block the less accurate), i.e. ~1e-12 in u = E/kT at 200 K: in a deep six-fold well the
+  // tunnelling splittings (~1e-10 cm-1) are that rounding in both. Compared on the scale of a species'
+  // functions (Cp/R ≥ 1.5, H/RT ≥ 2.5 with translation), so differences count relative to max(1, value).
+  it('changes Cp/R, H/RT and S/R of the rotor by less than 1e-11 of max(1, value) (200 … 6000 K)', () => {
+    for (const [rotor, ceiling] of rotors.filter(([, c]) => c === 6100)) {
+      const whole = hinderedRotorLevels(rotor, { ceilingTemperature: ceiling, fullDiagonalisation: true });
+      const split = hinderedRotorLevels(rotor, { ceilingTemperature: ceiling });
+      for (const T of [200, 298.15, 1000, 3000, 6000]) {
+        const a = hinderedRotorMoments(whole, T);
+        const b = hinderedRotorMoments(split, T);
+        expect(Math.abs(a.varU - b.varU)).toBeLessThan(1e-11 * Math.max(1, a.varU));
+        expect(Math.abs(a.meanU - b.meanU)).toBeLessThan(1e-11 * Math.max(1, a.meanU));
+        expect(Math.abs(a.lnQ + a.meanU - b.lnQ - b.meanU)).toBeLessThan(1e-11 * Math.max(1, Math.abs(a.lnQ + a.meanU)));
+      }
+    }
+  });
+});

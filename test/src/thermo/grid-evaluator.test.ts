@@ -18,7 +18,7 @@ import { hinderedRotorLevels, hinderedRotorMoments } from '../../../src/partitio
 import { createLevelList, levelSumMoments, stableEnergyOrder } from '../../../src/partition/level-sum.js';
 import { addLevelSumGrid } from '../../../src/partition/level-sum-grid.js';
 import { addMoments, type PartitionMoments } from '../../../src/partition/moments.js';
-import { linearRotorMoments } from '../../../src/partition/rigid-rotor-linear.js';
+import { linearRotorLevelList, linearRotorMoments } from '../../../src/partition/rigid-rotor-linear.js';
 import { nonlinearRotorMoments } from '../../../src/partition/rigid-rotor-nonlinear.js';
 import { frozenMixtureContribution } from '../../../src/partition/spin-mixture.js';
 import { translationalMoments } from '../../../src/partition/translational.js';
@@ -166,6 +166,30 @@ describe('grid building blocks against their direct forms', () => {
     const temperatures = [20, 60, 150, 199, 200, 250, 400, 1000, 2222, 6000, 20000];
     const grid = temperatureGrid(temperatures);
     for (const list of [levels(1, 65), levels(2, 3000), levels(3, 40000)]) {
+      const m = zeroGridMoments(temperatures.length);
+      addLevelSumGrid(list, grid, m);
+      temperatures.forEach((T, j) => {
+        const d = levelSumMoments(list, T);
+        expect(Math.abs(m.lnQ[j]! - d.lnQ)).toBeLessThan(1e-12 * Math.max(1, Math.abs(d.lnQ)));
+        expect(Math.abs(m.meanU[j]! - d.meanU)).toBeLessThan(1e-12 * Math.max(1, d.meanU));
+        expect(Math.abs(m.varU[j]! - d.varU)).toBeLessThan(1e-12 * Math.max(1, d.varU));
+      });
+    }
+  });
+  it('binned sum of sparse ladders (one or two levels per bin, hindered and linear rotors) = direct sum, 1e-12 on the 10 K grid', () => {
+    // Hand-written rotors: a light CH3-like top, a heavy one-fold torsion, and a floppy two-fold one.
+    const rotors = [
+      { barrier: 1000, foldedness: 3, symmetryNumber: 3, rotationalConstant: 5.3 },
+      { barrier: 1000, foldedness: 1, symmetryNumber: 1, rotationalConstant: 1 },
+      { barrier: 150, foldedness: 2, symmetryNumber: 2, rotationalConstant: 0.4 },
+    ];
+    const temperatures = Array.from({ length: 591 }, (_, i) => 200 + 10 * i);
+    const grid = temperatureGrid(temperatures);
+    const lists = [
+      ...rotors.map((r) => hinderedRotorLevels(r, { ceilingTemperature: 6100 }).list),
+      linearRotorLevelList(0.39, 6100),
+    ];
+    for (const list of lists) {
       const m = zeroGridMoments(temperatures.length);
       addLevelSumGrid(list, grid, m);
       temperatures.forEach((T, j) => {

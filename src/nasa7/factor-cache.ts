@@ -6,7 +6,9 @@
  *
  * Pure (no I/O), deterministic (a hit returns the same object a miss would build, so results do not depend
  * on what was fitted before) and bounded: at most MAX_FACTORISATIONS entries, least recently used evicted
- * first. Each entry holds ≈ 30 doubles per row (≈ 0.4 MB for a 10 K grid over 200–6000 K).
+ * first. Each entry holds ≈ 23 doubles per row in typed arrays (solve.ts `FactoredProblem`; ≈ 0.3 MB for a
+ * 10 K grid over 200–6000 K), plus the projector and semi-normal factors ls-score.ts and ls-rank.ts keep
+ * beside it (≈ 9 more per row).
  */
 import { buildConstraints } from './constraints.js';
 import { designRows } from './design.js';

@@ -60,7 +60,7 @@ function semiNormalOf(f: FactoredProblem): SemiNormal {
   if (hit) return hit;
   const { n, m } = f;
   const k = n - m;
-  const nr = f.scaledRows.length;
+  const nr = f.rowCount;
   const qr = f.qrColumns;
   const rAt = (i: number, c: number) => (i === c ? f.rDiagonal[i]! : qr[c * nr + i]!);
   const g = new Float64Array(k * n);
@@ -68,7 +68,7 @@ function semiNormalOf(f: FactoredProblem): SemiNormal {
   for (let j = 0; j < n; j++) {
     // Rᵀ w = (Q2ᵀ D⁻¹) e_j, then R g_j = w.
     for (let i = 0; i < k; i++) {
-      let s = f.q[j]![m + i]! / f.scale[j]!;
+      let s = f.q[j * n + m + i]! / f.scale[j]!;
       for (let l = 0; l < i; l++) s -= rAt(l, i) * w[l]!;
       w[i] = s / rAt(i, i);
     }
@@ -216,7 +216,7 @@ export function exactScore(p: PreparedSamples, e: RankEntry, options: FitOptions
   const { f, split } = e;
   const w = options.weights;
   const k = f.n - f.m;
-  const nr = f.scaledRows.length;
+  const nr = f.rowCount;
   const { q1, h } = projectorOf(f);
   if (scratchY.length < nr) scratchY = new Float64Array(nr);
   const y = scratchY;

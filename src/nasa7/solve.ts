@@ -50,37 +50,38 @@ export interface ConstrainedProblem {
   constraintLabels?: readonly string[];
 }
 
-/** Everything of the null-space method that depends on A and C only (see the module comment). */
+/**
+ * Everything of the null-space method that depends on A and C only (see the module comment), kept as flat
+ * typed arrays: a build holds one per cached (grid, options, tMid), so nothing the solves do not read is
+ * kept (no copy of A itself, no number[][], no ml-matrix object). ≈ (2k + w) doubles per row, w ≤ 7 the
+ * band width below (≈ 0.3 MB for a 10 K grid over 200–6000 K).
+ */
 export interface FactoredProblem {
-  /** Unknowns n and constraints m. */
+  /** Unknowns n, constraints m and rows of A. */
   n: number;
   m: number;
-  /** Original rows of A (for the residual norm). */
-  rows: readonly (readonly number[])[];
+  rowCount: number;
   /** Column scale D (powers of two). */
-  scale: number[];
-  /** A D⁻¹, row-major. */
-  scaledRows: number[][];
-  /** Full Q of (C D⁻¹)ᵀ and its R (m × m). */
-  q: number[][];
-  r: number[][];
-  /** Householder QR of the reduced matrix A D⁻¹ Q2 (ml-matrix), its factor column-major and R diagonal. */
-  reducedQr: QrDecomposition;
+  scale: Float64Array;
+  /** Full Q of (C D⁻¹)ᵀ, n × n row-major (q[i·n + j]), and its R, m × m row-major. */
+  q: Float64Array;
+  r: Float64Array;
+  /** Householder QR of the reduced matrix A D⁻¹ Q2 as ml-matrix forms it: its QR factor column-major (rows × k) and R diagonal. */
   qrColumns: Float64Array;
   rDiagonal: Float64Array;
-  /** A D⁻¹ flat, row-major (rows × n). */
-  scaledFlat: Float64Array;
-  /** A flat, row-major. */
-  rowsFlat: Float64Array;
-  /** Reduced matrix A D⁻¹ Q2 itself, row-major (the minimax fit reweights its rows). */
-  reduced: Float64Array;
   /**
-   * Per row, the first and one past the last column of A that is not exactly zero (a design row touches
-   * one range's seven coefficients only). Products with the exact zeros outside add nothing to a sum
-   * (x + ±0 = x for the x ≠ −0 such sums hold), so skipping them keeps every result bit-identical.
+   * Band of A D⁻¹: row i holds its columns rowFirst[i] … rowEnd[i] − 1 at band[i·bandWidth …] (a design
+   * row touches one range's seven coefficients only). Products with the exact zeros outside add nothing
+   * to a sum (x + ±0 = x for the x ≠ −0 such sums hold, and a sum started at +0 is never −0), so skipping
+   * them keeps every result bit-identical. A itself is band · D: D_j is a power of two, so the quotient
+   * and the product back are exact (no design value is near under- or overflow).
    */
+  band: Float64Array;
+  bandWidth: number;
   rowFirst: Int32Array;
   rowEnd: Int32Array;
+  /** Reduced matrix A D⁻¹ Q2 itself, row-major (the minimax fit reweights its rows). */
+  reduced: Float64Array;
   conditionNumber: number;
 }
 
@@ -146,17 +147,14 @@ export function factorConstrainedProblem(
   const qrMatrix = (reducedQr as unknown as { QR: Matrix }).QR;
   for (let c = 0; c < k; c++) for (let row = 0; row < nr; row++) qrColumns[c * nr + row] = qrMatrix.get(row, c);
   const rDiagonal = Float64Array.from((reducedQr as unknown as { Rdiag: ArrayLike<number> }).Rdiag);
-  const scaledFlat = new Float64Array(nr * n);
-  const rowsFlat = new Float64Array(nr * n);
   const rowFirst = new Int32Array(nr);
   const rowEnd = new Int32Array(nr);
+  let bandWidth = 0;
   for (let row = 0; row < nr; row++) {
     let first = n;
     let end = 0;
     for (let j = 0; j < n; j++) {
-      scaledFlat[row * n + j] = a[row]![j]!;
-      rowsFlat[row * n + j] = rows[row]![j]!;
-      // Both copies hold zeros at the same places: v / 2^p is zero exactly when v is.
+      // A and A D⁻¹ hold zeros at the same places: v / 2^p is zero exactly when v is.
       if (rows[row]![j]! !== 0) {
         if (first === n) first = j;
         end = j + 1;
@@ -164,8 +162,41 @@ export function factorConstrainedProblem(
     }
     rowFirst[row] = first === n ? 0 : first;
     rowEnd[row] = end;
+    bandWidth = Math.max(bandWidth, end - rowFirst[row]!);
   }
-  return { n, m, rows, scale, scaledRows: a, q, r, reducedQr, qrColumns, rDiagonal, scaledFlat, rowsFlat, reduced, rowFirst, rowEnd, conditionNumber };
+  const band = new Float64Array(nr * bandWidth);
+  for (let row = 0; row < nr; row++) {
+    for (let j = rowFirst[row]!; j < rowEnd[row]!; j++) band[row * bandWidth + j - rowFirst[row]!] = a[row]![j]!;
+  }
+  const qFlat = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) qFlat[i * n + j] = q[i]![j]!;
+  const rFlat = new Float64Array(m * m);
+  for (let i = 0; i < m; i++) for (let j = 0; j < m; j++) rFlat[i * m + j] = r[i]![j]!;
+  return {
+    n,
+    m,
+    rowCount: nr,
+    scale: Float64Array.from(scale),
+    q: qFlat,
+    r: rFlat,
+    qrColumns,
+    rDiagonal,
+    band,
+    bandWidth,
+    rowFirst,
+    rowEnd,
+    reduced,
+    conditionNumber,
+  };
+}
+
+/** (A D⁻¹ v)_row, summed over the row's band in column order (the arithmetic of a full row sum). */
+export function scaledRowDot(f: FactoredProblem, row: number, v: ArrayLike<number>): number {
+  const o = row * f.bandWidth - f.rowFirst[row]!;
+  const band = f.band;
+  let s = 0;
+  for (let j = f.rowFirst[row]!, end = f.rowEnd[row]!; j < end; j++) s += band[o + j]! * v[j]!;
+  return s;
 }
 
 /** u_p = Q1 R⁻ᵀ d: the scaled particular solution that satisfies the constraints. */
@@ -175,21 +206,21 @@ export function particularSolution(f: FactoredProblem, constraintRhs: readonly n
   const w = new Array<number>(m).fill(0);
   for (let i = 0; i < m; i++) {
     let s = constraintRhs[i]!;
-    for (let j = 0; j < i; j++) s -= r[j]![i]! * w[j]!;
-    w[i] = s / r[i]![i]!;
+    for (let j = 0; j < i; j++) s -= r[j * m + i]! * w[j]!;
+    w[i] = s / r[i * m + i]!;
   }
   const up = new Array<number>(n).fill(0);
-  for (let i = 0; i < n; i++) for (let j = 0; j < m; j++) up[i]! += q[i]![j]! * w[j]!;
+  for (let i = 0; i < n; i++) for (let j = 0; j < m; j++) up[i]! += q[i * n + j]! * w[j]!;
   return up;
 }
 
 /** x = D⁻¹ (u_p + Q2 z). */
 export function assembleSolution(f: FactoredProblem, up: readonly number[], z: ArrayLike<number>): number[] {
-  const { m, q, scale } = f;
-  const k = f.n - m;
+  const { n, m, q, scale } = f;
+  const k = n - m;
   return up.map((v, i) => {
     let s = v;
-    for (let c = 0; c < k; c++) s += q[i]![m + c]! * z[c]!;
+    for (let c = 0; c < k; c++) s += q[i * n + m + c]! * z[c]!;
     return s / scale[i]!;
   });
 }
@@ -219,21 +250,12 @@ export function solveFactoredParts(
   constraintRhs: readonly number[],
   want: { targets?: boolean | Float64Array; residualNorm?: boolean },
 ): { solution: ConstrainedSolution; targets?: Float64Array } {
-  const { n } = f;
-  const k = n - f.m;
-  const nr = f.scaledRows.length;
-  const a = f.scaledFlat;
-  const first = f.rowFirst;
-  const end = f.rowEnd;
+  const k = f.n - f.m;
+  const nr = f.rowCount;
   const up = particularSolution(f, constraintRhs);
   if (scratchX0.length < nr) scratchX0 = new Float64Array(nr);
   const x0 = scratchX0;
-  for (let row = 0; row < nr; row++) {
-    let pred = 0;
-    const o = row * n;
-    for (let j = first[row]!; j < end[row]!; j++) pred += a[o + j]! * up[j]!;
-    x0[row] = rhs[row]! - pred;
-  }
+  for (let row = 0; row < nr; row++) x0[row] = rhs[row]! - scaledRowDot(f, row, up);
   let targets: Float64Array | undefined;
   if (want.targets instanceof Float64Array) (targets = want.targets).set(x0.subarray(0, nr));
   else if (want.targets) targets = x0.slice(0, nr);
@@ -258,16 +280,13 @@ export function solveFactoredParts(
 
 /** ‖A x − y‖₂ of the weighted problem (the residual norm `solveFactored` reports, same arithmetic). */
 export function residualNormOf(f: FactoredProblem, rhs: ArrayLike<number>, x: readonly number[]): number {
-  const nr = f.scaledRows.length;
-  const { n } = f;
-  const first = f.rowFirst;
-  const end = f.rowEnd;
+  const { band, bandWidth, rowFirst, rowEnd, scale } = f;
   let sumSq = 0;
-  const rows = f.rowsFlat;
-  for (let row = 0; row < nr; row++) {
+  for (let row = 0; row < f.rowCount; row++) {
     let pred = 0;
-    const o = row * n;
-    for (let j = first[row]!; j < end[row]!; j++) pred += rows[o + j]! * x[j]!;
+    const o = row * bandWidth - rowFirst[row]!;
+    // band · D_j is A's entry exactly (see FactoredProblem.band).
+    for (let j = rowFirst[row]!; j < rowEnd[row]!; j++) pred += band[o + j]! * scale[j]! * x[j]!;
     const r = pred - rhs[row]!;
     sumSq += r * r;
   }

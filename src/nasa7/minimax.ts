@@ -68,6 +68,8 @@ const scratch = {
   inSet: new Uint8Array(0),
   diag: new Float64Array(0),
   z: new Float64Array(0),
+  /** Rows of the current reference set, ascending (minimaxReduced). */
+  ordered: new Int32Array(0),
 };
 
 function ensure(n: number, k: number, rows: number): void {
@@ -335,7 +337,8 @@ export function minimaxReduced(
   let lowerBound = 0;
   for (let round = 0; round < MAX_ROUNDS; round++) {
     if (size < k) break;
-    const ordered = new Int32Array(size);
+    if (scratch.ordered.length < size) scratch.ordered = new Int32Array(Math.max(size, 2 * scratch.ordered.length));
+    const ordered = scratch.ordered.subarray(0, size);
     for (let i = 0, o = 0; i < rows; i++) if (inSet[i]) ordered[o++] = i;
     const r = lawsonOnSet(b, c, limits, k, ordered, cutoff);
     if (!r) break;
@@ -345,10 +348,11 @@ export function minimaxReduced(
       if (worst < best.worst) best = { z: r.z, worst };
       break;
     }
-    let setWorst = 0;
-    for (const i of ordered) setWorst = Math.max(setWorst, rowError(b, c, limits, k, r.z, i));
-    lowerBound = Math.max(lowerBound, setWorst * (1 - RELATIVE_GAP));
     const worst = errorsOf(b, c, limits, k, r.z, e);
+    // The set's errors are among those just computed (rowError of the same z: the same doubles).
+    let setWorst = 0;
+    for (let o = 0; o < size; o++) setWorst = Math.max(setWorst, e[ordered[o]!]!);
+    lowerBound = Math.max(lowerBound, setWorst * (1 - RELATIVE_GAP));
     if (worst < best.worst) best = { z: r.z, worst };
     if (worst <= setWorst * 1.001) break;
     const added = markLocalMaxima(e, rows, stride, lowRows, inSet, setWorst);

@@ -255,7 +255,14 @@ export function solveFactoredParts(
   const up = particularSolution(f, constraintRhs);
   if (scratchX0.length < nr) scratchX0 = new Float64Array(nr);
   const x0 = scratchX0;
-  for (let row = 0; row < nr; row++) x0[row] = rhs[row]! - scaledRowDot(f, row, up);
+  const { band, bandWidth, rowFirst, rowEnd } = f;
+  for (let row = 0; row < nr; row++) {
+    // scaledRowDot inlined (the hot loop of every solve).
+    let pred = 0;
+    const o = row * bandWidth - rowFirst[row]!;
+    for (let j = rowFirst[row]!, e = rowEnd[row]!; j < e; j++) pred += band[o + j]! * up[j]!;
+    x0[row] = rhs[row]! - pred;
+  }
   let targets: Float64Array | undefined;
   if (want.targets instanceof Float64Array) (targets = want.targets).set(x0.subarray(0, nr));
   else if (want.targets) targets = x0.slice(0, nr);

@@ -5,7 +5,7 @@
  *   1. equilibrate columns: x = D⁻¹ u with D_j a power of two near ‖A_{:,j}‖ (exact scaling);
  *   2. QR of (C D⁻¹)ᵀ = [Q1 Q2] [R; 0]; a particular solution u_p = Q1 R⁻ᵀ d satisfies the constraints;
  *   3. every u = u_p + Q2 z satisfies them too; z solves the unconstrained problem
- *      min ‖(A D⁻¹ Q2) z − (y − A D⁻¹ u_p)‖ by Householder QR (ml-matrix), conditioning checked through
+ *      min ‖(A D⁻¹ Q2) z − (y − A D⁻¹ u_p)‖ by Householder QR (ml-matrix's arithmetic on typed arrays), conditioning checked through
  *      the singular values of its R factor (ml-matrix SVD).
  * The constraints hold to rounding error (‖C x − d‖ ≈ ε ‖C‖ ‖x‖) regardless of the data, which is what
  * "exact" can mean in floating point.
@@ -15,7 +15,7 @@
  * once; `solveFactored` applies the factorisation to one right-hand side (y, d) with exactly the
  * arithmetic of a from-scratch solve, so cached and uncached results are bit-identical.
  */
-import { Matrix, QrDecomposition, SingularValueDecomposition } from 'ml-matrix';
+import { Matrix, SingularValueDecomposition } from 'ml-matrix';
 import { FitError } from './errors.js';
 import { householderQr } from './householder.js';
 
@@ -85,6 +85,51 @@ export interface FactoredProblem {
   conditionNumber: number;
 }
 
+/** ml-matrix's `hypotenuse` (src/dc/util.js, v6.15): the scaled form, which its QR uses for column norms. */
+function hypotenuse(a: number, b: number): number {
+  if (Math.abs(a) > Math.abs(b)) {
+    const r = b / a;
+    return Math.abs(a) * Math.sqrt(1 + r * r);
+  }
+  if (b !== 0) {
+    const r = a / b;
+    return Math.abs(b) * Math.sqrt(1 + r * r);
+  }
+  return 0;
+}
+
+/**
+ * Householder QR of an nr × k matrix (row-major `matrix`), as ml-matrix's QrDecomposition computes it
+ * (v6.15, src/dc/qr.js; the LINPACK/JAMA form: Golub & Van Loan, 4th ed., Alg. 5.2.1 with unit-scaled
+ * reflectors): the same operations in the same order on a column-major typed array instead of get/set on
+ * a Matrix, so `qrColumns` (its QR factor, column-major) and `rDiagonal` (its Rdiag) are the same doubles
+ * (tested against ml-matrix in test/src/nasa7/factor-cache.test.ts).
+ */
+export function householderColumns(matrix: Float64Array, nr: number, k: number): { qrColumns: Float64Array; rDiagonal: Float64Array } {
+  const qr = new Float64Array(nr * k);
+  for (let row = 0; row < nr; row++) for (let c = 0; c < k; c++) qr[c * nr + row] = matrix[row * k + c]!;
+  const rDiagonal = new Float64Array(k);
+  for (let c = 0; c < k; c++) {
+    const oc = c * nr;
+    let nrm = 0;
+    for (let i = c; i < nr; i++) nrm = hypotenuse(nrm, qr[oc + i]!);
+    if (nrm !== 0) {
+      if (qr[oc + c]! < 0) nrm = -nrm;
+      for (let i = c; i < nr; i++) qr[oc + i] = qr[oc + i]! / nrm;
+      qr[oc + c] = qr[oc + c]! + 1;
+      for (let j = c + 1; j < k; j++) {
+        const oj = j * nr;
+        let s = 0;
+        for (let i = c; i < nr; i++) s += qr[oc + i]! * qr[oj + i]!;
+        s = -s / qr[oc + c]!;
+        for (let i = c; i < nr; i++) qr[oj + i] = qr[oj + i]! + s * qr[oc + i]!;
+      }
+    }
+    rDiagonal[c] = -nrm;
+  }
+  return { qrColumns: qr, rDiagonal };
+}
+
 function powerOfTwoNear(x: number): number {
   return x > 0 && Number.isFinite(x) ? 2 ** Math.round(Math.log2(x)) : 1;
 }
@@ -118,19 +163,22 @@ export function factorConstrainedProblem(
     }
   });
 
-  const reducedMatrix = new Matrix(a.length, k);
-  const reduced = new Float64Array(a.length * k);
-  for (let row = 0; row < a.length; row++) {
+  const nr = a.length;
+  const reduced = new Float64Array(nr * k);
+  const q2 = new Float64Array(n * k);
+  for (let j = 0; j < n; j++) for (let c = 0; c < k; c++) q2[j * k + c] = q[j]![m + c]!;
+  for (let row = 0; row < nr; row++) {
     const ar = a[row]!;
     for (let c = 0; c < k; c++) {
       let v = 0;
-      for (let j = 0; j < n; j++) v += ar[j]! * q[j]![m + c]!;
-      reducedMatrix.set(row, c, v);
+      for (let j = 0; j < n; j++) v += ar[j]! * q2[j * k + c]!;
       reduced[row * k + c] = v;
     }
   }
-  const reducedQr = new QrDecomposition(reducedMatrix);
-  const sv = new SingularValueDecomposition(reducedQr.upperTriangularMatrix, {
+  const { qrColumns, rDiagonal } = householderColumns(reduced, nr, k);
+  const upper = new Matrix(k, k);
+  for (let i = 0; i < k; i++) for (let j = i; j < k; j++) upper.set(i, j, i === j ? rDiagonal[i]! : qrColumns[j * nr + i]!);
+  const sv = new SingularValueDecomposition(upper, {
     computeLeftSingularVectors: false,
     computeRightSingularVectors: false,
   }).diagonal;
@@ -142,11 +190,6 @@ export function factorConstrainedProblem(
       `least-squares system is ill-conditioned or rank deficient (condition number ${conditionNumber.toExponential(2)} > ${MAX_CONDITION_NUMBER.toExponential(0)}): the samples do not determine all coefficients; use more, better spread temperatures in each range`,
     );
   }
-  const nr = a.length;
-  const qrColumns = new Float64Array(nr * k);
-  const qrMatrix = (reducedQr as unknown as { QR: Matrix }).QR;
-  for (let c = 0; c < k; c++) for (let row = 0; row < nr; row++) qrColumns[c * nr + row] = qrMatrix.get(row, c);
-  const rDiagonal = Float64Array.from((reducedQr as unknown as { Rdiag: ArrayLike<number> }).Rdiag);
   const rowFirst = new Int32Array(nr);
   const rowEnd = new Int32Array(nr);
   let bandWidth = 0;

@@ -310,12 +310,26 @@ export function solveFactoredParts(
   if (want.targets instanceof Float64Array) (targets = want.targets).set(x0.subarray(0, nr));
   else if (want.targets) targets = x0.slice(0, nr);
   const qr = f.qrColumns;
-  for (let c = 0; c < k; c++) {
-    const o = c * nr;
+  // Reflection c is x ← x + s_c v_c with s_c = −(v_c·x) / v_c[c] over rows ≥ c. The update by reflection
+  // c and the dot product of reflection c + 1 share one pass over the rows: row i is updated, then (from
+  // row c + 1 on) enters the next sum, in ascending i as in two separate passes, so every double is the same.
+  if (k > 0) {
     let s = 0;
-    for (let i = c; i < nr; i++) s += qr[o + i]! * x0[i]!;
-    s = -s / qr[o + c]!;
-    for (let i = c; i < nr; i++) x0[i] = x0[i]! + s * qr[o + i]!;
+    for (let i = 0; i < nr; i++) s += qr[i]! * x0[i]!;
+    s = -s / qr[0]!;
+    for (let c = 0; c < k; c++) {
+      const o = c * nr;
+      const last = c === k - 1;
+      const on = o + nr;
+      let next = 0;
+      x0[c] = x0[c]! + s * qr[o + c]!;
+      for (let i = c + 1; i < nr; i++) {
+        const v = x0[i]! + s * qr[o + i]!;
+        x0[i] = v;
+        if (!last) next += qr[on + i]! * v;
+      }
+      if (!last) s = -next / qr[on + c + 1]!;
+    }
   }
   for (let c = k - 1; c >= 0; c--) {
     x0[c] = x0[c]! / f.rDiagonal[c]!;

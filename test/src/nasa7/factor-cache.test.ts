@@ -169,3 +169,32 @@ describe('householderColumns repeats ml-matrix QrDecomposition bit for bit', () 
     });
   }
 });
+
+describe('compact factorisation and temperature key', () => {
+  // Data: closed-form N2 RRHO samples of our own generator (synthetic.ts).
+  const samplesOn = (step: number) => grid(200, 6000, step).map((T) => rrhoSample(N2_RRHO, T));
+
+  it('a FactoredProblem keeps only typed arrays and numbers (no number[][], no ml-matrix object)', () => {
+    const samples = samplesOn(20);
+    const anchor = rrhoSample(N2_RRHO, T_REF);
+    const options = normaliseFitOptions({});
+    const key = { temperatures: temperatureKey(samples), weights: options.weights, anchorT: anchor.T, tMid: 1000, continuityOrder: 1 as const };
+    const f = factorisationFor(key, splitSamples(samples, anchor, options), anchor);
+    for (const [field, value] of Object.entries(f)) {
+      expect(typeof value === 'number' || ArrayBuffer.isView(value), field).toBe(true);
+    }
+    expect(f.bandWidth).toBeLessThanOrEqual(7); // one range's seven coefficients per design row
+  });
+
+  it('temperatureKey: the same content for the same temperatures, a new key when they change', () => {
+    const a = temperatureKey(samplesOn(50));
+    const b = temperatureKey(samplesOn(50));
+    expect(b).toBe(a);
+    const c = temperatureKey(samplesOn(25));
+    expect(c).not.toBe(a);
+    expect(c.split(',').length - 1).toBe(samplesOn(25).length);
+    const moved = samplesOn(50).map((s, i) => (i === 3 ? { ...s, T: s.T + 0.5 } : s));
+    expect(temperatureKey(moved)).not.toBe(a);
+    expect(temperatureKey(samplesOn(50))).toBe(a);
+  });
+});

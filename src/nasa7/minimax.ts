@@ -60,8 +60,9 @@ const scratch = {
   s: new Float64Array(0),
   w: new Float64Array(0),
   e: new Float64Array(0),
-  activeA: new Int32Array(0),
-  activeB: new Int32Array(0),
+  setB: new Float64Array(0),
+  setC: new Float64Array(0),
+  setL: new Float64Array(0),
   posA: new Int32Array(0),
   posB: new Int32Array(0),
   rowErrors: new Float64Array(0),
@@ -79,8 +80,6 @@ function ensure(n: number, k: number, rows: number): void {
     sc.s = new Float64Array(n);
     sc.w = new Float64Array(n);
     sc.e = new Float64Array(n);
-    sc.activeA = new Int32Array(n);
-    sc.activeB = new Int32Array(n);
     sc.posA = new Int32Array(n);
     sc.posB = new Int32Array(n);
   }
@@ -223,28 +222,39 @@ function lawsonOnSet(
   const n = set.length;
   ensure(n, k, c.length);
   const { work, s, w, e, diag, z } = scratch;
-  let active = scratch.activeA;
+  // The set's rows of b, c and the limits, copied next to each other once: every step then reads
+  // consecutive memory, indexed by position in the set (the same values, so the same arithmetic).
+  if (scratch.setB.length < n * k) scratch.setB = new Float64Array(n * k);
+  if (scratch.setC.length < n) {
+    scratch.setC = new Float64Array(n);
+    scratch.setL = new Float64Array(n);
+  }
+  const sb = scratch.setB;
+  const sc = scratch.setC;
+  const sl = scratch.setL;
+  for (let r = 0; r < n; r++) {
+    const i = set[r]!;
+    for (let j = 0; j < k; j++) sb[r * k + j] = b[i * k + j]!;
+    sc[r] = c[i]!;
+    sl[r] = limits[i]!;
+  }
   let pos = scratch.posA;
-  let nextActive = scratch.activeB;
   let nextPos = scratch.posB;
   w.fill(1 / n, 0, n);
-  for (let r = 0; r < n; r++) {
-    active[r] = set[r]!;
-    pos[r] = r;
-  }
+  for (let r = 0; r < n; r++) pos[r] = r;
   let count = n;
   let bestZ: Float64Array | undefined;
   let bestWorst = 0;
   let lowerBound = 0;
   let iterations = 0;
   for (; iterations < MAX_ITERATIONS; iterations++) {
-    for (let r = 0; r < count; r++) s[r] = Math.sqrt(w[pos[r]!]!) / limits[active[r]!]!;
-    weightedSolve(b, c, s, active, count, k, work, diag, z);
+    for (let r = 0; r < count; r++) s[r] = Math.sqrt(w[pos[r]!]!) / sl[pos[r]!]!;
+    weightedSolve(sb, sc, s, pos, count, k, work, diag, z);
     let worst = 0;
     let bound = 0;
     let total = 0;
     for (let r = 0; r < n; r++) {
-      const a = rowError(b, c, limits, k, z, set[r]!);
+      const a = rowError(sb, sc, sl, k, z, r);
       e[r] = a;
       if (!(a <= worst)) worst = a;
       bound += w[r]! * a * a;
@@ -275,13 +285,10 @@ function lawsonOnSet(
     wMax /= wSum;
     let kept = 0;
     for (let r = 0; r < n; r++) {
-      if (w[r]! >= PRUNE_FRACTION * wMax) {
-        nextActive[kept] = set[r]!;
-        nextPos[kept++] = r;
-      } else w[r] = 0;
+      if (w[r]! >= PRUNE_FRACTION * wMax) nextPos[kept++] = r;
+      else w[r] = 0;
     }
     if (kept < k) break;
-    [active, nextActive] = [nextActive, active];
     [pos, nextPos] = [nextPos, pos];
     count = kept;
   }

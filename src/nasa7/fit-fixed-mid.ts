@@ -18,7 +18,7 @@ import { computeMetrics } from './metrics.js';
 import { minimaxReduced } from './minimax.js';
 import { splitSamples, type SplitSamples } from './samples.js';
 import { unscaleCoefficients } from './scaling.js';
-import { assembleSolution, particularSolution, solveFactored, type FactoredProblem } from './solve.js';
+import { assembleSolution, particularSolution, scaledRowDot, solveFactored, type FactoredProblem } from './solve.js';
 import type { Coefficients7, FitOptions, FitResult, FitSample, Nasa7Polynomial } from './types.js';
 
 /** Re-derives a6 and a7 of `c` so that H/RT and S/R at T equal the targets (in T-form arithmetic). */
@@ -41,12 +41,8 @@ const UNIT_WEIGHTS = Object.freeze({ cp: 1, h: 1, s: 1 });
 /** Reduced-problem targets c = y − A D⁻¹ u_p of the unit-weight rows. */
 function reducedTargets(f: FactoredProblem, y: readonly number[], up: readonly number[]): Float64Array {
   const c = new Float64Array(y.length);
-  for (let row = 0; row < y.length; row++) {
-    const ar = f.scaledRows[row]!;
-    let pred = 0;
-    for (let j = 0; j < f.n; j++) pred += ar[j]! * up[j]!;
-    c[row] = y[row]! - pred;
-  }
+  // Over each row's band only: the zeros outside add nothing (solve.ts FactoredProblem.band).
+  for (let row = 0; row < y.length; row++) c[row] = y[row]! - scaledRowDot(f, row, up);
   return c;
 }
 

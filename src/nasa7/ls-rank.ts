@@ -60,7 +60,7 @@ function semiNormalOf(f: FactoredProblem): SemiNormal {
   if (hit) return hit;
   const { n, m } = f;
   const k = n - m;
-  const nr = f.scaledRows.length;
+  const nr = f.rowCount;
   const qr = f.qrColumns;
   const rAt = (i: number, c: number) => (i === c ? f.rDiagonal[i]! : qr[c * nr + i]!);
   const g = new Float64Array(k * n);
@@ -68,7 +68,7 @@ function semiNormalOf(f: FactoredProblem): SemiNormal {
   for (let j = 0; j < n; j++) {
     // Rᵀ w = (Q2ᵀ D⁻¹) e_j, then R g_j = w.
     for (let i = 0; i < k; i++) {
-      let s = f.q[j]![m + i]! / f.scale[j]!;
+      let s = f.q[j * n + m + i]! / f.scale[j]!;
       for (let l = 0; l < i; l++) s -= rAt(l, i) * w[l]!;
       w[i] = s / rAt(i, i);
     }
@@ -166,14 +166,26 @@ function referencePolynomial(p: PreparedSamples): number[] {
   return b.every(Number.isFinite) ? b : zero;
 }
 
+/**
+ * Per-species work arrays of the ranking, reused from species to species (a worker fits one species at a
+ * time): each is fully written before it is read (prefix from its first seven zeros on), nothing kept.
+ */
+const work = { yp: new Float64Array(0), prefix: new Float64Array(0), divisor: new Float64Array(0) };
+
+function scratchOf(key: keyof typeof work, length: number): Float64Array {
+  if (work[key].length < length) work[key] = new Float64Array(length);
+  return work[key].subarray(0, length);
+}
+
 /** y' (3 per sample, weighted), prefix sums of Aᵀ y' per sample (7 × (n + 1)), ‖y'‖₂ and ‖y‖₂ over all samples. */
 function reducedData(p: PreparedSamples, weights: FitOptions['weights']): { yp: Float64Array; prefix: Float64Array; norm: number; targetNorm: number } {
   const b = referencePolynomial(p);
   const wc = Math.sqrt(weights.cp);
   const wh = Math.sqrt(weights.h);
   const ws = Math.sqrt(weights.s);
-  const yp = new Float64Array(3 * p.n);
-  const prefix = new Float64Array(7 * (p.n + 1));
+  const yp = scratchOf('yp', 3 * p.n);
+  const prefix = scratchOf('prefix', 7 * (p.n + 1));
+  prefix.fill(0, 0, 7);
   let sumSq = 0;
   let targetSq = 0;
   for (let i = 0; i < p.n; i++) {
@@ -216,7 +228,7 @@ export function exactScore(p: PreparedSamples, e: RankEntry, options: FitOptions
   const { f, split } = e;
   const w = options.weights;
   const k = f.n - f.m;
-  const nr = f.scaledRows.length;
+  const nr = f.rowCount;
   const { q1, h } = projectorOf(f);
   if (scratchY.length < nr) scratchY = new Float64Array(nr);
   const y = scratchY;
@@ -324,7 +336,7 @@ export function rankLeastSquares(p: PreparedSamples, entries: RankEntry[], optio
     for (let i = 0; i < p.n; i++) minDivisor = Math.min(minDivisor, sq[0]! * p.limCp[i]!, sq[1]! * p.limH[i]!, sq[2]! * p.limS[i]!);
   }
   // Divisor of each sample row's |r| in the measure, and the fixed part of the subset.
-  const divisor = new Float64Array(3 * p.n);
+  const divisor = scratchOf('divisor', 3 * p.n);
   for (let i = 0; i < p.n; i++) {
     divisor[3 * i] = mode === 'limitRatio' ? sq[0]! * p.limCp[i]! : 1;
     divisor[3 * i + 1] = mode === 'limitRatio' ? sq[1]! * p.limH[i]! : 1;

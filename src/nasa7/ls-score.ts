@@ -18,7 +18,7 @@ import { factorisationFor } from './factor-cache.js';
 import { constraintRhs } from './fit-fixed-mid.js';
 import { limitAt } from './limits.js';
 import { splitSamples } from './samples.js';
-import { particularSolution, type FactoredProblem } from './solve.js';
+import { particularSolution, scaledRowDot, type FactoredProblem } from './solve.js';
 import type { FitOptions, FitSample } from './types.js';
 
 export interface LeastSquaresScore {
@@ -42,7 +42,7 @@ const projectors = new WeakMap<FactoredProblem, Projector>();
 /** z = R⁻¹ Q1ᵀ v (the least-squares coordinates of v) into `t` (length k). */
 export function coordinates(f: FactoredProblem, q1: Float64Array, v: Float64Array, t: Float64Array): void {
   const k = f.n - f.m;
-  const nr = f.scaledRows.length;
+  const nr = f.rowCount;
   if (k === 8) {
     // The eight sums in one pass over v, each accumulated in the same order as below: the same doubles.
     let s0 = 0, s1 = 0, s2 = 0, s3 = 0, s4 = 0, s5 = 0, s6 = 0, s7 = 0; // prettier-ignore
@@ -83,7 +83,7 @@ export function projectorOf(f: FactoredProblem): Projector {
   const hit = projectors.get(f);
   if (hit) return hit;
   const k = f.n - f.m;
-  const nr = f.scaledRows.length;
+  const nr = f.rowCount;
   const qr = f.qrColumns;
   const q1 = new Float64Array(k * nr);
   for (let j = 0; j < k; j++) {
@@ -103,9 +103,7 @@ export function projectorOf(f: FactoredProblem): Projector {
   const up = particularSolution(f, unit);
   const h = new Float64Array(nr);
   for (let row = 0; row < nr; row++) {
-    let g = 0;
-    for (let j = 0; j < f.n; j++) g += f.scaledFlat[row * f.n + j]! * up[j]!;
-    h[row] = g;
+    h[row] = scaledRowDot(f, row, up);
   }
   const t = new Float64Array(k);
   coordinates(f, q1, h, t);
@@ -133,7 +131,7 @@ export function leastSquaresScore(samples: readonly FitSample[], anchor: FitSamp
   const w = options.weights;
   const f = factorisationFor({ temperatures, weights: w, anchorT: anchor.T, tMid: options.tMid, continuityOrder: options.continuityOrder }, ranges, anchor);
   const k = f.n - f.m;
-  const nr = f.scaledRows.length;
+  const nr = f.rowCount;
   const { q1, h } = projectorOf(f);
   if (scratchY.length < nr) scratchY = new Float64Array(nr);
   const y = scratchY;

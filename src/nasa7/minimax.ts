@@ -60,14 +60,17 @@ const scratch = {
   s: new Float64Array(0),
   w: new Float64Array(0),
   e: new Float64Array(0),
-  activeA: new Int32Array(0),
-  activeB: new Int32Array(0),
+  setB: new Float64Array(0),
+  setC: new Float64Array(0),
+  setL: new Float64Array(0),
   posA: new Int32Array(0),
   posB: new Int32Array(0),
   rowErrors: new Float64Array(0),
   inSet: new Uint8Array(0),
   diag: new Float64Array(0),
   z: new Float64Array(0),
+  /** Rows of the current reference set, ascending (minimaxReduced). */
+  ordered: new Int32Array(0),
 };
 
 function ensure(n: number, k: number, rows: number): void {
@@ -77,8 +80,6 @@ function ensure(n: number, k: number, rows: number): void {
     sc.s = new Float64Array(n);
     sc.w = new Float64Array(n);
     sc.e = new Float64Array(n);
-    sc.activeA = new Int32Array(n);
-    sc.activeB = new Int32Array(n);
     sc.posA = new Int32Array(n);
     sc.posB = new Int32Array(n);
   }
@@ -221,28 +222,39 @@ function lawsonOnSet(
   const n = set.length;
   ensure(n, k, c.length);
   const { work, s, w, e, diag, z } = scratch;
-  let active = scratch.activeA;
+  // The set's rows of b, c and the limits, copied next to each other once: every step then reads
+  // consecutive memory, indexed by position in the set (the same values, so the same arithmetic).
+  if (scratch.setB.length < n * k) scratch.setB = new Float64Array(n * k);
+  if (scratch.setC.length < n) {
+    scratch.setC = new Float64Array(n);
+    scratch.setL = new Float64Array(n);
+  }
+  const sb = scratch.setB;
+  const sc = scratch.setC;
+  const sl = scratch.setL;
+  for (let r = 0; r < n; r++) {
+    const i = set[r]!;
+    for (let j = 0; j < k; j++) sb[r * k + j] = b[i * k + j]!;
+    sc[r] = c[i]!;
+    sl[r] = limits[i]!;
+  }
   let pos = scratch.posA;
-  let nextActive = scratch.activeB;
   let nextPos = scratch.posB;
   w.fill(1 / n, 0, n);
-  for (let r = 0; r < n; r++) {
-    active[r] = set[r]!;
-    pos[r] = r;
-  }
+  for (let r = 0; r < n; r++) pos[r] = r;
   let count = n;
   let bestZ: Float64Array | undefined;
   let bestWorst = 0;
   let lowerBound = 0;
   let iterations = 0;
   for (; iterations < MAX_ITERATIONS; iterations++) {
-    for (let r = 0; r < count; r++) s[r] = Math.sqrt(w[pos[r]!]!) / limits[active[r]!]!;
-    weightedSolve(b, c, s, active, count, k, work, diag, z);
+    for (let r = 0; r < count; r++) s[r] = Math.sqrt(w[pos[r]!]!) / sl[pos[r]!]!;
+    weightedSolve(sb, sc, s, pos, count, k, work, diag, z);
     let worst = 0;
     let bound = 0;
     let total = 0;
     for (let r = 0; r < n; r++) {
-      const a = rowError(b, c, limits, k, z, set[r]!);
+      const a = rowError(sb, sc, sl, k, z, r);
       e[r] = a;
       if (!(a <= worst)) worst = a;
       bound += w[r]! * a * a;
@@ -273,13 +285,10 @@ function lawsonOnSet(
     wMax /= wSum;
     let kept = 0;
     for (let r = 0; r < n; r++) {
-      if (w[r]! >= PRUNE_FRACTION * wMax) {
-        nextActive[kept] = set[r]!;
-        nextPos[kept++] = r;
-      } else w[r] = 0;
+      if (w[r]! >= PRUNE_FRACTION * wMax) nextPos[kept++] = r;
+      else w[r] = 0;
     }
     if (kept < k) break;
-    [active, nextActive] = [nextActive, active];
     [pos, nextPos] = [nextPos, pos];
     count = kept;
   }
@@ -335,7 +344,8 @@ export function minimaxReduced(
   let lowerBound = 0;
   for (let round = 0; round < MAX_ROUNDS; round++) {
     if (size < k) break;
-    const ordered = new Int32Array(size);
+    if (scratch.ordered.length < size) scratch.ordered = new Int32Array(Math.max(size, 2 * scratch.ordered.length));
+    const ordered = scratch.ordered.subarray(0, size);
     for (let i = 0, o = 0; i < rows; i++) if (inSet[i]) ordered[o++] = i;
     const r = lawsonOnSet(b, c, limits, k, ordered, cutoff);
     if (!r) break;
@@ -345,10 +355,11 @@ export function minimaxReduced(
       if (worst < best.worst) best = { z: r.z, worst };
       break;
     }
-    let setWorst = 0;
-    for (const i of ordered) setWorst = Math.max(setWorst, rowError(b, c, limits, k, r.z, i));
-    lowerBound = Math.max(lowerBound, setWorst * (1 - RELATIVE_GAP));
     const worst = errorsOf(b, c, limits, k, r.z, e);
+    // The set's errors are among those just computed (rowError of the same z: the same doubles).
+    let setWorst = 0;
+    for (let o = 0; o < size; o++) setWorst = Math.max(setWorst, e[ordered[o]!]!);
+    lowerBound = Math.max(lowerBound, setWorst * (1 - RELATIVE_GAP));
     if (worst < best.worst) best = { z: r.z, worst };
     if (worst <= setWorst * 1.001) break;
     const added = markLocalMaxima(e, rows, stride, lowRows, inSet, setWorst);

@@ -39,9 +39,9 @@
  *     RRHO species (seeded synthetic set, propane, benzene, n-C7, n-C16, n-C30) median 0.33, 90th
  *     percentile 0.45, max 0.63 (benzene at 180 K). Extrapolation samples never enter the fit.
  */
-import { cpDerivative, cpSecondDerivative, evaluateNasa7, evaluateRange } from './evaluate.js';
+import { cpDerivative, cpSecondDerivative, evaluateRange } from './evaluate.js';
 import { DEFAULT_FIT_LIMITS, limitAt, limitPart } from './limits.js';
-import type { FitResult, FitSample, Nasa7Polynomial } from './types.js';
+import type { Coefficients7, FitResult, FitSample, Nasa7Polynomial } from './types.js';
 
 export interface FitTolerances {
   /** Absolute part of the |ΔCp/R| limit (limits.ts: limit = max(cp, perCp.cp · Cp/R)). */
@@ -136,26 +136,56 @@ function normaliseTolerances(t: Partial<FitTolerances> | undefined): FitToleranc
 const ERROR_REMEDY =
   'if the computed data are right, widen this species\' limits (tolerances in its own file), narrow its temperature_ranges, or move or search its midpoint (fit.optimise_mid)';
 
+/** Cp/R of one coefficient set at T: evaluate.ts `evaluateRange(c, T).cpR`, the same operations. */
+function cpOf(c: Readonly<Coefficients7>, T: number): number {
+  return c[0] + T * (c[1] + T * (c[2] + T * (c[3] + T * c[4])));
+}
+
+/** Cp/R of the polynomial at T (evaluate.ts `evaluateNasa7(poly, T).cpR`, the same operations). */
+function cpAt(poly: Nasa7Polynomial, T: number): number {
+  return cpOf(T <= poly.tMid ? poly.low : poly.high, T);
+}
+
 function errorChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
+  const specs = [
+    { absolute: tol.cp, perCp: tol.perCp.cp },
+    { absolute: tol.h, perCp: tol.perCp.h },
+    { absolute: tol.s, perCp: tol.perCp.s },
+  ] as const;
   for (const range of ['low', 'high'] as const) {
     const [from, to] = range === 'low' ? [poly.tLow, poly.tMid] : [poly.tMid, poly.tHigh];
     const coeffs = range === 'low' ? poly.low : poly.high;
-    // Worst error relative to its limit, per quantity.
-    const worst = {
-      cp: { ratio: -1, err: 0, T: NaN, cpR: NaN },
-      h: { ratio: -1, err: 0, T: NaN, cpR: NaN },
-      s: { ratio: -1, err: 0, T: NaN, cpR: NaN },
-    };
+    const [a1, a2, a3, a4, a5, a6, a7] = coeffs;
+    // evaluate.ts evaluateRange's quotients, formed once (the same doubles at every T).
+    const h2 = a2 / 2, h3 = a3 / 3, h4 = a4 / 4, h5 = a5 / 5, s3 = a3 / 2, s4 = a4 / 3, s5 = a5 / 4; // prettier-ignore
+    // Worst error relative to its limit, per quantity (cp, h, s): ratio, error, T, computed Cp/R.
+    const wRatio = [-1, -1, -1];
+    const wErr = [0, 0, 0];
+    const wT = [NaN, NaN, NaN];
+    const wCp = [NaN, NaN, NaN];
     for (const smp of samples) {
-      if (!(smp.T >= from && smp.T <= to)) continue;
-      const v = evaluateRange(coeffs, smp.T);
-      const errs = { cp: Math.abs(v.cpR - smp.cpR), h: Math.abs(v.hRT - smp.hRT), s: Math.abs(v.sR - smp.sR) };
-      for (const q of ['cp', 'h', 's'] as const) {
-        const e = Number.isFinite(errs[q]) ? errs[q] : Infinity;
-        const ratio = e / limitAt({ absolute: tol[q], perCp: tol.perCp[q] }, smp.cpR);
-        if (ratio > worst[q].ratio || Number.isNaN(worst[q].T)) worst[q] = { ratio, err: e, T: smp.T, cpR: smp.cpR };
+      const T = smp.T;
+      if (!(T >= from && T <= to)) continue;
+      const cpR = a1 + T * (a2 + T * (a3 + T * (a4 + T * a5)));
+      const hRT = a1 + T * (h2 + T * (h3 + T * (h4 + T * h5))) + a6 / T;
+      const sR = a1 * Math.log(T) + T * (a2 + T * (s3 + T * (s4 + T * s5))) + a7;
+      for (let q = 0; q < 3; q++) {
+        const raw = q === 0 ? Math.abs(cpR - smp.cpR) : q === 1 ? Math.abs(hRT - smp.hRT) : Math.abs(sR - smp.sR);
+        const e = Number.isFinite(raw) ? raw : Infinity;
+        const ratio = e / limitAt(specs[q]!, smp.cpR);
+        if (ratio > wRatio[q]! || Number.isNaN(wT[q]!)) {
+          wRatio[q] = ratio;
+          wErr[q] = e;
+          wT[q] = T;
+          wCp[q] = smp.cpR;
+        }
       }
     }
+    const worst = {
+      cp: { ratio: wRatio[0]!, err: wErr[0]!, T: wT[0]!, cpR: wCp[0]! },
+      h: { ratio: wRatio[1]!, err: wErr[1]!, T: wT[1]!, cpR: wCp[1]! },
+      s: { ratio: wRatio[2]!, err: wErr[2]!, T: wT[2]!, cpR: wCp[2]! },
+    };
     for (const q of ['cp', 'h', 's'] as const) {
       const { ratio, err, T, cpR } = worst[q];
       if (ratio > 1) {
@@ -272,7 +302,8 @@ function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: 
   for (let i = 0; i <= n; i++) ts.push(from + ((to - from) * i) / n);
   for (const T of [poly.tLow, poly.tMid, poly.tHigh]) if (!ts.includes(T)) ts.push(T);
   ts.sort((a, b) => a - b);
-  const cps = ts.map((T) => evaluateNasa7(poly, T).cpR);
+  // Cp/R of the fit at every ts, evaluated once and reused by every check below.
+  const cps = ts.map((T) => cpAt(poly, T));
 
   let positive: FitViolation | undefined;
   let floor: FitViolation | undefined;
@@ -299,16 +330,23 @@ function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: 
   else if (floor) out.push(floor);
 
   const data = samples.filter((s) => s.T >= poly.tLow && s.T <= poly.tHigh).sort((a, b) => a.T - b.T);
-  const inside = ts.filter((T) => T >= poly.tLow && T <= poly.tHigh);
+  const inside: number[] = [];
+  const insideCp: number[] = [];
+  ts.forEach((T, i) => {
+    if (T >= poly.tLow && T <= poly.tHigh) {
+      inside.push(T);
+      insideCp.push(cps[i]!);
+    }
+  });
   let maxCpError = 0;
-  for (const s of data) maxCpError = Math.max(maxCpError, Math.abs(evaluateNasa7(poly, s.T).cpR - s.cpR));
+  for (const s of data) maxCpError = Math.max(maxCpError, Math.abs(cpAt(poly, s.T) - s.cpR));
   const delta = Math.max(tol.smoothness, 2 * maxCpError);
   const dataRev = hysteresisReversals(data.map((s) => s.T), data.map((s) => s.cpR), delta);
   // A fit within ±E of the data can deepen a data reversal just below δ (not counted there) by up to 2E;
   // a fit reversal is therefore extra only beyond δ + 2E. (Found on minimax fits of O2 and HO2, whose
   // computed Cp/R has a 0.018-deep maximum near 5000–5500 K: the fit turned back by 0.044 with E = 0.013.)
   const fitDelta = delta + 2 * maxCpError;
-  const fitRev = hysteresisReversals(inside, inside.map((T) => evaluateNasa7(poly, T).cpR), fitDelta);
+  const fitRev = hysteresisReversals(inside, insideCp, fitDelta);
   if (fitRev.length > dataRev.length) {
     const distance = (T: number) => (dataRev.length ? Math.min(...dataRev.map((d) => Math.abs(d - T))) : Infinity);
     const extra = [...fitRev].sort((a, b) => distance(b) - distance(a) || a - b).slice(0, fitRev.length - dataRev.length).sort((a, b) => a - b);
@@ -331,12 +369,16 @@ function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: 
     const coeffs = end === 'low' ? poly.low : poly.high;
     // Direction of Cp/R when walking outward from the end (+1 rising, −1 falling, 0 flat → either way).
     const slope = outward * cpDerivative(coeffs, tEnd);
-    const zone = ts.filter((T) => (end === 'low' ? T < tEnd && T >= from : T > tEnd && T <= to)).sort((a, b) => outward * (a - b));
-    let best = evaluateRange(coeffs, tEnd).cpR;
+    // Indices into ts (ts ascending and duplicate-free, so walking outward is a walk over indices).
+    const zone: number[] = [];
+    for (let i = 0; i < ts.length; i++) if (end === 'low' ? ts[i]! < tEnd && ts[i]! >= from : ts[i]! > tEnd && ts[i]! <= to) zone.push(i);
+    if (end === 'low') zone.reverse();
+    let best = cpOf(coeffs, tEnd);
     let bestT = tEnd;
     let worst = { retreat: 0, T: tEnd, turn: tEnd };
-    for (const T of zone) {
-      const cp = evaluateNasa7(poly, T).cpR;
+    for (const i of zone) {
+      const T = ts[i]!;
+      const cp = cps[i]!;
       const dir = slope >= 0 ? 1 : -1;
       if (dir * (cp - best) > 0) {
         best = cp;
@@ -346,7 +388,7 @@ function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: 
       if (slope !== 0 && retreat > worst.retreat) worst = { retreat, T, turn: bestT };
     }
     // Scaled like the error limits: a large molecule's fit may bend by more in absolute terms.
-    const turnLimit = Math.max(tol.extrapolationSmoothness, tol.perCp.cp * evaluateRange(coeffs, tEnd).cpR);
+    const turnLimit = Math.max(tol.extrapolationSmoothness, tol.perCp.cp * cpOf(coeffs, tEnd));
     if (worst.retreat > turnLimit) {
       out.push({
         quantity: 'cp-wiggle',
@@ -369,7 +411,7 @@ function departureChecks(poly: Nasa7Polynomial, beyond: readonly FitSample[], to
     let worst: { ratio: number; T: number; fitted: number; computed: number; err: number; limit: number } | undefined;
     for (const smp of beyond) {
       if (end === 'low' ? !(smp.T < poly.tLow) : !(smp.T > poly.tHigh)) continue;
-      const fitted = evaluateRange(end === 'low' ? poly.low : poly.high, smp.T).cpR;
+      const fitted = cpOf(end === 'low' ? poly.low : poly.high, smp.T);
       const err = Number.isFinite(fitted) ? Math.abs(fitted - smp.cpR) : Infinity;
       const limit = tol.extrapolationDeparture * limitAt({ absolute: tol.cp, perCp: tol.perCp.cp }, smp.cpR);
       const ratio = err / limit;

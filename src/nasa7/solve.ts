@@ -5,7 +5,7 @@
  *   1. equilibrate columns: x = D⁻¹ u with D_j a power of two near ‖A_{:,j}‖ (exact scaling);
  *   2. QR of (C D⁻¹)ᵀ = [Q1 Q2] [R; 0]; a particular solution u_p = Q1 R⁻ᵀ d satisfies the constraints;
  *   3. every u = u_p + Q2 z satisfies them too; z solves the unconstrained problem
- *      min ‖(A D⁻¹ Q2) z − (y − A D⁻¹ u_p)‖ by Householder QR (ml-matrix), conditioning checked through
+ *      min ‖(A D⁻¹ Q2) z − (y − A D⁻¹ u_p)‖ by Householder QR (ml-matrix's arithmetic on typed arrays), conditioning checked through
  *      the singular values of its R factor (ml-matrix SVD).
  * The constraints hold to rounding error (‖C x − d‖ ≈ ε ‖C‖ ‖x‖) regardless of the data, which is what
  * "exact" can mean in floating point.
@@ -15,7 +15,7 @@
  * once; `solveFactored` applies the factorisation to one right-hand side (y, d) with exactly the
  * arithmetic of a from-scratch solve, so cached and uncached results are bit-identical.
  */
-import { Matrix, QrDecomposition, SingularValueDecomposition } from 'ml-matrix';
+import { Matrix, SingularValueDecomposition } from 'ml-matrix';
 import { FitError } from './errors.js';
 import { householderQr } from './householder.js';
 
@@ -50,38 +50,84 @@ export interface ConstrainedProblem {
   constraintLabels?: readonly string[];
 }
 
-/** Everything of the null-space method that depends on A and C only (see the module comment). */
+/**
+ * Everything of the null-space method that depends on A and C only (see the module comment), kept as flat
+ * typed arrays: a build holds one per cached (grid, options, tMid), so nothing the solves do not read is
+ * kept (no copy of A itself, no number[][], no ml-matrix object). ≈ (2k + w) doubles per row, w ≤ 7 the
+ * band width below (≈ 0.3 MB for a 10 K grid over 200–6000 K).
+ */
 export interface FactoredProblem {
-  /** Unknowns n and constraints m. */
+  /** Unknowns n, constraints m and rows of A. */
   n: number;
   m: number;
-  /** Original rows of A (for the residual norm). */
-  rows: readonly (readonly number[])[];
+  rowCount: number;
   /** Column scale D (powers of two). */
-  scale: number[];
-  /** A D⁻¹, row-major. */
-  scaledRows: number[][];
-  /** Full Q of (C D⁻¹)ᵀ and its R (m × m). */
-  q: number[][];
-  r: number[][];
-  /** Householder QR of the reduced matrix A D⁻¹ Q2 (ml-matrix), its factor column-major and R diagonal. */
-  reducedQr: QrDecomposition;
+  scale: Float64Array;
+  /** Full Q of (C D⁻¹)ᵀ, n × n row-major (q[i·n + j]), and its R, m × m row-major. */
+  q: Float64Array;
+  r: Float64Array;
+  /** Householder QR of the reduced matrix A D⁻¹ Q2 as ml-matrix forms it: its QR factor column-major (rows × k) and R diagonal. */
   qrColumns: Float64Array;
   rDiagonal: Float64Array;
-  /** A D⁻¹ flat, row-major (rows × n). */
-  scaledFlat: Float64Array;
-  /** A flat, row-major. */
-  rowsFlat: Float64Array;
-  /** Reduced matrix A D⁻¹ Q2 itself, row-major (the minimax fit reweights its rows). */
-  reduced: Float64Array;
   /**
-   * Per row, the first and one past the last column of A that is not exactly zero (a design row touches
-   * one range's seven coefficients only). Products with the exact zeros outside add nothing to a sum
-   * (x + ±0 = x for the x ≠ −0 such sums hold), so skipping them keeps every result bit-identical.
+   * Band of A D⁻¹: row i holds its columns rowFirst[i] … rowEnd[i] − 1 at band[i·bandWidth …] (a design
+   * row touches one range's seven coefficients only). Products with the exact zeros outside add nothing
+   * to a sum (x + ±0 = x for the x ≠ −0 such sums hold, and a sum started at +0 is never −0), so skipping
+   * them keeps every result bit-identical. A itself is band · D: D_j is a power of two, so the quotient
+   * and the product back are exact (no design value is near under- or overflow).
    */
+  band: Float64Array;
+  bandWidth: number;
   rowFirst: Int32Array;
   rowEnd: Int32Array;
+  /** Reduced matrix A D⁻¹ Q2 itself, row-major (the minimax fit reweights its rows). */
+  reduced: Float64Array;
   conditionNumber: number;
+}
+
+/** ml-matrix's `hypotenuse` (src/dc/util.js, v6.15): the scaled form, which its QR uses for column norms. */
+function hypotenuse(a: number, b: number): number {
+  if (Math.abs(a) > Math.abs(b)) {
+    const r = b / a;
+    return Math.abs(a) * Math.sqrt(1 + r * r);
+  }
+  if (b !== 0) {
+    const r = a / b;
+    return Math.abs(b) * Math.sqrt(1 + r * r);
+  }
+  return 0;
+}
+
+/**
+ * Householder QR of an nr × k matrix (row-major `matrix`), as ml-matrix's QrDecomposition computes it
+ * (v6.15, src/dc/qr.js; the LINPACK/JAMA form: Golub & Van Loan, 4th ed., Alg. 5.2.1 with unit-scaled
+ * reflectors): the same operations in the same order on a column-major typed array instead of get/set on
+ * a Matrix, so `qrColumns` (its QR factor, column-major) and `rDiagonal` (its Rdiag) are the same doubles
+ * (tested against ml-matrix in test/src/nasa7/factor-cache.test.ts).
+ */
+export function householderColumns(matrix: Float64Array, nr: number, k: number): { qrColumns: Float64Array; rDiagonal: Float64Array } {
+  const qr = new Float64Array(nr * k);
+  for (let row = 0; row < nr; row++) for (let c = 0; c < k; c++) qr[c * nr + row] = matrix[row * k + c]!;
+  const rDiagonal = new Float64Array(k);
+  for (let c = 0; c < k; c++) {
+    const oc = c * nr;
+    let nrm = 0;
+    for (let i = c; i < nr; i++) nrm = hypotenuse(nrm, qr[oc + i]!);
+    if (nrm !== 0) {
+      if (qr[oc + c]! < 0) nrm = -nrm;
+      for (let i = c; i < nr; i++) qr[oc + i] = qr[oc + i]! / nrm;
+      qr[oc + c] = qr[oc + c]! + 1;
+      for (let j = c + 1; j < k; j++) {
+        const oj = j * nr;
+        let s = 0;
+        for (let i = c; i < nr; i++) s += qr[oc + i]! * qr[oj + i]!;
+        s = -s / qr[oc + c]!;
+        for (let i = c; i < nr; i++) qr[oj + i] = qr[oj + i]! + s * qr[oc + i]!;
+      }
+    }
+    rDiagonal[c] = -nrm;
+  }
+  return { qrColumns: qr, rDiagonal };
 }
 
 function powerOfTwoNear(x: number): number {
@@ -117,19 +163,22 @@ export function factorConstrainedProblem(
     }
   });
 
-  const reducedMatrix = new Matrix(a.length, k);
-  const reduced = new Float64Array(a.length * k);
-  for (let row = 0; row < a.length; row++) {
+  const nr = a.length;
+  const reduced = new Float64Array(nr * k);
+  const q2 = new Float64Array(n * k);
+  for (let j = 0; j < n; j++) for (let c = 0; c < k; c++) q2[j * k + c] = q[j]![m + c]!;
+  for (let row = 0; row < nr; row++) {
     const ar = a[row]!;
     for (let c = 0; c < k; c++) {
       let v = 0;
-      for (let j = 0; j < n; j++) v += ar[j]! * q[j]![m + c]!;
-      reducedMatrix.set(row, c, v);
+      for (let j = 0; j < n; j++) v += ar[j]! * q2[j * k + c]!;
       reduced[row * k + c] = v;
     }
   }
-  const reducedQr = new QrDecomposition(reducedMatrix);
-  const sv = new SingularValueDecomposition(reducedQr.upperTriangularMatrix, {
+  const { qrColumns, rDiagonal } = householderColumns(reduced, nr, k);
+  const upper = new Matrix(k, k);
+  for (let i = 0; i < k; i++) for (let j = i; j < k; j++) upper.set(i, j, i === j ? rDiagonal[i]! : qrColumns[j * nr + i]!);
+  const sv = new SingularValueDecomposition(upper, {
     computeLeftSingularVectors: false,
     computeRightSingularVectors: false,
   }).diagonal;
@@ -141,22 +190,14 @@ export function factorConstrainedProblem(
       `least-squares system is ill-conditioned or rank deficient (condition number ${conditionNumber.toExponential(2)} > ${MAX_CONDITION_NUMBER.toExponential(0)}): the samples do not determine all coefficients; use more, better spread temperatures in each range`,
     );
   }
-  const nr = a.length;
-  const qrColumns = new Float64Array(nr * k);
-  const qrMatrix = (reducedQr as unknown as { QR: Matrix }).QR;
-  for (let c = 0; c < k; c++) for (let row = 0; row < nr; row++) qrColumns[c * nr + row] = qrMatrix.get(row, c);
-  const rDiagonal = Float64Array.from((reducedQr as unknown as { Rdiag: ArrayLike<number> }).Rdiag);
-  const scaledFlat = new Float64Array(nr * n);
-  const rowsFlat = new Float64Array(nr * n);
   const rowFirst = new Int32Array(nr);
   const rowEnd = new Int32Array(nr);
+  let bandWidth = 0;
   for (let row = 0; row < nr; row++) {
     let first = n;
     let end = 0;
     for (let j = 0; j < n; j++) {
-      scaledFlat[row * n + j] = a[row]![j]!;
-      rowsFlat[row * n + j] = rows[row]![j]!;
-      // Both copies hold zeros at the same places: v / 2^p is zero exactly when v is.
+      // A and A D⁻¹ hold zeros at the same places: v / 2^p is zero exactly when v is.
       if (rows[row]![j]! !== 0) {
         if (first === n) first = j;
         end = j + 1;
@@ -164,8 +205,41 @@ export function factorConstrainedProblem(
     }
     rowFirst[row] = first === n ? 0 : first;
     rowEnd[row] = end;
+    bandWidth = Math.max(bandWidth, end - rowFirst[row]!);
   }
-  return { n, m, rows, scale, scaledRows: a, q, r, reducedQr, qrColumns, rDiagonal, scaledFlat, rowsFlat, reduced, rowFirst, rowEnd, conditionNumber };
+  const band = new Float64Array(nr * bandWidth);
+  for (let row = 0; row < nr; row++) {
+    for (let j = rowFirst[row]!; j < rowEnd[row]!; j++) band[row * bandWidth + j - rowFirst[row]!] = a[row]![j]!;
+  }
+  const qFlat = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) qFlat[i * n + j] = q[i]![j]!;
+  const rFlat = new Float64Array(m * m);
+  for (let i = 0; i < m; i++) for (let j = 0; j < m; j++) rFlat[i * m + j] = r[i]![j]!;
+  return {
+    n,
+    m,
+    rowCount: nr,
+    scale: Float64Array.from(scale),
+    q: qFlat,
+    r: rFlat,
+    qrColumns,
+    rDiagonal,
+    band,
+    bandWidth,
+    rowFirst,
+    rowEnd,
+    reduced,
+    conditionNumber,
+  };
+}
+
+/** (A D⁻¹ v)_row, summed over the row's band in column order (the arithmetic of a full row sum). */
+export function scaledRowDot(f: FactoredProblem, row: number, v: ArrayLike<number>): number {
+  const o = row * f.bandWidth - f.rowFirst[row]!;
+  const band = f.band;
+  let s = 0;
+  for (let j = f.rowFirst[row]!, end = f.rowEnd[row]!; j < end; j++) s += band[o + j]! * v[j]!;
+  return s;
 }
 
 /** u_p = Q1 R⁻ᵀ d: the scaled particular solution that satisfies the constraints. */
@@ -175,21 +249,21 @@ export function particularSolution(f: FactoredProblem, constraintRhs: readonly n
   const w = new Array<number>(m).fill(0);
   for (let i = 0; i < m; i++) {
     let s = constraintRhs[i]!;
-    for (let j = 0; j < i; j++) s -= r[j]![i]! * w[j]!;
-    w[i] = s / r[i]![i]!;
+    for (let j = 0; j < i; j++) s -= r[j * m + i]! * w[j]!;
+    w[i] = s / r[i * m + i]!;
   }
   const up = new Array<number>(n).fill(0);
-  for (let i = 0; i < n; i++) for (let j = 0; j < m; j++) up[i]! += q[i]![j]! * w[j]!;
+  for (let i = 0; i < n; i++) for (let j = 0; j < m; j++) up[i]! += q[i * n + j]! * w[j]!;
   return up;
 }
 
 /** x = D⁻¹ (u_p + Q2 z). */
 export function assembleSolution(f: FactoredProblem, up: readonly number[], z: ArrayLike<number>): number[] {
-  const { m, q, scale } = f;
-  const k = f.n - m;
+  const { n, m, q, scale } = f;
+  const k = n - m;
   return up.map((v, i) => {
     let s = v;
-    for (let c = 0; c < k; c++) s += q[i]![m + c]! * z[c]!;
+    for (let c = 0; c < k; c++) s += q[i * n + m + c]! * z[c]!;
     return s / scale[i]!;
   });
 }
@@ -219,31 +293,43 @@ export function solveFactoredParts(
   constraintRhs: readonly number[],
   want: { targets?: boolean | Float64Array; residualNorm?: boolean },
 ): { solution: ConstrainedSolution; targets?: Float64Array } {
-  const { n } = f;
-  const k = n - f.m;
-  const nr = f.scaledRows.length;
-  const a = f.scaledFlat;
-  const first = f.rowFirst;
-  const end = f.rowEnd;
+  const k = f.n - f.m;
+  const nr = f.rowCount;
   const up = particularSolution(f, constraintRhs);
   if (scratchX0.length < nr) scratchX0 = new Float64Array(nr);
   const x0 = scratchX0;
+  const { band, bandWidth, rowFirst, rowEnd } = f;
   for (let row = 0; row < nr; row++) {
+    // scaledRowDot inlined (the hot loop of every solve).
     let pred = 0;
-    const o = row * n;
-    for (let j = first[row]!; j < end[row]!; j++) pred += a[o + j]! * up[j]!;
+    const o = row * bandWidth - rowFirst[row]!;
+    for (let j = rowFirst[row]!, e = rowEnd[row]!; j < e; j++) pred += band[o + j]! * up[j]!;
     x0[row] = rhs[row]! - pred;
   }
   let targets: Float64Array | undefined;
   if (want.targets instanceof Float64Array) (targets = want.targets).set(x0.subarray(0, nr));
   else if (want.targets) targets = x0.slice(0, nr);
   const qr = f.qrColumns;
-  for (let c = 0; c < k; c++) {
-    const o = c * nr;
+  // Reflection c is x ← x + s_c v_c with s_c = −(v_c·x) / v_c[c] over rows ≥ c. The update by reflection
+  // c and the dot product of reflection c + 1 share one pass over the rows: row i is updated, then (from
+  // row c + 1 on) enters the next sum, in ascending i as in two separate passes, so every double is the same.
+  if (k > 0) {
     let s = 0;
-    for (let i = c; i < nr; i++) s += qr[o + i]! * x0[i]!;
-    s = -s / qr[o + c]!;
-    for (let i = c; i < nr; i++) x0[i] = x0[i]! + s * qr[o + i]!;
+    for (let i = 0; i < nr; i++) s += qr[i]! * x0[i]!;
+    s = -s / qr[0]!;
+    for (let c = 0; c < k; c++) {
+      const o = c * nr;
+      const last = c === k - 1;
+      const on = o + nr;
+      let next = 0;
+      x0[c] = x0[c]! + s * qr[o + c]!;
+      for (let i = c + 1; i < nr; i++) {
+        const v = x0[i]! + s * qr[o + i]!;
+        x0[i] = v;
+        if (!last) next += qr[on + i]! * v;
+      }
+      if (!last) s = -next / qr[on + c + 1]!;
+    }
   }
   for (let c = k - 1; c >= 0; c--) {
     x0[c] = x0[c]! / f.rDiagonal[c]!;
@@ -258,16 +344,13 @@ export function solveFactoredParts(
 
 /** ‖A x − y‖₂ of the weighted problem (the residual norm `solveFactored` reports, same arithmetic). */
 export function residualNormOf(f: FactoredProblem, rhs: ArrayLike<number>, x: readonly number[]): number {
-  const nr = f.scaledRows.length;
-  const { n } = f;
-  const first = f.rowFirst;
-  const end = f.rowEnd;
+  const { band, bandWidth, rowFirst, rowEnd, scale } = f;
   let sumSq = 0;
-  const rows = f.rowsFlat;
-  for (let row = 0; row < nr; row++) {
+  for (let row = 0; row < f.rowCount; row++) {
     let pred = 0;
-    const o = row * n;
-    for (let j = first[row]!; j < end[row]!; j++) pred += rows[o + j]! * x[j]!;
+    const o = row * bandWidth - rowFirst[row]!;
+    // band · D_j is A's entry exactly (see FactoredProblem.band).
+    for (let j = rowFirst[row]!; j < rowEnd[row]!; j++) pred += band[o + j]! * scale[j]! * x[j]!;
     const r = pred - rhs[row]!;
     sumSq += r * r;
   }

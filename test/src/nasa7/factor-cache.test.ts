@@ -15,7 +15,7 @@ import { cachedFactorisations, factorisationFor, MAX_FACTORISATIONS, temperature
 import { householderQr } from '../../../src/nasa7/householder.js';
 import { normaliseFitOptions } from '../../../src/nasa7/options.js';
 import { splitSamples } from '../../../src/nasa7/samples.js';
-import { solveConstrainedLeastSquares, solveFactored, MAX_CONDITION_NUMBER, type ConstrainedProblem } from '../../../src/nasa7/solve.js';
+import { householderColumns, solveConstrainedLeastSquares, solveFactored, MAX_CONDITION_NUMBER, type ConstrainedProblem } from '../../../src/nasa7/solve.js';
 import { syntheticSpecies } from '../../fixtures/nasa7/synthetic-set.js';
 import { CH4_RRHO, grid, N2_RRHO, rrhoSample } from './synthetic.js';
 
@@ -136,5 +136,65 @@ describe('factorised solve equals the solver before the cache, bit for bit', () 
       factorisationFor({ temperatures, weights: options.weights, anchorT: anchor.T, tMid: 1000, continuityOrder: 1 }, splitSamples(samples, anchor, options), anchor);
     }
     expect(cachedFactorisations()).toBe(MAX_FACTORISATIONS);
+  });
+});
+
+describe('householderColumns repeats ml-matrix QrDecomposition bit for bit', () => {
+  // Reference: the npm library ml-matrix (v6.15) itself. Matrices: design rows of our closed-form RRHO
+  // species (synthetic.ts) and a hand-written small one with a negative leading entry and an exact-zero column.
+  const designOf = (model: typeof CH4_RRHO, step: number) => {
+    const samples = grid(200, 6000, step).map((T) => rrhoSample(model, T));
+    const anchor = rrhoSample(model, T_REF);
+    const options = normaliseFitOptions({});
+    return buildDesign(splitSamples(samples, anchor, options), options.weights, anchor.hRT * anchor.T).rows;
+  };
+  const matrices: Array<[string, number[][]]> = [
+    ['CH4 design, 10 K grid', designOf(CH4_RRHO, 10)],
+    ['N2 design, 50 K grid', designOf(N2_RRHO, 50)],
+    ['hand-written 5 × 3', [[-2, 0, 1], [1, 0, 3], [0.5, 0, -1], [4, 0, 2], [1e-3, 0, 7]]],
+  ];
+  for (const [name, rows] of matrices) {
+    it(name, () => {
+      const nr = rows.length;
+      const k = rows[0]!.length;
+      const flat = new Float64Array(nr * k);
+      rows.forEach((r, i) => r.forEach((v, j) => (flat[i * k + j] = v)));
+      const ours = householderColumns(flat, nr, k);
+      const ref = new QrDecomposition(new Matrix(rows));
+      const refQr = (ref as unknown as { QR: Matrix }).QR;
+      const refColumns = new Float64Array(nr * k);
+      for (let c = 0; c < k; c++) for (let i = 0; i < nr; i++) refColumns[c * nr + i] = refQr.get(i, c);
+      expect(ours.qrColumns).toStrictEqual(refColumns);
+      expect(ours.rDiagonal).toStrictEqual(Float64Array.from((ref as unknown as { Rdiag: ArrayLike<number> }).Rdiag));
+    });
+  }
+});
+
+describe('compact factorisation and temperature key', () => {
+  // Data: closed-form N2 RRHO samples of our own generator (synthetic.ts).
+  const samplesOn = (step: number) => grid(200, 6000, step).map((T) => rrhoSample(N2_RRHO, T));
+
+  it('a FactoredProblem keeps only typed arrays and numbers (no number[][], no ml-matrix object)', () => {
+    const samples = samplesOn(20);
+    const anchor = rrhoSample(N2_RRHO, T_REF);
+    const options = normaliseFitOptions({});
+    const key = { temperatures: temperatureKey(samples), weights: options.weights, anchorT: anchor.T, tMid: 1000, continuityOrder: 1 as const };
+    const f = factorisationFor(key, splitSamples(samples, anchor, options), anchor);
+    for (const [field, value] of Object.entries(f)) {
+      expect(typeof value === 'number' || ArrayBuffer.isView(value), field).toBe(true);
+    }
+    expect(f.bandWidth).toBeLessThanOrEqual(7); // one range's seven coefficients per design row
+  });
+
+  it('temperatureKey: the same content for the same temperatures, a new key when they change', () => {
+    const a = temperatureKey(samplesOn(50));
+    const b = temperatureKey(samplesOn(50));
+    expect(b).toBe(a);
+    const c = temperatureKey(samplesOn(25));
+    expect(c).not.toBe(a);
+    expect(c.split(',').length - 1).toBe(samplesOn(25).length);
+    const moved = samplesOn(50).map((s, i) => (i === 3 ? { ...s, T: s.T + 0.5 } : s));
+    expect(temperatureKey(moved)).not.toBe(a);
+    expect(temperatureKey(samplesOn(50))).toBe(a);
   });
 });

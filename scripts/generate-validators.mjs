@@ -26,22 +26,28 @@ export const VALIDATORS = [
   { output: `${ROOT}pipeline/generated/settings-validator.ts`, schema: 'settings.schema.json', name: 'validateSettingsInput' },
 ];
 
-const banner = (schemaFile) => `// @ts-nocheck
+/** A generated module: `ajv` with its schemas added, one export per entry of `exports` (name → schema id or ref). */
+function moduleText(ajv, exports, generatedFrom) {
+  return `// @ts-nocheck
 /* eslint-disable */
 /**
- * GENERATED from schemas/${schemaFile} by scripts/generate-validators.mjs (ajv standalone code). Do not
- * edit by hand: change the schema and run \`node scripts/generate-validators.mjs\`. A test fails when this
- * file drifts.
+ * GENERATED from ${generatedFrom} by scripts/generate-validators.mjs (ajv standalone code). Do not edit by
+ * hand: change the schema and run \`npm run build && node scripts/generate-validators.mjs\`. A test fails
+ * when this file drifts.
  */
 import { createRequire } from 'node:module';
 const require = createRequire(import.meta.url);
+${standaloneCode.default(ajv, { ...exports }).replace(/^"use strict";/, '')}
 `;
+}
+
+const standaloneAjv = (options) => new Ajv2020({ ...options, code: { source: true, esm: true, lines: true } });
 
 /** The generated module text: `name`, the validator of `schema` compiled with the ajv `options`. */
 export function generateValidator(schema, schemaFile, name, options) {
-  const ajv = new Ajv2020({ ...options, code: { source: true, esm: true, lines: true } });
+  const ajv = standaloneAjv(options);
   ajv.addSchema(schema);
-  return `${banner(schemaFile)}${standaloneCode.default(ajv, { [name]: schema.$id }).replace(/^"use strict";/, '')}\n`;
+  return moduleText(ajv, { [name]: schema.$id }, `schemas/${schemaFile}`);
 }
 
 /** The schema object of a file in schemas/. */
@@ -57,20 +63,9 @@ export const OUTPUT_VALIDATORS_PATH = `${ROOT}pipeline/generated/output-validato
  * entry of `targets` (export name → schema id or ref); see pipeline/core/output-schemas.ts.
  */
 export function generateOutputValidators(schemas, targets, options) {
-  const ajv = new Ajv2020({ ...options, code: { source: true, esm: true, lines: true } });
-  for (const s of schemas) ajv.addSchema(s);
-  const banner = `// @ts-nocheck
-/* eslint-disable */
-/**
- * GENERATED from schemas/database.schema.json, summary.schema.json and settings.schema.json (as
- * pipeline/core/output-schemas.ts derives them) by scripts/generate-validators.mjs (ajv standalone code).
- * Do not edit by hand: run \`npm run build && node scripts/generate-validators.mjs\`. A test fails when
- * this file drifts.
- */
-import { createRequire } from 'node:module';
-const require = createRequire(import.meta.url);
-`;
-  return `${banner}${standaloneCode.default(ajv, { ...targets }).replace(/^"use strict";/, '')}\n`;
+  const ajv = standaloneAjv(options);
+  for (const schema of schemas) ajv.addSchema(schema);
+  return moduleText(ajv, targets, 'schemas/database.schema.json, summary.schema.json and settings.schema.json (as\n * pipeline/core/output-schemas.ts derives them)');
 }
 
 async function main() {

@@ -2,9 +2,9 @@
 /* eslint-disable */
 /**
  * GENERATED from schemas/database.schema.json, summary.schema.json and settings.schema.json (as
- * pipeline/core/output-schemas.ts derives them) by scripts/generate-validators.mjs (ajv standalone code).
- * Do not edit by hand: run `npm run build && node scripts/generate-validators.mjs`. A test fails when
- * this file drifts.
+ * pipeline/core/output-schemas.ts derives them) by scripts/generate-validators.mjs (ajv standalone code). Do not edit by
+ * hand: change the schema and run `npm run build && node scripts/generate-validators.mjs`. A test fails
+ * when this file drifts.
  */
 import { createRequire } from 'node:module';
 const require = createRequire(import.meta.url);

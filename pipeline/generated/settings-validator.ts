@@ -1,9 +1,9 @@
 // @ts-nocheck
 /* eslint-disable */
 /**
- * GENERATED from schemas/settings.schema.json by scripts/generate-validators.mjs (ajv standalone code). Do not
- * edit by hand: change the schema and run `node scripts/generate-validators.mjs`. A test fails when this
- * file drifts.
+ * GENERATED from schemas/settings.schema.json by scripts/generate-validators.mjs (ajv standalone code). Do not edit by
+ * hand: change the schema and run `npm run build && node scripts/generate-validators.mjs`. A test fails
+ * when this file drifts.
  */
 import { createRequire } from 'node:module';
 const require = createRequire(import.meta.url);

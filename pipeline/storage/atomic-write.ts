@@ -524,20 +524,9 @@ export class OutputStaging {
    * truncated hashes differently and is not linked (false: nothing staged).
    */
   async reuseByDigest(rel: string, digest: Digest): Promise<boolean> {
-    const previous = this.previousPath(rel);
-    // Only a regular file (not a symbolic link, which link(2) would copy as a link) of the recorded size.
-    const st = lstatSync(previous, { throwIfNoEntry: false });
-    if (!st?.isFile() || st.size !== digest.bytes) return false;
+    if (!this.previousMayHold(rel, digest)) return false;
     const target = await this.target(rel, false);
-    try {
-      linkSync(previous, target);
-    } catch {
-      return false;
-    }
-    if (!digestMatches(target, digest)) {
-      rmSync(target, { force: true });
-      return false;
-    }
+    if (!this.linkPreviousChecked(rel, target, digest)) return false;
     this.files.add(rel);
     this.linked.add(rel);
     return true;
@@ -548,11 +537,19 @@ export class OutputStaging {
    * digest, checked through the link as in `reuseByDigest`; `adoptScratch` later stages it under its name.
    */
   async linkPreviousAs(rel: string, dest: string, digest: Digest): Promise<boolean> {
-    const previous = this.previousPath(rel);
-    const st = lstatSync(previous, { throwIfNoEntry: false });
-    if (!st?.isFile() || st.size !== digest.bytes) return false;
+    return this.previousMayHold(rel, digest) && this.linkPreviousChecked(rel, dest, digest);
+  }
+
+  /** Only a regular file (not a symbolic link, which link(2) would copy as a link) of the recorded size. */
+  private previousMayHold(rel: string, digest: Digest): boolean {
+    const st = lstatSync(this.previousPath(rel), { throwIfNoEntry: false });
+    return st?.isFile() === true && st.size === digest.bytes;
+  }
+
+  /** Links the previous `rel` to `dest` and keeps the link only when its bytes hash to `digest`. */
+  private linkPreviousChecked(rel: string, dest: string, digest: Digest): boolean {
     try {
-      linkSync(previous, dest);
+      linkSync(this.previousPath(rel), dest);
     } catch {
       return false;
     }

@@ -162,18 +162,22 @@ describe('grid building blocks against their direct forms', () => {
     }
     return createLevelList(e, w, 1.438776877);
   }
+  /** Every moment of the binned grid sum within 1e-12 of its scale of the direct sum at each temperature. */
+  function expectBinnedEqualsDirect(list: Parameters<typeof addLevelSumGrid>[0], temperatures: number[]): void {
+    const grid = temperatureGrid(temperatures);
+    const m = zeroGridMoments(temperatures.length);
+    addLevelSumGrid(list, grid, m);
+    temperatures.forEach((T, j) => {
+      const d = levelSumMoments(list, T);
+      expect(Math.abs(m.lnQ[j]! - d.lnQ)).toBeLessThan(1e-12 * Math.max(1, Math.abs(d.lnQ)));
+      expect(Math.abs(m.meanU[j]! - d.meanU)).toBeLessThan(1e-12 * Math.max(1, d.meanU));
+      expect(Math.abs(m.varU[j]! - d.varU)).toBeLessThan(1e-12 * Math.max(1, d.varU));
+    });
+  }
   it('binned level sum = direct level sum (every moment, 1e-12 relative of its scale)', () => {
     const temperatures = [20, 60, 150, 199, 200, 250, 400, 1000, 2222, 6000, 20000];
-    const grid = temperatureGrid(temperatures);
     for (const list of [levels(1, 65), levels(2, 3000), levels(3, 40000)]) {
-      const m = zeroGridMoments(temperatures.length);
-      addLevelSumGrid(list, grid, m);
-      temperatures.forEach((T, j) => {
-        const d = levelSumMoments(list, T);
-        expect(Math.abs(m.lnQ[j]! - d.lnQ)).toBeLessThan(1e-12 * Math.max(1, Math.abs(d.lnQ)));
-        expect(Math.abs(m.meanU[j]! - d.meanU)).toBeLessThan(1e-12 * Math.max(1, d.meanU));
-        expect(Math.abs(m.varU[j]! - d.varU)).toBeLessThan(1e-12 * Math.max(1, d.varU));
-      });
+      expectBinnedEqualsDirect(list, temperatures);
     }
   });
   it('binned sum of sparse ladders (one or two levels per bin, hindered and linear rotors) = direct sum, 1e-12 on the 10 K grid', () => {
@@ -184,20 +188,12 @@ describe('grid building blocks against their direct forms', () => {
       { barrier: 150, foldedness: 2, symmetryNumber: 2, rotationalConstant: 0.4 },
     ];
     const temperatures = Array.from({ length: 591 }, (_, i) => 200 + 10 * i);
-    const grid = temperatureGrid(temperatures);
     const lists = [
       ...rotors.map((r) => hinderedRotorLevels(r, { ceilingTemperature: 6100 }).list),
       linearRotorLevelList(0.39, 6100),
     ];
     for (const list of lists) {
-      const m = zeroGridMoments(temperatures.length);
-      addLevelSumGrid(list, grid, m);
-      temperatures.forEach((T, j) => {
-        const d = levelSumMoments(list, T);
-        expect(Math.abs(m.lnQ[j]! - d.lnQ)).toBeLessThan(1e-12 * Math.max(1, Math.abs(d.lnQ)));
-        expect(Math.abs(m.meanU[j]! - d.meanU)).toBeLessThan(1e-12 * Math.max(1, d.meanU));
-        expect(Math.abs(m.varU[j]! - d.varU)).toBeLessThan(1e-12 * Math.max(1, d.varU));
-      });
+      expectBinnedEqualsDirect(list, temperatures);
     }
   });
   it('one-exponential harmonic modes = expm1/log1p form, from x ≈ 4e-4 to x ≈ 6e3', () => {

@@ -5,6 +5,7 @@
  */
 import type { DatabaseSettings } from '../core/settings.js';
 import type { SpeciesOutcome, ValidSpecies } from '../runner.js';
+import type { FileCheck, KeepAs } from '../stages/check-file.js';
 
 /** Where the fit-check limits and the sampling step are set, precomputed (a function cannot be cloned). */
 export interface PlainLimitSource {
@@ -30,6 +31,8 @@ export interface WorkerInit {
    * them between threads and holding them until emit costs time and memory for nothing.
    */
   keepSamples?: boolean;
+  /** Whether warnings are errors (--strict or the settings' `strict`): the file checks apply it. */
+  strict?: boolean;
 }
 
 export interface BatchRequest {
@@ -37,8 +40,17 @@ export interface BatchRequest {
   species: ValidSpecies[];
 }
 
+/** The check of one species file from its bytes (stages/check-file.ts). */
+export interface FileCheckRequest {
+  id: number;
+  check: { file: string; bytes: Uint8Array; keep: KeepAs };
+}
+
+export type WorkRequest = BatchRequest | FileCheckRequest;
+
 export type WorkerReply =
   | { id: number; outcomes: SpeciesOutcome[]; cacheWriteProblem?: string }
+  | { id: number; checked: FileCheck }
   | { id: number; error: string };
 
 /**

@@ -2,9 +2,10 @@
  * The build runner: composes the stages load → validate → compute → fit → verify → emit for a database
  * folder and returns a report; it never prints and never exits (the CLI does both).
  *
- * Concurrency: file loading and the per-species stages run under p-limit(jobs). The per-species work is a
- * pure function of the species and its plan (no shared mutable state); results are collected into a map
- * and emitted in name order, so the outputs do not depend on `jobs` or on the order of completion.
+ * Concurrency: the files are checked, and the species built, on the build's thread pool (workers/pool.ts:
+ * this thread and `jobs` − 1 workers). A file's check and a species' build are pure functions of their
+ * inputs (no shared mutable state); the checks are taken in file order and the species emitted in name
+ * order, so the outputs do not depend on `jobs` or on the order of completion.
  */
 import { stat } from 'node:fs/promises';
 import { deserialize } from 'node:v8';

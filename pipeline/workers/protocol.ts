@@ -21,7 +21,7 @@ export interface WorkerInit {
   cacheDir: string | undefined;
   /** The main thread's code fingerprint (cache keys), see storage/code-fingerprint.ts. */
   codeFingerprint: string;
-  /** TEST-ONLY (test/pipeline/workers.test.ts): the worker exits abruptly when it reaches this species. */
+  /** TEST-ONLY (test/pipeline/workers/pool.test.ts): the worker exits abruptly when it reaches this species or checks its file `NAME.yaml`. */
   testCrashOn?: string;
   /** Monte Carlo samples of the uncertainty check (build --uncertainty-samples). */
   uncertaintySamples?: number;

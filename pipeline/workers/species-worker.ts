@@ -32,6 +32,7 @@ parentPort!.on('message', (req: WorkRequest) => {
     try {
       if ('check' in req) {
         const { file, bytes, keep } = req.check;
+        if (init.testCrashOn !== undefined && file.endsWith(`${init.testCrashOn}.yaml`)) process.exit(70);
         const checked = await checkFileBytes(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength), file, policy, keep);
         // v8.serialize gives each value an ArrayBuffer of its own: moved, not copied.
         const transfer = checked.kept.flatMap((k) => (k instanceof Uint8Array && k.byteOffset === 0 && k.buffer.byteLength === k.byteLength ? [k.buffer as ArrayBuffer] : []));

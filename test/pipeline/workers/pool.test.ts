@@ -11,6 +11,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { checkDatabase, buildOneSpecies } from '../../../pipeline/runner.js';
 import { batchesOf, createSpeciesPool } from '../../../pipeline/workers/pool.js';
 import { StageCache } from '../../../pipeline/storage/cache.js';
+import { checkFileBytes } from '../../../pipeline/stages/check-file.js';
+import { createWarningPolicy } from '../../../pipeline/core/strict.js';
 import { deterministicOutputs, FIXTURE_DB, REPO, runCli } from '../helpers.js';
 import { h2oInput } from '../../support/h2o-input.js';
 
@@ -32,6 +34,7 @@ async function fixturePool(extra: { testCrashOn?: string; keepSamples?: boolean 
     jobs: 2,
     init: { settings: check.settings, limits: { setAt: {} }, cacheDir: undefined, codeFingerprint: 'test', ...extra },
     inline: (v) => buildOneSpecies(v, check.settings, cache, check),
+    inlineCheck: (file, bytes, keep) => checkFileBytes(Buffer.from(bytes), file, createWarningPolicy({ strict: false, accepted: check.settings.accepted_warnings }), keep),
     crashed: (v, reason) => ({ valid: v, diagnostics: [{ severity: 'error', file: v.displayFile, path: '', message: reason }], cache: {}, cacheNotes: [], timings: {} }),
     shareThisThread,
   });
@@ -71,6 +74,23 @@ describe('worker pool', () => {
       expect(co.built).toBeUndefined();
       expect(co.diagnostics[0]!.message).toMatch(/worker thread exited with code 70/);
       for (const o of results.filter((x) => x.valid.name !== 'CO')) expect(o.built, o.valid.name).toBeDefined();
+    } finally {
+      await pool.close();
+    }
+  }, 120_000);
+
+  it('a worker that dies during a file check hands the check to this thread: the same findings, no hang', async () => {
+    const { check, pool } = await fixturePool({ testCrashOn: 'CO' });
+    try {
+      const policy = createWarningPolicy({ strict: false, accepted: check.settings.accepted_warnings });
+      for (const name of ['CO', 'N2']) {
+        const file = path.join(root, 'fx', `${name}.yaml`);
+        const bytes = await readFile(file);
+        const [there, here] = [await pool.checkFile(file, bytes, 'objects'), await checkFileBytes(bytes, file, policy, 'objects')];
+        expect(there.facts, name).toEqual(here.facts);
+        expect(there.kept, name).toEqual(here.kept);
+        expect(there.kept[0], name).toBeDefined();
+      }
     } finally {
       await pool.close();
     }

@@ -382,8 +382,17 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     return { file: f, facts, kept, ...(key !== undefined ? { key, factsText } : {}), loadMs, validateMs };
   };
   const perFile = await Promise.all(discovered.files.map((f) => limit(() => checkFile(f))));
-  for (const p of perFile) validateTotal += p.validateMs;
-  const tLoad = performance.now() - t0 - validateTotal;
+  let loadTotal = 0;
+  for (const p of perFile) {
+    validateTotal += p.validateMs;
+    loadTotal += p.loadMs;
+  }
+  // The files are checked on several threads: the wall time of the check is split between reading and
+  // parsing, and validating, in the proportion of their summed times (so both stay ≥ 0 and add up to it).
+  const tCheck = performance.now() - t0;
+  const validateShare = validateTotal + loadTotal > 0 ? validateTotal / (validateTotal + loadTotal) : 0;
+  const tValidate = tCheck * validateShare;
+  const tLoad = tCheck - tValidate;
 
   const valid: Array<{ fact: DocumentFacts; v: ValidSpecies }> = [];
   const invalid: Array<{ fact: DocumentFacts; entry: InvalidDocument }> = [];
@@ -483,7 +492,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     diagnostics,
     fileDiagnostics,
     failedFiles,
-    timings: { load: tLoad, validate: validateTotal },
+    timings: { load: tLoad, validate: tValidate },
     fileKeys: perFile.flatMap((p) => (p.key !== undefined ? [`file/${p.key}`] : [])),
     cachedFiles,
     cacheNotes,

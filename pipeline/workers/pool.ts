@@ -19,7 +19,7 @@ import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { SpeciesOutcome, ValidSpecies } from '../runner.js';
-import type { BatchRequest, WorkerInit, WorkerReply } from './protocol.js';
+import { requestOutcome, type BatchRequest, type WorkerInit, type WorkerReply } from './protocol.js';
 
 export interface SpeciesPool {
   run(batch: ValidSpecies[]): Promise<SpeciesOutcome[]>;
@@ -191,7 +191,7 @@ class ThreadPool implements SpeciesPool {
       if ('error' in reply) job.resolve(this.failed(job, `a worker failed: ${reply.error}`));
       else {
         if (reply.cacheWriteProblem !== undefined) this.cacheWriteProblem ??= reply.cacheWriteProblem;
-        job.resolve(reply.outcomes);
+        job.resolve(reply.outcomes.map((o, i) => requestOutcome(o, job.req.species[i]!)));
       }
       this.pump();
     });

@@ -9,7 +9,8 @@ import { buildOneSpecies, type LimitSource } from '../runner.js';
 import { StageCache } from '../storage/cache.js';
 import { useCodeFingerprint } from '../storage/code-fingerprint.js';
 import { errorText } from '../core/text.js';
-import type { BatchRequest, WorkerInit, WorkerReply } from './protocol.js';
+import { renderTable } from '../stages/emit-table.js';
+import { replyOutcome, type BatchRequest, type ReplyOutcome, type WorkerInit, type WorkerReply } from './protocol.js';
 
 const init = workerData as WorkerInit;
 useCodeFingerprint(init.codeFingerprint);
@@ -24,12 +25,17 @@ parentPort!.on('message', (req: BatchRequest) => {
   void (async () => {
     let reply: WorkerReply;
     try {
-      const outcomes = [];
+      const outcomes: ReplyOutcome[] = [];
       for (const v of req.species) {
         if (init.testCrashOn !== undefined && v.name === init.testCrashOn) process.exit(70);
         const o = await buildOneSpecies(v, init.settings, cache, limits, uncertaintyOptions);
         if (o.built && init.keepSamples !== true) o.built.computed = { ...o.built.computed, samples: [], extrapolationSamples: [] };
-        outcomes.push(o);
+        // The table is rendered here, where the species was built, and crosses as one string (see BuiltSpecies.tableText).
+        if (o.built && init.settings.outputs.tables) {
+          o.built.tableText = renderTable(o.built);
+          o.built.table = [];
+        }
+        outcomes.push(replyOutcome(o));
       }
       reply = { id: req.id, outcomes };
       if (cache.writeProblem !== undefined) reply.cacheWriteProblem = cache.writeProblem;

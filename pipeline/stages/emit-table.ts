@@ -49,7 +49,9 @@ const TIE_MARGIN = 1e-6;
  *
  * Method (why it is exact): 10^d (d ≤ 9) is an exact double, so the rounded product y = fl(x·10^d) is within
  * ulp(y)/2 ≤ 2^-23 of the exact product when |y| < 2^31; y − round(y) is exact (Sterbenz); when y lies more
- * than TIE_MARGIN from a half-integer, the exact product rounds to the same integer n = Math.round(y), and
+ * than TIE_MARGIN from a half-integer, the exact product rounds to the same integer n = Math.round(y) (being
+ * strictly off the tie would do: half-integers below 2^31 are doubles, so rounding the product cannot step
+ * over one; the margin is a safety factor), and
  * n's digits with the point inserted are toFixed's text. Anything else (ties within the margin, |y| ≥ 2^31,
  * non-finite, d = 0 or d > 9) goes through toFixed itself. About twice as fast as toFixed plus the negative
  * zero check; a table of 60 rows formats 900 cells (test/pipeline/stages/emit-table.test.ts compares the two

@@ -11,6 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { checkDatabase, buildOneSpecies } from '../../../pipeline/runner.js';
 import { batchesOf, createSpeciesPool } from '../../../pipeline/workers/pool.js';
 import { StageCache } from '../../../pipeline/storage/cache.js';
+import { renderTable } from '../../../pipeline/stages/emit.js';
 import { deterministicOutputs, FIXTURE_DB, REPO, runCli } from '../helpers.js';
 
 let root: string;
@@ -122,6 +123,38 @@ describe('worker pool', () => {
         expect(zone?.length, o.valid.name).toBeGreaterThan(0);
         expect(zone).toEqual(inline.built!.computed.extrapolationSamples);
       }
+    } finally {
+      await pool.close();
+    }
+  }, 120_000);
+
+  it('a worker reply leaves out the request\'s species and sends the table as text: the outcome is the inline one', async () => {
+    const { check, cache, pool } = await fixturePool({ keepSamples: true });
+    try {
+      const results = (await Promise.all(check.species.map((v) => pool.run([v])))).flat();
+      let tables = 0;
+      for (const [i, o] of results.entries()) {
+        const v = check.species[i]!;
+        const inline = await buildOneSpecies(v, check.settings, cache, check);
+        // The main thread's own objects, not copies of them.
+        expect(o.valid).toBe(v);
+        if (!inline.built) {
+          expect(o.built).toBeUndefined();
+          expect(o.diagnostics).toEqual(inline.diagnostics);
+          continue;
+        }
+        expect(o.built!.species).toBe(v.species);
+        expect(o.built!.input).toBe(v.normalisedInput);
+        // The table crossed as the text emit would have rendered from the points.
+        expect(o.built!.tableText).toBe(renderTable(inline.built));
+        expect(o.built!.table).toEqual([]);
+        tables++;
+        const { tableText: _t, table: _p, ...rest } = o.built!;
+        const { table: _q, ...own } = inline.built;
+        expect(rest).toEqual(own);
+        expect({ ...o, built: undefined }).toEqual({ ...inline, built: undefined, timings: o.timings });
+      }
+      expect(tables).toBeGreaterThan(3);
     } finally {
       await pool.close();
     }

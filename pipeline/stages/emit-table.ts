@@ -104,16 +104,85 @@ function fittedPropertiesFrom(poly: Nasa7Polynomial, T: number, H298: number): {
 
 const TABLE_HEADER_LINE = `${TABLE_HEADERS.join(',')}\n`;
 
+// The table text is written as ASCII bytes into one growing buffer per thread and decoded once: no string
+// per cell, none per row (the previous form made ~2,000 small strings per species).
+let bytes = new Uint8Array(1 << 15);
+let at = 0;
+const DOT = 0x2e;
+const COMMA = 0x2c;
+const MINUS = 0x2d;
+const NEWLINE = 0x0a;
+const ZERO = 0x30;
+
+function room(n: number): void {
+  if (at + n <= bytes.length) return;
+  const grown = new Uint8Array(Math.max(bytes.length * 2, at + n));
+  grown.set(bytes.subarray(0, at));
+  bytes = grown;
+}
+
+/** Appends an ASCII text (a number's String or toFixed form). */
+function putAscii(s: string): void {
+  room(s.length);
+  for (let i = 0; i < s.length; i++) bytes[at++] = s.charCodeAt(i);
+}
+
+/** Appends a non-negative integer below 2^31 in decimal. */
+function putDigits(v: number): void {
+  let len = 1;
+  for (let t = v; t >= 10; t = (t / 10) | 0) len++;
+  for (let p = at + len - 1; p >= at; p--) {
+    bytes[p] = ZERO + (v % 10);
+    v = (v / 10) | 0;
+  }
+  at += len;
+}
+
+/** Appends `fixed(x, decimals)`: the same fast path (see there for why it is exact), written as bytes. */
+function putFixed(x: number, decimals: number): void {
+  const scale = decimals > 0 ? POW10[decimals] : undefined;
+  if (scale !== undefined) {
+    const y = x * scale;
+    if (y < FAST_LIMIT && y > -FAST_LIMIT) {
+      const n = Math.round(y);
+      const r = y - n;
+      if (r < 0.5 - TIE_MARGIN && r > TIE_MARGIN - 0.5) {
+        room(decimals + 13);
+        if (n < 0) bytes[at++] = MINUS;
+        const a = n < 0 ? -n : n;
+        const whole = Math.floor(a / scale);
+        putDigits(whole);
+        bytes[at++] = DOT;
+        let frac = a - whole * scale;
+        for (let p = at + decimals - 1; p >= at; p--) {
+          bytes[p] = ZERO + (frac % 10);
+          frac = (frac / 10) | 0;
+        }
+        at += decimals;
+        return;
+      }
+    }
+  }
+  putAscii(fixedByToFixed(x, decimals));
+}
+
+/** Appends a separator and `fixed(x, decimals)`. */
+function putCell(x: number, decimals: number): void {
+  room(1);
+  bytes[at++] = COMMA;
+  putFixed(x, decimals);
+}
+
 /**
- * The data lines of tables/<name>.csv, one text built cell by cell (no array per row, no object per
- * point): the same arithmetic as `fittedProperties` at each table temperature, every cell a decimal
- * number (`fixed`, String of T), so none needs CSV quoting.
+ * The data lines of tables/<name>.csv, written cell by cell into the byte buffer (no array per row, no
+ * object per point, no string per cell): the same arithmetic as `fittedProperties` at each table
+ * temperature, every cell a decimal number (`fixed`, String of T), so none needs CSV quoting.
  */
 function renderTableBody(b: TableSource): string {
   const poly = b.fit.polynomial;
   const H298 = enthalpyAt298(poly);
   const R = GAS_CONSTANT;
-  let out = '';
+  at = 0;
   for (const c of b.table) {
     const T = c.T;
     const v = evaluateNasa7(poly, T);
@@ -122,14 +191,16 @@ function renderTableBody(b: TableSource): string {
     const Cp = v.cpR * R;
     const dH298 = H - H298;
     const G = H - (T * S) / 1000;
-    out +=
-      `${T},${fixed(c.Cp, 4)},${fixed(Cp, 4)},${fixed(Cp - c.Cp, 4)},` +
-      `${fixed(c.S, 4)},${fixed(S, 4)},${fixed(S - c.S, 4)},` +
-      `${fixed(c.HminusH298, 5)},${fixed(dH298, 5)},${fixed(dH298 - c.HminusH298, 5)},` +
-      `${fixed(c.H, 5)},${fixed(H, 5)},${fixed(H - c.H, 5)},` +
-      `${fixed(c.G, 5)},${fixed(G, 5)},${fixed(G - c.G, 5)}\n`;
+    putAscii(String(T));
+    putCell(c.Cp, 4); putCell(Cp, 4); putCell(Cp - c.Cp, 4);
+    putCell(c.S, 4); putCell(S, 4); putCell(S - c.S, 4);
+    putCell(c.HminusH298, 5); putCell(dH298, 5); putCell(dH298 - c.HminusH298, 5);
+    putCell(c.H, 5); putCell(H, 5); putCell(H - c.H, 5);
+    putCell(c.G, 5); putCell(G, 5); putCell(G - c.G, 5);
+    room(1);
+    bytes[at++] = NEWLINE;
   }
-  return out;
+  return Buffer.from(bytes.buffer, bytes.byteOffset, at).toString('latin1');
 }
 
 /**

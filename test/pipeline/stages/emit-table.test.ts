@@ -7,7 +7,7 @@
 import { readdir, readFile } from 'node:fs/promises';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { csvText, fixed, fixedByToFixed } from '../../../pipeline/stages/emit.js';
+import { csvText, fittedProperties, fixed, fixedByToFixed, renderTable, TABLE_HEADERS } from '../../../pipeline/stages/emit.js';
 import { indentedRecordText } from '../../../pipeline/stages/emit-stream.js';
 import { sharedBuiltWorkspace } from '../helpers.js';
 
@@ -80,5 +80,35 @@ describe('table CSV', () => {
       { name: 'line\u2028separator', note: 'para\u2029graph' },
     ];
     for (const r of records) expect(indentedRecordText(r)).toBe(reg(r));
+  });
+
+  // The reference: the table as the emit stage wrote it before the byte writer, cell strings from
+  // `fixedByToFixed` (toFixed) and `fittedProperties`, joined with commas. Polynomials and points are
+  // generated here (seeded, written for this test): no physical meaning, only numbers of every size.
+  it('renderTable writes exactly the cells of toFixed, on generated tables with edge values', () => {
+    let seed = 99;
+    const next = () => ((seed = (Math.imul(seed, 1103515245) + 12345) >>> 0) / 4294967296);
+    const edge = [0, -0, 5e-324, -1e-7, 0.00005, -0.00005, 0.000005, -0.000005, 1e21, -1e21, 1e300, NaN, Infinity, -Infinity, 21474.83648, -214748.3648];
+    for (let k = 0; k < 300; k++) {
+      const coeffs = () => [3 + next(), next() * 1e-3, next() * 1e-6, next() * 1e-9, next() * 1e-13, (next() - 0.5) * 1e5, (next() - 0.5) * 50] as [number, number, number, number, number, number, number];
+      const poly = { tLow: 200, tMid: 1000, tHigh: 6000, low: coeffs(), high: coeffs() };
+      const table = Array.from({ length: 1 + (k % 70) }, (_, i) => {
+        const pick = () => (next() < 0.1 ? edge[Math.floor(next() * edge.length)]! : (next() - 0.5) * 10 ** Math.floor(next() * 10 - 3));
+        return { T: k % 2 ? 200 + 100 * i : 298.15 + i * 7.5, Cp: pick(), S: pick(), HminusH298: pick(), H: pick(), G: pick(), cpR: 0, hRT: 0, sR: 0 };
+      });
+      const lines = table.map((c) => {
+        const f = fittedProperties(poly, c.T);
+        const cell = (x: number, d: number) => fixedByToFixed(x, d);
+        return [
+          String(c.T),
+          cell(c.Cp, 4), cell(f.Cp, 4), cell(f.Cp - c.Cp, 4),
+          cell(c.S, 4), cell(f.S, 4), cell(f.S - c.S, 4),
+          cell(c.HminusH298, 5), cell(f.HminusH298, 5), cell(f.HminusH298 - c.HminusH298, 5),
+          cell(c.H, 5), cell(f.H, 5), cell(f.H - c.H, 5),
+          cell(c.G, 5), cell(f.G, 5), cell(f.G - c.G, 5),
+        ].join(','); // prettier-ignore
+      });
+      expect(renderTable({ fit: { polynomial: poly }, table })).toBe(`${[TABLE_HEADERS.join(','), ...lines].join('\n')}\n`);
+    }
   });
 });

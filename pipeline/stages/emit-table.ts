@@ -204,7 +204,7 @@ function renderTableBody(b: TableSource): string {
 }
 
 /**
- * tables/<name>.csv. Its cells are decimal numbers (digits, '.', '-', and 'e'/'+' of String(T) or of
+ * tables/<name>.csv. Its cells are numbers (digits, '.', '-', and 'e', '+', 'NaN', 'Infinity' of String(T) or of
  * toFixed beyond 1e21) and the fixed headers, none of which CSV quotes, so the text is written directly
  * (fast-csv's stream cost ~0.4 ms per species; test/pipeline/stages/emit-table.test.ts checks the bytes are
  * what fast-csv writes for the same cells).

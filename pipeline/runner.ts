@@ -7,6 +7,7 @@
  * and emitted in name order, so the outputs do not depend on `jobs` or on the order of completion.
  */
 import { stat } from 'node:fs/promises';
+import { deserialize } from 'node:v8';
 import path from 'node:path';
 import { recordedReferenceFiles } from './core/recorded-references.js';
 import pLimit from 'p-limit';
@@ -16,24 +17,24 @@ import type { FitOptions, FitResult } from '../src/nasa7/types.js';
 import { acquireOutputLock, OutputStaging, recoverOutputDir, type PublishHooks } from './storage/atomic-write.js';
 import { cached, cacheEntryPath, defaultCacheDir, StageCache, type CacheKind, type CacheOutcome } from './storage/cache.js';
 import { recordCacheUse } from './storage/cache-uses.js';
-import { decodeEntry, encodeEntry, readEntry, writeEntry, writeEntryText, type DocumentFacts, type FileFacts, type Position, type RenderedDigests, type RenderedSpecies, type StoredResult } from './storage/fast-entries.js';
+import { decodeEntry, encodeEntry, readEntry, writeEntry, writeEntryText, type DocumentFacts, type FileFacts, type RenderedDigests, type RenderedSpecies, type StoredResult } from './storage/fast-entries.js';
 import { packFile, packIdentity, PackWriter, readPack, type LoadedPack, type PackIdentity } from './storage/build-pack.js';
 import { SpillFile, type SpillRef } from './storage/spill.js';
 import { shardLabel, shardOf, shardRecord, type Shard } from './core/shard.js';
 import { StreamingEmitter } from './stages/emit-stream.js';
-import { batchesOf, createSpeciesPool } from './workers/pool.js';
+import { batchesOf, createSpeciesPool, type SpeciesPool } from './workers/pool.js';
 import { LIMIT_KEYS, type PlainLimitSource } from './workers/protocol.js';
 import type { ComputedSpecies } from './stages/compute.js';
 import { compareDiagnostics, formatDiagnostic, hasErrors, type Diagnostic } from './core/diagnostics.js';
 import { byName, type BuiltSpecies } from './stages/emit.js';
 import { SummaryEntries, type SummarySpecies } from './stages/emit-summary.js';
 import { canonicalJson, hashParts, sha256Hex } from './storage/hash.js';
-import { discoverSpeciesFiles, loadYamlBytes, loadYamlFile, readNamedGeometryFile, readYamlFileBytes, type LoadedDocument } from './stages/load.js';
+import { discoverSpeciesFiles, loadYamlFile, readNamedGeometryFile, readYamlFileBytes } from './stages/load.js';
+import { checkFileBytes, geometryHash, type KeepAs, type SpeciesPair } from './stages/check-file.js';
 import type { SpeciesPlan } from './core/plan.js';
-import type { SpeciesValidation } from './stages/validate.js';
 import { checkSpeciesSampling, loadSettings, type DatabaseSettings, type FitTolerancesSetting } from './core/settings.js';
-import { checkUniqueNameFacts, nameFact, type NameFact } from './stages/names.js';
-import { fitLimitOrigin, toleranceKeyPositions } from './stages/limit-origin.js';
+import { checkUniqueNameFacts, type NameFact } from './stages/names.js';
+import { fitLimitOrigin } from './stages/limit-origin.js';
 import { codeFingerprint } from './storage/code-fingerprint.js';
 import { createWarningPolicy } from './core/strict.js';
 import { partialMark } from './stages/partial.js';
@@ -108,6 +109,12 @@ export interface ValidSpecies {
   species?: Species;
   normalisedInput?: unknown;
   spilled?: SpillRef;
+  /**
+   * The species and its normalised input as v8.serialize bytes, read from the spill file for the thread that
+   * builds it (`buildOneSpecies` deserialises them): copying bytes to a worker is far cheaper than copying
+   * the object, and this thread never needs the object of a species a worker builds.
+   */
+  packed?: Uint8Array;
   /** The species file (as discovered) and the 0-based position of this species in it. */
   source: { path: string; index: number };
   /** Key of this species' result entry of the no-change fast path (storage/fast-entries.ts). */
@@ -166,6 +173,15 @@ export interface CheckReport {
   packFiles: Array<[string, string]>;
 }
 
+/** What a build needs to know, before any file is checked, to start its threads (`CheckOptions.checkOn`). */
+export interface CheckContext {
+  settings: DatabaseSettings;
+  settingsOk: boolean;
+  strict: boolean;
+  limits: PlainLimitSource;
+  files: number;
+}
+
 export interface CheckOptions {
   /** Database folder. */
   dir: string;
@@ -181,25 +197,16 @@ export interface CheckOptions {
    */
   keep?: 'memory' | 'none' | SpillFile;
   /**
+   * Where the files that need a fresh check are checked: given the settings and the number of files, the
+   * build answers with its thread pool (workers/pool.ts), so parsing and validation run on every thread;
+   * without it (or when it answers undefined) they run here. The findings are the same either way.
+   */
+  checkOn?: (c: CheckContext) => Pick<SpeciesPool, 'checkFile'> | undefined;
+  /**
    * The no-change fast path: with `context` (what besides the settings changes per-species outputs) the
    * file and result keys are computed; with `cache` too, file entries are looked up and stored.
    */
   fastPath?: { context: Record<string, unknown>; cache?: StageCache; pack?: PackIdentity };
-}
-
-function positionsOf(doc: LoadedDocument): ValidSpecies['positions'] {
-  const out: ValidSpecies['positions'] = {};
-  for (const key of ['name', 'composition'] as const) {
-    const p = doc.locate([key]);
-    if (p) out[key] = { line: p.line, column: p.column };
-  }
-  const v = doc.value as Record<string, unknown> | null;
-  if (v && typeof v === 'object' && 'temperature_ranges' in v) {
-    const tr = doc.locate(['temperature_ranges']);
-    if (tr) out.temperature_ranges = { line: tr.line, column: tr.column };
-  }
-  Object.assign(out, toleranceKeyPositions(doc));
-  return out;
 }
 
 /**
@@ -245,7 +252,6 @@ function fileContextHash(p: {
 }
 
 /** The hash a file entry records of one geometry file: of what load attaches to the document for it. */
-const geometryHash = (read: unknown): string => sha256Hex(canonicalJson(read));
 
 /** Whether every geometry file a cached file entry read still reads the same. */
 async function geometryUnchanged(file: string, geometry: FileFacts['geometry']): Promise<boolean> {
@@ -258,7 +264,8 @@ async function geometryUnchanged(file: string, geometry: FileFacts['geometry']):
 /** Load and validate a database folder: every problem of every file at once. */
 export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   const dir = opts.dir;
-  const limit = pLimit(Math.max(1, opts.jobs ?? 8));
+  // Enough files in flight to keep every thread of a `checkOn` pool busy while this one reads.
+  const limit = pLimit(Math.max(8, 4 * (opts.jobs ?? 1)));
   const keep = opts.keep ?? 'memory';
   const t0 = performance.now();
   const settingsResult = await loadSettings(dir, dir);
@@ -272,21 +279,6 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   });
   discovered.diagnostics = policy.applyOther(discovered.diagnostics);
   settingsResult.diagnostics = policy.applyOther(settingsResult.diagnostics);
-  const validateWithPolicy = (validateSpecies: (doc: LoadedDocument) => SpeciesValidation, doc: LoadedDocument, used: Set<number>) => {
-    const r = validateSpecies(doc);
-    const name = doc.value && typeof doc.value === 'object' ? (doc.value as { name?: unknown }).name : undefined;
-    r.diagnostics = policy.applySpecies(
-      r.diagnostics,
-      {
-        raw: doc.value,
-        file: doc.file,
-        ...(typeof name === 'string' ? { name } : {}),
-        locate: (at) => doc.locate(at),
-      },
-      used,
-    );
-    return r;
-  };
   const diagnostics: Diagnostic[] = [...settingsResult.diagnostics, ...discovered.diagnostics];
   const fileDiagnostics = new Map<string, Diagnostic[]>();
   const failedFiles = new Set<string>();
@@ -301,6 +293,14 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   const displayOf = (f: string) => (path.relative(dir, f) || f).split(path.sep).join('/');
   const show = (f: string) => (opts.displayBase && path.isAbsolute(f) ? displayPath(opts.displayBase, f) : f);
   const settingsFileShown = settingsResult.file !== undefined ? show(settingsResult.file) : undefined;
+  const checker = opts.checkOn?.({
+    settings: settingsResult.settings,
+    settingsOk: !hasErrors(settingsResult.diagnostics),
+    strict,
+    limits: plainLimitsOf(settingsFileShown, settingsResult.setAt),
+    files: discovered.files.length,
+  });
+  const keepAs: KeepAs = keep === 'memory' ? 'objects' : keep === 'none' ? 'none' : 'bytes';
   const contextHash = opts.fastPath
     ? fileContextHash({
         settings: settingsResult.settings,
@@ -364,39 +364,18 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
       }
       if (hit.outcome === 'corrupt') cacheNotes.push(`${show(f)}: cache entry for file rejected (${hit.reason}); checked again`);
     }
-    const loaded = await loadYamlBytes(read.bytes, f, f);
-    const { validateSpecies } = await validation();
-    const used = new Set<number>();
-    const facts: FileFacts = { loadDiagnostics: policy.applyOther(loaded.diagnostics, used), documents: [], recovered: [], settingsUsed: [], geometry: [] };
-    const loadMs = performance.now() - tl;
-    // Validation is synchronous: its time is its own (the spill writes between documents are not).
-    let validateMs = 0;
+    const readMs = performance.now() - tl;
+    const checked = checker ? await checker.checkFile(f, read.bytes, keepAs) : await checkFileBytes(read.bytes, f, policy, keepAs);
+    const { facts } = checked;
+    policy.markUsed(facts.settingsUsed);
+    const loadMs = readMs + checked.loadMs;
+    const validateMs = checked.validateMs;
     const kept: Kept[] = [];
-    for (const doc of loaded.documents) {
-      const tv = performance.now();
-      const r = validateWithPolicy(validateSpecies, doc, used);
-      validateMs += performance.now() - tv;
-      const fact: DocumentFacts = { ...nameFact(doc), diagnostics: r.diagnostics };
-      if (r.species && !hasErrors(r.diagnostics)) {
-        fact.valid = { name: r.species.name, positions: positionsOf(doc) as Record<string, Position> };
-        const pair = { species: r.species, normalisedInput: r.normalisedInput ?? r.species };
-        kept.push(keep === 'memory' ? pair : keep === 'none' ? undefined : await keep.put(pair));
-      } else kept.push(undefined);
-      facts.documents.push(fact);
+    for (const k of checked.kept) {
+      if (k === undefined || keep === 'none') kept.push(undefined);
+      else if (k instanceof Uint8Array) kept.push(keep === 'memory' ? (deserialize(k) as SpeciesPair) : await keep.putBytes(k));
+      else kept.push(keep === 'memory' ? k : await keep.put(k));
     }
-    // Documents with only a duplicate key or an unknown tag are checked too, so the user sees every
-    // error of the file in one run; they are never built (one of their values is a guess).
-    for (const doc of loaded.recoveredDocuments) {
-      const tv = performance.now();
-      facts.recovered.push({ ...nameFact(doc), diagnostics: validateWithPolicy(validateSpecies, doc, used).diagnostics, yamlErrors: [...(doc.yamlErrors ?? [])] });
-      validateMs += performance.now() - tv;
-    }
-    facts.settingsUsed = [...used].sort((a, b) => a - b);
-    const geometry = new Map<string, string>();
-    for (const doc of [...loaded.documents, ...loaded.recoveredDocuments]) {
-      for (const [name, g] of Object.entries(doc.geometryFiles ?? {})) if (!geometry.has(name)) geometry.set(name, geometryHash(g));
-    }
-    facts.geometry = [...geometry].map(([name, hash]) => ({ name, hash }));
     const factsText = key !== undefined ? encodeEntry(facts) : undefined;
     if (fastCache && key !== undefined) await writeEntryText(fastCache, 'file', key, factsText!);
     return { file: f, facts, kept, ...(key !== undefined ? { key, factsText } : {}), loadMs, validateMs };
@@ -634,9 +613,13 @@ export async function buildOneSpecies(
   limitSource: LimitSource = {},
   extra: { uncertaintySamples?: number } = {},
 ): Promise<SpeciesOutcome> {
-  // The pool hands over species with their object (runner `speciesOf`); a bare one is a caller's bug.
-  if (given.species === undefined) throw new Error(`buildOneSpecies: ${given.name} has no species object (see speciesOf)`);
-  const v = given as ReadySpecies;
+  // The pool hands over species with their object (runner `speciesOf`) or its bytes; a bare one is a caller's bug.
+  let v: ReadySpecies;
+  if (given.species !== undefined) v = given as ReadySpecies;
+  else if (given.packed !== undefined) {
+    const { packed, ...rest } = given;
+    v = { ...rest, ...(deserialize(packed) as SpeciesPair) };
+  } else throw new Error(`buildOneSpecies: ${given.name} has no species object (see speciesOf)`);
   const {
     compute: { computeSamples, computeTable },
     fit: { fitOptionsFor, fitSpecies },
@@ -823,12 +806,52 @@ async function buildChecked(
   spill: SpillFile | undefined,
 ): Promise<BuildReport> {
   const progress = opts.onProgress ?? (() => {});
-  const check = await checkDatabase({
-    ...opts,
-    keep: spill ?? 'memory',
-    // A shard does not use the build pack (its outputs are merged, not rebuilt in place).
-    ...(cacheDir !== undefined ? { fastPath: { context: buildContext(opts), cache, ...(opts.shard ? {} : { pack: packIdentity(opts.dir, opts.out) }) } } : {}),
-  });
+  // The threads start with the check, which parses and validates the files on all of them; they build the
+  // species afterwards, unless the species to build call for another number of threads (see below).
+  let checkPool: SpeciesPool | undefined;
+  // Bound after the check: this thread's builds quote where the settings set the limits (`check`).
+  let inlineBuild: ((v: ValidSpecies) => Promise<SpeciesOutcome>) | undefined;
+  const poolFor = (jobs: number, c: CheckContext) => {
+    // The settings' acceptances only: which of them went unused is the check's finding (it sees every file).
+    const policy = createWarningPolicy({ strict: c.strict, accepted: c.settings.accepted_warnings });
+    return createSpeciesPool({
+      jobs,
+      init: {
+        settings: c.settings,
+        limits: c.limits,
+        cacheDir,
+        codeFingerprint: codeFingerprint(),
+        ...(opts.uncertaintySamples !== undefined ? { uncertaintySamples: opts.uncertaintySamples } : {}),
+        keepSamples: wantsReport(c),
+        strict: c.strict,
+      },
+      inline: (v) => inlineBuild!(v),
+      inlineCheck: (file, bytes, keep) => checkFileBytes(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength), file, policy, keep),
+      shareThisThread: true,
+      cheap: (batch) => allCached(cacheDir, batch, c.settings),
+      crashed: (v, reason) => failedOutcome(v, `internal error: ${reason} while building this species' batch; it was not built`),
+    });
+  };
+  const wantsReport = (c: { settingsOk: boolean; settings: DatabaseSettings }) => Boolean(c.settingsOk && (opts.report || c.settings.outputs.report));
+  let checkContext: CheckContext | undefined;
+  let check: CheckReport;
+  try {
+    check = await checkDatabase({
+      ...opts,
+      keep: spill ?? 'memory',
+      // A shard does not use the build pack (its outputs are merged, not rebuilt in place).
+      ...(cacheDir !== undefined ? { fastPath: { context: buildContext(opts), cache, ...(opts.shard ? {} : { pack: packIdentity(opts.dir, opts.out) }) } } : {}),
+      checkOn: (c) => {
+        checkContext = c;
+        const jobs = opts.jobs !== undefined ? Math.max(1, opts.jobs) : autoThreads(c.files, opts.maxThreads ?? 1);
+        if (jobs > 1) checkPool = poolFor(jobs, c);
+        return checkPool;
+      },
+    });
+  } catch (e) {
+    await checkPool?.close();
+    throw e;
+  }
   const settings = check.settings;
   // A shard builds the species (and reports the invalid documents) whose name hashes into it.
   const shard = opts.shard;
@@ -842,8 +865,19 @@ async function buildChecked(
     detail: `${check.species.length} species in ${check.files.length} files${shard ? `; shard ${shardLabel(shard)}: ${shardSpecies.length} species` : ''}`,
   });
   // Opened before the species run so that a missing --report-against build fails at once.
+  // Until the build's own try below, a failure must stop the check's threads (they keep the process alive).
+  const orStop = async <T>(p: () => Promise<T>): Promise<T> => {
+    try {
+      return await p();
+    } catch (e) {
+      await checkPool?.close();
+      throw e;
+    }
+  };
   const reportWriter =
-    check.settingsOk && (opts.report || settings.outputs.report) ? await (await import('./report/build-report.js')).ReportWriter.open(opts.report ?? {}, settings, opts.dir, opts.displayBase) : undefined;
+    check.settingsOk && (opts.report || settings.outputs.report)
+      ? await orStop(async () => (await import('./report/build-report.js')).ReportWriter.open(opts.report ?? {}, settings, opts.dir, opts.displayBase))
+      : undefined;
   // A species is taken whole from its result entry unless the report needs its computed values.
   const useStored = cacheDir !== undefined && !reportWriter;
 
@@ -873,34 +907,26 @@ async function buildChecked(
   const usedKeys: string[] = [];
 
   const canWrite = check.settingsOk && check.files.length > 0;
-  const staging = canWrite && total > 0 ? await OutputStaging.open(opts.out) : undefined;
+  const staging = canWrite && total > 0 ? await orStop(() => OutputStaging.open(opts.out)) : undefined;
   let published = false;
-  const pool = createSpeciesPool({
-    jobs,
-    init: {
-      settings,
-      limits: plainLimits(check),
-      cacheDir,
-      codeFingerprint: codeFingerprint(),
-      ...(opts.uncertaintySamples !== undefined ? { uncertaintySamples: opts.uncertaintySamples } : {}),
-      keepSamples: reportWriter !== undefined,
-    },
-    inline: async (v) => {
-      const o = await buildOneSpecies(v, settings, cache, check, opts.uncertaintySamples !== undefined ? { uncertaintySamples: opts.uncertaintySamples } : {});
-      // As a worker's reply: the sample points only while the report needs them.
-      if (o.built && !reportWriter) o.built.computed = { ...o.built.computed, samples: [], extrapolationSamples: [] };
-      return o;
-    },
-    shareThisThread: true,
-    cheap: (batch) => allCached(cacheDir, batch, settings),
-    crashed: (v, reason) => failedOutcome(v, `internal error: ${reason} while building this species' batch; it was not built`),
-  });
+  inlineBuild = async (v) => {
+    const o = await buildOneSpecies(v, settings, cache, check, opts.uncertaintySamples !== undefined ? { uncertaintySamples: opts.uncertaintySamples } : {});
+    // As a worker's reply: the sample points only while the report needs them.
+    if (o.built && !reportWriter) o.built.computed = { ...o.built.computed, samples: [], extrapolationSamples: [] };
+    return o;
+  };
+  let pool: SpeciesPool;
+  if (checkPool && checkPool.jobs === jobs) pool = checkPool;
+  else {
+    await checkPool?.close();
+    pool = poolFor(jobs, checkContext ?? { settings, settingsOk: check.settingsOk, strict: opts.strict === true || settings.strict, limits: plainLimits(check), files: check.files.length });
+  }
 
   // A batch: the species whose result entry is in the cache are taken from it, the others are built (on
   // the pool) from their species object; the order of the batch is kept.
   const resolveBatch = async (batch: readonly ValidSpecies[]): Promise<SpeciesOutcome[]> => {
     const outs: Array<SpeciesOutcome | undefined> = new Array(batch.length);
-    const todo: ReadySpecies[] = [];
+    const todo: ValidSpecies[] = [];
     const at: number[] = [];
     const resultOutcome = new Map<number, { outcome: CacheOutcome; reason?: string }>();
     for (let i = 0; i < batch.length; i++) {
@@ -926,7 +952,7 @@ async function buildChecked(
         resultOutcome.set(i, r);
       }
       try {
-        todo.push(await speciesOf(v, spill));
+        todo.push(v.species === undefined && v.spilled && spill ? { ...v, packed: await spill.getBytes(v.spilled) } : await speciesOf(v, spill));
         at.push(i);
       } catch (e) {
         outs[i] = failedOutcome(v, errorText(e), 'species-file-changed');

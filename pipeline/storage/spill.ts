@@ -32,7 +32,11 @@ export class SpillFile {
 
   /** Stores a value; concurrent calls are safe (each reserves its own range before writing). */
   async put(value: unknown): Promise<SpillRef> {
-    const bytes = serialize(value);
+    return this.putBytes(serialize(value));
+  }
+
+  /** Stores a value already serialised with v8.serialize (e.g. by the worker that checked its file). */
+  async putBytes(bytes: Uint8Array): Promise<SpillRef> {
     const ref = { offset: this.end, length: bytes.length };
     this.end += bytes.length;
     await this.fh.write(bytes, 0, bytes.length, ref.offset);
@@ -40,10 +44,16 @@ export class SpillFile {
   }
 
   async get<T>(ref: SpillRef): Promise<T> {
-    const buf = Buffer.allocUnsafe(ref.length);
+    return deserialize(await this.getBytes(ref)) as T;
+  }
+
+  /** The v8.serialize bytes of a stored value (a worker thread deserialises them itself). */
+  async getBytes(ref: SpillRef): Promise<Buffer> {
+    // Not from the shared small-buffer pool: posted to a worker, a view copies its whole ArrayBuffer.
+    const buf = Buffer.allocUnsafeSlow(ref.length);
     const { bytesRead } = await this.fh.read(buf, 0, ref.length, ref.offset);
     if (bytesRead !== ref.length) throw new Error(`spill file: read ${bytesRead} of ${ref.length} bytes at ${ref.offset}`);
-    return deserialize(buf) as T;
+    return buf;
   }
 
   /** Closes and deletes the file (idempotent). */

@@ -19,10 +19,18 @@ import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { SpeciesOutcome, ValidSpecies } from '../runner.js';
-import { requestOutcome, type BatchRequest, type WorkerInit, type WorkerReply } from './protocol.js';
+import type { FileCheck, KeepAs } from '../stages/check-file.js';
+import type { WorkerInit, WorkerReply, WorkRequest } from './protocol.js';
 
 export interface SpeciesPool {
   run(batch: ValidSpecies[]): Promise<SpeciesOutcome[]>;
+  /**
+   * Checks one species file from its bytes, on a worker or (its share, as for batches) on this thread; the
+   * findings are the same either way. A worker that fails a check hands it back to this thread.
+   */
+  checkFile(file: string, bytes: Uint8Array, keep: KeepAs): Promise<FileCheck>;
+  /** The number of threads, this one included. */
+  readonly jobs: number;
   /** Stops the workers (idempotent). */
   close(): Promise<void>;
   /** The first cache write failure a worker reported. */
@@ -34,6 +42,8 @@ export interface PoolOptions {
   init: WorkerInit;
   /** Builds one species on this thread (jobs = 1). */
   inline: (v: ValidSpecies) => Promise<SpeciesOutcome>;
+  /** Checks one file on this thread (stages/check-file.ts under the build's warning policy). */
+  inlineCheck?: (file: string, bytes: Uint8Array, keep: KeepAs) => Promise<FileCheck>;
   /** The outcome of a species whose worker died (an error diagnostic naming `reason`). */
   crashed: (v: ValidSpecies, reason: string) => SpeciesOutcome;
   /**
@@ -66,6 +76,8 @@ export function batchesOf<T>(items: readonly T[], jobs: number): T[][] {
 export function createSpeciesPool(opts: PoolOptions): SpeciesPool {
   if (opts.jobs <= 1) {
     return {
+      jobs: 1,
+      checkFile: (file, bytes, keep) => checkHere(opts, file, bytes, keep),
       run: async (batch) => {
         const out: SpeciesOutcome[] = [];
         for (const v of batch) {
@@ -87,14 +99,37 @@ const INITIAL_SHARE = 1 / 3;
 const MIN_SHARE = 1 / 8;
 const MAX_SHARE = 1 / 2;
 
+function checkHere(opts: PoolOptions, file: string, bytes: Uint8Array, keep: KeepAs): Promise<FileCheck> {
+  if (!opts.inlineCheck) throw new Error('this pool was made without a file check');
+  return opts.inlineCheck(file, bytes, keep);
+}
+
+/** A species batch, or a file check; `fail` settles it when its worker is lost or reports an error. */
 interface Job {
-  req: BatchRequest;
-  resolve: (o: SpeciesOutcome[]) => void;
+  req: WorkRequest;
+  /** Runs it on this thread. */
+  here: () => Promise<void>;
+  /** Settles it with its worker's reply. */
+  answer: (reply: WorkerReply) => void;
+  fail: (reason: string) => void;
 }
 
 interface Slot {
   worker: Worker;
-  job: Job | undefined;
+  /** Sent and not answered yet. */
+  jobs: Job[];
+}
+
+/**
+ * File checks in flight per worker: a check takes about a millisecond, so a worker given one at a time
+ * would wait for each next one (idle about a third of the time in a 2,000-file check, two threads).
+ */
+const CHECKS_PER_WORKER = 4;
+
+/** Whether `slot` may take `job` now: a batch only when idle; a check when it holds nothing but a few checks. */
+function mayTake(slot: Slot, job: Job): boolean {
+  if (slot.jobs.length === 0) return true;
+  return 'check' in job.req && slot.jobs.length < CHECKS_PER_WORKER && slot.jobs.every((j) => 'check' in j.req);
 }
 
 class ThreadPool implements SpeciesPool {
@@ -120,6 +155,10 @@ class ThreadPool implements SpeciesPool {
     }
   }
 
+  get jobs(): number {
+    return this.opts.jobs;
+  }
+
   async run(batch: ValidSpecies[]): Promise<SpeciesOutcome[]> {
     if (this.opts.cheap && (await this.opts.cheap(batch))) {
       const out: SpeciesOutcome[] = [];
@@ -127,94 +166,120 @@ class ThreadPool implements SpeciesPool {
       return out;
     }
     return new Promise((resolve) => {
-      this.queue.push({ req: { id: this.nextId++, species: batch }, resolve });
+      const failed = (reason: string) => resolve(batch.map((v) => this.opts.crashed(v, reason)));
+      this.queue.push({
+        req: { id: this.nextId++, species: batch },
+        here: async () => {
+          const out: SpeciesOutcome[] = [];
+          try {
+            // Yielding between species so replies of the workers are taken in between.
+            for (const v of batch) {
+              await new Promise((r) => setImmediate(r));
+              out.push(await this.opts.inline(v));
+            }
+          } catch (e) {
+            // What a worker's error reply would give: the whole batch fails, naming the error.
+            return failed(`building on the main thread failed: ${e instanceof Error ? e.message : String(e)}`);
+          }
+          resolve(out);
+        },
+        answer: (reply) => {
+          if ('error' in reply) return failed(`a worker failed: ${reply.error}`);
+          if (!('outcomes' in reply)) return failed('a worker answered a batch with something else');
+          if (reply.cacheWriteProblem !== undefined) this.cacheWriteProblem ??= reply.cacheWriteProblem;
+          resolve(reply.outcomes);
+        },
+        fail: failed,
+      });
+      this.pump();
+    });
+  }
+
+  checkFile(file: string, bytes: Uint8Array, keep: KeepAs): Promise<FileCheck> {
+    return new Promise((resolve, reject) => {
+      const here = () => checkHere(this.opts, file, bytes, keep).then(resolve, reject);
+      this.queue.push({
+        req: { id: this.nextId++, check: { file, bytes, keep } },
+        here,
+        // A check is a pure function of the bytes: whatever went wrong on the worker, this thread does it again
+        // (and throws what it throws).
+        answer: (reply) => void ('checked' in reply ? resolve(reply.checked) : here()),
+        fail: () => void here(),
+      });
       this.pump();
     });
   }
 
   private pump(): void {
     while (this.queue.length > 0 && !this.closed) {
-      let slot = [...this.slots].find((s) => s.job === undefined);
+      const next = this.queue[0]!;
+      let slot = [...this.slots].find((s) => s.jobs.length === 0);
       if (!slot && this.slots.size < this.maxWorkers) slot = this.spawn();
+      slot ??= [...this.slots].find((s) => mayTake(s, next));
       if (!slot) {
         // This thread also reads every species back and emits it, so it may take only part of the batches,
         // `share`, adjusted as the build goes: taking every other batch left a worker idle 11 % of the time
         // (this thread became the bottleneck), one in three left this thread idle 15 % (2,000 synthetic
         // species, two cores). It grows a little whenever this thread would idle with batches waiting and
         // shrinks whenever a worker runs dry while this thread holds a batch. Only the timing depends on it.
+        // A file check is taken whenever every worker holds its fill of them: checks are short and the
+        // species batches that follow are what the share is tuned for.
         if (!this.opts.shareThisThread || this.inlineBusy) return;
-        if (this.here > this.share * (this.here + this.toWorkers)) {
+        const isCheck = 'check' in next.req;
+        if (!isCheck && this.here > this.share * (this.here + this.toWorkers)) {
           this.share = Math.min(MAX_SHARE, this.share * 1.05);
           return;
         }
         this.inlineBusy = true;
-        this.here++;
+        if (!isCheck) this.here++;
         const job = this.queue.shift()!;
         setImmediate(() => void this.runHere(job));
         continue;
       }
       const job = this.queue.shift()!;
-      this.toWorkers++;
-      slot.job = job;
+      if (!('check' in job.req)) this.toWorkers++;
+      slot.jobs.push(job);
       slot.worker.postMessage(job.req);
     }
   }
 
-  /** A batch on this thread, yielding between species so replies of the workers are taken in between. */
   private async runHere(job: Job): Promise<void> {
-    const out: SpeciesOutcome[] = [];
-    let result: SpeciesOutcome[];
     try {
-      for (const v of job.req.species) {
-        await new Promise((r) => setImmediate(r));
-        out.push(await this.opts.inline(v));
-      }
-      result = out;
-    } catch (e) {
-      // What a worker's error reply would give: the whole batch fails, naming the error.
-      result = this.failed(job, `building on the main thread failed: ${e instanceof Error ? e.message : String(e)}`);
+      await job.here();
+    } finally {
+      this.inlineBusy = false;
+      this.pump();
     }
-    this.inlineBusy = false;
-    job.resolve(result);
-    this.pump();
   }
 
   private spawn(): Slot {
     const worker = new Worker(this.entry, { workerData: this.opts.init });
-    const slot: Slot = { worker, job: undefined };
+    const slot: Slot = { worker, jobs: [] };
     this.slots.add(slot);
     worker.on('message', (reply: WorkerReply) => {
-      const job = slot.job;
-      if (!job || job.req.id !== reply.id) return;
-      slot.job = undefined;
-      if (this.queue.length === 0 && this.inlineBusy) this.share = Math.max(MIN_SHARE, this.share * 0.8);
-      if ('error' in reply) job.resolve(this.failed(job, `a worker failed: ${reply.error}`));
-      else {
-        if (reply.cacheWriteProblem !== undefined) this.cacheWriteProblem ??= reply.cacheWriteProblem;
-        job.resolve(reply.outcomes.map((o, i) => requestOutcome(o, job.req.species[i]!)));
-      }
+      // A worker may answer checks out of order (one waits for a geometry file while the next runs).
+      const at = slot.jobs.findIndex((j) => j.req.id === reply.id);
+      if (at < 0) return;
+      const job = slot.jobs.splice(at, 1)[0]!;
+      if (this.queue.length === 0 && this.inlineBusy && !('check' in job.req)) this.share = Math.max(MIN_SHARE, this.share * 0.8);
+      job.answer(reply);
       this.pump();
     });
     const lost = (why: string) => {
       if (!this.slots.delete(slot)) return;
-      const job = slot.job;
-      slot.job = undefined;
+      const lostJobs = slot.jobs.splice(0);
       if (this.closed) return;
       this.crashes++;
-      if (job) job.resolve(this.failed(job, why));
+      for (const job of lostJobs) job.fail(why);
       // A worker that keeps dying (out of memory, a broken install) fails the rest instead of looping.
       if (this.crashes > this.opts.jobs + 2) {
-        for (const j of this.queue.splice(0)) j.resolve(this.failed(j, `${why} (and the workers keep crashing; not retried)`));
+        for (const j of this.queue.splice(0)) j.fail(`${why} (and the workers keep crashing; not retried)`);
       }
       this.pump();
     };
     worker.on('error', (err) => lost(`the worker thread crashed (${err instanceof Error ? err.message : String(err)})`));
     worker.on('exit', (code) => lost(`the worker thread exited with code ${code}`));
     return slot;
-  }
-
-  private failed(job: Job, reason: string): SpeciesOutcome[] {
-    return job.req.species.map((v) => this.opts.crashed(v, reason));
   }
 
   async close(): Promise<void> {

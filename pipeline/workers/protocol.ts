@@ -4,8 +4,8 @@
  * in a worker is the same value as one built on the main thread.
  */
 import type { DatabaseSettings } from '../core/settings.js';
-import type { ReadySpecies, SpeciesOutcome, ValidSpecies } from '../runner.js';
-import type { BuiltSpecies } from '../stages/emit.js';
+import type { SpeciesOutcome, ValidSpecies } from '../runner.js';
+import type { FileCheck, KeepAs } from '../stages/check-file.js';
 
 /** Where the fit-check limits and the sampling step are set, precomputed (a function cannot be cloned). */
 export interface PlainLimitSource {
@@ -31,6 +31,8 @@ export interface WorkerInit {
    * them between threads and holding them until emit costs time and memory for nothing.
    */
   keepSamples?: boolean;
+  /** Whether warnings are errors (--strict or the settings' `strict`): the file checks apply it. */
+  strict?: boolean;
 }
 
 export interface BatchRequest {
@@ -38,31 +40,17 @@ export interface BatchRequest {
   species: ValidSpecies[];
 }
 
-/**
- * A SpeciesOutcome as a worker sends it back: without the species it was asked to build (`valid`, and the
- * built species' `species` and `input`, which are that request's own species object and normalised input),
- * since the main thread still holds the request (about a third of a reply's bytes, cloned for nothing).
- * `replyOutcome` makes it, `requestOutcome` puts the request's species back.
- */
-export type ReplyOutcome = Omit<SpeciesOutcome, 'valid' | 'built'> & { built?: Omit<BuiltSpecies, 'species' | 'input'> };
-
-export function replyOutcome(o: SpeciesOutcome): ReplyOutcome {
-  const { valid: _valid, built, ...rest } = o;
-  if (!built) return rest;
-  const { species: _species, input: _input, ...own } = built;
-  return { ...rest, built: own };
+/** The check of one species file from its bytes (stages/check-file.ts). */
+export interface FileCheckRequest {
+  id: number;
+  check: { file: string; bytes: Uint8Array; keep: KeepAs };
 }
 
-/** The outcome of `v` (the request's species) from its reply; what `buildOneSpecies` returned for it. */
-export function requestOutcome(r: ReplyOutcome, v: ValidSpecies): SpeciesOutcome {
-  const { built, ...rest } = r;
-  if (!built) return { valid: v, ...rest };
-  const ready = v as ReadySpecies;
-  return { valid: v, ...rest, built: { ...built, species: ready.species, input: ready.normalisedInput } };
-}
+export type WorkRequest = BatchRequest | FileCheckRequest;
 
 export type WorkerReply =
-  | { id: number; outcomes: ReplyOutcome[]; cacheWriteProblem?: string }
+  | { id: number; outcomes: SpeciesOutcome[]; cacheWriteProblem?: string }
+  | { id: number; checked: FileCheck }
   | { id: number; error: string };
 
 /**

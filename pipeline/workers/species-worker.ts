@@ -1,6 +1,7 @@
 /**
- * Entry of a species worker thread: receives batches of validated species and returns their outcomes
- * (compute → fit → verify → table through the cache, exactly `buildOneSpecies` of the runner). Loaded
+ * Entry of a species worker thread: checks species files from their bytes (stages/check-file.ts) and
+ * receives batches of validated species and returns their outcomes (compute → fit → verify → table
+ * through the cache, exactly `buildOneSpecies` of the runner). Loaded
  * from the compiled dist/ code. A thrown error is sent back for the batch; anything worse (a crash, an
  * exit) is seen by the pool as the worker's 'error'/'exit' event.
  */
@@ -9,8 +10,10 @@ import { buildOneSpecies, type LimitSource } from '../runner.js';
 import { StageCache } from '../storage/cache.js';
 import { useCodeFingerprint } from '../storage/code-fingerprint.js';
 import { errorText } from '../core/text.js';
+import { createWarningPolicy } from '../core/strict.js';
+import { checkFileBytes } from '../stages/check-file.js';
 import { renderTable } from '../stages/emit-table.js';
-import { replyOutcome, type BatchRequest, type ReplyOutcome, type WorkerInit, type WorkerReply } from './protocol.js';
+import type { WorkerInit, WorkerReply, WorkRequest } from './protocol.js';
 
 const init = workerData as WorkerInit;
 useCodeFingerprint(init.codeFingerprint);
@@ -21,21 +24,39 @@ const limits: LimitSource = {
   ...(init.limits.settingsFile !== undefined ? { settingsFile: init.limits.settingsFile } : {}),
 };
 
-parentPort!.on('message', (req: BatchRequest) => {
+// The settings' acceptances only: which of them went unused is the main thread's finding (it sees every file).
+const policy = createWarningPolicy({ strict: init.strict === true, accepted: init.settings.accepted_warnings });
+
+parentPort!.on('message', (req: WorkRequest) => {
   void (async () => {
     let reply: WorkerReply;
     try {
-      const outcomes: ReplyOutcome[] = [];
+      if ('check' in req) {
+        const { file, bytes, keep } = req.check;
+        const checked = await checkFileBytes(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength), file, policy, keep);
+        // v8.serialize gives each value an ArrayBuffer of its own: moved, not copied.
+        const transfer = checked.kept.flatMap((k) => (k instanceof Uint8Array && k.byteOffset === 0 && k.buffer.byteLength === k.byteLength ? [k.buffer as ArrayBuffer] : []));
+        parentPort!.postMessage({ id: req.id, checked } satisfies WorkerReply, transfer);
+        return;
+      }
+      const outcomes = [];
       for (const v of req.species) {
         if (init.testCrashOn !== undefined && v.name === init.testCrashOn) process.exit(70);
         const o = await buildOneSpecies(v, init.settings, cache, limits, uncertaintyOptions);
-        if (o.built && init.keepSamples !== true) o.built.computed = { ...o.built.computed, samples: [], extrapolationSamples: [] };
-        // The table is rendered here, where the species was built, and crosses as one string (see BuiltSpecies.tableText).
+        if (init.keepSamples !== true) {
+          if (o.built) o.built.computed = { ...o.built.computed, samples: [], extrapolationSamples: [] };
+          // Only the report reads a species object back on the main thread (a rebuild of one species
+          // reads it again from the spill file or its own file).
+          const { species: _species, normalisedInput: _input, ...meta } = o.valid;
+          o.valid = meta;
+        }
+        // The table is rendered here, where the species was built, and crosses as one string: cheaper to
+        // clone than its points, and the main thread, which emits every species, does less (BuiltSpecies.tableText).
         if (o.built && init.settings.outputs.tables) {
           o.built.tableText = renderTable(o.built);
           o.built.table = [];
         }
-        outcomes.push(replyOutcome(o));
+        outcomes.push(o);
       }
       reply = { id: req.id, outcomes };
       if (cache.writeProblem !== undefined) reply.cacheWriteProblem = cache.writeProblem;

@@ -55,6 +55,24 @@ function validateSpeciesRecord(record: unknown): void {
   if (!speciesValidator(record)) throw new OutputSchemaError('thermo.json (species record)', speciesValidator.errors);
 }
 
+/** What `JSON.stringify([[x]], null, 2)` puts around the text of x (an object), which it indents by 4. */
+const NESTED_HEAD = '[\n  [\n    ';
+const NESTED_TAIL = '\n  ]\n]';
+
+/**
+ * A species record as it sits in thermo.json's species list: `JSON.stringify(record, null, 2)` with every
+ * line indented by four spaces, i.e. the text of `JSON.stringify(record, null, 2).replace(/^/gm, '    ')`.
+ * Made by stringifying the record two arrays deep and cutting the brackets off (one native pass instead of
+ * a regular-expression pass over the text: about half the cost). `^` with the m flag also matches after
+ * U+2028 and U+2029, which JSON.stringify leaves unescaped inside strings; a record holding either takes
+ * the regular-expression form, so the bytes are the same in every case.
+ */
+export function indentedRecordText(record: object): string {
+  const nested = JSON.stringify([[record]], null, 2);
+  if (nested.includes('\u2028') || nested.includes('\u2029')) return JSON.stringify(record, null, 2).replace(/^/gm, '    ');
+  return `    ${nested.slice(NESTED_HEAD.length, -NESTED_TAIL.length)}`;
+}
+
 /** Where the species list sits in the envelope text of `jsonText(databaseJson([], …))`. */
 const EMPTY_SPECIES = '\n  "species": []';
 const NASA7_END = 'END\n';
@@ -241,12 +259,12 @@ export class StreamingEmitter {
     if (this.thermo) {
       const record = speciesJson(b);
       validateSpeciesRecord(record);
-      r.thermo = JSON.stringify(record, null, 2).replace(/^/gm, '    ');
+      r.thermo = indentedRecordText(record);
     }
     let tableMs = 0;
     if (this.settings.outputs.tables) {
       const t0 = performance.now();
-      r.table = await renderTable(b);
+      r.table = b.tableText ?? renderTable(b);
       tableMs = performance.now() - t0;
     }
     const digests = await this.addRendered(b.name, r);

@@ -15,12 +15,10 @@ import type { ValidateFunction } from 'ajv';
 import { OUTPUT_AJV_OPTIONS } from '../core/output-schemas.js';
 import { validateDatabaseEnvelope as generatedDatabaseEnvelope } from '../generated/output-validators.js';
 import summarySchema from '../../schemas/summary.schema.json' with { type: 'json' };
-import { GAS_CONSTANT, T_REF } from '../../src/constants.js';
 import type { Species, StandardProperties } from '../../src/model.js';
-import { evaluateNasa7 } from '../../src/nasa7/evaluate.js';
 import { formatNasa7File } from '../../src/nasa7/format.js';
 import { roundForRecord } from '../../src/nasa7/round.js';
-import type { FitMetrics, FitResult, Nasa7Polynomial, Nasa7Record, RangeMetrics } from '../../src/nasa7/types.js';
+import type { FitMetrics, FitResult, Nasa7Record, RangeMetrics } from '../../src/nasa7/types.js';
 import type { ComputedSpecies } from './compute.js';
 import type { SpeciesUncertainty } from '../../src/uncertainty/types.js';
 import { uncertaintyJson } from './uncertainty.js';
@@ -81,8 +79,14 @@ export interface BuiltSpecies {
   input?: unknown;
   computed: ComputedSpecies;
   fit: FitResult;
-  /** Computed properties on the table grid (empty when tables are not written). */
+  /** Computed properties on the table grid (empty when tables are not written, or rendered as `tableText`). */
   table: StandardProperties[];
+  /**
+   * tables/<name>.csv as `renderTable` makes it, rendered where the species was built (a worker thread,
+   * which then sends the text instead of the table points: a flat string crosses threads cheaper than 60
+   * objects, and the main thread, which emits every species, does less).
+   */
+  tableText?: string;
   /** Propagated uncertainties (pipeline/stages/uncertainty.ts); zeros when the species declares none. */
   uncertainty?: SpeciesUncertainty;
 }
@@ -267,85 +271,7 @@ export function renderNasa7(species: readonly BuiltSpecies[], settings: Database
 }
 
 // ---------------------------------------------------------------------------------------------------------
-// tables/<name>.csv
+// tables/<name>.csv: rendered by emit-table.ts (a module of its own, without the schema validators, so a
+// worker thread can render a table without loading them).
 
-export const TABLE_HEADERS = [
-  'T [K]',
-  'Cp computed [J/(mol K)]',
-  'Cp fitted [J/(mol K)]',
-  'Cp fitted-computed [J/(mol K)]',
-  'S computed [J/(mol K)]',
-  'S fitted [J/(mol K)]',
-  'S fitted-computed [J/(mol K)]',
-  'H-H298 computed [kJ/mol]',
-  'H-H298 fitted [kJ/mol]',
-  'H-H298 fitted-computed [kJ/mol]',
-  'H computed [kJ/mol]',
-  'H fitted [kJ/mol]',
-  'H fitted-computed [kJ/mol]',
-  'G computed [kJ/mol]',
-  'G fitted [kJ/mol]',
-  'G fitted-computed [kJ/mol]',
-] as const;
-
-/** Fixed decimals, never "-0.000". */
-export function fixed(x: number, decimals: number): string {
-  const s = x.toFixed(decimals);
-  // Only a negative number can print as "-0.000…"; then it reads back as (negative) zero.
-  return x < 0 && Number(s) === 0 ? s.slice(1) : s;
-}
-
-/** Fitted properties in table units at T (K). */
-export function fittedProperties(poly: Nasa7Polynomial, T: number): { Cp: number; S: number; H: number; HminusH298: number; G: number } {
-  return fittedPropertiesFrom(poly, T, enthalpyAt298(poly));
-}
-
-/** H(298.15 K) of the polynomial, kJ/mol. */
-function enthalpyAt298(poly: Nasa7Polynomial): number {
-  return (evaluateNasa7(poly, T_REF).hRT * GAS_CONSTANT * T_REF) / 1000;
-}
-
-function fittedPropertiesFrom(poly: Nasa7Polynomial, T: number, H298: number): { Cp: number; S: number; H: number; HminusH298: number; G: number } {
-  const R = GAS_CONSTANT;
-  const v = evaluateNasa7(poly, T);
-  const H = (v.hRT * R * T) / 1000;
-  const S = v.sR * R;
-  return { Cp: v.cpR * R, S, H, HminusH298: H - H298, G: H - (T * S) / 1000 };
-}
-
-export function tableRows(b: BuiltSpecies): string[][] {
-  const H298 = enthalpyAt298(b.fit.polynomial);
-  return b.table.map((c) => {
-    const f = fittedPropertiesFrom(b.fit.polynomial, c.T, H298);
-    return [
-      String(c.T),
-      fixed(c.Cp, 4), fixed(f.Cp, 4), fixed(f.Cp - c.Cp, 4),
-      fixed(c.S, 4), fixed(f.S, 4), fixed(f.S - c.S, 4),
-      fixed(c.HminusH298, 5), fixed(f.HminusH298, 5), fixed(f.HminusH298 - c.HminusH298, 5),
-      fixed(c.H, 5), fixed(f.H, 5), fixed(f.H - c.H, 5),
-      fixed(c.G, 5), fixed(f.G, 5), fixed(f.G - c.G, 5),
-    ]; // prettier-ignore
-  });
-}
-
-/** A CSV cell that fast-csv would write as it stands (no quote, separator or line break in it). */
-const PLAIN_CELL = /^[^",\r\n]*$/;
-
-/**
- * tables/<name>.csv. Its cells are decimal numbers and the fixed headers, which CSV writes unquoted, so
- * the text is joined directly (fast-csv's stream costs ~0.4 ms per species, most of a table's emit time);
- * a table with any cell that would need quoting goes through fast-csv (tested: the same bytes either way).
- */
-export async function renderTable(b: BuiltSpecies): Promise<string> {
-  const rows = [[...TABLE_HEADERS], ...tableRows(b)];
-  if (rows.every((r) => r.every((cell) => PLAIN_CELL.test(cell)))) return `${rows.map((r) => r.join(',')).join('\n')}\n`;
-  return csvText(rows);
-}
-
-/** CSV text of `rows` as fast-csv writes it (quoting where needed), one row per line, final newline. */
-export async function csvText(rows: readonly (readonly string[])[]): Promise<string> {
-  // Loaded on first use: most builds never need it.
-  const { writeToString } = await import('fast-csv');
-  const text = await writeToString(rows.map((r) => [...r]), { headers: false, rowDelimiter: '\n' });
-  return `${text}\n`;
-}
+export { TABLE_HEADERS, csvText, fittedProperties, fixed, fixedByToFixed, renderTable } from './emit-table.js';

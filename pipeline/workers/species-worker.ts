@@ -12,6 +12,7 @@ import { useCodeFingerprint } from '../storage/code-fingerprint.js';
 import { errorText } from '../core/text.js';
 import { createWarningPolicy } from '../core/strict.js';
 import { checkFileBytes } from '../stages/check-file.js';
+import { renderTable } from '../stages/emit-table.js';
 import type { WorkerInit, WorkerReply, WorkRequest } from './protocol.js';
 
 const init = workerData as WorkerInit;
@@ -49,6 +50,12 @@ parentPort!.on('message', (req: WorkRequest) => {
           // reads it again from the spill file or its own file).
           const { species: _species, normalisedInput: _input, ...meta } = o.valid;
           o.valid = meta;
+        }
+        // The table is rendered here, where the species was built, and crosses as one string: cheaper to
+        // clone than its points, and the main thread, which emits every species, does less (BuiltSpecies.tableText).
+        if (o.built && init.settings.outputs.tables) {
+          o.built.tableText = renderTable(o.built);
+          o.built.table = [];
         }
         outcomes.push(o);
       }

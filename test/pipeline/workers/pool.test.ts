@@ -13,6 +13,7 @@ import { batchesOf, createSpeciesPool } from '../../../pipeline/workers/pool.js'
 import { StageCache } from '../../../pipeline/storage/cache.js';
 import { checkFileBytes } from '../../../pipeline/stages/check-file.js';
 import { createWarningPolicy } from '../../../pipeline/core/strict.js';
+import { renderTable } from '../../../pipeline/stages/emit.js';
 import { deterministicOutputs, FIXTURE_DB, REPO, runCli } from '../helpers.js';
 import { h2oInput } from '../../support/h2o-input.js';
 
@@ -143,6 +144,32 @@ describe('worker pool', () => {
         expect(zone?.length, o.valid.name).toBeGreaterThan(0);
         expect(zone).toEqual(inline.built!.computed.extrapolationSamples);
       }
+    } finally {
+      await pool.close();
+    }
+  }, 120_000);
+
+  it('a worker sends the table as text (what emit renders from the points): otherwise the outcome is the inline one', async () => {
+    const { check, cache, pool } = await fixturePool({ keepSamples: true });
+    try {
+      const results = (await Promise.all(check.species.map((v) => pool.run([v])))).flat();
+      let tables = 0;
+      for (const [i, o] of results.entries()) {
+        const v = check.species[i]!;
+        const inline = await buildOneSpecies(v, check.settings, cache, check);
+        if (!inline.built) {
+          expect(o.built).toBeUndefined();
+          expect(o.diagnostics).toEqual(inline.diagnostics);
+          continue;
+        }
+        expect(o.built!.tableText).toBe(renderTable(inline.built));
+        expect(o.built!.table).toEqual([]);
+        tables++;
+        const { tableText: _t, table: _p, ...rest } = o.built!;
+        const { table: _q, ...own } = inline.built;
+        expect(rest).toEqual(own);
+      }
+      expect(tables).toBeGreaterThan(3);
     } finally {
       await pool.close();
     }

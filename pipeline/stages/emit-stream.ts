@@ -61,15 +61,14 @@ const NESTED_TAIL = '\n  ]\n]';
 
 /**
  * A species record as it sits in thermo.json's species list: `JSON.stringify(record, null, 2)` with every
- * line indented by four spaces, i.e. the text of `JSON.stringify(record, null, 2).replace(/^/gm, '    ')`.
+ * line indented by four spaces.
  * Made by stringifying the record two arrays deep and cutting the brackets off (one native pass instead of
- * a regular-expression pass over the text: about half the cost). `^` with the m flag also matches after
- * U+2028 and U+2029, which JSON.stringify leaves unescaped inside strings; a record holding either takes
- * the regular-expression form, so the bytes are the same in every case.
+ * a regular-expression pass over the text: about half the cost). It also keeps every string intact: the
+ * regular-expression form's `^` (m flag) matched after U+2028 and U+2029, which JSON.stringify leaves raw
+ * inside strings, and so inserted four spaces into such a string — a record read back held another value.
  */
 export function indentedRecordText(record: object): string {
   const nested = JSON.stringify([[record]], null, 2);
-  if (nested.includes('\u2028') || nested.includes('\u2029')) return JSON.stringify(record, null, 2).replace(/^/gm, '    ');
   return `    ${nested.slice(NESTED_HEAD.length, -NESTED_TAIL.length)}`;
 }
 

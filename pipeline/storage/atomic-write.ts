@@ -482,7 +482,12 @@ interface PendingLink {
 }
 
 /** Inode, device and change time of a file: a file replaced or rewritten since shows another stamp. */
-const stampOf = (st: { ino: bigint; dev: bigint; ctimeNs: bigint }) => `${st.dev}:${st.ino}:${st.ctimeNs}`;
+export const stampOf = (st: { ino: bigint; dev: bigint; ctimeNs: bigint }) => `${st.dev}:${st.ino}:${st.ctimeNs}`;
+
+/** Digests of previous files taken elsewhere (storage/previous-digests.ts), valid only for the given stamp. */
+export interface KnownDigests {
+  lookup(file: string, stamp: string): Digest | undefined;
+}
 
 /**
  * The temporary folder a build writes into while it runs (`.<OUT>.qforge-new-<pid>-<random>` next to OUT),
@@ -549,6 +554,12 @@ export class OutputStaging {
     }
   }
 
+  /** Digests of previous files already taken (by a helper thread): used instead of hashing again. */
+  useKnownDigests(known: KnownDigests | undefined): void {
+    this.known = known;
+  }
+  private known: KnownDigests | undefined;
+
   /** The previous OUT's `rel` (it may not exist). */
   previousPath(rel: string): string {
     return safeJoin((this.previousRoot ??= siblings(this.out).abs), rel);
@@ -585,8 +596,11 @@ export class OutputStaging {
   private checkPrevious(rel: string, dest: string, digest: Digest): boolean {
     const previous = this.previousPath(rel);
     const st = lstatSync(previous, { throwIfNoEntry: false, bigint: true });
-    if (st?.isFile() !== true || st.size !== BigInt(digest.bytes) || !digestMatches(previous, digest)) return false;
-    this.pending.set(dest, { rel, previous, dest, stamp: stampOf(st), digest });
+    if (st?.isFile() !== true || st.size !== BigInt(digest.bytes)) return false;
+    const stamp = stampOf(st);
+    const known = this.known?.lookup(previous, stamp);
+    if (known ? !sameDigest(known, digest) : !digestMatches(previous, digest)) return false;
+    this.pending.set(dest, { rel, previous, dest, stamp, digest });
     return true;
   }
 

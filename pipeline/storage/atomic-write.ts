@@ -13,6 +13,9 @@
  *   - killed between 2 and 3: OUT absent, `-old` complete → `recoverOutputDir` renames it back (readers
  *     use it directly, see `resolveReadableBuild`);
  *   - killed between 3 and 4: OUT is the new complete set; `-old` is removed.
+ * A rebuild whose files all equal OUT's but one (summary.json), under the same marker list, renames that one
+ * file into OUT instead (one rename(2): killed before it, OUT is the previous set; after it, the new one);
+ * see `OutputStaging`.
  * OUT is owned by qforge and replaced whole. Its marker file `.qforge-build` lists every file qforge wrote
  * there; a folder is replaced only when it is empty or holds nothing but the files its marker lists, so a
  * file a user put into OUT (notes, a species file) stops the build instead of vanishing. A non-empty folder

@@ -21,6 +21,7 @@ import { recordCacheUse } from './storage/cache-uses.js';
 import { decodeEntry, encodeEntry, readEntry, writeEntry, writeEntryText, type DocumentFacts, type FileFacts, type RenderedDigests, type RenderedSpecies, type StoredResult } from './storage/fast-entries.js';
 import { packFile, packIdentity, PackWriter, readPack, type LoadedPack, type PackIdentity } from './storage/build-pack.js';
 import { SpillFile, type SpillRef } from './storage/spill.js';
+import { PreviousDigests } from './storage/previous-digests.js';
 import { shardLabel, shardOf, shardRecord, type Shard } from './core/shard.js';
 import { StreamingEmitter } from './stages/emit-stream.js';
 import { batchesOf, createSpeciesPool, type SpeciesPool } from './workers/pool.js';
@@ -800,9 +801,12 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   // The validated species wait in a spill file for their turn (name order), not in memory; without a
   // writable temporary folder they wait in memory (the build only needs more of it).
   const spill = await SpillFile.open().catch(() => undefined);
+  // A rebuild into an existing OUT hashes the previous files beside the check (storage/previous-digests.ts).
+  const previous = cacheDir !== undefined && !opts.shard ? PreviousDigests.start(opts.out, ['thermo.json', 'nasa7.txt'], ['tables']) : undefined;
   try {
-    return await buildChecked(opts, t0, notes, cacheDir, cache, spill);
+    return await buildChecked(opts, t0, notes, cacheDir, cache, spill, previous);
   } finally {
+    await previous?.stop();
     await spill?.close();
   }
 }
@@ -814,6 +818,7 @@ async function buildChecked(
   cacheDir: string | undefined,
   cache: StageCache,
   spill: SpillFile | undefined,
+  previous?: PreviousDigests,
 ): Promise<BuildReport> {
   const progress = opts.onProgress ?? (() => {});
   // The threads start with the check, which parses and validates the files on all of them; they build the
@@ -890,6 +895,8 @@ async function buildChecked(
       : undefined;
   // A species is taken whole from its result entry unless the report needs its computed values.
   const useStored = cacheDir !== undefined && !reportWriter;
+  // Without a pack nothing is reused by digest: the helper's work would be wasted.
+  if (!check.pack || !useStored) await previous?.stop();
 
   const total = shardSpecies.length;
   const jobs = opts.jobs !== undefined ? Math.max(1, opts.jobs) : autoThreads(total, opts.maxThreads ?? 1);
@@ -918,6 +925,7 @@ async function buildChecked(
 
   const canWrite = check.settingsOk && check.files.length > 0;
   const staging = canWrite && total > 0 ? await orStop(() => OutputStaging.open(opts.out)) : undefined;
+  if (check.pack && useStored) staging?.useKnownDigests(previous);
   let published = false;
   inlineBuild = async (v) => {
     const o = await buildOneSpecies(v, settings, cache, check, opts.uncertaintySamples !== undefined ? { uncertaintySamples: opts.uncertaintySamples } : {});
@@ -1095,6 +1103,7 @@ async function buildChecked(
       }
       while (inflight.length > 0) await consume();
     }
+    await previous?.stop();
     await pool.close();
     if (pool.cacheWriteProblem !== undefined) cache.writeProblem ??= pool.cacheWriteProblem;
     const stagesMs = performance.now() - tStages - emitMs;
@@ -1141,7 +1150,7 @@ async function buildChecked(
       // only what is checked before use (its outputs are compared by digest with whatever OUT then holds).
       if (pack && check.fastContext !== undefined) {
         for (const r of emitter.records) pack.addOutput(r);
-        await pack.write(cacheDir!, packIdentity(opts.dir, opts.out), check.fastContext).catch((e) => cache.noteWriteFailure(e));
+        await pack.write(cacheDir!, packIdentity(opts.dir, opts.out), check.fastContext, check.pack).catch((e) => cache.noteWriteFailure(e));
       }
     }
     if (finalStaging && reportWriter) {
@@ -1367,7 +1376,14 @@ function plainLimitsOf(settingsFile: string | undefined, settingsSetAt: CheckRep
 
 /** Cache hit: nothing of the species was recomputed (its stage results, or its whole result, from the cache). */
 function isCacheHit(o: SpeciesOutcome): boolean {
-  const v = STAGE_KINDS.flatMap((k) => (o.cache[k] !== undefined ? [o.cache[k]] : []));
-  return v.length > 0 && v.every((x) => x === 'hit');
+  // A loop, not flatMap/every: called twice per species (progress and summary) on a rebuild's hot path.
+  let any = false;
+  for (const k of STAGE_KINDS) {
+    const x = o.cache[k];
+    if (x === undefined) continue;
+    if (x !== 'hit') return false;
+    any = true;
+  }
+  return any;
 }
 

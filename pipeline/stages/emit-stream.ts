@@ -13,11 +13,12 @@
  * `renderNasa7` of the whole set (tested against them).
  *
  * Reuse of the previous OUT (a rebuild): given the build pack's records of the previous thermo.json and
- * nasa7.txt (storage/build-pack.ts), the previous file is hard-linked into the staging folder and hashed
- * through that link at once; when it still holds the recorded bytes, each species piece whose digest is the
- * next recorded one is only counted, not written. The first piece that differs switches the file back to a
- * scratch copy (the pieces counted so far are copied from the linked file, whose bytes were checked), and
- * `finish` publishes the link only when every piece, the head and the tail matched. A table is linked when
+ * nasa7.txt (storage/build-pack.ts), the previous file is hashed at once (in place; OutputStaging links it
+ * when it is needed, checking that the link is of the inode hashed); when it still holds the recorded
+ * bytes, each species piece whose digest is the next recorded one is only counted, not written. The first
+ * piece that differs switches the file back to a scratch copy (the pieces counted so far are copied from the
+ * linked file, whose bytes were checked), and `finish` publishes the previous file only when every piece,
+ * the head and the tail matched. A table is linked when
  * the previous one hashes to the digest of the text this build would write. A species taken from the pack
  * carries only digests; its texts are loaded (from its result entry) only where a piece differs.
  */
@@ -152,6 +153,7 @@ class PieceStream {
     const { path: linked, record, offset } = this.reuse!;
     this.reuse = undefined;
     this.scratch = await this.staging.scratch(this.rel);
+    await this.staging.ensureLinked(linked);
     const fd = openSync(linked, 'r');
     try {
       const buf = Buffer.allocUnsafe(1 << 20);
@@ -204,7 +206,7 @@ class PieceStream {
   /** Closes what is open and drops the link (idempotent; `finish` does it itself). */
   async close(): Promise<void> {
     await this.scratch?.close();
-    if (this.reuse) await rm(this.reuse.path, { force: true });
+    if (this.reuse) await this.staging.dropLink(this.reuse.path);
     this.reuse = undefined;
   }
 }
@@ -339,7 +341,7 @@ export class StreamingEmitter {
       if (!text.endsWith(NASA7_END)) throw new Error('nasa7.txt framing without its END line');
       this.records.push(await this.nasa7.finish(text.slice(0, -NASA7_END.length), NASA7_END));
     }
-    if (this.settings.outputs.tables) await this.staging.write('tables/README.txt', renderTablesReadme(this.settings));
+    if (this.settings.outputs.tables) await this.staging.writeOrReuse('tables/README.txt', renderTablesReadme(this.settings));
   }
 
   /** Closes the scratch files (idempotent; `finish` closes them itself). */

@@ -23,7 +23,7 @@
  * database folder is followed (each real file is read once); one that resolves OUTSIDE the database folder is
  * refused with an error diagnostic, as is a broken link. Entries whose name starts with '.' are skipped.
  */
-import { readFileSync, statSync } from 'node:fs';
+import { closeSync, openSync, readFileSync, readSync, statSync } from 'node:fs';
 import { readdir, readFile, realpath, stat } from 'node:fs/promises';
 import path from 'node:path';
 import {
@@ -480,10 +480,27 @@ export async function readYamlFileBytes(filePath: string, displayPath: string, o
     const info = statSync(filePath);
     if (!info.isFile()) return { diagnostics: [err(displayPath, 'not-a-file', 'not a regular file', { expected: 'a YAML file' })] };
     if (info.size > maxBytes) return { diagnostics: [sizeDiagnostic(displayPath, info.size, maxBytes)] };
-    return { bytes: readFileSync(filePath) };
+    return { bytes: readSized(filePath, info.size) };
   } catch (e) {
     return { diagnostics: [readFailure(displayPath, e)] };
   }
+}
+
+/**
+ * A file's bytes when stat said `size`: one read of one byte more tells that the file still ends there
+ * (open, read, close, where readFileSync also fstats and reads again to find the end); a file that grew
+ * since is read whole.
+ */
+function readSized(filePath: string, size: number): Buffer {
+  const buf = Buffer.allocUnsafe(size + 1);
+  const fd = openSync(filePath, 'r');
+  let n: number;
+  try {
+    n = readSync(fd, buf, 0, size + 1, 0);
+  } finally {
+    closeSync(fd);
+  }
+  return n <= size ? buf.subarray(0, n) : readFileSync(filePath);
 }
 
 function readFailure(displayPath: string, e: unknown): Diagnostic {

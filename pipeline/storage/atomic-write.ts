@@ -13,13 +13,16 @@
  *   - killed between 2 and 3: OUT absent, `-old` complete → `recoverOutputDir` renames it back (readers
  *     use it directly, see `resolveReadableBuild`);
  *   - killed between 3 and 4: OUT is the new complete set; `-old` is removed.
+ * A rebuild whose files all equal OUT's but one (summary.json), under the same marker list, renames that one
+ * file into OUT instead (one rename(2): killed before it, OUT is the previous set; after it, the new one);
+ * see `OutputStaging`.
  * OUT is owned by qforge and replaced whole. Its marker file `.qforge-build` lists every file qforge wrote
  * there; a folder is replaced only when it is empty or holds nothing but the files its marker lists, so a
  * file a user put into OUT (notes, a species file) stops the build instead of vanishing. A non-empty folder
  * without a marker is never replaced. (A marker of an older qforge, without a list, is trusted as before.)
  */
 import { createHash, hash as oneShotHash, randomBytes } from 'node:crypto';
-import { closeSync, linkSync, lstatSync, openSync, readdirSync, readFileSync, readSync, renameSync, rmdirSync, rmSync, unlinkSync, writeFileSync, writeSync } from 'node:fs';
+import { closeSync, copyFileSync, constants as fsConstants, fsyncSync, linkSync, lstatSync, openSync, readdirSync, readFileSync, readSync, renameSync, rmdirSync, rmSync, unlinkSync, writeFileSync, writeSync } from 'node:fs';
 import { lstat, mkdir, open, readdir, readFile, rename, rm, stat, type FileHandle } from 'node:fs/promises';
 import path from 'node:path';
 import { compareText } from '../core/text.js';
@@ -387,6 +390,8 @@ export function digestMatches(file: string, digest: Digest): boolean {
  */
 function removeTree(dir: string): void {
   try {
+    // A symbolic link (OUT given as a link to a folder) is removed itself: never the folder it leads to.
+    if (!lstatSync(dir).isDirectory()) throw new Error('not a folder');
     for (const e of readdirSync(dir, { withFileTypes: true })) {
       const p = path.join(dir, e.name);
       if (e.isDirectory()) removeTree(p);
@@ -467,15 +472,48 @@ function closeOnce(fh: FileHandle): StagedStream {
 }
 
 /**
+ * A previous output found to hold the bytes this build would write, not yet linked into the staging folder
+ * (see `OutputStaging`): where it goes, the inode that was hashed and the digest it was checked against.
+ */
+interface PendingLink {
+  rel: string;
+  previous: string;
+  dest: string;
+  /** Identity of the file that was hashed: inode, device and change time (ns). */
+  stamp: string;
+  digest: Digest;
+}
+
+/** Inode, device and change time of a file: a file replaced or rewritten since shows another stamp. */
+export const stampOf = (st: { ino: bigint; dev: bigint; ctimeNs: bigint }) => `${st.dev}:${st.ino}:${st.ctimeNs}`;
+
+/** Digests of previous files taken elsewhere (storage/previous-digests.ts), valid only for the given stamp. */
+export interface KnownDigests {
+  lookup(file: string, stamp: string): Digest | undefined;
+}
+
+/**
  * The temporary folder a build writes into while it runs (`.<OUT>.qforge-new-<pid>-<random>` next to OUT),
  * published as OUT by `publish` with the swap described in the module comment, or removed by `discard`.
  * Files are written without fsync as they come; `publish` fsyncs them all (in parallel, bounded) and their
  * folders before the swap, so the durability is that of a file-by-file fsync without its stalls.
+ *
+ * Previous outputs that hold exactly the bytes this build would write are checked in place (hashed where
+ * they lie) and only recorded; they are hard-linked into the staging folder when they are needed there:
+ * when the publish swaps folders, or when a framed file's pieces must be copied from them. When, at the
+ * publish, every staged file but one is such a previous file and the previous marker lists exactly this
+ * build's files, nothing but that one file differs from OUT: it alone is renamed into OUT (one rename(2),
+ * as atomic as the swap) and no file is linked or removed — a no-change rebuild of 10,000 species saves
+ * 10,000 links and the 10,000 unlinks of the old folder. A link made later is checked to be of the inode
+ * that was hashed (else hashed again through the link), so what was checked is still what gets published;
+ * where the file system refuses links, the previous file is copied and the copy checked against the digest.
  */
 export class OutputStaging {
   private readonly files = new Set<string>();
-  /** Files hard-linked from the previous OUT (already durable there: no fsync needed). */
+  /** Files that hold the previous OUT's bytes (linked, or still pending): no write and no fsync needed. */
   private readonly linked = new Set<string>();
+  /** Checked previous files not linked yet, by destination path (a staged file or a scratch path). */
+  private readonly pending = new Map<string, PendingLink>();
   private readonly dirs: Set<string>;
   private constructor(
     readonly out: string,
@@ -500,16 +538,30 @@ export class OutputStaging {
   }
 
   private async target(rel: string, register = true): Promise<string> {
+    const target = this.claim(rel);
+    await this.ensureDir(path.dirname(target));
+    if (register) this.files.add(rel);
+    return target;
+  }
+
+  /** The staged path of `rel`, refusing a second use of the name (no folder is made). */
+  private claim(rel: string): string {
     if (this.files.has(rel) || rel === BUILD_MARKER) throw new OutputFolderError(`output file ${rel} written twice`);
-    const target = safeJoin(this.dir, rel);
-    const dir = path.dirname(target);
+    return safeJoin(this.dir, rel);
+  }
+
+  private async ensureDir(dir: string): Promise<void> {
     if (!this.dirs.has(dir)) {
       await mkdir(dir, { recursive: true });
       this.dirs.add(dir);
     }
-    if (register) this.files.add(rel);
-    return target;
   }
+
+  /** Digests of previous files already taken (by a helper thread): used instead of hashing again. */
+  useKnownDigests(known: KnownDigests | undefined): void {
+    this.known = known;
+  }
+  private known: KnownDigests | undefined;
 
   /** The previous OUT's `rel` (it may not exist). */
   previousPath(rel: string): string {
@@ -518,52 +570,66 @@ export class OutputStaging {
   private previousRoot: string | undefined;
 
   /**
-   * Stages `rel` as a hard link to the previous OUT's `rel` when that file holds bytes of the given digest
-   * (the build pack's record of what this build would write). The digest is taken of the bytes read through
-   * the new link, so what was checked is what gets published; a previous file that was modified, replaced or
-   * truncated hashes differently and is not linked (false: nothing staged).
+   * Stages `rel` as the previous OUT's `rel` when that file holds bytes of the given digest (the build
+   * pack's record of what this build would write): hashed in place now, linked when needed (see the class
+   * comment); a previous file that was modified, replaced or truncated hashes differently and is not used
+   * (false: nothing staged).
    */
   async reuseByDigest(rel: string, digest: Digest): Promise<boolean> {
-    if (!this.previousMayHold(rel, digest)) return false;
-    const target = await this.target(rel, false);
-    if (!this.linkPreviousChecked(rel, target, digest)) return false;
+    const dest = this.claim(rel);
+    if (!this.checkPrevious(rel, dest, digest)) return false;
     this.files.add(rel);
     this.linked.add(rel);
     return true;
   }
 
   /**
-   * Hard-links the previous OUT's `rel` to the unlisted scratch path `dest` when it holds bytes of the given
-   * digest, checked through the link as in `reuseByDigest`; `adoptScratch` later stages it under its name.
+   * Records the previous OUT's `rel` for the unlisted scratch path `dest` when it holds bytes of the given
+   * digest, checked as in `reuseByDigest`; `adoptScratch` later stages it under its name, `ensureLinked`
+   * makes the file exist at `dest` (to read from it), `dropLink` forgets it.
    */
   async linkPreviousAs(rel: string, dest: string, digest: Digest): Promise<boolean> {
-    return this.previousMayHold(rel, digest) && this.linkPreviousChecked(rel, dest, digest);
+    return this.checkPrevious(rel, dest, digest);
   }
 
-  /** Only a regular file (not a symbolic link, which link(2) would copy as a link) of the recorded size. */
-  private previousMayHold(rel: string, digest: Digest): boolean {
-    const st = lstatSync(this.previousPath(rel), { throwIfNoEntry: false });
-    return st?.isFile() === true && st.size === digest.bytes;
-  }
-
-  /** Links the previous `rel` to `dest` and keeps the link only when its bytes hash to `digest`. */
-  private linkPreviousChecked(rel: string, dest: string, digest: Digest): boolean {
-    try {
-      linkSync(this.previousPath(rel), dest);
-    } catch {
-      return false;
-    }
-    if (!digestMatches(dest, digest)) {
-      rmSync(dest, { force: true });
-      return false;
-    }
+  /**
+   * Hashes the previous `rel` in place: only a regular file (not a symbolic link, which link(2) would copy
+   * as a link) of the recorded size and digest is recorded as pending for `dest`.
+   */
+  private checkPrevious(rel: string, dest: string, digest: Digest): boolean {
+    const previous = this.previousPath(rel);
+    const st = lstatSync(previous, { throwIfNoEntry: false, bigint: true });
+    if (st?.isFile() !== true || st.size !== BigInt(digest.bytes)) return false;
+    const stamp = stampOf(st);
+    const known = this.known?.lookup(previous, stamp);
+    if (known ? !sameDigest(known, digest) : !digestMatches(previous, digest)) return false;
+    this.pending.set(dest, { rel, previous, dest, stamp, digest });
     return true;
   }
 
-  /** Stages a scratch file made by `linkPreviousAs` as `rel` (a link: published without fsync). */
+  /** Makes a pending previous file exist at `dest` (see `materialise`); nothing to do for other paths. */
+  async ensureLinked(dest: string): Promise<void> {
+    const p = this.pending.get(dest);
+    if (!p) return;
+    this.pending.delete(dest);
+    await this.ensureDir(path.dirname(dest));
+    materialise(p);
+  }
+
+  /** Forgets a pending previous file at `dest`, or removes the file there. */
+  async dropLink(dest: string): Promise<void> {
+    if (!this.pending.delete(dest)) await rm(dest, { force: true });
+  }
+
+  /** Stages a scratch file recorded by `linkPreviousAs` as `rel` (a previous file: published without fsync). */
   async adoptScratch(scratch: string, rel: string): Promise<void> {
-    const target = await this.target(rel);
-    renameSync(scratch, target);
+    const p = this.pending.get(scratch);
+    if (p) {
+      const dest = this.claim(rel);
+      this.pending.delete(scratch);
+      this.pending.set(dest, { ...p, dest });
+      this.files.add(rel);
+    } else renameSync(scratch, await this.target(rel));
     this.linked.add(rel);
   }
 
@@ -574,23 +640,25 @@ export class OutputStaging {
 
   /**
    * Stages `rel` with content `data`: when the previous OUT holds exactly these bytes under the same name
-   * (a rebuild that changed nothing there), that file is hard-linked instead of written — the bytes are
-   * compared, never assumed — so it needs no new write and no new fsync. Otherwise as `write`.
+   * (a rebuild that changed nothing there), that file is used instead (recorded as in `reuseByDigest`) —
+   * the bytes are compared, never assumed — so it needs no new write and no new fsync. Otherwise as `write`.
    */
   async writeOrReuse(rel: string, data: string): Promise<void> {
-    const target = await this.target(rel);
-    const previous = safeJoin(siblings(this.out).abs, rel);
+    const dest = this.claim(rel);
+    const previous = this.previousPath(rel);
     try {
-      const st = lstatSync(previous, { throwIfNoEntry: false });
-      if (st?.isFile() && st.size === Buffer.byteLength(data, 'utf8') && readFileSync(previous).equals(Buffer.from(data, 'utf8'))) {
-        linkSync(previous, target);
+      const st = lstatSync(previous, { throwIfNoEntry: false, bigint: true });
+      const bytes = Buffer.from(data, 'utf8');
+      if (st?.isFile() && st.size === BigInt(bytes.length) && readFileSync(previous).equals(bytes)) {
+        this.pending.set(dest, { rel, previous, dest, stamp: stampOf(st), digest: { hash: oneShotHash('sha256', bytes, 'hex'), bytes: bytes.length } });
+        this.files.add(rel);
         this.linked.add(rel);
         return;
       }
     } catch {
-      // No previous file, another file system, links refused: write it.
+      // No previous file, an unreadable one: write it.
     }
-    writeFileSync(target, data, { flag: 'wx' });
+    writeFileSync(await this.target(rel), data, { flag: 'wx' });
   }
 
   /**
@@ -601,7 +669,7 @@ export class OutputStaging {
   async reuseIfSame(rel: string): Promise<void> {
     if (!this.files.has(rel) || this.linked.has(rel)) return;
     const target = safeJoin(this.dir, rel);
-    const previous = safeJoin(siblings(this.out).abs, rel);
+    const previous = this.previousPath(rel);
     try {
       const a = lstatSync(previous, { throwIfNoEntry: false });
       if (!a?.isFile() || a.size !== lstatSync(target).size || !sameBytes(previous, target)) return;
@@ -624,7 +692,7 @@ export class OutputStaging {
   async remove(rel: string): Promise<void> {
     this.linked.delete(rel);
     if (!this.files.delete(rel)) return;
-    await rm(safeJoin(this.dir, rel), { force: true });
+    await this.dropLink(safeJoin(this.dir, rel));
   }
 
   async stream(rel: string): Promise<StagedStream> {
@@ -645,10 +713,54 @@ export class OutputStaging {
     await rm(this.scratchPath(rel), { force: true });
   }
 
-  /** Adds the marker, fsyncs everything and swaps the staging folder in as OUT. */
+  /**
+   * The one file to rename into OUT when everything else this build stages is the previous OUT's own
+   * file (see the class comment); undefined when the folders must be swapped.
+   */
+  private async inPlaceFile(s: ReturnType<typeof siblings>): Promise<string | undefined> {
+    const fresh = [...this.files].filter((rel) => !this.linked.has(rel));
+    if (fresh.length !== 1) return undefined;
+    // Only into a real folder (a symbolic link as OUT is replaced by a folder, as the swap does).
+    const st = lstatSync(s.abs, { throwIfNoEntry: false });
+    if (!st?.isDirectory()) return undefined;
+    // Every pending file still stands under its own name (none was staged elsewhere).
+    for (const p of this.pending.values()) if (p.dest !== safeJoin(this.dir, p.rel)) return undefined;
+    let marker: string;
+    try {
+      marker = readFileSync(path.join(s.abs, BUILD_MARKER), 'utf8');
+    } catch {
+      return undefined;
+    }
+    // The same file list: OUT holds exactly this build's files (assertReplaceable saw nothing unlisted).
+    return marker === markerText(this.files) ? fresh[0] : undefined;
+  }
+
+  /** Adds the marker, fsyncs everything and swaps the staging folder in as OUT (or renames one file in). */
   async publish(hooks: PublishHooks = {}): Promise<{ replaced: boolean }> {
     const s = siblings(this.out);
     try {
+      const single = await this.inPlaceFile(s);
+      if (single !== undefined) {
+        const staged = safeJoin(this.dir, single);
+        const fd = openSync(staged, 'r+');
+        try {
+          fsyncSync(fd);
+        } finally {
+          closeSync(fd);
+        }
+        await hooks.beforeSwap?.();
+        await hooks.midSwap?.();
+        renameSync(staged, safeJoin(s.abs, single));
+        await fsyncDir(path.dirname(safeJoin(s.abs, single)));
+        this.pending.clear();
+        await this.discard();
+        return { replaced: true };
+      }
+      for (const p of this.pending.values()) {
+        await this.ensureDir(path.dirname(p.dest));
+        materialise(p);
+      }
+      this.pending.clear();
       const markerFile = path.join(this.dir, BUILD_MARKER);
       const fh = await open(markerFile, 'wx');
       try {
@@ -687,9 +799,39 @@ export class OutputStaging {
 
   /** Removes the staging folder (the build is not published). */
   async discard(): Promise<void> {
+    this.pending.clear();
     await rm(this.dir, { recursive: true, force: true });
   }
 }
+
+/**
+ * Puts a checked previous file at its destination: a hard link, kept when it is the inode that was hashed
+ * (else hashed again through the link); where links are refused, a copy checked against the digest. A file
+ * that no longer holds the checked bytes fails the build (it was changed while the build ran).
+ */
+function materialise(p: PendingLink): void {
+  // Stamp first: link(2) itself changes the inode's change time. The link is then checked to be of that inode.
+  const before = lstatSync(p.previous, { bigint: true, throwIfNoEntry: false });
+  let trusted = before !== undefined && stampOf(before) === p.stamp;
+  try {
+    linkSync(p.previous, p.dest);
+    if (trusted) {
+      const st = lstatSync(p.dest, { bigint: true });
+      trusted = st.ino === before!.ino && st.dev === before!.dev;
+    }
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code === 'ENOENT') throw changedDuringBuild(p);
+    trusted = false;
+    copyFileSync(p.previous, p.dest, fsConstants.COPYFILE_EXCL);
+  }
+  if (!trusted && !digestMatches(p.dest, p.digest)) {
+    rmSync(p.dest, { force: true });
+    throw changedDuringBuild(p);
+  }
+}
+
+const changedDuringBuild = (p: PendingLink) =>
+  new OutputFolderError(`the previous output file ${p.rel} changed while the build ran; nothing was published: run the build again`);
 
 /**
  * Writes `files` (relative path → content) as the complete new content of OUT, atomically as described in

@@ -18,9 +18,9 @@
  * not used and not warned about, as an entry with another key is simply not addressed. Lines are keyed like
  * the entries (content addressed), so a valid pack can only say what the entries would say.
  *
- * What the pack says about outputs is never trusted on its own: a previous output is reused (hard-linked)
- * only after its bytes, read through the new link, hash to the digest the current build would write
- * (stages/emit-stream.ts); a modified previous output is therefore never linked into a new build.
+ * What the pack says about outputs is never trusted on its own: a previous output is reused only after its
+ * bytes hash to the digest the current build would write (stages/emit-stream.ts, OutputStaging); a
+ * modified previous output is therefore never taken into a new build.
  *
  * The body lines are kept as text and parsed only when used; the next pack reuses the text of every line
  * that did not change, so a no-change rebuild re-encodes nothing.
@@ -61,6 +61,8 @@ export interface LoadedPack {
   /** Result key → StoredResult JSON text (rendered texts as digests). */
   results: Map<string, string>;
   outputs: Map<string, OutputRecord>;
+  /** sha256 and length of the body read (a next pack of the same body need not be written again). */
+  body: Digest;
 }
 
 /** The identity of a build of `database` into `out` (real path of the database folder, resolved out). */
@@ -135,7 +137,7 @@ export function readPack(cacheDir: string, id: PackIdentity, context: string): P
   const body = bytes.subarray(eol + 1);
   if (body.length !== header.bytes) return { rejected: `truncated (${body.length} of ${String(header.bytes)} bytes)` };
   if (sha256Hex(body) !== header.sha256) return { rejected: 'checksum mismatch' };
-  const pack: LoadedPack = { files: new Map(), results: new Map(), outputs: new Map() };
+  const pack: LoadedPack = { files: new Map(), results: new Map(), outputs: new Map(), body: { hash: header.sha256 as string, bytes: body.length } };
   const text = body.toString('utf8');
   let at = 0;
   while (at < text.length) {
@@ -177,10 +179,15 @@ export class PackWriter {
     this.outputs.push(`O ${JSON.stringify(record)}\n`);
   }
 
-  /** Writes the pack (through a temporary file and a rename, without fsync: a torn pack fails its checksum). */
-  async write(cacheDir: string, id: PackIdentity, context: string): Promise<void> {
+  /**
+   * Writes the pack (through a temporary file and a rename, without fsync: a torn pack fails its checksum),
+   * unless `previous` — the pack this build read, of the same identity and context — has the same body.
+   */
+  async write(cacheDir: string, id: PackIdentity, context: string, previous?: LoadedPack): Promise<void> {
     const body = Buffer.from([...this.files, ...this.results, ...this.outputs].join(''), 'utf8');
-    const header = JSON.stringify({ format: PACK_FORMAT, database: id.database, out: id.out, context, sha256: sha256Hex(body), bytes: body.length });
+    const sha256 = sha256Hex(body);
+    if (previous && previous.body.bytes === body.length && previous.body.hash === sha256) return;
+    const header = JSON.stringify({ format: PACK_FORMAT, database: id.database, out: id.out, context, sha256, bytes: body.length });
     const file = packFile(cacheDir, id);
     await mkdir(path.dirname(file), { recursive: true });
     await writeFileAtomic(file, Buffer.concat([Buffer.from(`${header}\n`, 'utf8'), body]), { sync: false });

@@ -58,23 +58,26 @@ const TIE_MARGIN = 1e-6;
  * on millions of values and the edge cases).
  */
 export function fixed(x: number, decimals: number): string {
+  const n = exactlyScaled(x, decimals);
+  if (n !== n) return fixedByToFixed(x, decimals);
+  if (n === 0) return ZERO_TEXT[decimals]!;
+  const scale = POW10[decimals]!;
+  const a = n < 0 ? -n : n;
+  const whole = Math.floor(a / scale);
+  // scale + fraction has d + 1 digits; dropping its leading 1 leaves the fraction zero-padded.
+  const text = `${whole}.${String(scale + (a - whole * scale)).slice(1)}`;
+  return n < 0 ? `-${text}` : text;
+}
+
+/** round(x·10^decimals) when the fast path of `fixed` is exact for it (see there), else NaN. */
+function exactlyScaled(x: number, decimals: number): number {
   const scale = decimals > 0 ? POW10[decimals] : undefined;
-  if (scale !== undefined) {
-    const y = x * scale;
-    if (y < FAST_LIMIT && y > -FAST_LIMIT) {
-      const n = Math.round(y);
-      const r = y - n;
-      if (r < 0.5 - TIE_MARGIN && r > TIE_MARGIN - 0.5) {
-        if (n === 0) return ZERO_TEXT[decimals]!;
-        const a = n < 0 ? -n : n;
-        const whole = Math.floor(a / scale);
-        // scale + fraction has d + 1 digits; dropping its leading 1 leaves the fraction zero-padded.
-        const text = `${whole}.${String(scale + (a - whole * scale)).slice(1)}`;
-        return n < 0 ? `-${text}` : text;
-      }
-    }
-  }
-  return fixedByToFixed(x, decimals);
+  if (scale === undefined) return NaN;
+  const y = x * scale;
+  if (!(y < FAST_LIMIT && y > -FAST_LIMIT)) return NaN;
+  const n = Math.round(y);
+  const r = y - n;
+  return r < 0.5 - TIE_MARGIN && r > TIE_MARGIN - 0.5 ? n : NaN;
 }
 
 /** The reference form of `fixed`: toFixed, and "-0.000…" printed without its sign. */
@@ -140,30 +143,24 @@ function putDigits(v: number): void {
 
 /** Appends `fixed(x, decimals)`: the same fast path (see there for why it is exact), written as bytes. */
 function putFixed(x: number, decimals: number): void {
-  const scale = decimals > 0 ? POW10[decimals] : undefined;
-  if (scale !== undefined) {
-    const y = x * scale;
-    if (y < FAST_LIMIT && y > -FAST_LIMIT) {
-      const n = Math.round(y);
-      const r = y - n;
-      if (r < 0.5 - TIE_MARGIN && r > TIE_MARGIN - 0.5) {
-        room(decimals + 13);
-        if (n < 0) bytes[at++] = MINUS;
-        const a = n < 0 ? -n : n;
-        const whole = Math.floor(a / scale);
-        putDigits(whole);
-        bytes[at++] = DOT;
-        let frac = a - whole * scale;
-        for (let p = at + decimals - 1; p >= at; p--) {
-          bytes[p] = ZERO + (frac % 10);
-          frac = (frac / 10) | 0;
-        }
-        at += decimals;
-        return;
-      }
-    }
+  const n = exactlyScaled(x, decimals);
+  if (n !== n) {
+    putAscii(fixedByToFixed(x, decimals));
+    return;
   }
-  putAscii(fixedByToFixed(x, decimals));
+  const scale = POW10[decimals]!;
+  room(decimals + 13);
+  if (n < 0) bytes[at++] = MINUS;
+  const a = n < 0 ? -n : n;
+  const whole = Math.floor(a / scale);
+  putDigits(whole);
+  bytes[at++] = DOT;
+  let frac = a - whole * scale;
+  for (let p = at + decimals - 1; p >= at; p--) {
+    bytes[p] = ZERO + (frac % 10);
+    frac = (frac / 10) | 0;
+  }
+  at += decimals;
 }
 
 /** Appends a separator and `fixed(x, decimals)`. */

@@ -32,7 +32,7 @@ import { byName, type BuiltSpecies } from './stages/emit.js';
 import { SummaryEntries, type SummarySpecies } from './stages/emit-summary.js';
 import { canonicalJson, hashParts, sha256Hex } from './storage/hash.js';
 import { discoverSpeciesFiles, loadYamlFile, readNamedGeometryFile, readYamlFileBytes } from './stages/load.js';
-import { checkFileBytes, geometryHash, type KeepAs, type SpeciesPair } from './stages/check-file.js';
+import { checkFileBytes, checkPolicy, geometryHash, type KeepAs, type SpeciesPair } from './stages/check-file.js';
 import type { SpeciesPlan } from './core/plan.js';
 import { checkSpeciesSampling, loadSettings, type DatabaseSettings, type FitTolerancesSetting } from './core/settings.js';
 import { checkUniqueNameFacts, type NameFact } from './stages/names.js';
@@ -253,8 +253,6 @@ function fileContextHash(p: {
   return hashParts('file-context', TOOL_NAME, TOOL_VERSION, codeFingerprint(), CONSTANTS_EDITION, p.settings, p.strict, p.dir, p.displayBase ?? null, p.limits, p.extra);
 }
 
-/** The hash a file entry records of one geometry file: of what load attaches to the document for it. */
-
 /** Whether every geometry file a cached file entry read still reads the same. */
 async function geometryUnchanged(file: string, geometry: FileFacts['geometry']): Promise<boolean> {
   for (const g of geometry) {
@@ -334,35 +332,33 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
       return { file: f, facts, kept: [], loadMs: performance.now() - tl, validateMs: 0 };
     }
     const key = contextHash !== undefined ? hashParts('file', contextHash, f, sha256Hex(read.bytes)) : undefined;
-    const packed = key !== undefined ? pack?.files.get(key) : undefined;
-    if (packed !== undefined) {
-      let facts: FileFacts | undefined;
+    // Stored findings (a build-pack line or a file entry) stand for a fresh check while every geometry file
+    // they read still reads the same; 'unparsable' when the text is not the JSON of findings.
+    const reuse = async (text: string): Promise<CheckedFile | 'unparsable' | undefined> => {
+      let facts: FileFacts;
       try {
-        facts = decodeEntry<FileFacts>(packed);
+        facts = decodeEntry<FileFacts>(text);
       } catch {
-        // A line of a pack whose checksum held cannot fail to parse unless written wrong: checked again.
+        return 'unparsable';
       }
-      if (facts && (await geometryUnchanged(f, facts.geometry))) {
-        policy.markUsed(facts.settingsUsed);
-        cachedFiles++;
-        return { file: f, facts, factsText: packed, kept: [], key: key!, loadMs: performance.now() - tl, validateMs: 0 };
-      }
-    }
+      if (!(await geometryUnchanged(f, facts.geometry))) return undefined;
+      policy.markUsed(facts.settingsUsed);
+      cachedFiles++;
+      return { file: f, facts, factsText: text, kept: [], key: key!, loadMs: performance.now() - tl, validateMs: 0 };
+    };
+    const packed = key !== undefined ? pack?.files.get(key) : undefined;
+    // A line of a pack whose checksum held cannot fail to parse unless written wrong: then checked again.
+    const fromPack = packed !== undefined ? await reuse(packed) : undefined;
+    if (typeof fromPack === 'object') return fromPack;
     if (fastCache && key !== undefined) {
       const hit = await fastCache.getText('file', key);
-      let facts: FileFacts | undefined;
       if (hit.outcome === 'hit') {
-        try {
-          facts = decodeEntry<FileFacts>(hit.value!);
-        } catch {
+        const fromEntry = await reuse(hit.value!);
+        if (typeof fromEntry === 'object') return fromEntry;
+        if (fromEntry === 'unparsable') {
           hit.outcome = 'corrupt';
           hit.reason = 'not valid JSON';
         }
-      }
-      if (facts && (await geometryUnchanged(f, facts.geometry))) {
-        policy.markUsed(facts.settingsUsed);
-        cachedFiles++;
-        return { file: f, facts, factsText: hit.value!, kept: [], key, loadMs: performance.now() - tl, validateMs: 0 };
       }
       if (hit.outcome === 'corrupt') cacheNotes.push(`${show(f)}: cache entry for file rejected (${hit.reason}); checked again`);
     }
@@ -827,8 +823,7 @@ async function buildChecked(
   // Bound after the check: this thread's builds quote where the settings set the limits (`check`).
   let inlineBuild: ((v: ValidSpecies) => Promise<SpeciesOutcome>) | undefined;
   const poolFor = (jobs: number, c: CheckContext) => {
-    // The settings' acceptances only: which of them went unused is the check's finding (it sees every file).
-    const policy = createWarningPolicy({ strict: c.strict, accepted: c.settings.accepted_warnings });
+    const policy = checkPolicy(c.settings, c.strict);
     return createSpeciesPool({
       jobs,
       init: {
@@ -841,13 +836,15 @@ async function buildChecked(
         strict: c.strict,
       },
       inline: (v) => inlineBuild!(v),
-      inlineCheck: (file, bytes, keep) => checkFileBytes(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength), file, policy, keep),
+      inlineCheck: (file, bytes, keep) => checkFileBytes(bytes, file, policy, keep),
       shareThisThread: true,
       cheap: (batch) => allCached(cacheDir, batch, c.settings),
       crashed: (v, reason) => failedOutcome(v, `internal error: ${reason} while building this species' batch; it was not built`),
     });
   };
   const wantsReport = (c: { settingsOk: boolean; settings: DatabaseSettings }) => Boolean(c.settingsOk && (opts.report || c.settings.outputs.report));
+  const threadsFor = (count: number) => (opts.jobs !== undefined ? Math.max(1, opts.jobs) : autoThreads(count, opts.maxThreads ?? 1));
+  // Set by checkDatabase, which always asks `checkOn` before checking any file.
   let checkContext: CheckContext | undefined;
   let check: CheckReport;
   try {
@@ -858,7 +855,7 @@ async function buildChecked(
       ...(cacheDir !== undefined ? { fastPath: { context: buildContext(opts), cache, ...(opts.shard ? {} : { pack: packIdentity(opts.dir, opts.out) }) } } : {}),
       checkOn: (c) => {
         checkContext = c;
-        const jobs = opts.jobs !== undefined ? Math.max(1, opts.jobs) : autoThreads(c.files, opts.maxThreads ?? 1);
+        const jobs = threadsFor(c.files);
         if (jobs > 1) checkPool = poolFor(jobs, c);
         return checkPool;
       },
@@ -889,9 +886,8 @@ async function buildChecked(
       throw e;
     }
   };
-  const reportWriter =
-    check.settingsOk && (opts.report || settings.outputs.report)
-      ? await orStop(async () => (await import('./report/build-report.js')).ReportWriter.open(opts.report ?? {}, settings, opts.dir, opts.displayBase))
+  const reportWriter = wantsReport(check)
+    ? await orStop(async () => (await import('./report/build-report.js')).ReportWriter.open(opts.report ?? {}, settings, opts.dir, opts.displayBase))
       : undefined;
   // A species is taken whole from its result entry unless the report needs its computed values.
   const useStored = cacheDir !== undefined && !reportWriter;
@@ -899,7 +895,7 @@ async function buildChecked(
   if (!check.pack || !useStored) await previous?.stop();
 
   const total = shardSpecies.length;
-  const jobs = opts.jobs !== undefined ? Math.max(1, opts.jobs) : autoThreads(total, opts.maxThreads ?? 1);
+  const jobs = threadsFor(total);
   let done = 0;
   const tStages = performance.now();
   let emitMs = 0;
@@ -937,7 +933,7 @@ async function buildChecked(
   if (checkPool && checkPool.jobs === jobs) pool = checkPool;
   else {
     await checkPool?.close();
-    pool = poolFor(jobs, checkContext ?? { settings, settingsOk: check.settingsOk, strict: opts.strict === true || settings.strict, limits: plainLimits(check), files: check.files.length });
+    pool = poolFor(jobs, checkContext!);
   }
 
   // A batch: the species whose result entry is in the cache are taken from it, the others are built (on
@@ -1361,10 +1357,6 @@ function packLineOf(o: SpeciesOutcome, digests: RenderedDigests | undefined): st
 const STAGE_KINDS = ['samples', 'fit', 'table'] as const;
 
 /** The settings positions the per-species stages quote, as plain data for the workers. */
-function plainLimits(check: CheckReport): PlainLimitSource {
-  return plainLimitsOf(check.settingsFile, check.settingsSetAt);
-}
-
 function plainLimitsOf(settingsFile: string | undefined, settingsSetAt: CheckReport['settingsSetAt']): PlainLimitSource {
   const setAt: PlainLimitSource['setAt'] = {};
   for (const segments of LIMIT_KEYS) {

@@ -7,7 +7,8 @@
  */
 import { serialize } from 'node:v8';
 import type { Species } from '../../src/model.js';
-import type { WarningPolicy } from '../core/strict.js';
+import { createWarningPolicy, type WarningPolicy } from '../core/strict.js';
+import type { DatabaseSettings } from '../core/settings.js';
 import type { DocumentFacts, FileFacts, Position } from '../storage/fast-entries.js';
 import { canonicalJson, sha256Hex } from '../storage/hash.js';
 import { toleranceKeyPositions } from './limit-origin.js';
@@ -51,7 +52,16 @@ export function positionsOf(doc: LoadedDocument): Record<string, Position> {
   return out;
 }
 
+/** The hash a file entry records of one geometry file: of what load attaches to the document for it. */
 export const geometryHash = (read: unknown): string => sha256Hex(canonicalJson(read));
+
+/**
+ * The warning policy of a file check on any thread: the settings' acceptances only; which of them went
+ * unused is the check's finding on the main thread (it sees every file's `settingsUsed`).
+ */
+export function checkPolicy(settings: DatabaseSettings, strict: boolean): WarningPolicy {
+  return createWarningPolicy({ strict, accepted: settings.accepted_warnings });
+}
 
 /**
  * Checks a species file from its bytes. `file` is the path as the findings name it (and the base of the
@@ -59,9 +69,10 @@ export const geometryHash = (read: unknown): string => sha256Hex(canonicalJson(r
  * too, so the user sees every error of the file in one run; they are never built (one of their values is a
  * guess).
  */
-export async function checkFileBytes(bytes: Buffer, file: string, policy: WarningPolicy, keep: KeepAs): Promise<FileCheck> {
+export async function checkFileBytes(bytes: Uint8Array, file: string, policy: WarningPolicy, keep: KeepAs): Promise<FileCheck> {
   const tl = performance.now();
-  const loaded = await loadYamlBytes(bytes, file, file);
+  // A view, not a copy: the bytes may have come from another thread as a plain Uint8Array.
+  const loaded = await loadYamlBytes(Buffer.isBuffer(bytes) ? bytes : Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength), file, file);
   const { validateSpecies } = await (validation ??= import('./validate.js'));
   const used = new Set<number>();
   const validated = (doc: LoadedDocument): SpeciesValidation => {

@@ -87,15 +87,7 @@ export function createSpeciesPool(opts: PoolOptions): SpeciesPool {
     return {
       jobs: 1,
       checkFile: (file, bytes, keep) => checkHere(opts, file, bytes, keep),
-      run: async (batch) => {
-        const out: SpeciesOutcome[] = [];
-        for (const v of batch) {
-          // Yield between species so progress output and signals are handled during long builds.
-          await new Promise((r) => setImmediate(r));
-          out.push(await opts.inline(v));
-        }
-        return out;
-      },
+      run: (batch) => buildHere(opts, batch),
       close: async () => {},
       cacheWriteProblem: undefined,
     };
@@ -107,6 +99,19 @@ export function createSpeciesPool(opts: PoolOptions): SpeciesPool {
 const INITIAL_SHARE = 1 / 3;
 const MIN_SHARE = 1 / 8;
 const MAX_SHARE = 1 / 2;
+
+/**
+ * A batch on this thread, yielding between species so that progress output, signals and the workers'
+ * replies are handled during long builds.
+ */
+async function buildHere(opts: PoolOptions, batch: readonly ValidSpecies[]): Promise<SpeciesOutcome[]> {
+  const out: SpeciesOutcome[] = [];
+  for (const v of batch) {
+    await new Promise((r) => setImmediate(r));
+    out.push(await opts.inline(v));
+  }
+  return out;
+}
 
 function checkHere(opts: PoolOptions, file: string, bytes: Uint8Array, keep: KeepAs): Promise<FileCheck> {
   if (!opts.inlineCheck) throw new Error('this pool was made without a file check');
@@ -179,13 +184,9 @@ class ThreadPool implements SpeciesPool {
       this.queue.push({
         req: { id: this.nextId++, species: batch },
         here: async () => {
-          const out: SpeciesOutcome[] = [];
+          let out: SpeciesOutcome[];
           try {
-            // Yielding between species so replies of the workers are taken in between.
-            for (const v of batch) {
-              await new Promise((r) => setImmediate(r));
-              out.push(await this.opts.inline(v));
-            }
+            out = await buildHere(this.opts, batch);
           } catch (e) {
             // What a worker's error reply would give: the whole batch fails, naming the error.
             return failed(`building on the main thread failed: ${e instanceof Error ? e.message : String(e)}`);

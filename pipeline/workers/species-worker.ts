@@ -10,8 +10,7 @@ import { buildOneSpecies, type LimitSource } from '../runner.js';
 import { StageCache } from '../storage/cache.js';
 import { useCodeFingerprint } from '../storage/code-fingerprint.js';
 import { errorText } from '../core/text.js';
-import { createWarningPolicy } from '../core/strict.js';
-import { checkFileBytes } from '../stages/check-file.js';
+import { checkFileBytes, checkPolicy } from '../stages/check-file.js';
 import { renderTable } from '../stages/emit-table.js';
 import type { WorkerInit, WorkerReply, WorkRequest } from './protocol.js';
 
@@ -24,8 +23,7 @@ const limits: LimitSource = {
   ...(init.limits.settingsFile !== undefined ? { settingsFile: init.limits.settingsFile } : {}),
 };
 
-// The settings' acceptances only: which of them went unused is the main thread's finding (it sees every file).
-const policy = createWarningPolicy({ strict: init.strict === true, accepted: init.settings.accepted_warnings });
+const policy = checkPolicy(init.settings, init.strict === true);
 
 parentPort!.on('message', (req: WorkRequest) => {
   void (async () => {
@@ -34,7 +32,7 @@ parentPort!.on('message', (req: WorkRequest) => {
       if ('check' in req) {
         const { file, bytes, keep } = req.check;
         if (init.testCrashOn !== undefined && file.endsWith(`${init.testCrashOn}.yaml`)) process.exit(70);
-        const checked = await checkFileBytes(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength), file, policy, keep);
+        const checked = await checkFileBytes(bytes, file, policy, keep);
         // v8.serialize gives each value an ArrayBuffer of its own: moved, not copied.
         const transfer = checked.kept.flatMap((k) => (k instanceof Uint8Array && k.byteOffset === 0 && k.buffer.byteLength === k.byteLength ? [k.buffer as ArrayBuffer] : []));
         parentPort!.postMessage({ id: req.id, checked } satisfies WorkerReply, transfer);

@@ -2,7 +2,9 @@
  * tables/<name>.csv is joined directly when no cell needs quoting (stages/emit.ts renderTable); the bytes
  * must be those fast-csv (an npm CSV library) writes for the same rows. Checked on the tables of a build of
  * the fixture database (every row of every species) and on rows written by hand for this test that do need
- * quoting.
+ * quoting. The fast fixed decimals are checked against Number.prototype.toFixed (ECMAScript, the engine's own
+ * conversion) on edge values written by hand and on values from a seeded generator in this file; the record
+ * indentation against the regular-expression form on records written by hand. No values from elsewhere.
  */
 import { readdir, readFile } from 'node:fs/promises';
 import path from 'node:path';

@@ -11,8 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { checkDatabase, buildOneSpecies } from '../../../pipeline/runner.js';
 import { batchesOf, createSpeciesPool } from '../../../pipeline/workers/pool.js';
 import { StageCache } from '../../../pipeline/storage/cache.js';
-import { checkFileBytes } from '../../../pipeline/stages/check-file.js';
-import { createWarningPolicy } from '../../../pipeline/core/strict.js';
+import { checkFileBytes, checkPolicy } from '../../../pipeline/stages/check-file.js';
 import { renderTable } from '../../../pipeline/stages/emit.js';
 import { deterministicOutputs, FIXTURE_DB, REPO, runCli } from '../helpers.js';
 import { h2oInput } from '../../support/h2o-input.js';
@@ -35,7 +34,7 @@ async function fixturePool(extra: { testCrashOn?: string; keepSamples?: boolean 
     jobs: 2,
     init: { settings: check.settings, limits: { setAt: {} }, cacheDir: undefined, codeFingerprint: 'test', ...extra },
     inline: (v) => buildOneSpecies(v, check.settings, cache, check),
-    inlineCheck: (file, bytes, keep) => checkFileBytes(Buffer.from(bytes), file, createWarningPolicy({ strict: false, accepted: check.settings.accepted_warnings }), keep),
+    inlineCheck: (file, bytes, keep) => checkFileBytes(bytes, file, checkPolicy(check.settings, false), keep),
     crashed: (v, reason) => ({ valid: v, diagnostics: [{ severity: 'error', file: v.displayFile, path: '', message: reason }], cache: {}, cacheNotes: [], timings: {} }),
     shareThisThread,
   });
@@ -83,7 +82,7 @@ describe('worker pool', () => {
   it('a worker that dies during a file check hands the check to this thread: the same findings, no hang', async () => {
     const { check, pool } = await fixturePool({ testCrashOn: 'CO' });
     try {
-      const policy = createWarningPolicy({ strict: false, accepted: check.settings.accepted_warnings });
+      const policy = checkPolicy(check.settings, false);
       for (const name of ['CO', 'N2']) {
         const file = path.join(root, 'fx', `${name}.yaml`);
         const bytes = await readFile(file);

@@ -19,7 +19,7 @@ import { acquireOutputLock, OutputStaging, recoverOutputDir, type PublishHooks }
 import { cached, cacheEntryPath, defaultCacheDir, StageCache, type CacheKind, type CacheOutcome } from './storage/cache.js';
 import { recordCacheUse } from './storage/cache-uses.js';
 import { decodeEntry, encodeEntry, readEntry, writeEntry, writeEntryText, type DocumentFacts, type FileFacts, type RenderedDigests, type RenderedSpecies, type StoredResult } from './storage/fast-entries.js';
-import { packFile, packIdentity, PackWriter, readPack, type LoadedPack, type PackIdentity } from './storage/build-pack.js';
+import { PACK_DIR, packFile, packIdentity, PackWriter, readPack, type LoadedPack, type PackIdentity } from './storage/build-pack.js';
 import { SpillFile, type SpillRef } from './storage/spill.js';
 import { PreviousDigests } from './storage/previous-digests.js';
 import { shardLabel, shardOf, shardRecord, type Shard } from './core/shard.js';
@@ -1005,8 +1005,9 @@ async function buildChecked(
     if (lookup.outcome === 'corrupt') fresh!.cacheNotes.unshift(`cache entry for result rejected (${lookup.reason}); recomputed`);
     return fresh!;
   };
-  const pack = cacheDir !== undefined && !shard ? new PackWriter() : undefined;
-  if (pack) for (const [key, text] of check.packFiles) pack.addFile(key, text);
+  const pack = cacheDir !== undefined && !shard ? new PackWriter(path.join(cacheDir, PACK_DIR)) : undefined;
+  // Handed over, not kept twice: the pack writer may spill them (one line per species file).
+  if (pack) for (const [key, text] of check.packFiles.splice(0)) pack.addFile(key, text);
   let emitter: StreamingEmitter | undefined;
   const emitterOptions = { digests: pack !== undefined, ...(check.pack ? { previous: check.pack.outputs } : {}) };
   try {
@@ -1255,6 +1256,7 @@ async function buildChecked(
     if (check.settingsFile !== undefined) report.settingsFile = check.settingsFile;
     return report;
   } finally {
+    pack?.discard();
     await pool.close();
     await emitter?.close();
     if (!published) await staging?.discard();

@@ -25,9 +25,9 @@
  * The body lines are kept as text and parsed only when used; the next pack reuses the text of every line
  * that did not change, so a no-change rebuild re-encodes nothing.
  */
-import { readFileSync, realpathSync } from 'node:fs';
-import { open } from 'node:fs/promises';
-import { mkdir } from 'node:fs/promises';
+import { createHash, randomBytes, type Hash } from 'node:crypto';
+import { closeSync, mkdirSync, openSync, readFileSync, readSync, realpathSync, renameSync, rmSync, writeSync } from 'node:fs';
+import { mkdir, open } from 'node:fs/promises';
 import path from 'node:path';
 import { writeFileAtomic } from './atomic-write.js';
 import { sha256Hex, type Digest } from './hash.js';
@@ -161,22 +161,78 @@ export function readPack(cacheDir: string, id: PackIdentity, context: string): P
   return { pack };
 }
 
-/** Gathers the lines of the next pack (texts as they are to be stored) and writes it. */
+/**
+ * Lines of the pack held in memory before they go to a scratch file beside the pack: a pack holds ~1.6 KB
+ * per species (80 MB at 50,000), which kept whole — and joined and copied once more to be written — made
+ * the memory of a build grow with the database.
+ */
+export const PACK_MEMORY_BYTES = 4 << 20;
+
+/**
+ * Gathers the lines of the next pack (texts as they are to be stored) and writes it. Lines must come in
+ * body order (every file line, then the results, then the outputs). Up to PACK_MEMORY_BYTES of them are
+ * kept in memory; beyond that (with a `scratchDir`) the body goes to a scratch file as it grows, hashed as
+ * it is written, and `write` copies it behind the header in chunks: the memory stays bounded, the bytes
+ * are the same.
+ */
 export class PackWriter {
-  private readonly files: string[] = [];
-  private readonly results: string[] = [];
-  private readonly outputs: string[] = [];
+  private pending: string[] = [];
+  private pendingLength = 0;
+  private scratch: { file: string; fd: number; hash: Hash; bytes: number } | undefined;
+  private phase = 0;
+
+  /**
+   * `scratchDir`: where the body may be spilled (the cache's pack folder); without it, all in memory.
+   * `memoryBytes`: the in-memory bound (tests make it small to exercise the scratch file).
+   */
+  constructor(
+    private readonly scratchDir?: string,
+    private readonly memoryBytes = PACK_MEMORY_BYTES,
+  ) {}
 
   addFile(key: string, factsText: string): void {
-    this.files.push(`F ${key} ${factsText}\n`);
+    this.add(0, `F ${key} ${factsText}\n`);
   }
 
   addResult(key: string, resultText: string): void {
-    this.results.push(`R ${key} ${resultText}\n`);
+    this.add(1, `R ${key} ${resultText}\n`);
   }
 
   addOutput(record: OutputRecord): void {
-    this.outputs.push(`O ${JSON.stringify(record)}\n`);
+    this.add(2, `O ${JSON.stringify(record)}\n`);
+  }
+
+  private add(phase: number, line: string): void {
+    if (phase < this.phase) throw new Error('build pack lines out of order');
+    this.phase = phase;
+    this.pending.push(line);
+    this.pendingLength += line.length;
+    if (this.scratchDir !== undefined && this.pendingLength >= this.memoryBytes) this.spill();
+  }
+
+  /** Appends the pending lines to the scratch file (made on first use). */
+  private spill(): void {
+    if (!this.scratch) {
+      mkdirSync(this.scratchDir!, { recursive: true });
+      const file = path.join(this.scratchDir!, `.body.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
+      this.scratch = { file, fd: openSync(file, 'wx+'), hash: createHash('sha256'), bytes: 0 };
+    }
+    const data = Buffer.from(this.pending.join(''), 'utf8');
+    this.pending = [];
+    this.pendingLength = 0;
+    this.scratch.hash.update(data);
+    for (let off = 0; off < data.length; ) off += writeSync(this.scratch.fd, data, off, data.length - off, this.scratch.bytes + off);
+    this.scratch.bytes += data.length;
+  }
+
+  /** Removes the scratch file (idempotent; `write` calls it). */
+  discard(): void {
+    const s = this.scratch;
+    this.scratch = undefined;
+    this.pending = [];
+    if (!s) return;
+    closeSync(s.fd);
+    rmSync(s.file, { force: true });
   }
 
   /**
@@ -184,12 +240,51 @@ export class PackWriter {
    * unless `previous` — the pack this build read, of the same identity and context — has the same body.
    */
   async write(cacheDir: string, id: PackIdentity, context: string, previous?: LoadedPack): Promise<void> {
-    const body = Buffer.from([...this.files, ...this.results, ...this.outputs].join(''), 'utf8');
-    const sha256 = sha256Hex(body);
-    if (previous && previous.body.bytes === body.length && previous.body.hash === sha256) return;
-    const header = JSON.stringify({ format: PACK_FORMAT, database: id.database, out: id.out, context, sha256, bytes: body.length });
-    const file = packFile(cacheDir, id);
-    await mkdir(path.dirname(file), { recursive: true });
-    await writeFileAtomic(file, Buffer.concat([Buffer.from(`${header}\n`, 'utf8'), body]), { sync: false });
+    try {
+      if (!this.scratch) {
+        const body = Buffer.from(this.pending.join(''), 'utf8');
+        const sha256 = sha256Hex(body);
+        if (previous && previous.body.bytes === body.length && previous.body.hash === sha256) return;
+        const file = packFile(cacheDir, id);
+        await mkdir(path.dirname(file), { recursive: true });
+        await writeFileAtomic(file, Buffer.concat([Buffer.from(`${packHeaderLine(id, context, sha256, body.length)}\n`, 'utf8'), body]), { sync: false });
+        return;
+      }
+      if (this.pending.length > 0) this.spill();
+      const { fd, hash, bytes } = this.scratch;
+      const sha256 = hash.digest('hex');
+      if (previous && previous.body.bytes === bytes && previous.body.hash === sha256) return;
+      const file = packFile(cacheDir, id);
+      await mkdir(path.dirname(file), { recursive: true });
+      const tmp = `${file}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`;
+      const out = openSync(tmp, 'wx');
+      try {
+        writeSync(out, `${packHeaderLine(id, context, sha256, bytes)}\n`);
+        const chunk = Buffer.allocUnsafe(1 << 20);
+        for (let at = 0; at < bytes; ) {
+          const n = readSync(fd, chunk, 0, Math.min(chunk.length, bytes - at), at);
+          if (n <= 0) throw new Error(`build pack scratch file ended at ${at} of ${bytes} bytes`);
+          for (let off = 0; off < n; ) off += writeSync(out, chunk, off, n - off);
+          at += n;
+        }
+      } catch (e) {
+        closeSync(out);
+        rmSync(tmp, { force: true });
+        throw e;
+      }
+      closeSync(out);
+      try {
+        renameSync(tmp, file);
+      } catch (e) {
+        rmSync(tmp, { force: true });
+        throw e;
+      }
+    } finally {
+      this.discard();
+    }
   }
+}
+
+function packHeaderLine(id: PackIdentity, context: string, sha256: string, bytes: number): string {
+  return JSON.stringify({ format: PACK_FORMAT, database: id.database, out: id.out, context, sha256, bytes });
 }

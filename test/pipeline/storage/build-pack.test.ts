@@ -198,6 +198,43 @@ describe('readPack', () => {
     expect(readPack(root, { database: '/y', out: '/o' }, 'ctx')).toEqual({});
   });
 
+  it('spills a large body to a scratch file beside the pack: the same bytes, the scratch file removed', async () => {
+    // Lines written by hand; a bound of 100 bytes makes every few lines go to the scratch file.
+    const fill = (w: PackWriter) => {
+      for (let i = 0; i < 40; i++) w.addFile(i.toString(16).padStart(64, '0'), `{"documents":[${i}]}`);
+      for (let i = 0; i < 40; i++) w.addResult(i.toString(16).padStart(64, 'a'), `{"diagnostics":[],"n":${i}}`);
+      w.addOutput({ file: 'nasa7.txt', whole: { hash: 'c'.repeat(64), bytes: 3 }, head: { hash: 'd'.repeat(64), bytes: 1 }, tail: { hash: 'e'.repeat(64), bytes: 1 }, pieces: [] });
+    };
+    const inMemory = new PackWriter();
+    fill(inMemory);
+    await inMemory.write(root, id, 'ctx');
+    const expected = await readFile(packFile(root, id));
+    await rm(packFile(root, id));
+    const scratchDir = path.dirname(packFile(root, id));
+    const spilled = new PackWriter(scratchDir, 100);
+    fill(spilled);
+    expect((await readdir(scratchDir)).some((n) => n.startsWith('.body.'))).toBe(true);
+    await spilled.write(root, id, 'ctx');
+    expect(await readFile(packFile(root, id))).toEqual(expected);
+    expect(await readdir(scratchDir)).toEqual([path.basename(packFile(root, id))]);
+    // The same body as the pack read: nothing rewritten, the scratch file removed all the same.
+    const again = new PackWriter(scratchDir, 100);
+    fill(again);
+    const before = (await stat(packFile(root, id))).mtimeMs;
+    await again.write(root, id, 'ctx', readPack(root, id, 'ctx').pack);
+    expect((await stat(packFile(root, id))).mtimeMs).toBe(before);
+    expect(await readdir(scratchDir)).toEqual([path.basename(packFile(root, id))]);
+    // A build that stops before writing discards its scratch file.
+    const dropped = new PackWriter(scratchDir, 100);
+    fill(dropped);
+    dropped.discard();
+    expect(await readdir(scratchDir)).toEqual([path.basename(packFile(root, id))]);
+    // Lines out of body order are a bug of the caller.
+    const w = new PackWriter();
+    w.addResult('b'.repeat(64), '{}');
+    expect(() => w.addFile('a'.repeat(64), '{}')).toThrow(/out of order/);
+  });
+
   it('rejects a foreign format, a missing header, a truncated, a lengthened and a corrupt body', async () => {
     const file = await written(root);
     const good = await readFile(file, 'utf8');

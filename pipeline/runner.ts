@@ -21,6 +21,7 @@ import { recordCacheUse } from './storage/cache-uses.js';
 import { decodeEntry, encodeEntry, readEntry, writeEntry, writeEntryText, type DocumentFacts, type FileFacts, type RenderedDigests, type RenderedSpecies, type StoredResult } from './storage/fast-entries.js';
 import { PACK_DIR, packFile, packIdentity, PackWriter, readPack, type LoadedPack, type PackIdentity } from './storage/build-pack.js';
 import { SpillFile, type SpillRef } from './storage/spill.js';
+import { PositionInterner } from './core/intern.js';
 import { PreviousDigests } from './storage/previous-digests.js';
 import { shardLabel, shardOf, shardRecord, type Shard } from './core/shard.js';
 import { StreamingEmitter } from './stages/emit-stream.js';
@@ -399,6 +400,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     return e;
   };
   const nameFacts: NameFact[] = [];
+  const interner = new PositionInterner();
   for (const { file, facts, kept, key, loadMs, validateMs } of perFile) {
     facts.loadDiagnostics.forEach(addFileDiag);
     diagnostics.push(...facts.loadDiagnostics);
@@ -429,7 +431,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
         file: displayOf(file),
         displayFile: show(file),
         source: { path: file, index: fact.index },
-        positions: fact.valid.positions,
+        positions: interner.intern(fact.valid.positions),
         loadMs: loadMs / n,
         validateMs: validateMs / n,
       };
@@ -912,7 +914,7 @@ async function buildChecked(
       else ownDiagnostics.set(k, [d]);
     }
   }
-  const summaryEntries = new SummaryEntries();
+  const summaryEntries = new SummaryEntries(spill);
   const speciesDiagnostics: Diagnostic[] = [];
   const warnings: string[] = [...check.cacheNotes];
   let processed = 0;
@@ -1236,7 +1238,9 @@ async function buildChecked(
       published = true;
       replaced = (await finalStaging.publish(opts.hooks)).replaced;
     }
-    // The species entries are parsed back only for a caller that reads them (--json, tests).
+    // The species entries are parsed back only for a caller that reads them (--json, tests); their texts
+    // come back from the spill file now, after the workers are gone, while it is still open.
+    await summaryEntries.settle();
     const summaryWithSpecies = {} as Summary;
     for (const [k, v] of Object.entries(summary)) {
       if (k === 'species') Object.defineProperty(summaryWithSpecies, k, { get: () => summaryEntries.species(), enumerable: true });

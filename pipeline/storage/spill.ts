@@ -37,10 +37,16 @@ export class SpillFile {
 
   /** Stores a value already serialised with v8.serialize (e.g. by the worker that checked its file). */
   async putBytes(bytes: Uint8Array): Promise<SpillRef> {
+    const { ref, written } = this.appendBytes(bytes);
+    await written;
+    return ref;
+  }
+
+  /** Reserves the place of `bytes` at once (`ref`) and writes them (`written`; read only after it settles). */
+  appendBytes(bytes: Uint8Array): { ref: SpillRef; written: Promise<void> } {
     const ref = { offset: this.end, length: bytes.length };
     this.end += bytes.length;
-    await this.fh.write(bytes, 0, bytes.length, ref.offset);
-    return ref;
+    return { ref, written: this.fh.write(bytes, 0, bytes.length, ref.offset).then(() => undefined) };
   }
 
   async get<T>(ref: SpillRef): Promise<T> {

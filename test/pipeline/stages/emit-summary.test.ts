@@ -10,6 +10,7 @@ import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { SummaryEntries, type SummarySpecies } from '../../../pipeline/stages/emit-summary.js';
 import { jsonText, OutputSchemaError } from '../../../pipeline/stages/emit.js';
+import { SpillFile } from '../../../pipeline/storage/spill.js';
 import { runCli, tempWorkspace } from '../helpers.js';
 
 function entry(i: number, extra: Partial<SummarySpecies> = {}): SummarySpecies {
@@ -62,6 +63,26 @@ describe('summary.json from entries kept as text', () => {
     expect(entries.species()).toEqual(sorted);
     expect(entries.cacheHits).toBe(all.filter((e) => e.cache_hit).length);
     expect(entries.failedLabels()).toEqual(sorted.filter((e) => e.status === 'failed').map((e) => e.name));
+  });
+
+  it('entries moved to a spill file as they come: the same bytes, read back in runs, and back for species()', async () => {
+    const spill = await SpillFile.open();
+    try {
+      // A batch of ~2 KB spills every few entries; added in reverse name order with non-ASCII warnings, so the
+      // runs read back are cut by the sort and the byte places differ from the string lengths.
+      const entries = new SummaryEntries(spill, 2048);
+      const all = Array.from({ length: 600 }, (_, i) => entry(i, i % 4 === 0 ? { warnings: [`s${i}.yaml:1:1 warning: Δ température \u2028 ✓`] } : {}));
+      for (const e of all) entries.add(e);
+      entries.sort();
+      const sorted = [...all].sort((a, b) => (a.name! < b.name! ? -1 : 1));
+      expect(() => entries.species()).toThrow(/before settle/);
+      expect(await written(entries)).toBe(jsonText({ ...envelope(), species: sorted }));
+      await entries.settle();
+      expect(entries.species()).toEqual(sorted);
+      expect(await written(entries)).toBe(jsonText({ ...envelope(), species: sorted }));
+    } finally {
+      await spill.close();
+    }
   });
 
   it('documents without a name sort last, by file and document, and are labelled file#document', async () => {

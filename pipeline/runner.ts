@@ -17,7 +17,7 @@ import { Nasa7FormatError } from '../src/nasa7/errors.js';
 import type { FitOptions, FitResult } from '../src/nasa7/types.js';
 import { acquireOutputLock, OutputStaging, recoverOutputDir, type PublishHooks } from './storage/atomic-write.js';
 import { cached, cacheEntryPath, defaultCacheDir, StageCache, type CacheKind, type CacheOutcome } from './storage/cache.js';
-import { recordCacheUse } from './storage/cache-uses.js';
+import { recordCacheUse, UsedKeys } from './storage/cache-uses.js';
 import { decodeEntry, encodeEntry, readEntry, writeEntry, writeEntryText, type DocumentFacts, type FileFacts, type RenderedDigests, type RenderedSpecies, type StoredResult } from './storage/fast-entries.js';
 import { PACK_DIR, packFile, packIdentity, PackWriter, readPack, type LoadedPack, type PackIdentity } from './storage/build-pack.js';
 import { SpillFile, type SpillRef } from './storage/spill.js';
@@ -919,7 +919,8 @@ async function buildChecked(
   const warnings: string[] = [...check.cacheNotes];
   let processed = 0;
   let failedCount = 0;
-  const usedKeys: string[] = [];
+  const usedKeys = new UsedKeys();
+  for (const k of check.fileKeys.splice(0)) usedKeys.add(k);
 
   const canWrite = check.settingsOk && check.files.length > 0;
   const staging = canWrite && total > 0 ? await orStop(() => OutputStaging.open(opts.out)) : undefined;
@@ -1059,8 +1060,8 @@ async function buildChecked(
       emitMs += performance.now() - te;
       processed++;
       if (!isBuilt(o)) failedCount++;
-      if (o.keys) usedKeys.push(...o.keys);
-      if (o.valid.resultKey !== undefined) usedKeys.push(`result/${o.valid.resultKey}`);
+      if (o.keys) for (const k of o.keys) usedKeys.add(k);
+      if (o.valid.resultKey !== undefined) usedKeys.add(`result/${o.valid.resultKey}`);
       speciesDiagnostics.push(...o.diagnostics);
       for (const n of o.cacheNotes) warnings.push(`${o.valid.name}: ${n}`);
       const s = summaryEntry(o, ownDiagnostics.get(speciesKey(o.valid.displayFile, o.valid.name)) ?? [], tableMs);
@@ -1178,7 +1179,7 @@ async function buildChecked(
 
     // Cache problems: once per build for an unwritable cache, one line per species for rejected entries.
     if (cache.writeProblem) warnings.unshift(`cache: not writable: ${cache.dir}: ${cache.writeProblem}; every species is recomputed on each build`);
-    if (cacheDir !== undefined && check.settingsOk && !shard) await recordCacheUse(cacheDir, opts.dir, [...check.fileKeys, ...usedKeys]).catch((e) => cache.noteWriteFailure(e));
+    if (cacheDir !== undefined && check.settingsOk && !shard) await recordCacheUse(cacheDir, opts.dir, usedKeys.names()).catch((e) => cache.noteWriteFailure(e));
     // Files whose problems are not tied to a species that validated (syntax errors, invalid documents, …).
     const validKeys = new Set((check.settingsOk ? check.species : []).map((v) => speciesKey(v.displayFile, v.name)));
     const summaryFiles = [...check.fileDiagnostics.entries()]

@@ -23,6 +23,46 @@ async function databaseId(databaseDir: string): Promise<{ id: string; real: stri
   return { id: sha256Hex(real).slice(0, 16), real };
 }
 
+const HEX_KEY = /^[0-9a-f]{64}$/;
+
+/**
+ * The `kind/key` names of the entries a build used, gathered species by species until the build records
+ * them: a key of 64 hex digits is kept as its 32 bytes (a ~90-byte string each otherwise, five per species:
+ * 20 MB at 50,000 species held through the whole build); any other name as given.
+ */
+export class UsedKeys {
+  private readonly byKind = new Map<string, { bytes: Buffer; count: number }>();
+  private readonly other: string[] = [];
+
+  add(name: string): void {
+    const slash = name.indexOf('/');
+    const key = name.slice(slash + 1);
+    if (slash <= 0 || !HEX_KEY.test(key)) {
+      this.other.push(name);
+      return;
+    }
+    const kind = name.slice(0, slash);
+    let k = this.byKind.get(kind);
+    if (!k) this.byKind.set(kind, (k = { bytes: Buffer.allocUnsafe(32 * 256), count: 0 }));
+    if ((k.count + 1) * 32 > k.bytes.length) {
+      const grown = Buffer.allocUnsafe(k.bytes.length * 2);
+      k.bytes.copy(grown, 0, 0, k.count * 32);
+      k.bytes = grown;
+    }
+    k.bytes.write(key, k.count * 32, 32, 'hex');
+    k.count++;
+  }
+
+  /** Every name added (as strings, in no particular order; duplicates kept). */
+  names(): string[] {
+    const out = [...this.other];
+    for (const [kind, k] of this.byKind) {
+      for (let i = 0; i < k.count; i++) out.push(`${kind}/${k.bytes.toString('hex', i * 32, i * 32 + 32)}`);
+    }
+    return out;
+  }
+}
+
 /** Records the entries a database uses (replacing its previous list). */
 export async function recordCacheUse(cacheDir: string, databaseDir: string, keys: readonly string[]): Promise<void> {
   const { id, real } = await databaseId(databaseDir);

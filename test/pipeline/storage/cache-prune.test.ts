@@ -9,6 +9,8 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { CACHE_KINDS } from '../../../pipeline/storage/cache.js';
+import { UsedKeys } from '../../../pipeline/storage/cache-uses.js';
+import { sha256Hex } from '../../../pipeline/storage/hash.js';
 import { FIXTURE_DB, runCli } from '../helpers.js';
 
 let root: string;
@@ -79,4 +81,22 @@ describe('cache location and prune', () => {
     expect(r2.removed).toBeGreaterThan(0);
     expect(r2.stale_use_lists).toBe(1);
   }, 180_000);
+});
+
+describe('UsedKeys', () => {
+  it('gives back every name added: hex keys kept as bytes (past the first growth), other names as written', () => {
+    // Keys made by our own hash of a counter; the odd names are written by hand.
+    const u = new UsedKeys();
+    const added: string[] = [];
+    for (let i = 0; i < 700; i++) {
+      const name = `${i % 3 === 0 ? 'samples' : 'fit'}/${sha256Hex(String(i))}`;
+      u.add(name);
+      added.push(name);
+    }
+    for (const odd of ['result/ABC', 'noslash', '/leading', `table/${sha256Hex('x').toUpperCase()}`, `fit/${sha256Hex('0')}`]) {
+      u.add(odd);
+      added.push(odd);
+    }
+    expect(u.names().sort()).toEqual(added.sort());
+  });
 });

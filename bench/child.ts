@@ -7,11 +7,10 @@
  */
 import { writeFileSync } from 'node:fs';
 import { performance } from 'node:perf_hooks';
-import { boundHeapGrowth, main } from '../pipeline/cli.js';
+import { main } from '../pipeline/cli.js';
 
 const [report, ...argv] = process.argv.slice(2);
 if (!report) throw new Error('usage: child.js REPORT.json ARGS...');
-boundHeapGrowth();
 const t0 = performance.now();
 const exitCode = await main(argv, { stdout: { write: () => true } as unknown as NodeJS.WriteStream });
 const wallMs = performance.now() - t0;

@@ -1,8 +1,7 @@
 #!/usr/bin/env node
 // Thin launcher: the CLI is compiled to dist/ by `npm run build` (run by `prepare` on `npm ci`).
-import { boundHeapGrowth, main } from '../dist/pipeline/cli.js';
+import { main } from '../dist/pipeline/cli.js';
 
-boundHeapGrowth();
 main(process.argv.slice(2)).then(
   (code) => {
     process.exitCode = code;

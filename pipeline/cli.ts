@@ -201,18 +201,22 @@ export const HELP_WIDTH = 80;
  * peak RSS 325 → 232 MB; CPU time within the noise of a shared machine (see DEVELOPERS.md for the bench).
  */
 export const HEAP_GROWING_PERCENT = 20;
+const HEAP_GROWTH_ENV = 'QFORGE_HEAP_GROWTH';
 
 /**
- * Sets the heap growth of this process (and so of its worker threads) unless the user chose one
- * (--heap-growing-percent in NODE_OPTIONS or on node's command line). Process-wide: the CLI's business.
+ * The heap growth this process (and so its worker threads: the flag is process-wide) should run with:
+ * QFORGE_HEAP_GROWTH (whole percent, 0 = V8's own growth) or HEAP_GROWING_PERCENT; none when node itself
+ * was started with --heap-growing-percent (the user's choice wins). A malformed value is an error.
  */
-export function boundHeapGrowth(env: NodeJS.ProcessEnv = process.env, execArgv: readonly string[] = process.execArgv): void {
-  if (!heapGrowthGiven(env, execArgv)) setFlagsFromString(`--heap-growing-percent=${HEAP_GROWING_PERCENT}`);
-}
-
-/** Whether node was started with a heap growth of the user's choosing. */
-export function heapGrowthGiven(env: NodeJS.ProcessEnv, execArgv: readonly string[]): boolean {
-  return [...execArgv, env.NODE_OPTIONS ?? ''].some((a) => /--heap[-_]growing[-_]percent/.test(a));
+export function heapGrowthSetting(env: NodeJS.ProcessEnv, execArgv: readonly string[]): { percent?: number } | { error: string } {
+  if (execArgv.some((a) => /^--heap[-_]growing[-_]percent\b/.test(a))) return {};
+  const given = env[HEAP_GROWTH_ENV];
+  if (given === undefined || given === '') return { percent: HEAP_GROWING_PERCENT };
+  if (!/^\d{1,4}$/.test(given.trim()) || Number(given) > 1000) {
+    return { error: `${HEAP_GROWTH_ENV} must be a whole number of percent from 0 to 1000 (0: V8's own heap growth); got ${JSON.stringify(given)}` };
+  }
+  const percent = Number(given);
+  return percent === 0 ? {} : { percent };
 }
 
 export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<number> {
@@ -225,6 +229,12 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
   };
   const abs = (p: string) => path.resolve(io.cwd, p);
   let exitCode = 0;
+  const growth = heapGrowthSetting(io.env, process.execArgv);
+  if ('error' in growth) {
+    io.stderr.write(`qforge: error: ${growth.error}\n`);
+    return 2;
+  }
+  if (growth.percent !== undefined) setFlagsFromString(`--heap-growing-percent=${growth.percent}`);
 
   const program = new Command();
   const { TOOL_VERSION } = await import('./core/version.js');

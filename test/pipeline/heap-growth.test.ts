@@ -1,16 +1,33 @@
 /**
- * The CLI bounds V8's heap growth (cli.ts HEAP_GROWING_PERCENT) unless the user started node with a growth
- * of their own; the flag values below are written by hand. Whether the bound lowers peak memory is measured
- * by `npm run bench`, not here.
+ * The CLI bounds V8's heap growth (cli.ts HEAP_GROWING_PERCENT) unless node was started with a growth of the
+ * user's own or QFORGE_HEAP_GROWTH says otherwise; the values below are written by hand. Whether the bound
+ * lowers peak memory is measured by `npm run bench`, not here.
  */
 import { describe, expect, it } from 'vitest';
-import { heapGrowthGiven } from '../../pipeline/cli.js';
+import { HEAP_GROWING_PERCENT, heapGrowthSetting } from '../../pipeline/cli.js';
+import { runCli, tempWorkspace } from './helpers.js';
 
-describe('heapGrowthGiven', () => {
-  it('sees a growth given on the command line or in NODE_OPTIONS, in either spelling', () => {
-    expect(heapGrowthGiven({}, [])).toBe(false);
-    expect(heapGrowthGiven({ NODE_OPTIONS: '--max-old-space-size=4096' }, ['--enable-source-maps'])).toBe(false);
-    expect(heapGrowthGiven({}, ['--heap-growing-percent=50'])).toBe(true);
-    expect(heapGrowthGiven({ NODE_OPTIONS: '--heap_growing_percent=5' }, [])).toBe(true);
+describe('heapGrowthSetting', () => {
+  it('the default, the environment value, V8 own growth for 0, and node own flag winning', () => {
+    expect(heapGrowthSetting({}, [])).toEqual({ percent: HEAP_GROWING_PERCENT });
+    expect(heapGrowthSetting({ QFORGE_HEAP_GROWTH: '50' }, ['--enable-source-maps'])).toEqual({ percent: 50 });
+    expect(heapGrowthSetting({ QFORGE_HEAP_GROWTH: '0' }, [])).toEqual({});
+    expect(heapGrowthSetting({ QFORGE_HEAP_GROWTH: '50' }, ['--heap-growing-percent=5'])).toEqual({});
+    expect(heapGrowthSetting({}, ['--heap_growing_percent=5'])).toEqual({});
+  });
+
+  it('a malformed value is refused with what was expected, and the CLI exits 2 naming it', async () => {
+    for (const bad of ['-1', '1.5', '20%', 'lots', '5000']) {
+      expect(heapGrowthSetting({ QFORGE_HEAP_GROWTH: bad }, [])).toEqual({ error: expect.stringMatching(/^QFORGE_HEAP_GROWTH must be a whole number of percent from 0 to 1000/) });
+    }
+    const ws = await tempWorkspace();
+    try {
+      const r = await runCli(['check', 'db'], ws.root, { QFORGE_HEAP_GROWTH: 'lots' });
+      expect(r.code).toBe(2);
+      expect(r.stderr).toContain('qforge: error: QFORGE_HEAP_GROWTH must be a whole number of percent from 0 to 1000');
+      expect(r.stderr).toContain('got "lots"');
+    } finally {
+      await ws.cleanup();
+    }
   });
 });

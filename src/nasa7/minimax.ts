@@ -107,9 +107,11 @@ function ensure(n: number, k: number, rows: number): void {
  * of its rows ≥ j + 1 (the next norm), v_{j+1} is formed at once, and the update of every later column
  * also sums its dot product with v_{j+1}. Each sum still takes the same terms, each the same double (a
  * row's value once reflector j is applied, the one the next step reads), in ascending row order from +0,
- * so every double is the same while each column is passed over once per step instead of twice.
+ * so every double is the same while each column is passed over once per step instead of twice (the sums
+ * of step 0 are made while the work matrix is filled, column 0 first). `dots` holds k + 1 doubles of
+ * scratch. Exported for the same-doubles test.
  */
-function weightedSolve(
+export function weightedSolve(
   b: Float64Array,
   c: Float64Array,
   s: Float64Array,
@@ -121,21 +123,46 @@ function weightedSolve(
   z: Float64Array,
   dots: Float64Array,
 ): void {
-  for (let r = 0; r < count; r++) {
-    const i = active[r]!;
-    const si = s[r]!;
-    const o = i * k;
-    for (let j = 0; j < k; j++) work[j * count + r] = si * b[o + j]!;
-    work[k * count + r] = si * c[i]!;
-  }
-  // Plain sums of squares, not Math.hypot (several times slower): the rows are scaled by √w_i / L_i with
-  // Σ w_i = 1 and limit-relative targets, so the entries are far from overflow or underflow.
+  if (k === 0) return;
+  // Column 0 first, with its sum of squares (plain sums of squares, not Math.hypot, several times slower:
+  // the rows are scaled by √w_i / L_i with Σ w_i = 1 and limit-relative targets, so the entries are far
+  // from overflow or underflow); its reflector v_0 at once; then the other columns, each row's entries
+  // also entering their dot products with v_0.
   let sumSq = 0;
-  for (let r = 0; r < count; r++) sumSq += work[r]! * work[r]!;
+  for (let r = 0; r < count; r++) {
+    const v = s[r]! * b[active[r]! * k]!;
+    work[r] = v;
+    sumSq += v * v;
+  }
   // alpha of the current step j (0 when column j has no norm: no reflection), and whether dots[col] already
   // holds v_j · column col for every col > j.
-  let alpha = k > 0 ? reflectorOf(work, 0, 0, sumSq) : 0;
-  let dotsReady = false;
+  let alpha = reflectorOf(work, 0, 0, sumSq);
+  let dotsReady = alpha !== 0;
+  if (dotsReady) {
+    for (let col = 1; col <= k; col++) dots[col] = 0;
+    for (let r = 0; r < count; r++) {
+      const i = active[r]!;
+      const si = s[r]!;
+      const o = i * k;
+      const v0 = work[r]!;
+      for (let j = 1; j < k; j++) {
+        const v = si * b[o + j]!;
+        work[j * count + r] = v;
+        dots[j]! += v0 * v;
+      }
+      const v = si * c[i]!;
+      work[k * count + r] = v;
+      dots[k]! += v0 * v;
+    }
+  } else {
+    for (let r = 0; r < count; r++) {
+      const i = active[r]!;
+      const si = s[r]!;
+      const o = i * k;
+      for (let j = 1; j < k; j++) work[j * count + r] = si * b[o + j]!;
+      work[k * count + r] = si * c[i]!;
+    }
+  }
   for (let j = 0; j < k; j++) {
     const oj = j * count;
     const next = j + 1;

@@ -147,7 +147,8 @@ function cpAt(poly: Nasa7Polynomial, T: number): number {
   return cpOf(T <= poly.tMid ? poly.low : poly.high, T);
 }
 
-function errorChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
+/** Rule 1 (see the module comment); exported for the same-doubles test, like shapeChecks. */
+export function errorChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
   // ln T of every sample, shared between species on one grid (log-temperatures.ts: Math.log's doubles).
   const lnT = lnOfSampleTemperatures(samples);
   // The parts of the three limits (limits.ts `limitAt`: max(absolute, perCp · Cp/R), the same call).
@@ -319,8 +320,9 @@ function where(poly: Nasa7Polynomial, T: number): 'low' | 'high' | 'extrapolatio
  * step of the formula is monotone in i), and a stable sort leaves an ascending run of finite values as it
  * is, so each of the three (finite, and equal to no element) only has to go in after the elements below
  * it. Anything else (a non-finite value, a run found not ascending) takes the push-and-sort itself.
+ * Exported for the same-doubles test, like samplesInRange.
  */
-function checkTemperatures(from: number, to: number, n: number, poly: Nasa7Polynomial): number[] {
+export function checkTemperatures(from: number, to: number, n: number, poly: Nasa7Polynomial): number[] {
   const ts: number[] = [];
   for (let i = 0; i <= n; i++) ts.push(from + ((to - from) * i) / n);
   const extra = [poly.tLow, poly.tMid, poly.tHigh];
@@ -351,7 +353,7 @@ function checkTemperatures(from: number, to: number, n: number, poly: Nasa7Polyn
  * their order, so the sort runs only when they are not), their least Cp/R (the first of equal values, in
  * sample order) and max |cpAt − Cp/R| over them (Math.max: the same double in any order).
  */
-function samplesInRange(poly: Nasa7Polynomial, samples: readonly FitSample[]): { T: number[]; cpR: number[]; leastCp: number; maxCpError: number } {
+export function samplesInRange(poly: Nasa7Polynomial, samples: readonly FitSample[]): { T: number[]; cpR: number[]; leastCp: number; maxCpError: number } {
   const T: number[] = [];
   const cpR: number[] = [];
   let leastCp = Infinity;
@@ -373,7 +375,8 @@ function samplesInRange(poly: Nasa7Polynomial, samples: readonly FitSample[]): {
   return { T: data.map((s) => s.T), cpR: data.map((s) => s.cpR), leastCp, maxCpError };
 }
 
-function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
+/** Rules 3–5 (see the module comment). */
+export function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
   const from = Math.max(poly.tLow - tol.extrapolationBelow, 1);
   const to = poly.tHigh + tol.extrapolation;
   const n = Math.max(2, Math.ceil((to - from) / 5));

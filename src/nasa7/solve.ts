@@ -300,23 +300,22 @@ export function solveFactoredParts(
   const x0 = scratchX0;
   const { band, bandWidth, rowFirst, rowEnd } = f;
   for (let row = 0; row < nr; row++) {
-    // scaledRowDot inlined (the hot loop of every solve); a row of seven columns (every design row: one
-    // range's coefficients) is summed unrolled, the same products added in the same order.
+    // scaledRowDot inlined (the hot loop of every solve). Design rows span 5 (Cp/R: a1–a5), 6 (H/RT: a1–a6)
+    // or 7 (S/R: a1–a5, a7) columns; those are summed unrolled, the same products added in the same order.
     let pred = 0;
     const first = rowFirst[row]!;
-    const o = row * bandWidth - first;
-    const e = rowEnd[row]!;
-    if (e - first === 7) {
-      const b = o + first;
+    const width = rowEnd[row]! - first;
+    const b = row * bandWidth;
+    if (width >= 5 && width <= 7) {
       pred += band[b]! * up[first]!;
       pred += band[b + 1]! * up[first + 1]!;
       pred += band[b + 2]! * up[first + 2]!;
       pred += band[b + 3]! * up[first + 3]!;
       pred += band[b + 4]! * up[first + 4]!;
-      pred += band[b + 5]! * up[first + 5]!;
-      pred += band[b + 6]! * up[first + 6]!;
+      if (width >= 6) pred += band[b + 5]! * up[first + 5]!;
+      if (width === 7) pred += band[b + 6]! * up[first + 6]!;
     } else {
-      for (let j = first; j < e; j++) pred += band[o + j]! * up[j]!;
+      for (let j = 0; j < width; j++) pred += band[b + j]! * up[first + j]!;
     }
     x0[row] = rhs[row]! - pred;
   }

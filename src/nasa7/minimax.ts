@@ -71,8 +71,10 @@ const scratch = {
   /** v_j · column of the work matrix, per column (weightedSolve). */
   dots: new Float64Array(0),
   z: new Float64Array(0),
-  /** Rows of the current reference set, ascending (minimaxReduced). */
+  /** Rows of the current reference set, ascending, the next one, and the rows a round adds (minimaxReduced). */
   ordered: new Int32Array(0),
+  merged: new Int32Array(0),
+  fresh: new Int32Array(0),
 };
 
 function ensure(n: number, k: number, rows: number): void {
@@ -305,9 +307,10 @@ function errorsOf(b: Float64Array, c: Float64Array, limits: Float64Array, k: num
 /**
  * Marks the rows at which |e| has a local maximum along T within its series (one series per quantity and
  * range: rows are sample-major with `stride` quantities per sample, the low range's first `lowRows` rows)
- * and exceeds `above`; returns how many were not marked before. `rows` = e's length in use.
+ * and exceeds `above`; returns how many were not marked before. `rows` = e's length in use. With `list`,
+ * lists the maxima instead of marking them; with `fresh`, also writes the newly marked rows there.
  */
-function markLocalMaxima(e: Float64Array, rows: number, stride: number, lowRows: number, inSet: Uint8Array, above: number, list?: number[]): number {
+function markLocalMaxima(e: Float64Array, rows: number, stride: number, lowRows: number, inSet: Uint8Array, above: number, list?: number[], fresh?: Int32Array): number {
   let added = 0;
   for (let part = 0; part < 2; part++) {
     const from = part === 0 ? 0 : lowRows;
@@ -320,6 +323,7 @@ function markLocalMaxima(e: Float64Array, rows: number, stride: number, lowRows:
           if (list) list.push(i);
           else if (!inSet[i]) {
             inSet[i] = 1;
+            if (fresh) fresh[added] = i;
             added++;
           }
         }
@@ -478,11 +482,20 @@ export function minimaxReduced(
   }
   let iterations = 0;
   let lowerBound = 0;
+  // The rows of the set, ascending: found by one pass over inSet for the first round; after that the rows
+  // each round adds (sorted) are merged in, which gives the same list without passing over every row.
+  if (scratch.ordered.length < rows) {
+    scratch.ordered = new Int32Array(rows);
+    scratch.merged = new Int32Array(rows);
+    scratch.fresh = new Int32Array(rows);
+  }
+  let list = scratch.ordered;
+  let spare = scratch.merged;
+  const fresh = scratch.fresh;
+  for (let i = 0, o = 0; i < rows && o < size; i++) if (inSet[i]) list[o++] = i;
   for (let round = 0; round < MAX_ROUNDS; round++) {
     if (size < k) break;
-    if (scratch.ordered.length < size) scratch.ordered = new Int32Array(Math.max(size, 2 * scratch.ordered.length));
-    const ordered = scratch.ordered.subarray(0, size);
-    for (let i = 0, o = 0; i < rows; i++) if (inSet[i]) ordered[o++] = i;
+    const ordered = list.subarray(0, size);
     const r = lawsonOnSet(b, c, limits, k, ordered, cutoff);
     if (!r) break;
     iterations += r.iterations;
@@ -498,8 +511,19 @@ export function minimaxReduced(
     lowerBound = Math.max(lowerBound, setWorst * (1 - RELATIVE_GAP));
     if (worst < best.worst) best = { z: r.z, worst };
     if (worst <= setWorst * 1.001) break;
-    const added = markLocalMaxima(e, rows, stride, lowRows, inSet, setWorst);
+    const added = markLocalMaxima(e, rows, stride, lowRows, inSet, setWorst, undefined, fresh);
     if (added === 0) break;
+    // Merge of two ascending lists of distinct rows (the new rows were not in the set).
+    const adds = fresh.subarray(0, added).sort();
+    let a = 0;
+    let o = 0;
+    let m = 0;
+    while (o < size && a < added) spare[m++] = list[o]! < adds[a]! ? list[o++]! : adds[a++]!;
+    while (o < size) spare[m++] = list[o++]!;
+    while (a < added) spare[m++] = adds[a++]!;
+    const swap = list;
+    list = spare;
+    spare = swap;
     size += added;
   }
   return { z: best.z, worst: best.worst, lowerBound, iterations };

@@ -57,6 +57,31 @@ export function temperatureKey(samples: readonly FitSample[]): string {
   return key;
 }
 
+/**
+ * The option keys made for the last weights, anchor temperature and continuity order, by tMid: a search
+ * asks for the same few dozen keys species after species, and formatting six numbers each time was a
+ * measurable share of a lookup. A key is a function of the values only (String of Object.is-equal
+ * numbers is the same string; the tMid map's SameValueZero merges +0 and −0, whose strings are both
+ * "0"), so a remembered key is the very string a fresh one would be.
+ */
+let keysFor: { cp: number; h: number; s: number; anchorT: number; continuityOrder: number; byMid: Map<number, string> } | undefined;
+
+/** The short option key of a factorisation (remembered, see above). */
+export function optionKey(w: FitWeights, parts: FactorKeyParts): string {
+  let memo = keysFor;
+  if (!memo || !Object.is(memo.cp, w.cp) || !Object.is(memo.h, w.h) || !Object.is(memo.s, w.s) || !Object.is(memo.anchorT, parts.anchorT) || !Object.is(memo.continuityOrder, parts.continuityOrder)) {
+    memo = keysFor = { cp: w.cp, h: w.h, s: w.s, anchorT: parts.anchorT, continuityOrder: parts.continuityOrder, byMid: new Map() };
+  }
+  let key = memo.byMid.get(parts.tMid);
+  if (key === undefined) {
+    key = `${w.cp}|${w.h}|${w.s}|${parts.anchorT}|${parts.tMid}|${parts.continuityOrder}`;
+    // Bounded like the cache: a caller trying ever new midpoints does not grow it without end.
+    if (memo.byMid.size >= MAX_FACTORISATIONS) memo.byMid.clear();
+    memo.byMid.set(parts.tMid, key);
+  }
+  return key;
+}
+
 type SplitRanges = { low: readonly FitSample[]; high: readonly FitSample[] };
 
 /**
@@ -70,7 +95,7 @@ export function factorisationFor(
   anchor: FitSample,
 ): FactoredProblem {
   const w = parts.weights;
-  const key = `${w.cp}|${w.h}|${w.s}|${parts.anchorT}|${parts.tMid}|${parts.continuityOrder}`;
+  const key = optionKey(w, parts);
   let inner = cache.get(parts.temperatures);
   const hit = inner?.get(key);
   if (hit) {

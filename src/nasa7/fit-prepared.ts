@@ -31,8 +31,9 @@ export function rowsOf(p: PreparedSamples, split: RangeSplit): number {
 }
 
 /**
- * Scratch rows of the candidate being fitted (targets, limits, reduced targets): written in full before
- * each use and never kept beyond one `fitPrepared` call.
+ * Scratch rows of the candidate being fitted (targets, limits, reduced targets; the winner's targets for
+ * its residual norm): written in full before each use and never kept beyond one `fitPrepared` or
+ * `solverOf` call.
  */
 const scratch = { y: new Float64Array(0), limits: new Float64Array(0), targets: new Float64Array(0) };
 
@@ -172,7 +173,8 @@ export function unmeasuredOf(p: PreparedSamples, fit: PreparedFit, options: FitO
 function solverOf(p: PreparedSamples, fit: PreparedFit, options: FitOptions): UnmeasuredFit['solver'] {
   return {
     conditionNumber: fit.f.conditionNumber,
-    residualNorm: residualNormOf(fit.f, targetsOf(p, fit.split, options.weights), fit.x),
+    // The targets in the fit's scratch (free once the candidates are fitted; residualNormOf only reads them).
+    residualNorm: residualNormOf(fit.f, targetsOf(p, fit.split, options.weights, scratchRows('y', rowsOf(p, fit.split))), fit.x),
     midCandidates: 1,
     ...(fit.worst !== undefined ? { worstLimitRatio: fit.worst } : {}),
   };

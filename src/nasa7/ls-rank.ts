@@ -300,17 +300,27 @@ function residuals(y: Float64Array, h: Float64Array, sA: number, b: Float64Array
   return out;
 }
 
-/** max over q of |y'_q(i) − b_row·t| / divisor for the three rows of sample i from `row0`. */
-function boundAt(b: Float64Array, k: number, t: Float64Array, yp: Float64Array, divisor: Float64Array, i: number, row0: number): number {
+/**
+ * max over q of |y'_q(i) − b_row·t| / divisor for the three rows of sample i from `row0` (for k = 8 with t
+ * read once into locals: the same products summed in the same order).
+ */
+export function boundAt(b: Float64Array, k: number, t: Float64Array, yp: Float64Array, divisor: Float64Array, i: number, row0: number): number {
   let worst = 0;
+  if (k === 8) {
+    const t0 = t[0]!, t1 = t[1]!, t2 = t[2]!, t3 = t[3]!, t4 = t[4]!, t5 = t[5]!, t6 = t[6]!, t7 = t[7]!; // prettier-ignore
+    for (let q = 0; q < 3; q++) {
+      const o = (row0 + q) * 8;
+      let r = yp[3 * i + q]!;
+      r -= b[o]! * t0 + b[o + 1]! * t1 + b[o + 2]! * t2 + b[o + 3]! * t3 + b[o + 4]! * t4 + b[o + 5]! * t5 + b[o + 6]! * t6 + b[o + 7]! * t7;
+      const v = Math.abs(r) / divisor[3 * i + q]!;
+      if (v > worst) worst = v;
+    }
+    return worst;
+  }
   for (let q = 0; q < 3; q++) {
     const o = (row0 + q) * k;
     let r = yp[3 * i + q]!;
-    if (k === 8) {
-      r -= b[o]! * t[0]! + b[o + 1]! * t[1]! + b[o + 2]! * t[2]! + b[o + 3]! * t[3]! + b[o + 4]! * t[4]! + b[o + 5]! * t[5]! + b[o + 6]! * t[6]! + b[o + 7]! * t[7]!;
-    } else {
-      for (let j = 0; j < k; j++) r -= b[o + j]! * t[j]!;
-    }
+    for (let j = 0; j < k; j++) r -= b[o + j]! * t[j]!;
     const v = Math.abs(r) / divisor[3 * i + q]!;
     if (v > worst) worst = v;
   }

@@ -68,9 +68,13 @@ const scratch = {
   rowErrors: new Float64Array(0),
   inSet: new Uint8Array(0),
   diag: new Float64Array(0),
+  /** v_j · column of the work matrix, per column (weightedSolve). */
+  dots: new Float64Array(0),
   z: new Float64Array(0),
-  /** Rows of the current reference set, ascending (minimaxReduced). */
+  /** Rows of the current reference set, ascending, the next one, and the rows a round adds (minimaxReduced). */
   ordered: new Int32Array(0),
+  merged: new Int32Array(0),
+  fresh: new Int32Array(0),
 };
 
 function ensure(n: number, k: number, rows: number): void {
@@ -89,6 +93,7 @@ function ensure(n: number, k: number, rows: number): void {
   }
   if (sc.diag.length < k) {
     sc.diag = new Float64Array(k);
+    sc.dots = new Float64Array(k + 1);
     sc.z = new Float64Array(k);
   }
 }
@@ -96,10 +101,19 @@ function ensure(n: number, k: number, rows: number): void {
 /**
  * Weighted least squares min Σ (s_r (b_i·z − c_i))² over the rows i = active[r], r < count, by Householder
  * QR; s is indexed by r. The work matrix is column-major (count rows, k + 1 columns) so every inner loop
- * runs over consecutive doubles; the operations and their order are those of the row-major form. Writes z
- * (length k) into `z`.
+ * runs over consecutive doubles. Writes z (length k) into `z`.
+ *
+ * The steps are those of the textbook order (`weightedSolveReference` in the tests): for each j, the
+ * column norm below the diagonal, the reflector v_j, then for every later column the dot product with
+ * v_j and its update. They are pipelined: the update of column j + 1 by reflector j also sums the squares
+ * of its rows ≥ j + 1 (the next norm), v_{j+1} is formed at once, and the update of every later column
+ * also sums its dot product with v_{j+1}. Each sum still takes the same terms, each the same double (a
+ * row's value once reflector j is applied, the one the next step reads), in ascending row order from +0,
+ * so every double is the same while each column is passed over once per step instead of twice (the sums
+ * of step 0 are made while the work matrix is filled, column 0 first). `dots` holds k + 1 doubles of
+ * scratch. Exported for the same-doubles test.
  */
-function weightedSolve(
+export function weightedSolve(
   b: Float64Array,
   c: Float64Array,
   s: Float64Array,
@@ -109,43 +123,130 @@ function weightedSolve(
   work: Float64Array,
   diag: Float64Array,
   z: Float64Array,
+  dots: Float64Array,
 ): void {
+  if (k === 0) return;
+  // Column 0 first, with its sum of squares (plain sums of squares, not Math.hypot, several times slower:
+  // the rows are scaled by √w_i / L_i with Σ w_i = 1 and limit-relative targets, so the entries are far
+  // from overflow or underflow); its reflector v_0 at once; then the other columns, each row's entries
+  // also entering their dot products with v_0.
+  let sumSq = 0;
   for (let r = 0; r < count; r++) {
-    const i = active[r]!;
-    const si = s[r]!;
-    const o = i * k;
-    for (let j = 0; j < k; j++) work[j * count + r] = si * b[o + j]!;
-    work[k * count + r] = si * c[i]!;
+    const v = s[r]! * b[active[r]! * k]!;
+    work[r] = v;
+    sumSq += v * v;
+  }
+  // alpha of the current step j (0 when column j has no norm: no reflection), and whether dots[col] already
+  // holds v_j · column col for every col > j.
+  let alpha = reflectorOf(work, 0, 0, sumSq);
+  let dotsReady = alpha !== 0;
+  if (dotsReady) {
+    for (let col = 1; col <= k; col++) dots[col] = 0;
+    for (let r = 0; r < count; r++) {
+      const i = active[r]!;
+      const si = s[r]!;
+      const o = i * k;
+      const v0 = work[r]!;
+      for (let j = 1; j < k; j++) {
+        const v = si * b[o + j]!;
+        work[j * count + r] = v;
+        dots[j]! += v0 * v;
+      }
+      const v = si * c[i]!;
+      work[k * count + r] = v;
+      dots[k]! += v0 * v;
+    }
+  } else {
+    for (let r = 0; r < count; r++) {
+      const i = active[r]!;
+      const si = s[r]!;
+      const o = i * k;
+      for (let j = 1; j < k; j++) work[j * count + r] = si * b[o + j]!;
+      work[k * count + r] = si * c[i]!;
+    }
   }
   for (let j = 0; j < k; j++) {
-    // Plain sum of squares, not Math.hypot (several times slower): the rows are scaled by √w_i / L_i with
-    // Σ w_i = 1 and limit-relative targets, so the entries are far from overflow or underflow.
     const oj = j * count;
-    let sumSq = 0;
-    for (let r = j; r < count; r++) sumSq += work[oj + r]! * work[oj + r]!;
-    const norm = Math.sqrt(sumSq);
-    if (norm === 0) {
+    const next = j + 1;
+    if (alpha === 0) {
       diag[j] = 0;
+      if (next < k) {
+        const on = next * count;
+        let sq = 0;
+        for (let r = next; r < count; r++) sq += work[on + r]! * work[on + r]!;
+        alpha = reflectorOf(work, on, next, sq);
+      }
+      dotsReady = false;
       continue;
     }
-    const alpha = work[oj + j]! > 0 ? -norm : norm;
-    // v = x − alpha e1, stored in place; beta = 1 / (alpha (alpha − x0)).
-    work[oj + j]! -= alpha;
     const vv = -alpha * work[oj + j]!;
-    for (let col = j + 1; col <= k; col++) {
-      const oc = col * count;
-      let dot = 0;
-      for (let r = j; r < count; r++) dot += work[oj + r]! * work[oc + r]!;
-      const f = dot / vv;
-      for (let r = j; r < count; r++) work[oc + r]! -= f * work[oj + r]!;
+    if (!dotsReady) {
+      for (let col = next; col <= k; col++) {
+        const oc = col * count;
+        let dot = 0;
+        for (let r = j; r < count; r++) dot += work[oj + r]! * work[oc + r]!;
+        dots[col] = dot;
+      }
     }
     diag[j] = alpha;
+    // Column j + 1: updated, its next norm summed on the way, its reflector formed.
+    let nextAlpha = 0;
+    {
+      const on = next * count;
+      const f = dots[next]! / vv;
+      work[on + j]! -= f * work[oj + j]!;
+      if (next < k) {
+        let sq = 0;
+        for (let r = next; r < count; r++) {
+          const v = work[on + r]! - f * work[oj + r]!;
+          work[on + r] = v;
+          sq += v * v;
+        }
+        nextAlpha = reflectorOf(work, on, next, sq);
+      } else {
+        for (let r = next; r < count; r++) work[on + r]! -= f * work[oj + r]!;
+      }
+    }
+    // Later columns: updated, and their dot products with v_{j+1} summed on the way when it exists.
+    const on = next * count;
+    const fuse = nextAlpha !== 0;
+    for (let col = next + 1; col <= k; col++) {
+      const oc = col * count;
+      const f = dots[col]! / vv;
+      work[oc + j]! -= f * work[oj + j]!;
+      if (fuse) {
+        let dot = 0;
+        for (let r = next; r < count; r++) {
+          const v = work[oc + r]! - f * work[oj + r]!;
+          work[oc + r] = v;
+          dot += work[on + r]! * v;
+        }
+        dots[col] = dot;
+      } else {
+        for (let r = next; r < count; r++) work[oc + r]! -= f * work[oj + r]!;
+      }
+    }
+    alpha = nextAlpha;
+    dotsReady = fuse;
   }
   for (let j = k - 1; j >= 0; j--) {
     let v = work[k * count + j]!;
     for (let col = j + 1; col < k; col++) v -= work[col * count + j]! * z[col]!;
     z[j] = diag[j] !== 0 ? v / diag[j]! : 0;
   }
+}
+
+/**
+ * Reflector of the column at offset `o` from row j, whose rows ≥ j have sum of squares `sumSq`: returns
+ * alpha = ∓‖x‖ (sign opposite to x_j) and stores v = x − alpha e_j in place, or returns 0 (nothing
+ * stored) when the norm is 0.
+ */
+function reflectorOf(work: Float64Array, o: number, j: number, sumSq: number): number {
+  const norm = Math.sqrt(sumSq);
+  if (norm === 0) return 0;
+  const alpha = work[o + j]! > 0 ? -norm : norm;
+  work[o + j]! -= alpha;
+  return alpha;
 }
 
 /**
@@ -170,10 +271,32 @@ function rowError(b: Float64Array, c: Float64Array, limits: Float64Array, k: num
   return Math.abs(v / limits[i]!);
 }
 
-/** |e_i| of every row for z; returns the max. */
-function errorsOf(b: Float64Array, c: Float64Array, limits: Float64Array, k: number, z: Float64Array, e: Float64Array): number {
+/**
+ * |e_i| of rows [0, rows) for z; returns the max. For k = 8 the loop holds z in locals (rowError's operations
+ * in its order: the same doubles; the typed-array reads of z it saves are what V8 cannot hoist, as e might
+ * alias z).
+ */
+function errorsOf(b: Float64Array, c: Float64Array, limits: Float64Array, k: number, z: Float64Array, e: Float64Array, rows = c.length): number {
   let worst = 0;
-  for (let i = 0; i < c.length; i++) {
+  if (k === 8) {
+    const z0 = z[0]!, z1 = z[1]!, z2 = z[2]!, z3 = z[3]!, z4 = z[4]!, z5 = z[5]!, z6 = z[6]!, z7 = z[7]!; // prettier-ignore
+    for (let i = 0, o = 0; i < rows; i++, o += 8) {
+      let v = -c[i]!;
+      v += b[o]! * z0;
+      v += b[o + 1]! * z1;
+      v += b[o + 2]! * z2;
+      v += b[o + 3]! * z3;
+      v += b[o + 4]! * z4;
+      v += b[o + 5]! * z5;
+      v += b[o + 6]! * z6;
+      v += b[o + 7]! * z7;
+      const a = Math.abs(v / limits[i]!);
+      e[i] = a;
+      if (!(a <= worst)) worst = a;
+    }
+    return worst;
+  }
+  for (let i = 0; i < rows; i++) {
     const a = rowError(b, c, limits, k, z, i);
     e[i] = a;
     if (!(a <= worst)) worst = a;
@@ -184,9 +307,10 @@ function errorsOf(b: Float64Array, c: Float64Array, limits: Float64Array, k: num
 /**
  * Marks the rows at which |e| has a local maximum along T within its series (one series per quantity and
  * range: rows are sample-major with `stride` quantities per sample, the low range's first `lowRows` rows)
- * and exceeds `above`; returns how many were not marked before. `rows` = e's length in use.
+ * and exceeds `above`; returns how many were not marked before. `rows` = e's length in use. With `list`,
+ * lists the maxima instead of marking them; with `fresh`, also writes the newly marked rows there.
  */
-function markLocalMaxima(e: Float64Array, rows: number, stride: number, lowRows: number, inSet: Uint8Array, above: number, list?: number[]): number {
+function markLocalMaxima(e: Float64Array, rows: number, stride: number, lowRows: number, inSet: Uint8Array, above: number, list?: number[], fresh?: Int32Array): number {
   let added = 0;
   for (let part = 0; part < 2; part++) {
     const from = part === 0 ? 0 : lowRows;
@@ -199,6 +323,7 @@ function markLocalMaxima(e: Float64Array, rows: number, stride: number, lowRows:
           if (list) list.push(i);
           else if (!inSet[i]) {
             inSet[i] = 1;
+            if (fresh) fresh[added] = i;
             added++;
           }
         }
@@ -221,7 +346,7 @@ function lawsonOnSet(
 ): { z: Float64Array; iterations: number; cut: boolean } | undefined {
   const n = set.length;
   ensure(n, k, c.length);
-  const { work, s, w, e, diag, z } = scratch;
+  const { work, s, w, e, diag, z, dots } = scratch;
   // The set's rows of b, c and the limits, copied next to each other once: every step then reads
   // consecutive memory, indexed by position in the set (the same values, so the same arithmetic).
   if (scratch.setB.length < n * k) scratch.setB = new Float64Array(n * k);
@@ -249,14 +374,13 @@ function lawsonOnSet(
   let iterations = 0;
   for (; iterations < MAX_ITERATIONS; iterations++) {
     for (let r = 0; r < count; r++) s[r] = Math.sqrt(w[pos[r]!]!) / sl[pos[r]!]!;
-    weightedSolve(sb, sc, s, pos, count, k, work, diag, z);
-    let worst = 0;
+    weightedSolve(sb, sc, s, pos, count, k, work, diag, z, dots);
+    // e, max, Σ w e² and Σ w e over the set (errorsOf's loop, with the two sums).
+    const worst = errorsOf(sb, sc, sl, k, z, e, n);
     let bound = 0;
     let total = 0;
     for (let r = 0; r < n; r++) {
-      const a = rowError(sb, sc, sl, k, z, r);
-      e[r] = a;
-      if (!(a <= worst)) worst = a;
+      const a = e[r]!;
       bound += w[r]! * a * a;
       total += w[r]! * a;
     }
@@ -276,10 +400,24 @@ function lawsonOnSet(
     }
     let wMax = 0;
     let wSum = 0;
-    for (let r = 0; r < n; r++) {
-      w[r] = w[r]! * e[r]! ** BETA;
-      if (w[r]! > wMax) wMax = w[r]!;
-      wSum += w[r]!;
+    // A pruned row (w = +0) keeps w = 0 · |e|^β = +0 whenever |e|^β is finite, as it is for |e| ≤ worst <
+    // 1e200; skipping its power (the costliest operation of the step) then changes no double: +0 neither
+    // raises wMax nor changes wSum.
+    if (worst < 1e200) {
+      for (let r = 0; r < n; r++) {
+        const wr = w[r]!;
+        if (wr === 0) continue;
+        const u = wr * e[r]! ** BETA;
+        w[r] = u;
+        if (u > wMax) wMax = u;
+        wSum += u;
+      }
+    } else {
+      for (let r = 0; r < n; r++) {
+        w[r] = w[r]! * e[r]! ** BETA;
+        if (w[r]! > wMax) wMax = w[r]!;
+        wSum += w[r]!;
+      }
     }
     for (let r = 0; r < n; r++) w[r] = w[r]! / wSum;
     wMax /= wSum;
@@ -289,7 +427,9 @@ function lawsonOnSet(
       else w[r] = 0;
     }
     if (kept < k) break;
-    [pos, nextPos] = [nextPos, pos];
+    const swap = pos;
+    pos = nextPos;
+    nextPos = swap;
     count = kept;
   }
   return bestZ ? { z: bestZ, iterations, cut: false } : undefined;
@@ -342,11 +482,20 @@ export function minimaxReduced(
   }
   let iterations = 0;
   let lowerBound = 0;
+  // The rows of the set, ascending: found by one pass over inSet for the first round; after that the rows
+  // each round adds (sorted) are merged in, which gives the same list without passing over every row.
+  if (scratch.ordered.length < rows) {
+    scratch.ordered = new Int32Array(rows);
+    scratch.merged = new Int32Array(rows);
+    scratch.fresh = new Int32Array(rows);
+  }
+  let list = scratch.ordered;
+  let spare = scratch.merged;
+  const fresh = scratch.fresh;
+  for (let i = 0, o = 0; i < rows && o < size; i++) if (inSet[i]) list[o++] = i;
   for (let round = 0; round < MAX_ROUNDS; round++) {
     if (size < k) break;
-    if (scratch.ordered.length < size) scratch.ordered = new Int32Array(Math.max(size, 2 * scratch.ordered.length));
-    const ordered = scratch.ordered.subarray(0, size);
-    for (let i = 0, o = 0; i < rows; i++) if (inSet[i]) ordered[o++] = i;
+    const ordered = list.subarray(0, size);
     const r = lawsonOnSet(b, c, limits, k, ordered, cutoff);
     if (!r) break;
     iterations += r.iterations;
@@ -362,8 +511,19 @@ export function minimaxReduced(
     lowerBound = Math.max(lowerBound, setWorst * (1 - RELATIVE_GAP));
     if (worst < best.worst) best = { z: r.z, worst };
     if (worst <= setWorst * 1.001) break;
-    const added = markLocalMaxima(e, rows, stride, lowRows, inSet, setWorst);
+    const added = markLocalMaxima(e, rows, stride, lowRows, inSet, setWorst, undefined, fresh);
     if (added === 0) break;
+    // Merge of two ascending lists of distinct rows (the new rows were not in the set).
+    const adds = fresh.subarray(0, added).sort();
+    let a = 0;
+    let o = 0;
+    let m = 0;
+    while (o < size && a < added) spare[m++] = list[o]! < adds[a]! ? list[o++]! : adds[a++]!;
+    while (o < size) spare[m++] = list[o++]!;
+    while (a < added) spare[m++] = adds[a++]!;
+    const swap = list;
+    list = spare;
+    spare = swap;
     size += added;
   }
   return { z: best.z, worst: best.worst, lowerBound, iterations };

@@ -11,6 +11,7 @@
  * and the caller takes the general path, which reports the problem exactly as before.
  */
 import { limitAt } from './limits.js';
+import { lnOfTemperatures } from './log-temperatures.js';
 import { MAX_END_GAP_FRACTION, MAX_INNER_GAP_FRACTION, MIN_DISTINCT_TEMPERATURES } from './samples.js';
 import type { FitOptions, FitSample } from './types.js';
 
@@ -19,6 +20,7 @@ export interface PreparedSamples {
   anchor: FitSample;
   n: number;
   T: Float64Array;
+  /** ln T (shared between species on one grid: read only). */
   lnT: Float64Array;
   cpR: Float64Array;
   hRT: Float64Array;
@@ -50,7 +52,6 @@ export function prepareSamples(samples: readonly FitSample[], anchor: FitSample,
   const n = samples.length;
   if (n === 0) return undefined;
   const T = new Float64Array(n);
-  const lnT = new Float64Array(n);
   const cpR = new Float64Array(n);
   const hRT = new Float64Array(n);
   const sR = new Float64Array(n);
@@ -67,7 +68,6 @@ export function prepareSamples(samples: readonly FitSample[], anchor: FitSample,
     if (s.T < tLow - rel(tLow) || s.T > tHigh + rel(tHigh) || !(s.T > previous)) return undefined;
     previous = s.T;
     T[i] = s.T;
-    lnT[i] = Math.log(s.T);
     cpR[i] = s.cpR;
     hRT[i] = s.hRT;
     sR[i] = s.sR;
@@ -76,6 +76,8 @@ export function prepareSamples(samples: readonly FitSample[], anchor: FitSample,
     limH[i] = limitAt(lh, s.cpR);
     limS[i] = limitAt(ls, s.cpR);
   }
+  // Math.log of each T, remembered between species on the same grid (log-temperatures.ts: the same doubles).
+  const lnT = lnOfTemperatures(T);
   return { samples, anchor, n, T, lnT, cpR, hRT, sR, hRel, limCp, limH, limS };
 }
 

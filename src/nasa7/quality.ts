@@ -41,6 +41,7 @@
  */
 import { cpDerivative, cpSecondDerivative, evaluateRange } from './evaluate.js';
 import { DEFAULT_FIT_LIMITS, limitAt, limitPart } from './limits.js';
+import { lnOfSampleTemperatures } from './log-temperatures.js';
 import type { Coefficients7, FitResult, FitSample, Nasa7Polynomial } from './types.js';
 
 export interface FitTolerances {
@@ -146,45 +147,63 @@ function cpAt(poly: Nasa7Polynomial, T: number): number {
   return cpOf(T <= poly.tMid ? poly.low : poly.high, T);
 }
 
-function errorChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
-  const specs = [
-    { absolute: tol.cp, perCp: tol.perCp.cp },
-    { absolute: tol.h, perCp: tol.perCp.h },
-    { absolute: tol.s, perCp: tol.perCp.s },
-  ] as const;
+/** Rule 1 (see the module comment); exported for the same-doubles test, like shapeChecks. */
+export function errorChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
+  // ln T of every sample, shared between species on one grid (log-temperatures.ts: Math.log's doubles).
+  const lnT = lnOfSampleTemperatures(samples);
+  // The parts of the three limits (limits.ts `limitAt`: max(absolute, perCp · Cp/R), the same call).
+  const absC = tol.cp, perC = tol.perCp.cp, absH = tol.h, perH = tol.perCp.h, absS = tol.s, perS = tol.perCp.s; // prettier-ignore
   for (const range of ['low', 'high'] as const) {
     const [from, to] = range === 'low' ? [poly.tLow, poly.tMid] : [poly.tMid, poly.tHigh];
     const coeffs = range === 'low' ? poly.low : poly.high;
     const [a1, a2, a3, a4, a5, a6, a7] = coeffs;
     // evaluate.ts evaluateRange's quotients, formed once (the same doubles at every T).
     const h2 = a2 / 2, h3 = a3 / 3, h4 = a4 / 4, h5 = a5 / 5, s3 = a3 / 2, s4 = a4 / 3, s5 = a5 / 4; // prettier-ignore
-    // Worst error relative to its limit, per quantity (cp, h, s): ratio, error, T, computed Cp/R.
-    const wRatio = [-1, -1, -1];
-    const wErr = [0, 0, 0];
-    const wT = [NaN, NaN, NaN];
-    const wCp = [NaN, NaN, NaN];
-    for (const smp of samples) {
+    // Worst error relative to its limit, per quantity (cp, h, s): ratio, error, T, computed Cp/R. The first
+    // sample in range is always taken (its T is not NaN), then only a larger ratio.
+    let rc = -1, ec = 0, tc = NaN, cc = NaN; // prettier-ignore
+    let rh = -1, eh = 0, th = NaN, ch = NaN; // prettier-ignore
+    let rs = -1, es = 0, ts = NaN, cs = NaN; // prettier-ignore
+    for (let i = 0; i < samples.length; i++) {
+      const smp = samples[i]!;
       const T = smp.T;
       if (!(T >= from && T <= to)) continue;
+      const c = smp.cpR;
       const cpR = a1 + T * (a2 + T * (a3 + T * (a4 + T * a5)));
       const hRT = a1 + T * (h2 + T * (h3 + T * (h4 + T * h5))) + a6 / T;
-      const sR = a1 * Math.log(T) + T * (a2 + T * (s3 + T * (s4 + T * s5))) + a7;
-      for (let q = 0; q < 3; q++) {
-        const raw = q === 0 ? Math.abs(cpR - smp.cpR) : q === 1 ? Math.abs(hRT - smp.hRT) : Math.abs(sR - smp.sR);
-        const e = Number.isFinite(raw) ? raw : Infinity;
-        const ratio = e / limitAt(specs[q]!, smp.cpR);
-        if (ratio > wRatio[q]! || Number.isNaN(wT[q]!)) {
-          wRatio[q] = ratio;
-          wErr[q] = e;
-          wT[q] = T;
-          wCp[q] = smp.cpR;
-        }
+      const sR = a1 * lnT[i]! + T * (a2 + T * (s3 + T * (s4 + T * s5))) + a7;
+      const xc = Math.abs(cpR - c);
+      const yc = Number.isFinite(xc) ? xc : Infinity;
+      const qc = yc / Math.max(absC, perC * c);
+      if (qc > rc || Number.isNaN(tc)) {
+        rc = qc;
+        ec = yc;
+        tc = T;
+        cc = c;
+      }
+      const xh = Math.abs(hRT - smp.hRT);
+      const yh = Number.isFinite(xh) ? xh : Infinity;
+      const qh = yh / Math.max(absH, perH * c);
+      if (qh > rh || Number.isNaN(th)) {
+        rh = qh;
+        eh = yh;
+        th = T;
+        ch = c;
+      }
+      const xs = Math.abs(sR - smp.sR);
+      const ys = Number.isFinite(xs) ? xs : Infinity;
+      const qs = ys / Math.max(absS, perS * c);
+      if (qs > rs || Number.isNaN(ts)) {
+        rs = qs;
+        es = ys;
+        ts = T;
+        cs = c;
       }
     }
     const worst = {
-      cp: { ratio: wRatio[0]!, err: wErr[0]!, T: wT[0]!, cpR: wCp[0]! },
-      h: { ratio: wRatio[1]!, err: wErr[1]!, T: wT[1]!, cpR: wCp[1]! },
-      s: { ratio: wRatio[2]!, err: wErr[2]!, T: wT[2]!, cpR: wCp[2]! },
+      cp: { ratio: rc, err: ec, T: tc, cpR: cc },
+      h: { ratio: rh, err: eh, T: th, cpR: ch },
+      s: { ratio: rs, err: es, T: ts, cpR: cs },
     };
     for (const q of ['cp', 'h', 's'] as const) {
       const { ratio, err, T, cpR } = worst[q];
@@ -294,24 +313,88 @@ function where(poly: Nasa7Polynomial, T: number): 'low' | 'high' | 'extrapolatio
   return T <= poly.tMid ? 'low' : 'high';
 }
 
-function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
+/**
+ * The check temperatures of shapeChecks: from + (to − from) i / n for i = 0 … n, then tLow, tMid and tHigh
+ * unless already there (SameValueZero, as Array.includes), all in ascending order — the array that
+ * pushing the three and sorting with (a, b) => a − b gives. The even steps are already ascending (each
+ * step of the formula is monotone in i), and a stable sort leaves an ascending run of finite values as it
+ * is, so each of the three (finite, and equal to no element) only has to go in after the elements below
+ * it. Anything else (a non-finite value, a run found not ascending) takes the push-and-sort itself.
+ * Exported for the same-doubles test, like samplesInRange.
+ */
+export function checkTemperatures(from: number, to: number, n: number, poly: Nasa7Polynomial): number[] {
+  const ts: number[] = [];
+  for (let i = 0; i <= n; i++) ts.push(from + ((to - from) * i) / n);
+  const extra = [poly.tLow, poly.tMid, poly.tHigh];
+  let ascending = Number.isFinite(extra[0]) && Number.isFinite(extra[1]) && Number.isFinite(extra[2]);
+  for (let i = 0; i < ts.length && ascending; i++) ascending = Number.isFinite(ts[i]) && (i === 0 || ts[i - 1]! <= ts[i]!);
+  if (!ascending) {
+    for (const T of extra) if (!ts.includes(T)) ts.push(T);
+    return ts.sort((a, b) => a - b);
+  }
+  for (const T of extra) {
+    // First index whose value is ≥ T (binary search over the ascending array).
+    let lo = 0;
+    let hi = ts.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >>> 1;
+      if (ts[mid]! < T) lo = mid + 1;
+      else hi = mid;
+    }
+    if (lo < ts.length && ts[lo] === T) continue;
+    ts.splice(lo, 0, T);
+  }
+  return ts;
+}
+
+/**
+ * T and Cp/R of the samples in [tLow, tHigh] in ascending T (a stable sort by T, as
+ * `filter(…).sort((a, b) => a.T − b.T)`: samples already in non-decreasing T, as a build passes them, stay in
+ * their order, so the sort runs only when they are not), their least Cp/R (the first of equal values, in
+ * sample order) and max |cpAt − Cp/R| over them (Math.max: the same double in any order).
+ */
+export function samplesInRange(poly: Nasa7Polynomial, samples: readonly FitSample[]): { T: number[]; cpR: number[]; leastCp: number; maxCpError: number } {
+  const T: number[] = [];
+  const cpR: number[] = [];
+  let leastCp = Infinity;
+  let sorted = true;
+  for (const smp of samples) {
+    if (!(smp.T >= poly.tLow && smp.T <= poly.tHigh)) continue;
+    if (smp.cpR < leastCp) leastCp = smp.cpR;
+    if (T.length && !(T[T.length - 1]! <= smp.T)) sorted = false;
+    T.push(smp.T);
+    cpR.push(smp.cpR);
+  }
+  let maxCpError = 0;
+  if (sorted) {
+    for (let i = 0; i < T.length; i++) maxCpError = Math.max(maxCpError, Math.abs(cpAt(poly, T[i]!) - cpR[i]!));
+    return { T, cpR, leastCp, maxCpError };
+  }
+  const data = samples.filter((s) => s.T >= poly.tLow && s.T <= poly.tHigh).sort((a, b) => a.T - b.T);
+  for (const s of data) maxCpError = Math.max(maxCpError, Math.abs(cpAt(poly, s.T) - s.cpR));
+  return { T: data.map((s) => s.T), cpR: data.map((s) => s.cpR), leastCp, maxCpError };
+}
+
+/** Rules 3–5 (see the module comment). */
+export function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
   const from = Math.max(poly.tLow - tol.extrapolationBelow, 1);
   const to = poly.tHigh + tol.extrapolation;
   const n = Math.max(2, Math.ceil((to - from) / 5));
-  const ts: number[] = [];
-  for (let i = 0; i <= n; i++) ts.push(from + ((to - from) * i) / n);
-  for (const T of [poly.tLow, poly.tMid, poly.tHigh]) if (!ts.includes(T)) ts.push(T);
-  ts.sort((a, b) => a - b);
+  const ts = checkTemperatures(from, to, n, poly);
   // Cp/R of the fit at every ts, evaluated once and reused by every check below.
-  const cps = ts.map((T) => cpAt(poly, T));
+  const cps = new Float64Array(ts.length);
+  for (let i = 0; i < ts.length; i++) cps[i] = cpAt(poly, ts[i]!);
 
   let positive: FitViolation | undefined;
   let floor: FitViolation | undefined;
-  let leastData = Infinity;
-  for (const smp of samples) if (smp.T >= poly.tLow && smp.T <= poly.tHigh && smp.cpR < leastData) leastData = smp.cpR;
+  // The samples in [tLow, tHigh] in ascending T (T and Cp/R), their least Cp/R (the first of equals), and
+  // the fit's max |ΔCp/R| over them, in one pass.
+  const data = samplesInRange(poly, samples);
+  const leastData = data.leastCp;
   const floorBase = Math.min(tol.cpFloor, leastData);
   const floorLimit = floorBase - limitAt({ absolute: tol.cp, perCp: tol.perCp.cp }, floorBase);
-  cps.forEach((cp, i) => {
+  for (let i = 0; i < cps.length; i++) {
+    const cp = cps[i]!;
     const T = ts[i]!;
     if (!(cp > 0) && !positive) {
       positive = { quantity: 'cp-positive', range: where(poly, T), T, value: cp, limit: 0, message: `Cp/R of the fit is ${fmt(cp)} ≤ 0 at ${fmt(T)} K (${where(poly, T)}); Cp must stay positive` };
@@ -325,23 +408,22 @@ function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: 
         message: `Cp/R of the fit falls to ${fmt(cp)} at ${fmt(T)} K (${where(poly, T)}), ${fmt(floorLimit - cp)} below the floor ${fmt(floorLimit)} (${floorBase === tol.cpFloor ? `the structure's classical minimum ${fmt(tol.cpFloor)}` : `the least computed Cp/R ${fmt(floorBase)}`} less the Cp limit)`,
       };
     }
-  });
+  }
   if (positive) out.push(positive);
   else if (floor) out.push(floor);
 
-  const data = samples.filter((s) => s.T >= poly.tLow && s.T <= poly.tHigh).sort((a, b) => a.T - b.T);
   const inside: number[] = [];
   const insideCp: number[] = [];
-  ts.forEach((T, i) => {
+  for (let i = 0; i < ts.length; i++) {
+    const T = ts[i]!;
     if (T >= poly.tLow && T <= poly.tHigh) {
       inside.push(T);
       insideCp.push(cps[i]!);
     }
-  });
-  let maxCpError = 0;
-  for (const s of data) maxCpError = Math.max(maxCpError, Math.abs(cpAt(poly, s.T) - s.cpR));
+  }
+  const maxCpError = data.maxCpError;
   const delta = Math.max(tol.smoothness, 2 * maxCpError);
-  const dataRev = hysteresisReversals(data.map((s) => s.T), data.map((s) => s.cpR), delta);
+  const dataRev = hysteresisReversals(data.T, data.cpR, delta);
   // A fit within ±E of the data can deepen a data reversal just below δ (not counted there) by up to 2E;
   // a fit reversal is therefore extra only beyond δ + 2E. (Found on minimax fits of O2 and HO2, whose
   // computed Cp/R has a 0.018-deep maximum near 5000–5500 K: the fit turned back by 0.044 with E = 0.013.)

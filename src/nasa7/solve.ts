@@ -300,10 +300,23 @@ export function solveFactoredParts(
   const x0 = scratchX0;
   const { band, bandWidth, rowFirst, rowEnd } = f;
   for (let row = 0; row < nr; row++) {
-    // scaledRowDot inlined (the hot loop of every solve).
+    // scaledRowDot inlined (the hot loop of every solve). Design rows span 5 (Cp/R: a1–a5), 6 (H/RT: a1–a6)
+    // or 7 (S/R: a1–a5, a7) columns; those are summed unrolled, the same products added in the same order.
     let pred = 0;
-    const o = row * bandWidth - rowFirst[row]!;
-    for (let j = rowFirst[row]!, e = rowEnd[row]!; j < e; j++) pred += band[o + j]! * up[j]!;
+    const first = rowFirst[row]!;
+    const width = rowEnd[row]! - first;
+    const b = row * bandWidth;
+    if (width >= 5 && width <= 7) {
+      pred += band[b]! * up[first]!;
+      pred += band[b + 1]! * up[first + 1]!;
+      pred += band[b + 2]! * up[first + 2]!;
+      pred += band[b + 3]! * up[first + 3]!;
+      pred += band[b + 4]! * up[first + 4]!;
+      if (width >= 6) pred += band[b + 5]! * up[first + 5]!;
+      if (width === 7) pred += band[b + 6]! * up[first + 6]!;
+    } else {
+      for (let j = 0; j < width; j++) pred += band[b + j]! * up[first + j]!;
+    }
     x0[row] = rhs[row]! - pred;
   }
   let targets: Float64Array | undefined;
@@ -317,19 +330,21 @@ export function solveFactoredParts(
     let s = 0;
     for (let i = 0; i < nr; i++) s += qr[i]! * x0[i]!;
     s = -s / qr[0]!;
-    for (let c = 0; c < k; c++) {
+    for (let c = 0; c < k - 1; c++) {
       const o = c * nr;
-      const last = c === k - 1;
       const on = o + nr;
       let next = 0;
       x0[c] = x0[c]! + s * qr[o + c]!;
       for (let i = c + 1; i < nr; i++) {
         const v = x0[i]! + s * qr[o + i]!;
         x0[i] = v;
-        if (!last) next += qr[on + i]! * v;
+        next += qr[on + i]! * v;
       }
-      if (!last) s = -next / qr[on + c + 1]!;
+      s = -next / qr[on + c + 1]!;
     }
+    // The last reflection has no next sum.
+    const o = (k - 1) * nr;
+    for (let i = k - 1; i < nr; i++) x0[i] = x0[i]! + s * qr[o + i]!;
   }
   for (let c = k - 1; c >= 0; c--) {
     x0[c] = x0[c]! / f.rDiagonal[c]!;

@@ -42,6 +42,7 @@ import {
 import type { GeometryRow } from '../../src/geometry/index.js';
 import type { Diagnostic } from '../core/diagnostics.js';
 import { parseXyz } from './xyz.js';
+import { readPlainYaml } from './yaml-plain.js';
 import { compareText, errorText } from '../core/text.js';
 
 /** Default size limit of one YAML file: 1 MiB (a large species file is a few kB). */
@@ -124,6 +125,11 @@ export interface ParseOptions {
    * item; 'single' keeps each YAML document whole (e.g. for a settings file).
    */
   split?: 'species' | 'single';
+  /**
+   * Try the fast reader of plain YAML (`yaml-plain.ts`) first (default true). False always uses the `yaml`
+   * library, so the differential tests can compare the two.
+   */
+  plainFastPath?: boolean;
 }
 
 function err(file: string, code: string, message: string, extra: Partial<Diagnostic> = {}): Diagnostic {
@@ -353,6 +359,13 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
         expected: `at most ${maxNesting} nested lists or mappings`,
       }),
     );
+    return result;
+  }
+  // Species files are nearly always plain YAML, which the fast reader takes at a small part of the
+  // library's cost; it declines anything it is not sure of, and the library reads that below.
+  const plain = opts.plainFastPath === false ? undefined : readPlainYaml(text, displayPath, split);
+  if (plain !== undefined) {
+    result.documents = plain;
     return result;
   }
   let docs: Document.Parsed[];

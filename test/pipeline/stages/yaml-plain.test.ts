@@ -18,7 +18,7 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { seededRandom, syntheticSpecies } from '../../../bench/synthetic.js';
 import { parseYamlText, type LoadedDocument } from '../../../pipeline/stages/load.js';
-import { readPlainYamlForTest } from '../../../pipeline/stages/yaml-plain.js';
+import { DECLINE, plainScalarValue, readPlainYamlForTest } from '../../../pipeline/stages/yaml-plain.js';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
 
@@ -358,6 +358,40 @@ describe('plain YAML reader: hand-written edge cases', () => {
     expect(Object.is(v.b, -0)).toBe(true);
     expect(v.c).toBe(Infinity);
     expect(Object.is(v.d, 0)).toBe(true);
+  });
+
+  it('types every short scalar over a number alphabet as the library does (all strings up to 4 characters, generated)', () => {
+    const alphabet = ['0', '1', '9', '.', '-', '+', 'e', 'E', 'x', 'o', '_', 'n', 'a'];
+    const all: string[] = [];
+    const grow = (s: string): void => {
+      if (s.length > 0) all.push(s);
+      if (s.length < 4) for (const c of alphabet) grow(s + c);
+    };
+    grow('');
+    const failures: string[] = [];
+    let typed = 0;
+    // The library reads them as values of one block mapping per batch; a batch it does not read cleanly
+    // (a value such as `-` alone) is read one value at a time.
+    const libraryValues = (batch: string[]): unknown[] => {
+      const whole = parseYamlText(batch.map((s, i) => `k${i}: ${s}`).join('\n'), 'n.yaml', { plainFastPath: false });
+      if (whole.diagnostics.length === 0) return batch.map((_s, i) => (whole.documents[0]!.value as Record<string, unknown>)[`k${i}`]);
+      return batch.map((s) => {
+        const one = parseYamlText(`k: ${s}`, 'n.yaml', { plainFastPath: false });
+        return one.diagnostics.length === 0 ? (one.documents[0]!.value as { k: unknown }).k : DECLINE;
+      });
+    };
+    for (let b = 0; b < all.length; b += 500) {
+      const batch = all.slice(b, b + 500);
+      const lib = libraryValues(batch);
+      batch.forEach((s, i) => {
+        const v = plainScalarValue(s);
+        if (v === DECLINE || lib[i] === DECLINE) return;
+        typed++;
+        if (!Object.is(v, lib[i])) failures.push(`${s}: ${String(v)} vs ${String(lib[i])}`);
+      });
+    }
+    expect(failures).toEqual([]);
+    expect(typed).toBeGreaterThan(10000);
   });
 
   it('declines what it leaves to the library', () => {

@@ -19,6 +19,10 @@
  * error stays in `diagnostics` and in the document's `yamlErrors`). A syntax error, an alias bomb or a
  * nesting overflow makes the document unreadable: nothing of it is returned.
  *
+ * Plain species files (nearly all of them) are read by the fast reader of `yaml-plain.ts`, which gives the
+ * same documents and positions as the `yaml` library path below and declines anything it is not sure of;
+ * the size and nesting checks run before it, and every declined text goes through the library unchanged.
+ *
  * Symlink policy of `discoverSpeciesFiles`: a symlinked file or folder whose real path lies inside the
  * database folder is followed (each real file is read once); one that resolves OUTSIDE the database folder is
  * refused with an error diagnostic, as is a broken link. Entries whose name starts with '.' are skipped.

@@ -19,6 +19,10 @@
  * error stays in `diagnostics` and in the document's `yamlErrors`). A syntax error, an alias bomb or a
  * nesting overflow makes the document unreadable: nothing of it is returned.
  *
+ * Plain species files (nearly all of them) are read by the fast reader of `yaml-plain.ts`, which gives the
+ * same documents and positions as the `yaml` library path below and declines anything it is not sure of;
+ * the size and nesting checks run before it, and every declined text goes through the library unchanged.
+ *
  * Symlink policy of `discoverSpeciesFiles`: a symlinked file or folder whose real path lies inside the
  * database folder is followed (each real file is read once); one that resolves OUTSIDE the database folder is
  * refused with an error diagnostic, as is a broken link. Entries whose name starts with '.' are skipped.
@@ -42,6 +46,7 @@ import {
 import type { GeometryRow } from '../../src/geometry/index.js';
 import type { Diagnostic } from '../core/diagnostics.js';
 import { parseXyz } from './xyz.js';
+import { readPlainYaml } from './yaml-plain.js';
 import { compareText, errorText } from '../core/text.js';
 
 /** Default size limit of one YAML file: 1 MiB (a large species file is a few kB). */
@@ -124,6 +129,11 @@ export interface ParseOptions {
    * item; 'single' keeps each YAML document whole (e.g. for a settings file).
    */
   split?: 'species' | 'single';
+  /**
+   * Try the fast reader of plain YAML (`yaml-plain.ts`) first (default true). False always uses the `yaml`
+   * library, so the differential tests can compare the two.
+   */
+  plainFastPath?: boolean;
 }
 
 function err(file: string, code: string, message: string, extra: Partial<Diagnostic> = {}): Diagnostic {
@@ -353,6 +363,13 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
         expected: `at most ${maxNesting} nested lists or mappings`,
       }),
     );
+    return result;
+  }
+  // Species files are nearly always plain YAML, which the fast reader takes at a small part of the
+  // library's cost; it declines anything it is not sure of, and the library reads that below.
+  const plain = opts.plainFastPath === false ? undefined : readPlainYaml(text, displayPath, split);
+  if (plain !== undefined) {
+    result.documents = plain;
     return result;
   }
   let docs: Document.Parsed[];

@@ -197,8 +197,13 @@ export const HELP_WIDTH = 80;
  * V8's old-generation growth after each full collection, in percent (V8 flag --heap-growing-percent). By
  * default V8 lets the heap grow to 1.1–4× what survived, and a build's garbage (grids, fit scratch, texts
  * between stages) is what fills it: the resident memory of a build was mostly head-room. 20 % keeps each
- * thread's heap close to what it holds. Measured (2,000 synthetic species, cold --no-cache, 2 threads):
- * peak RSS 325 → 232 MB; CPU time within the noise of a shared machine (see DEVELOPERS.md for the bench).
+ * thread's heap close to what it holds, at the price of more full collections. Measured (synthetic
+ * species, cold --no-cache, 2 threads, V8's own growth → 20 %, alternating runs on the 2-core machine):
+ * 2,000: peak RSS 340 → 232 MB, CPU 19.1–20.0 → 21.8–22.1 s; 10,000: 383 → 249 MB, wall 46.2 → 53.9 s.
+ * The memory bound of the throughput issue (400 MB at 10,000, 500 MB at 50,000) is met only with it, so it
+ * is the default; QFORGE_HEAP_GROWTH=0 buys the speed back. (Much of the price is V8's parallel collector
+ * threads competing with the build's threads for the cores: node --single-threaded-gc bin/qforge.js …
+ * measured 19.4–19.7 s CPU and 245 MB. That flag cannot be set once V8 runs, so it is the user's to give.)
  */
 export const HEAP_GROWING_PERCENT = 20;
 const HEAP_GROWTH_ENV = 'QFORGE_HEAP_GROWTH';

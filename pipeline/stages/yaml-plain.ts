@@ -578,21 +578,36 @@ class PlainReader {
     const shadow: SeqShadow = { start: this.pos, items: [] };
     this.pos++;
     for (;;) {
-      this.flowSpace(owner);
-      const c = t.charCodeAt(this.pos);
-      if (c === CLOSE_SQUARE) break;
-      if (c === COMMA || Number.isNaN(c)) throw DECLINE;
+      if (this.flowItemStart(owner, CLOSE_SQUARE) === undefined) break;
       const item = this.flowItem(owner, depth);
       arr.push(item.value);
       shadow.items.push(item.shadow);
-      this.inlineSpace();
-      const after = t.charCodeAt(this.pos);
-      if (after === CLOSE_SQUARE) break;
-      if (after !== COMMA) throw DECLINE;
-      this.pos++;
+      if (this.flowItemEnd(CLOSE_SQUARE)) break;
     }
     this.pos++;
     return { value: arr, shadow };
+  }
+
+  /**
+   * Before a flow item: the first character of the item, or undefined at the closing bracket `close` (an
+   * empty item — a ',' or the end of the text — declines).
+   */
+  private flowItemStart(owner: number, close: number): number | undefined {
+    this.flowSpace(owner);
+    const c = this.t.charCodeAt(this.pos);
+    if (c === close) return undefined;
+    if (c === COMMA || Number.isNaN(c)) throw DECLINE;
+    return c;
+  }
+
+  /** After a flow item: true at the closing bracket `close`; past its ',' otherwise (anything else declines). */
+  private flowItemEnd(close: number): boolean {
+    this.inlineSpace();
+    const after = this.t.charCodeAt(this.pos);
+    if (after === close) return true;
+    if (after !== COMMA) throw DECLINE;
+    this.pos++;
+    return false;
   }
 
   private flowMapping(owner: number, depth: number): { value: unknown; shadow: Shadow } {
@@ -602,10 +617,8 @@ class PlainReader {
     const shadow: MapShadow = { start: this.pos, keys: [], keyStarts: [], values: [] };
     this.pos++;
     for (;;) {
-      this.flowSpace(owner);
-      const c = t.charCodeAt(this.pos);
-      if (c === CLOSE_CURLY) break;
-      if (c === COMMA || Number.isNaN(c)) throw DECLINE;
+      const c = this.flowItemStart(owner, CLOSE_CURLY);
+      if (c === undefined) break;
       const keyStart = this.pos;
       let key: string;
       if (c === DOUBLE_QUOTE || c === SINGLE_QUOTE) {
@@ -630,11 +643,7 @@ class PlainReader {
       shadow.keys.push(key);
       shadow.keyStarts.push(keyStart);
       shadow.values.push(item.shadow);
-      this.inlineSpace();
-      const after = t.charCodeAt(this.pos);
-      if (after === CLOSE_CURLY) break;
-      if (after !== COMMA) throw DECLINE;
-      this.pos++;
+      if (this.flowItemEnd(CLOSE_CURLY)) break;
     }
     this.pos++;
     return { value: obj, shadow };

@@ -428,14 +428,27 @@ class PlainReader {
 
   /** A value that starts on this line: a flow collection or a one-line scalar. */
   private inlineValue(owner: number, depth: number): { value: unknown; shadow: Shadow } {
-    const t = this.t;
+    return this.collectionOrScalar(owner, depth, false);
+  }
+
+  /** A flow item: a nested flow collection or a one-line scalar, which must not be a key. */
+  private flowItem(owner: number, depth: number): { value: unknown; shadow: Shadow } {
+    return this.collectionOrScalar(owner, depth, true);
+  }
+
+  /**
+   * A flow collection or a one-line scalar at `this.pos`. In block context (`flow` false) a plain scalar must
+   * run to the end of the line (`key: a: b` declines); in a flow collection it must end at `,` or a closing
+   * bracket (a key, `[a: 1]`, or a scalar running to the line end declines).
+   */
+  private collectionOrScalar(owner: number, depth: number, flow: boolean): { value: unknown; shadow: Shadow } {
     const start = this.pos;
-    const c = t.charCodeAt(start);
+    const c = this.t.charCodeAt(start);
     if (c === OPEN_SQUARE) return this.flowSequence(owner, depth + 1);
     if (c === OPEN_CURLY) return this.flowMapping(owner, depth + 1);
     if (c === DOUBLE_QUOTE || c === SINGLE_QUOTE) return { value: this.quoted(), shadow: start };
-    const raw = this.plain(false);
-    if (this.plainStop !== END_LINE) throw DECLINE; // `key: a: b`
+    const raw = this.plain(flow);
+    if (this.plainStop !== (flow ? END_FLOW : END_LINE)) throw DECLINE;
     const value = plainScalarValue(raw);
     if (value === DECLINE) throw DECLINE;
     return { value, shadow: start };
@@ -554,21 +567,6 @@ class PlainReader {
   /** Spaces on the same line. */
   private inlineSpace(): void {
     while (this.t.charCodeAt(this.pos) === SPACE) this.pos++;
-  }
-
-  /** A flow item: a nested flow collection or a one-line scalar, which must not be a key. */
-  private flowItem(owner: number, depth: number): { value: unknown; shadow: Shadow } {
-    const t = this.t;
-    const start = this.pos;
-    const c = t.charCodeAt(start);
-    if (c === OPEN_SQUARE) return this.flowSequence(owner, depth + 1);
-    if (c === OPEN_CURLY) return this.flowMapping(owner, depth + 1);
-    if (c === DOUBLE_QUOTE || c === SINGLE_QUOTE) return { value: this.quoted(), shadow: start };
-    const raw = this.plain(true);
-    if (this.plainStop !== END_FLOW) throw DECLINE; // a key (`[a: 1]`), or a scalar running to the line end
-    const value = plainScalarValue(raw);
-    if (value === DECLINE) throw DECLINE;
-    return { value, shadow: start };
   }
 
   private flowSequence(owner: number, depth: number): { value: unknown; shadow: Shadow } {

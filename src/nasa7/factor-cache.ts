@@ -13,6 +13,7 @@
 import { buildConstraints } from './constraints.js';
 import { designRows } from './design.js';
 import { factorConstrainedProblem, type FactoredProblem } from './solve.js';
+import { sameSampleTemperatures } from './log-temperatures.js';
 import type { FitSample, FitWeights } from './types.js';
 
 /** Enough for a midpoint search of ~40 candidates on two grids (fixed and searched midpoints). */
@@ -46,11 +47,7 @@ let lastKey: { T: Float64Array; key: string } | undefined;
 /** A string identifying the temperatures of a sample list exactly (shortest round-trip decimal of each). */
 export function temperatureKey(samples: readonly FitSample[]): string {
   const last = lastKey;
-  if (last && last.T.length === samples.length) {
-    let same = true;
-    for (let i = 0; i < samples.length && same; i++) same = last.T[i] === samples[i]!.T;
-    if (same) return last.key;
-  }
+  if (last && sameSampleTemperatures(last.T, samples)) return last.key;
   let key = '';
   for (const s of samples) key += `${s.T},`;
   lastKey = { T: Float64Array.from(samples, (s) => s.T), key };

@@ -32,10 +32,16 @@ export function lnOfTemperatures(T: Float64Array): Float64Array {
 /** ln T of every sample, in sample order (see the module comment; do not write to the result). */
 export function lnOfSampleTemperatures(samples: readonly FitSample[]): Float64Array {
   const hit = last;
-  if (hit && hit.T.length === samples.length) {
-    let same = true;
-    for (let i = 0; i < samples.length && same; i++) same = hit.T[i] === samples[i]!.T;
-    if (same) return hit.lnT;
-  }
+  if (hit && sameSampleTemperatures(hit.T, samples)) return hit.lnT;
   return lnOfTemperatures(Float64Array.from(samples, (s) => s.T));
+}
+
+/**
+ * Whether `samples` have exactly the temperatures `remembered` (same length, === per sample): the check of
+ * the per-grid memos (this one, factor-cache.ts `temperatureKey`).
+ */
+export function sameSampleTemperatures(remembered: Float64Array, samples: readonly FitSample[]): boolean {
+  if (remembered.length !== samples.length) return false;
+  for (let i = 0; i < samples.length; i++) if (remembered[i] !== samples[i]!.T) return false;
+  return true;
 }

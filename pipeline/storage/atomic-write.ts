@@ -172,11 +172,23 @@ export async function writeFileAtomic(file: string, data: string | Uint8Array, o
 
 /**
  * `writeFileAtomic` without fsync, synchronously: for the many small entries of the cache, where four
- * thread-pool round trips (open, write, close, rename) cost more than the write itself.
+ * thread-pool round trips (open, write, close, rename) cost more than the write itself. `data` may also be
+ * a function that writes the content into the temporary file's descriptor (a large file copied in chunks);
+ * if it throws, the temporary file is removed and nothing is renamed.
  */
-export function writeFileAtomicNoSync(file: string, data: string | Uint8Array): void {
+export function writeFileAtomicNoSync(file: string, data: string | Uint8Array | ((fd: number) => void)): void {
   const tmp = `${file}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`;
-  writeFileSync(tmp, data, { flag: 'wx' });
+  if (typeof data === 'function') {
+    const fd = openSync(tmp, 'wx');
+    try {
+      data(fd);
+    } catch (err) {
+      closeSync(fd);
+      rmSync(tmp, { force: true });
+      throw err;
+    }
+    closeSync(fd);
+  } else writeFileSync(tmp, data, { flag: 'wx' });
   try {
     renameSync(tmp, file);
   } catch (err) {
@@ -435,6 +447,11 @@ export function fileDigest(file: string): Digest {
   }
 }
 
+/** Writes data[0, length) at the descriptor's position (writeSync may write less than asked). */
+export function writeAll(fd: number, data: Uint8Array, length: number): void {
+  for (let off = 0; off < length; ) off += writeSync(fd, data, off, length - off);
+}
+
 /** Bytes a StagedStream gathers before it writes them (one write per species would cost a system call each). */
 const STREAM_BUFFER = 1 << 20;
 
@@ -451,7 +468,7 @@ function closeOnce(fh: FileHandle): StagedStream {
     const data = Buffer.from(pending.join(''), 'utf8');
     pending = [];
     size = 0;
-    for (let off = 0; off < data.length; ) off += writeSync(fh.fd, data, off, data.length - off);
+    writeAll(fh.fd, data, data.length);
   };
   return {
     write: async (text: string) => {

@@ -26,10 +26,10 @@
  * that did not change, so a no-change rebuild re-encodes nothing.
  */
 import { createHash, randomBytes, type Hash } from 'node:crypto';
-import { closeSync, mkdirSync, openSync, readFileSync, readSync, realpathSync, renameSync, rmSync, writeSync } from 'node:fs';
+import { closeSync, mkdirSync, openSync, readFileSync, readSync, realpathSync, rmSync } from 'node:fs';
 import { mkdir, open } from 'node:fs/promises';
 import path from 'node:path';
-import { writeFileAtomic } from './atomic-write.js';
+import { writeAll, writeFileAtomic, writeFileAtomicNoSync } from './atomic-write.js';
 import { sha256Hex, type Digest } from './hash.js';
 
 export const PACK_FORMAT = 'qforge-pack/1';
@@ -221,7 +221,8 @@ export class PackWriter {
     this.pending = [];
     this.pendingLength = 0;
     this.scratch.hash.update(data);
-    for (let off = 0; off < data.length; ) off += writeSync(this.scratch.fd, data, off, data.length - off, this.scratch.bytes + off);
+    // Appended at the descriptor's position: only this method writes the scratch file (`write` reads it by offset).
+    writeAll(this.scratch.fd, data, data.length);
     this.scratch.bytes += data.length;
   }
 
@@ -241,44 +242,26 @@ export class PackWriter {
    */
   async write(cacheDir: string, id: PackIdentity, context: string, previous?: LoadedPack): Promise<void> {
     try {
-      if (!this.scratch) {
-        const body = Buffer.from(this.pending.join(''), 'utf8');
-        const sha256 = sha256Hex(body);
-        if (previous && previous.body.bytes === body.length && previous.body.hash === sha256) return;
-        const file = packFile(cacheDir, id);
-        await mkdir(path.dirname(file), { recursive: true });
-        await writeFileAtomic(file, Buffer.concat([Buffer.from(`${packHeaderLine(id, context, sha256, body.length)}\n`, 'utf8'), body]), { sync: false });
-        return;
-      }
-      if (this.pending.length > 0) this.spill();
-      const { fd, hash, bytes } = this.scratch;
-      const sha256 = hash.digest('hex');
+      if (this.scratch && this.pending.length > 0) this.spill();
+      const scratch = this.scratch;
+      const inMemory = scratch ? undefined : Buffer.from(this.pending.join(''), 'utf8');
+      const sha256 = inMemory ? sha256Hex(inMemory) : scratch!.hash.digest('hex');
+      const bytes = inMemory ? inMemory.length : scratch!.bytes;
       if (previous && previous.body.bytes === bytes && previous.body.hash === sha256) return;
       const file = packFile(cacheDir, id);
       await mkdir(path.dirname(file), { recursive: true });
-      const tmp = `${file}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`;
-      const out = openSync(tmp, 'wx');
-      try {
-        writeSync(out, `${packHeaderLine(id, context, sha256, bytes)}\n`);
+      const header = Buffer.from(`${packHeaderLine(id, context, sha256, bytes)}\n`, 'utf8');
+      if (inMemory) await writeFileAtomic(file, Buffer.concat([header, inMemory]), { sync: false });
+      else writeFileAtomicNoSync(file, (out) => {
+        writeAll(out, header, header.length);
         const chunk = Buffer.allocUnsafe(1 << 20);
         for (let at = 0; at < bytes; ) {
-          const n = readSync(fd, chunk, 0, Math.min(chunk.length, bytes - at), at);
+          const n = readSync(scratch!.fd, chunk, 0, Math.min(chunk.length, bytes - at), at);
           if (n <= 0) throw new Error(`build pack scratch file ended at ${at} of ${bytes} bytes`);
-          for (let off = 0; off < n; ) off += writeSync(out, chunk, off, n - off);
+          writeAll(out, chunk, n);
           at += n;
         }
-      } catch (e) {
-        closeSync(out);
-        rmSync(tmp, { force: true });
-        throw e;
-      }
-      closeSync(out);
-      try {
-        renameSync(tmp, file);
-      } catch (e) {
-        rmSync(tmp, { force: true });
-        throw e;
-      }
+      });
     } finally {
       this.discard();
     }

@@ -9,7 +9,8 @@
  *   summary.json       the build report (schemas/summary.schema.json); holds timings, so it is the one
  *                      output that differs from run to run
  */
-import { Ajv2020 } from 'ajv/dist/2020.js';
+import type { Ajv2020 } from 'ajv/dist/2020.js';
+import { ajv2020Module } from '../core/lazy-libraries.js';
 import settingsSchema from '../../schemas/settings.schema.json' with { type: 'json' };
 import type { ValidateFunction } from 'ajv';
 import { OUTPUT_AJV_OPTIONS } from '../core/output-schemas.js';
@@ -199,7 +200,7 @@ export function databaseJson(species: readonly BuiltSpecies[], settings: Databas
  * (core/output-schemas.ts); this one compiles the rest on first use (the whole summary of `qforge merge`).
  */
 export function outputAjv(): Ajv2020 {
-  const ajv = new Ajv2020({ ...OUTPUT_AJV_OPTIONS });
+  const ajv = new (ajv2020Module().Ajv2020)({ ...OUTPUT_AJV_OPTIONS });
   ajv.addSchema(settingsSchema);
   return ajv;
 }

@@ -30,19 +30,8 @@
 import { closeSync, openSync, readFileSync, readSync, statSync } from 'node:fs';
 import { readdir, readFile, realpath, stat } from 'node:fs/promises';
 import path from 'node:path';
-import {
-  LineCounter,
-  isAlias,
-  isMap,
-  isPair,
-  isScalar,
-  isSeq,
-  parseAllDocuments,
-  Scalar,
-  visit,
-  type Document,
-  type Node as YamlNode,
-} from 'yaml';
+import type { Document, LineCounter, Node as YamlNode } from 'yaml';
+import { yamlModule } from '../core/lazy-libraries.js';
 import type { GeometryRow } from '../../src/geometry/index.js';
 import type { Diagnostic } from '../core/diagnostics.js';
 import { parseXyz } from './xyz.js';
@@ -200,6 +189,7 @@ const CORE_TAGS = new Set(['str', 'int', 'float', 'bool', 'null', 'map', 'seq'].
  * the text behind the tag. Returns, per duplicate key offset, the line of the kept first key.
  */
 function recoverDocument(doc: Document.Parsed, lc: LineCounter): Map<number, { key: string; firstLine: number }> {
+  const { isMap, isScalar, Scalar, visit } = yamlModule();
   const dropped = new Map<number, { key: string; firstLine: number }>();
   visit(doc, {
     // One visitor for every node: yaml calls a Map-specific visitor instead of Node, which would skip tags.
@@ -247,6 +237,7 @@ function locateIn(
   lc: LineCounter,
   wantKey: boolean,
 ): SourcePosition | undefined {
+  const { isAlias, isMap, isPair, isScalar, isSeq } = yamlModule();
   let node: unknown = root;
   let best = nodeStart(root);
   for (let i = 0; i < segments.length; i++) {
@@ -349,7 +340,6 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
     return result;
   }
 
-  const lc = new LineCounter();
   const maxNesting = opts.maxNesting ?? DEFAULT_MAX_NESTING;
   const overflow = flowNestingOverflow(text, maxNesting);
   if (overflow >= 0) {
@@ -372,6 +362,8 @@ export function parseYamlText(text: string, displayPath: string, opts: ParseOpti
     result.documents = plain;
     return result;
   }
+  const { LineCounter, isSeq, parseAllDocuments } = yamlModule();
+  const lc = new LineCounter();
   let docs: Document.Parsed[];
   try {
     docs = parseAllDocuments(text, {

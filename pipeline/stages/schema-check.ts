@@ -11,7 +11,7 @@
  * ("a number > 0 in cm-1, or {value, unit}"); a `title` on a `then` object names the condition
  * ("structure 'atom'") for messages about fields required or forbidden by it.
  */
-import { Ajv2020 } from 'ajv/dist/2020.js';
+import { ajv2020Module } from '../core/lazy-libraries.js';
 import type { ErrorObject, ValidateFunction } from 'ajv';
 import type { Diagnostic } from '../core/diagnostics.js';
 import { compareText } from '../core/text.js';
@@ -32,7 +32,7 @@ export const INPUT_AJV_OPTIONS = Object.freeze({
 
 /** A validator for `schema` compiled now, with the input options (for schemas not compiled ahead of time). */
 export function createSchemaValidator(schema: object): ValidateFunction {
-  return new Ajv2020({ ...INPUT_AJV_OPTIONS }).compile(schema);
+  return new (ajv2020Module().Ajv2020)({ ...INPUT_AJV_OPTIONS }).compile(schema);
 }
 
 export interface SchemaCheckOptions {

@@ -7,9 +7,12 @@
  * Holds no reference values (no source to name): every comparison is between builds of our own code, on
  * the test fixture databases; the edits below (a comment, a title, a coordinate) are written by hand.
  */
+import { execFileSync } from 'node:child_process';
+import { existsSync } from 'node:fs';
 import { cp, mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import { pathToFileURL } from 'node:url';
 import { Ajv2020 } from 'ajv/dist/2020.js';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import databaseSchema from '../../schemas/database.schema.json' with { type: 'json' };
@@ -90,6 +93,27 @@ describe('no-change rebuild fast path', () => {
     expect(comparable(warm)).toEqual(comparable(cold));
     expect(comparable(none)).toEqual(comparable(cold));
   }, 180_000);
+
+  it('a no-change rebuild loads neither the yaml library nor ajv\'s schema compiler (core/lazy-libraries.ts)', async () => {
+    expect(existsSync(path.join(REPO, 'dist/pipeline/cli.js'))).toBe(true);
+    // A fresh process per build (this one has both loaded) reports which of the two its build required;
+    // `preload` requires both first, to show the probe sees them.
+    const probe = (preload: boolean) =>
+      [
+        "import { createRequire } from 'node:module';",
+        'const require = createRequire(import.meta.url);',
+        preload ? "require('yaml'); require('ajv/dist/2020.js');" : '',
+        `const { main } = await import(${JSON.stringify(pathToFileURL(path.join(REPO, 'dist/pipeline/cli.js')).href)});`,
+        "const code = await main(['build', 'db', '--out', 'out', '-q']);",
+        'const loaded = Object.keys(require.cache);',
+        "process.stdout.write(JSON.stringify({ code, yaml: loaded.some((f) => /[\\/]node_modules[\\/]yaml[\\/]/.test(f)), ajv: loaded.some((f) => /[\\/]ajv[\\/]dist[\\/]2020\\.js$/.test(f)) }));",
+      ].join('\n');
+    const run = (preload = false) =>
+      JSON.parse(execFileSync(process.execPath, ['--input-type=module', '-e', probe(preload)], { cwd: root, encoding: 'utf8', env: { ...process.env, NODE_PATH: path.join(REPO, 'node_modules') } })) as { code: number };
+    expect(run().code).toBe(0); // cold: fills the cache
+    expect(run()).toEqual({ code: 0, yaml: false, ajv: false });
+    expect(run(true)).toEqual({ code: 0, yaml: true, ajv: true });
+  }, 120_000);
 
   it('a changed file misses for its species only; settings, --strict and code changes miss for all', async () => {
     await build('out');

@@ -210,6 +210,12 @@ export interface CheckOptions {
    * file and result keys are computed; with `cache` too, file entries are looked up and stored.
    */
   fastPath?: { context: Record<string, unknown>; cache?: StageCache; pack?: PackIdentity };
+  /**
+   * Species files hashed on another thread (storage/previous-digests.ts): handed the list as soon as the
+   * files are found (always, with no files when there are no keys to compute), then asked for each file's
+   * sha256, which stands for reading it while a stored finding of that key exists.
+   */
+  inputDigests?: { hashInputs(files: readonly string[]): void; inputDigest(file: string): string | undefined };
 }
 
 /**
@@ -271,6 +277,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   const t0 = performance.now();
   const settingsResult = await loadSettings(dir, dir);
   const discovered = await discoverSpeciesFiles(dir);
+  opts.inputDigests?.hashInputs(opts.fastPath ? discovered.files : []);
   const strict = opts.strict === true || settingsResult.settings.strict;
   const policy = createWarningPolicy({
     strict,
@@ -325,14 +332,18 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
 
   // Each file is read, looked up or parsed and validated, and reduced to its findings at once: the YAML tree
   // of a file never outlives its own check.
+  const unreadable = (f: string, diagnostics: Diagnostic[], tl: number): CheckedFile => {
+    const facts: FileFacts = { loadDiagnostics: policy.applyOther(diagnostics), documents: [], recovered: [], settingsUsed: [], geometry: [] };
+    return { file: f, facts, kept: [], loadMs: performance.now() - tl, validateMs: 0 };
+  };
+  const fileKey = (f: string, sha256: string) => hashParts('file', contextHash, f, sha256);
   const checkFile = async (f: string): Promise<CheckedFile> => {
     const tl = performance.now();
-    const read = await readYamlFileBytes(f, f);
-    if (read.bytes === undefined) {
-      const facts: FileFacts = { loadDiagnostics: policy.applyOther(read.diagnostics), documents: [], recovered: [], settingsUsed: [], geometry: [] };
-      return { file: f, facts, kept: [], loadMs: performance.now() - tl, validateMs: 0 };
-    }
-    const key = contextHash !== undefined ? hashParts('file', contextHash, f, sha256Hex(read.bytes)) : undefined;
+    // A digest from the other thread stands for the bytes until a stored finding is missing (then read here).
+    const known = contextHash !== undefined ? opts.inputDigests?.inputDigest(f) : undefined;
+    let read = known === undefined ? await readYamlFileBytes(f, f) : undefined;
+    if (read?.diagnostics !== undefined) return unreadable(f, read.diagnostics, tl);
+    let key = contextHash !== undefined ? fileKey(f, known ?? sha256Hex(read!.bytes!)) : undefined;
     // Stored findings (a build-pack line or a file entry) stand for a fresh check while every geometry file
     // they read still reads the same; 'unparsable' when the text is not the JSON of findings.
     const reuse = async (text: string): Promise<CheckedFile | 'unparsable' | undefined> => {
@@ -363,8 +374,16 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
       }
       if (hit.outcome === 'corrupt') cacheNotes.push(`${show(f)}: cache entry for file rejected (${hit.reason}); checked again`);
     }
+    if (read === undefined) {
+      read = await readYamlFileBytes(f, f);
+      if (read.diagnostics !== undefined) return unreadable(f, read.diagnostics, tl);
+      // The findings below are of the bytes read now, and so is their key (the file may have changed since
+      // the other thread hashed it).
+      key = fileKey(f, sha256Hex(read.bytes));
+    }
+    const bytes = read.bytes!;
     const readMs = performance.now() - tl;
-    const checked = checker ? await checker.checkFile(f, read.bytes, keepAs) : await checkFileBytes(read.bytes, f, policy, keepAs);
+    const checked = checker ? await checker.checkFile(f, bytes, keepAs) : await checkFileBytes(bytes, f, policy, keepAs);
     const { facts } = checked;
     policy.markUsed(facts.settingsUsed);
     const loadMs = readMs + checked.loadMs;
@@ -799,8 +818,9 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   // The validated species wait in a spill file for their turn (name order), not in memory; without a
   // writable temporary folder they wait in memory (the build only needs more of it).
   const spill = await SpillFile.open().catch(() => undefined);
-  // A rebuild into an existing OUT hashes the previous files beside the check (storage/previous-digests.ts).
-  const previous = cacheDir !== undefined && !opts.shard ? PreviousDigests.start(opts.out, ['thermo.json', 'nasa7.txt'], ['tables']) : undefined;
+  // A rebuild into an existing OUT hashes the species files and the previous files beside the check
+  // (storage/previous-digests.ts).
+  const previous = cacheDir !== undefined && !opts.shard ? PreviousDigests.start(opts.out, ['thermo.json', 'nasa7.txt'], ['tables'], true) : undefined;
   try {
     return await buildChecked(opts, t0, notes, cacheDir, cache, spill, previous);
   } finally {
@@ -853,6 +873,7 @@ async function buildChecked(
     check = await checkDatabase({
       ...opts,
       keep: spill ?? 'memory',
+      ...(previous ? { inputDigests: previous } : {}),
       // A shard does not use the build pack (its outputs are merged, not rebuilt in place).
       ...(cacheDir !== undefined ? { fastPath: { context: buildContext(opts), cache, ...(opts.shard ? {} : { pack: packIdentity(opts.dir, opts.out) }) } } : {}),
       checkOn: (c) => {

@@ -5,8 +5,11 @@
  * `fileDigest` the main thread uses, between two lstat calls; a file whose stamp (device, inode, change
  * time) moved while it was read is not reported. Results go out on the given port in chunks; the main
  * thread takes them synchronously (`receiveMessageOnPort`) when it needs one.
+ * With `inputsFirst`, it first waits for the list of species files (the main thread sends it as soon as it
+ * has found them) and hashes those, stamped by stat (species files may be links), so that a rebuild's check
+ * finds each file's key ready; the previous OUT's files follow.
  */
-import { lstatSync, readdirSync } from 'node:fs';
+import { lstatSync, readdirSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { workerData, type MessagePort } from 'node:worker_threads';
 import { fileDigest, stampOf } from '../storage/atomic-write.js';
@@ -18,13 +21,25 @@ export interface DigestWorkerData {
   first: string[];
   /** Folders (relative to root) whose regular files are hashed next, in name order. */
   folders: string[];
+  /** Wait for an `InputsMessage` and hash its files before the previous OUT's. */
+  inputsFirst: boolean;
   port: MessagePort;
+}
+
+/** The species files to hash first (absolute paths). */
+export interface InputsMessage {
+  inputs: string[];
+}
+
+/** Species files hashed (the main thread keeps them apart from the OUT's files). */
+export interface InputRowsMessage {
+  inputRows: DigestRow[];
 }
 
 /** One file hashed: [absolute path, sha256 hex, bytes, stamp]. */
 export type DigestRow = [string, string, number, string];
 
-const { root, first, folders, port } = workerData as DigestWorkerData;
+const { root, first, folders, inputsFirst, port } = workerData as DigestWorkerData;
 const CHUNK = 64;
 let rows: DigestRow[] = [];
 
@@ -33,16 +48,33 @@ const flush = () => {
   rows = [];
 };
 
-function hashOne(file: string): void {
+function hashOne(file: string, into: DigestRow[] = rows, stat: typeof lstatSync = lstatSync): void {
   try {
-    const before = lstatSync(file, { bigint: true });
+    const before = stat(file, { bigint: true });
     if (!before.isFile()) return;
     const d = fileDigest(file);
-    const after = lstatSync(file, { bigint: true });
-    if (stampOf(before) === stampOf(after) && after.size === BigInt(d.bytes)) rows.push([file, d.hash, d.bytes, stampOf(after)]);
+    const after = stat(file, { bigint: true });
+    if (stampOf(before) === stampOf(after) && after.size === BigInt(d.bytes)) into.push([file, d.hash, d.bytes, stampOf(after)]);
   } catch {
     // Gone or unreadable: the main thread finds no digest and looks for itself.
   }
+}
+
+function hashInputs(files: readonly string[]): void {
+  let inputRows: DigestRow[] = [];
+  for (const file of files) {
+    hashOne(file, inputRows, statSync as typeof lstatSync);
+    if (inputRows.length >= CHUNK) {
+      port.postMessage({ inputRows } satisfies InputRowsMessage);
+      inputRows = [];
+    }
+  }
+  if (inputRows.length > 0) port.postMessage({ inputRows } satisfies InputRowsMessage);
+}
+
+if (inputsFirst) {
+  const inputs = await new Promise<string[]>((resolve) => port.once('message', (m: InputsMessage) => resolve(m.inputs)));
+  hashInputs(inputs);
 }
 
 for (const rel of first) {

@@ -1200,7 +1200,7 @@ async function buildChecked(
 
     // Cache problems: once per build for an unwritable cache, one line per species for rejected entries.
     if (cache.writeProblem) warnings.unshift(`cache: not writable: ${cache.dir}: ${cache.writeProblem}; every species is recomputed on each build`);
-    if (cacheDir !== undefined && check.settingsOk && !shard) await recordCacheUse(cacheDir, opts.dir, usedKeys.names()).catch((e) => cache.noteWriteFailure(e));
+    if (cacheDir !== undefined && check.settingsOk && !shard) await recordCacheUse(cacheDir, opts.dir, usedKeys).catch((e) => cache.noteWriteFailure(e));
     // Files whose problems are not tied to a species that validated (syntax errors, invalid documents, …).
     const validKeys = new Set((check.settingsOk ? check.species : []).map((v) => speciesKey(v.displayFile, v.name)));
     const summaryFiles = [...check.fileDiagnostics.entries()]

@@ -11,6 +11,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { CACHE_KINDS } from '../../../pipeline/storage/cache.js';
 import { UsedKeys } from '../../../pipeline/storage/cache-uses.js';
 import { sha256Hex } from '../../../pipeline/storage/hash.js';
+import { compareText } from '../../../pipeline/core/text.js';
 import { FIXTURE_DB, runCli } from '../helpers.js';
 
 let root: string;
@@ -98,5 +99,26 @@ describe('UsedKeys', () => {
       added.push(odd);
     }
     expect(u.names().sort()).toEqual(added.sort());
+  });
+
+  it('listText: every distinct name once, in compareText order, as the sort of the strings gives it', () => {
+    // Keys by our own hash of a counter, with repeats; kind names written by hand, one a prefix of another.
+    const stringBody = (names: string[]) => {
+      const text = [...new Set(names)].sort(compareText).join('\n');
+      return text ? `${text}\n` : '';
+    };
+    const u = new UsedKeys();
+    const added: string[] = [];
+    expect(u.listText().toString()).toBe('');
+    for (let i = 0; i < 3000; i++) {
+      const kind = ['samples', 'fit', 'file', 'fits', 'result', 'table'][i % 6]!;
+      const name = `${kind}/${sha256Hex(String(i % 1700))}`;
+      u.add(name);
+      added.push(name);
+    }
+    expect(u.listText().toString()).toBe(stringBody(added));
+    u.add('odd-name');
+    added.push('odd-name');
+    expect(u.listText().toString()).toBe(stringBody(added));
   });
 });

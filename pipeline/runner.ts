@@ -298,8 +298,19 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
   };
   discovered.diagnostics.forEach(addFileDiag);
 
-  const displayOf = (f: string) => (path.relative(dir, f) || f).split(path.sep).join('/');
-  const show = (f: string) => (opts.displayBase && path.isAbsolute(f) ? displayPath(opts.displayBase, f) : f);
+  // Species files are path.join(dir, normalised relative path) (discoverSpeciesFiles): the part after the
+  // folder's own prefix is what path.relative would give, without resolving both paths per species.
+  const dirPrefix = path.join(dir, path.sep);
+  const relativeOf = (f: string) => (f.startsWith(dirPrefix) && f.length > dirPrefix.length ? f.slice(dirPrefix.length) : path.relative(dir, f) || f);
+  const displayOf = (f: string) => (path.sep === '/' ? relativeOf(f) : relativeOf(f).split(path.sep).join('/'));
+  // Asked per species and per diagnostic of a file: each file's shown path is worked out once.
+  const shown = new Map<string, string>();
+  const show = (f: string) => {
+    if (!opts.displayBase || !path.isAbsolute(f)) return f;
+    let d = shown.get(f);
+    if (d === undefined) shown.set(f, (d = displayPath(opts.displayBase, f)));
+    return d;
+  };
   const settingsFileShown = settingsResult.file !== undefined ? show(settingsResult.file) : undefined;
   const checker = opts.checkOn?.({
     settings: settingsResult.settings,

@@ -74,11 +74,26 @@ export function workerEntry(): URL {
   return here.endsWith('.ts') ? new URL('../../dist/pipeline/workers/species-worker.js', here) : new URL('./species-worker.js', here);
 }
 
-/** Deterministic batches: name order, sizes depending only on the count and `jobs`. */
+/**
+ * Species of the last batches, as a multiple of the threads: they come in quarter-size batches, so that
+ * the threads run out of work at nearly the same time (with full batches of 32 species, ~0.3 s of one
+ * thread, the last one alone left the other threads idle for up to that long).
+ */
+const TAIL_BATCHES_PER_THREAD = 4;
+
+/**
+ * Deterministic batches: name order, sizes depending only on the count and `jobs` (the species of the
+ * last TAIL_BATCHES_PER_THREAD · jobs full batches in quarter-size ones).
+ */
 export function batchesOf<T>(items: readonly T[], jobs: number): T[][] {
   const size = Math.max(1, Math.min(32, Math.ceil(items.length / (jobs * 8))));
+  const small = Math.max(1, Math.ceil(size / 4));
+  // Full batches up to a multiple of their size, the rest small.
+  const tailFrom = Math.max(0, Math.floor((items.length - TAIL_BATCHES_PER_THREAD * Math.max(1, jobs) * size) / size) * size);
   const out: T[][] = [];
-  for (let i = 0; i < items.length; i += size) out.push(items.slice(i, i + size));
+  let i = 0;
+  for (; i < tailFrom; i += size) out.push(items.slice(i, i + size));
+  for (; i < items.length; i += small) out.push(items.slice(i, i + small));
   return out;
 }
 

@@ -62,6 +62,11 @@ describe('worker pool', () => {
       expect(b.flat()).toEqual(items);
       expect(batchesOf(items, jobs)).toEqual(b);
     }
+    // 2,000 species on two threads: batches of 32, then the last 272 (at least 8 · 32) in batches of 8.
+    const many = Array.from({ length: 2000 }, (_, i) => i);
+    const sizes = batchesOf(many, 2).map((x) => x.length);
+    expect(batchesOf(many, 2).flat()).toEqual(many);
+    expect(sizes).toEqual([...Array(54).fill(32), ...Array(34).fill(8)]);
   });
 
   it('a crashing worker fails its batch with a clear error and the pool goes on (no hang)', async () => {

@@ -167,6 +167,11 @@ const scratch: Record<ScratchName, Float64Array> = {
 };
 type ScratchName = 'T' | 'cpR' | 'hRT' | 'sR' | 'checkT' | 'checkCp' | 'insideT' | 'insideCp' | 'dataT' | 'dataCp';
 
+/** A copy of the first n doubles of a scratch column (for tests: what the last check wrote there). */
+export function scratchView(name: 'checkT' | 'dataT' | 'dataCp', n: number): Float64Array {
+  return scratch[name].slice(0, n);
+}
+
 /** A scratch column of at least n doubles (its contents are whatever the last user left: write before reading). */
 function scratchColumn(name: ScratchName, n: number): Float64Array {
   if (scratch[name].length < n) scratch[name] = new Float64Array(Math.max(n, 2 * scratch[name].length));
@@ -422,8 +427,9 @@ export function samplesInRange(poly: Nasa7Polynomial, samples: readonly FitSampl
  * `checkTemperatures` written into the scratch column checkT (the same doubles in the same order, by the
  * same steps: the even steps, then each of tLow, tMid, tHigh inserted at its first index ≥ it unless there);
  * returns their count. Inputs that make `checkTemperatures` push and sort take that function itself.
+ * Exported for the same-doubles test (with `scratchView`).
  */
-function checkTemperaturesIntoScratch(from: number, to: number, n: number, poly: Nasa7Polynomial): number {
+export function checkTemperaturesIntoScratch(from: number, to: number, n: number, poly: Nasa7Polynomial): number {
   const extra0 = poly.tLow, extra1 = poly.tMid, extra2 = poly.tHigh; // prettier-ignore
   // n is NaN when the span is not finite: then no even step, as in checkTemperatures' loop.
   let ts = scratchColumn('checkT', (n >= 0 ? n : 0) + 4);
@@ -461,9 +467,9 @@ function checkTemperaturesIntoScratch(from: number, to: number, n: number, poly:
 /**
  * `samplesInRange` with T and Cp/R written into the scratch columns dataT and dataCp (the same doubles in
  * the same order); returns the count, least Cp/R and max Cp error. Samples not in ascending T take
- * `samplesInRange` itself (its sort).
+ * `samplesInRange` itself (its sort). Exported for the same-doubles test (with `scratchView`).
  */
-function samplesInRangeIntoScratch(poly: Nasa7Polynomial, samples: readonly FitSample[]): { count: number; leastCp: number; maxCpError: number } {
+export function samplesInRangeIntoScratch(poly: Nasa7Polynomial, samples: readonly FitSample[]): { count: number; leastCp: number; maxCpError: number } {
   let T = scratchColumn('dataT', samples.length);
   let cpR = scratchColumn('dataCp', samples.length);
   let count = 0;

@@ -11,7 +11,7 @@
  * and hence give the same numbers at shared points. One evaluator serves the samples and the zone: building
  * the level lists (rotor eigenvalues, diatomic levels) is most of a species' compute cost.
  */
-import { T_REF } from '../../src/constants.js';
+import { GAS_CONSTANT, T_REF } from '../../src/constants.js';
 import type { ModelSummary, PhysicsOptions, Species, StandardProperties, ThermoEvaluator, ThermoGrid } from '../../src/model.js';
 import type { FitSample } from '../../src/nasa7/types.js';
 import { createThermoEvaluator } from '../../src/thermo/evaluator.js';
@@ -63,7 +63,10 @@ interface Evaluated {
   standardPressure: number;
   ev: ThermoEvaluator;
   values: ThermoGrid;
-  index: Map<number, number>;
+  /** Number of sampling temperatures (values.T[0, samples)); values.T[samples] is T_REF, the zone follows. */
+  samples: number;
+  /** Whether the sampling and zone parts of values.T are each non-decreasing (then searched by bisection). */
+  ascending: boolean;
 }
 
 const recent: Evaluated[] = [];
@@ -75,11 +78,9 @@ function evaluatorCeiling(temperatures: ArrayLike<number>): number {
   return CEILINGS.find((c) => c >= max) ?? max;
 }
 
-function evaluatorFor(species: Species, physics: PhysicsOptions, temperatures: readonly number[]): ThermoEvaluator {
+function evaluatorFor(species: Species, physics: PhysicsOptions, temperatures: ArrayLike<number>): ThermoEvaluator {
   return createThermoEvaluator(species, physics, { maxTemperature: evaluatorCeiling(temperatures) });
 }
-
-const toSample = (p: StandardProperties): FitSample => ({ T: p.T, cpR: p.cpR, hRT: p.hRT, sR: p.sR });
 
 function assertFinite(p: StandardProperties): void {
   for (const k of ['Cp', 'S', 'HminusH298', 'H', 'G', 'cpR', 'hRT', 'sR'] as const) {
@@ -94,6 +95,29 @@ function propertiesAt(ev: ThermoEvaluator, values: ThermoGrid, j: number): Stand
   return p;
 }
 
+/**
+ * The fit sample at grid index j: T, cpR, hRT, sR of `propertiesAt` without its object of nine fields (the
+ * same expressions as properties.ts `standardPropertiesOf`, so the same doubles), after the same checks.
+ * Every quantity `assertFinite` looks at is formed here too; when one fails, `propertiesAt` builds the
+ * object and throws exactly its error.
+ */
+function sampleAt(ev: ThermoEvaluator, values: ThermoGrid, j: number): FitSample {
+  const R = GAS_CONSTANT;
+  const T = values.T[j]!;
+  const cp = values.cp[j]!;
+  const s = values.s[j]!;
+  const hMinusH298Exact = R * T * values.hmh0[j]! - ev.h298MinusH0;
+  const H = ev.enthalpyOfFormation298 + hMinusH298Exact;
+  const S = R * s;
+  const Cp = R * cp;
+  const hRT = H / (R * T);
+  // Cp and S are finite exactly when cp and s are (R is finite and non-zero); H − H298 and H likewise
+  // after dividing by 1000; G = (H − T S)/1000.
+  const ok = Cp > 0 && Number.isFinite(Cp) && Number.isFinite(S) && Number.isFinite(hMinusH298Exact / 1000) && Number.isFinite(H / 1000) && Number.isFinite((H - T * S) / 1000) && Number.isFinite(cp) && Number.isFinite(hRT) && Number.isFinite(s);
+  if (!ok) propertiesAt(ev, values, j);
+  return { T, cpR: cp, hRT, sR: s };
+}
+
 export function computeSamples(
   species: Species,
   physics: PhysicsOptions,
@@ -102,28 +126,65 @@ export function computeSamples(
 ): ComputedSpecies {
   // Samples, the anchor and the zone in one grid evaluation of one evaluator (each temperature's numbers
   // depend on that temperature and the level lists alone, so they are those of separate evaluations).
-  const all = [...temperatures, T_REF, ...zoneTemperatures];
-  const ev = evaluatorFor(species, physics, all);
   const n = temperatures.length;
+  const all = new Float64Array(n + 1 + zoneTemperatures.length);
+  for (let j = 0; j < n; j++) all[j] = temperatures[j]!;
+  all[n] = T_REF;
+  for (let j = 0; j < zoneTemperatures.length; j++) all[n + 1 + j] = zoneTemperatures[j]!;
+  const ev = evaluatorFor(species, physics, all);
   const values = ev.grid(all);
   const samples: FitSample[] = new Array<FitSample>(n);
-  for (let j = 0; j < n; j++) samples[j] = toSample(propertiesAt(ev, values, j));
+  for (let j = 0; j < n; j++) samples[j] = sampleAt(ev, values, j);
   const at298 = propertiesAt(ev, values, n);
   const extrapolationSamples: FitSample[] = new Array<FitSample>(zoneTemperatures.length);
-  for (let j = 0; j < zoneTemperatures.length; j++) extrapolationSamples[j] = toSample(propertiesAt(ev, values, n + 1 + j));
-  const index = new Map<number, number>();
-  for (let j = 0; j < values.T.length; j++) if (!index.has(values.T[j]!)) index.set(values.T[j]!, j);
+  for (let j = 0; j < zoneTemperatures.length; j++) extrapolationSamples[j] = sampleAt(ev, values, n + 1 + j);
   if (recent.length >= MEMO_SIZE) recent.shift();
-  recent.push({ species, standardPressure: physics.standardPressure, ev, values, index });
+  const ascending = nonDecreasing(values.T, 0, n) && nonDecreasing(values.T, n + 1, values.T.length);
+  recent.push({ species, standardPressure: physics.standardPressure, ev, values, samples: n, ascending });
   return {
     samples,
     extrapolationSamples,
-    anchor: toSample(at298),
+    anchor: { T: at298.T, cpR: at298.cpR, hRT: at298.hRT, sR: at298.sR },
     at298,
     h298MinusH0: ev.h298MinusH0,
     enthalpyOfFormation298: ev.enthalpyOfFormation298,
     summary: ev.summary,
   };
+}
+
+function nonDecreasing(T: Float64Array, from: number, to: number): boolean {
+  for (let j = from + 1; j < to; j++) if (!(T[j - 1]! <= T[j]!)) return false;
+  return true;
+}
+
+/** First index of T in values.T[from, to) (non-decreasing when `sorted`), or −1. */
+function firstIndexIn(values: Float64Array, T: number, from: number, to: number, sorted: boolean): number {
+  if (!sorted) {
+    for (let j = from; j < to; j++) if (values[j] === T) return j;
+    return -1;
+  }
+  // First index whose value is ≥ T.
+  let lo = from;
+  let hi = to;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (values[mid]! < T) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo < to && values[lo] === T ? lo : -1;
+}
+
+/**
+ * The first index of T in the remembered grid (what a Map from each temperature to its first index gives:
+ * the sampling part comes first, then T_REF, then the zone), or −1 when T is not on it.
+ */
+function indexOnGrid(known: Evaluated, T: number): number {
+  const t = known.values.T;
+  const n = known.samples;
+  const inSamples = firstIndexIn(t, T, 0, n, known.ascending);
+  if (inSamples >= 0) return inSamples;
+  if (t[n] === T) return n;
+  return firstIndexIn(t, T, n + 1, t.length, known.ascending);
 }
 
 /**
@@ -133,8 +194,10 @@ export function computeSamples(
 export function computeTable(species: Species, physics: PhysicsOptions, temperatures: readonly number[]): StandardProperties[] {
   const known = recent.find((r) => r.species === species && r.standardPressure === physics.standardPressure);
   const sameCeiling = known !== undefined && evaluatorCeiling(temperatures) === evaluatorCeiling(known.values.T);
-  if (known && sameCeiling && temperatures.every((T) => known.index.has(T))) {
-    return temperatures.map((T) => propertiesAt(known.ev, known.values, known.index.get(T)!));
+  if (known && sameCeiling) {
+    let onGrid = true;
+    for (let j = 0; j < temperatures.length && onGrid; j++) onGrid = indexOnGrid(known, temperatures[j]!) >= 0;
+    if (onGrid) return temperatures.map((T) => propertiesAt(known.ev, known.values, indexOnGrid(known, T)));
   }
   const ev = sameCeiling ? known!.ev : evaluatorFor(species, physics, temperatures);
   const values = ev.grid(temperatures);

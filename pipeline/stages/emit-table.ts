@@ -141,8 +141,16 @@ function putDigits(v: number): void {
   at += len;
 }
 
-/** Appends `fixed(x, decimals)`: the same fast path (see there for why it is exact), written as bytes. */
-function putFixed(x: number, decimals: number): void {
+/**
+ * The cells of the row being written, by column (T first). Cells are handed to `putCell` as indices into
+ * this array, not as numbers: a double passed to a function that is not inlined is boxed, and the table
+ * writer made one such box per cell (~15 KB per species, measured).
+ */
+const row = new Float64Array(TABLE_HEADERS.length);
+
+/** Appends `fixed(row[cell], decimals)`: the same fast path (see there for why it is exact), written as bytes. */
+function putFixed(cell: number, decimals: number): void {
+  const x = row[cell]!;
   const n = exactlyScaled(x, decimals);
   if (n !== n) {
     putAscii(fixedByToFixed(x, decimals));
@@ -163,17 +171,18 @@ function putFixed(x: number, decimals: number): void {
   at += decimals;
 }
 
-/** Appends a separator and `fixed(x, decimals)`. */
-function putCell(x: number, decimals: number): void {
+/** Appends a separator and `fixed(row[cell], decimals)`. */
+function putCell(cell: number, decimals: number): void {
   room(1);
   bytes[at++] = COMMA;
-  putFixed(x, decimals);
+  putFixed(cell, decimals);
 }
 
 /**
  * The data lines of tables/<name>.csv, written cell by cell into the byte buffer (no array per row, no
  * object per point, no string per cell): the same arithmetic as `fittedProperties` at each table
- * temperature, every cell a decimal number (`fixed`, String of T), so none needs CSV quoting.
+ * temperature (evaluate.ts `evaluateRange`'s expressions, written out), every cell a decimal number
+ * (`fixed`, String of T), so none needs CSV quoting.
  */
 function renderTableBody(b: TableSource): string {
   const poly = b.fit.polynomial;
@@ -182,18 +191,25 @@ function renderTableBody(b: TableSource): string {
   at = 0;
   for (const c of b.table) {
     const T = c.T;
-    const v = evaluateNasa7(poly, T);
-    const H = (v.hRT * R * T) / 1000;
-    const S = v.sR * R;
-    const Cp = v.cpR * R;
+    const k = T <= poly.tMid ? poly.low : poly.high;
+    const a1 = k[0], a2 = k[1], a3 = k[2], a4 = k[3], a5 = k[4], a6 = k[5], a7 = k[6]; // prettier-ignore
+    const cpR = a1 + T * (a2 + T * (a3 + T * (a4 + T * a5)));
+    const hRT = a1 + T * (a2 / 2 + T * (a3 / 3 + T * (a4 / 4 + T * (a5 / 5)))) + a6 / T;
+    const sR = a1 * Math.log(T) + T * (a2 + T * (a3 / 2 + T * (a4 / 3 + T * (a5 / 4)))) + a7;
+    const H = (hRT * R * T) / 1000;
+    const S = sR * R;
+    const Cp = cpR * R;
     const dH298 = H - H298;
     const G = H - (T * S) / 1000;
     putAscii(String(T));
-    putCell(c.Cp, 4); putCell(Cp, 4); putCell(Cp - c.Cp, 4);
-    putCell(c.S, 4); putCell(S, 4); putCell(S - c.S, 4);
-    putCell(c.HminusH298, 5); putCell(dH298, 5); putCell(dH298 - c.HminusH298, 5);
-    putCell(c.H, 5); putCell(H, 5); putCell(H - c.H, 5);
-    putCell(c.G, 5); putCell(G, 5); putCell(G - c.G, 5);
+    row[1] = c.Cp; row[2] = Cp; row[3] = Cp - c.Cp;
+    row[4] = c.S; row[5] = S; row[6] = S - c.S;
+    row[7] = c.HminusH298; row[8] = dH298; row[9] = dH298 - c.HminusH298;
+    row[10] = c.H; row[11] = H; row[12] = H - c.H;
+    row[13] = c.G; row[14] = G; row[15] = G - c.G;
+    for (let cell = 1; cell <= 3; cell++) putCell(cell, 4);
+    for (let cell = 4; cell <= 6; cell++) putCell(cell, 4);
+    for (let cell = 7; cell <= 15; cell++) putCell(cell, 5);
     room(1);
     bytes[at++] = NEWLINE;
   }

@@ -16,7 +16,9 @@ export interface Nasa7Values {
 
 /** Cp/R, H/RT, S/R of one coefficient set at T (K), Horner form. */
 export function evaluateRange(c: Readonly<Coefficients7>, T: number): Nasa7Values {
-  const [a1, a2, a3, a4, a5, a6, a7] = c;
+  // Indexed reads, not array destructuring: destructuring goes through the array iterator, whose result
+  // objects unoptimised code allocates on every call.
+  const a1 = c[0], a2 = c[1], a3 = c[2], a4 = c[3], a5 = c[4], a6 = c[5], a7 = c[6]; // prettier-ignore
   const cpR = a1 + T * (a2 + T * (a3 + T * (a4 + T * a5)));
   const hRT = a1 + T * (a2 / 2 + T * (a3 / 3 + T * (a4 / 4 + T * (a5 / 5)))) + a6 / T;
   const sR = a1 * Math.log(T) + T * (a2 + T * (a3 / 2 + T * (a4 / 3 + T * (a5 / 4)))) + a7;

@@ -82,7 +82,7 @@ function hornerQuotients(c: Readonly<Coefficients7>) {
 }
 
 function worstOfRange(c: Readonly<Coefficients7>, p: PreparedSamples, from: number, to: number, worst: number): number {
-  const [a1, a2, a3, a4, a5, a6, a7] = c;
+  const a1 = c[0]!, a2 = c[1]!, a3 = c[2]!, a4 = c[3]!, a5 = c[4]!, a6 = c[5]!, a7 = c[6]!; // prettier-ignore
   const { h2, h3, h4, h5, s3, s4, s5 } = hornerQuotients(c);
   for (let i = from; i < to; i++) {
     const T = p.T[i]!;
@@ -182,7 +182,7 @@ function solverOf(p: PreparedSamples, fit: PreparedFit, options: FitOptions): Un
 
 /** metrics.ts `rangeMetrics` of samples [from, to), same arithmetic (evaluate.ts's Horner forms). */
 function rangeMetricsPrepared(c: Readonly<Coefficients7>, p: PreparedSamples, from: number, to: number): RangeMetrics {
-  const [a1, a2, a3, a4, a5, a6, a7] = c;
+  const a1 = c[0]!, a2 = c[1]!, a3 = c[2]!, a4 = c[3]!, a5 = c[4]!, a6 = c[5]!, a7 = c[6]!; // prettier-ignore
   const { h2, h3, h4, h5, s3, s4, s5 } = hornerQuotients(c);
   let mc = 0, mh = 0, ms = 0, qc = 0, qh = 0, qs = 0, tc = NaN, th = NaN, ts = NaN; // prettier-ignore
   for (let i = from; i < to; i++) {

@@ -275,7 +275,7 @@ function residuals(y: Float64Array, h: Float64Array, sA: number, b: Float64Array
   if (scratchR.length < nr) scratchR = new Float64Array(nr);
   const out = scratchR;
   if (k === 8) {
-    const [t0, t1, t2, t3, t4, t5, t6, t7] = t as unknown as [number, number, number, number, number, number, number, number];
+    const t0 = t[0]!, t1 = t[1]!, t2 = t[2]!, t3 = t[3]!, t4 = t[4]!, t5 = t[5]!, t6 = t[6]!, t7 = t[7]!; // prettier-ignore
     for (let row = 0; row < nr; row++) {
       const o = row * 8;
       let r = y[row]! - sA * h[row]!;

@@ -54,20 +54,25 @@ const byScore = (a: { score: number }, b: { score: number }) => (a.score < b.sco
 /**
  * Visits every candidate tMid = min, min + step, … ≤ max with least-squares options at it; a candidate whose
  * visit throws a FitError is skipped. Throws when no candidate was scored (naming the first failure).
- * Returns the number of candidates tried.
+ * Returns the number of candidates tried. With `shared`, every visit gets the same options object with
+ * its tMid set to the candidate's (one object per search instead of one per candidate): only for visitors
+ * that keep no reference to it.
  */
 function scanCandidates(
   range: NonNullable<FitOptions['optimiseMid']>,
   options: FitOptions,
   scored: ReadonlyArray<unknown>,
   visit: (tMid: number, at: FitOptions) => void,
+  shared = false,
 ): number {
   let firstError: unknown;
   const count = Math.floor((range.max - range.min) / range.step + 1e-9) + 1;
+  const one: FitOptions | undefined = shared ? { ...options, method: 'least-squares' as const } : undefined;
   for (let i = 0; i < count; i++) {
     const tMid = range.min + i * range.step;
     try {
-      visit(tMid, { ...options, tMid, method: 'least-squares' as const });
+      if (one) one.tMid = tMid;
+      visit(tMid, one ?? { ...options, tMid, method: 'least-squares' as const });
     } catch (e) {
       if (!(e instanceof FitError)) throw e;
       firstError ??= e;
@@ -175,7 +180,8 @@ function optimisePrepared(p: PreparedSamples, options: FitOptions, range: NonNul
     const entry: RankEntry = { tMid, split, f: preparedFactorisation(p, at, temperatures, split), score: NaN };
     entries.push(entry);
     scored.push(entry);
-  });
+    // Neither splitAt, preparedFactorisation nor leastSquaresScore keeps `at`: the options can be shared.
+  }, true);
   rankLeastSquares(p, entries, options, minimax ? MINIMAX_CANDIDATES - 1 : 1, minimax ? 'limitRatio' : 'weighted');
   const ranked = [...scored].sort(byScore);
   let best: PreparedFit | undefined;

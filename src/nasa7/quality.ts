@@ -147,16 +147,63 @@ function cpAt(poly: Nasa7Polynomial, T: number): number {
   return cpOf(T <= poly.tMid ? poly.low : poly.high, T);
 }
 
+/**
+ * Scratch columns of the checks (sample columns, check temperatures, the fit's Cp/R there, the points
+ * inside the range, the samples in range): module-level and grown as needed, each written in full up to
+ * the length a check uses before it reads them, and never kept past one call. One check runs at a time
+ * (no check calls another while it holds a column it still reads, except as noted where they nest).
+ */
+const scratch: Record<ScratchName, Float64Array> = {
+  T: new Float64Array(0),
+  cpR: new Float64Array(0),
+  hRT: new Float64Array(0),
+  sR: new Float64Array(0),
+  checkT: new Float64Array(0),
+  checkCp: new Float64Array(0),
+  insideT: new Float64Array(0),
+  insideCp: new Float64Array(0),
+  dataT: new Float64Array(0),
+  dataCp: new Float64Array(0),
+};
+type ScratchName = 'T' | 'cpR' | 'hRT' | 'sR' | 'checkT' | 'checkCp' | 'insideT' | 'insideCp' | 'dataT' | 'dataCp';
+
+/** A copy of the first n doubles of a scratch column (for tests: what the last check wrote there). */
+export function scratchView(name: 'checkT' | 'dataT' | 'dataCp', n: number): Float64Array {
+  return scratch[name].slice(0, n);
+}
+
+/** A scratch column of at least n doubles (its contents are whatever the last user left: write before reading). */
+function scratchColumn(name: ScratchName, n: number): Float64Array {
+  if (scratch[name].length < n) scratch[name] = new Float64Array(Math.max(n, 2 * scratch[name].length));
+  return scratch[name];
+}
+
 /** Rule 1 (see the module comment); exported for the same-doubles test, like shapeChecks. */
 export function errorChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
   // ln T of every sample, shared between species on one grid (log-temperatures.ts: Math.log's doubles).
   const lnT = lnOfSampleTemperatures(samples);
   // The parts of the three limits (limits.ts `limitAt`: max(absolute, perCp · Cp/R), the same call).
   const absC = tol.cp, perC = tol.perCp.cp, absH = tol.h, perH = tol.perCp.h, absS = tol.s, perS = tol.perCp.s; // prettier-ignore
-  for (const range of ['low', 'high'] as const) {
-    const [from, to] = range === 'low' ? [poly.tLow, poly.tMid] : [poly.tMid, poly.tHigh];
-    const coeffs = range === 'low' ? poly.low : poly.high;
-    const [a1, a2, a3, a4, a5, a6, a7] = coeffs;
+  // The samples as columns (scratch, written here in full): the loop below then reads doubles from typed
+  // arrays, not boxed fields of sample objects (it allocated ~50 bytes per sample before).
+  const n = samples.length;
+  const colT = scratchColumn('T', n);
+  const colCp = scratchColumn('cpR', n);
+  const colH = scratchColumn('hRT', n);
+  const colS = scratchColumn('sR', n);
+  for (let i = 0; i < n; i++) {
+    const smp = samples[i]!;
+    colT[i] = smp.T;
+    colCp[i] = smp.cpR;
+    colH[i] = smp.hRT;
+    colS[i] = smp.sR;
+  }
+  for (let r = 0; r < 2; r++) {
+    const range = r === 0 ? 'low' : 'high';
+    const from = r === 0 ? poly.tLow : poly.tMid;
+    const to = r === 0 ? poly.tMid : poly.tHigh;
+    const coeffs = r === 0 ? poly.low : poly.high;
+    const a1 = coeffs[0], a2 = coeffs[1], a3 = coeffs[2], a4 = coeffs[3], a5 = coeffs[4], a6 = coeffs[5], a7 = coeffs[6]; // prettier-ignore
     // evaluate.ts evaluateRange's quotients, formed once (the same doubles at every T).
     const h2 = a2 / 2, h3 = a3 / 3, h4 = a4 / 4, h5 = a5 / 5, s3 = a3 / 2, s4 = a4 / 3, s5 = a5 / 4; // prettier-ignore
     // Worst error relative to its limit, per quantity (cp, h, s): ratio, error, T, computed Cp/R. The first
@@ -164,16 +211,17 @@ export function errorChecks(poly: Nasa7Polynomial, samples: readonly FitSample[]
     let rc = -1, ec = 0, tc = NaN, cc = NaN; // prettier-ignore
     let rh = -1, eh = 0, th = NaN, ch = NaN; // prettier-ignore
     let rs = -1, es = 0, ts = NaN, cs = NaN; // prettier-ignore
-    for (let i = 0; i < samples.length; i++) {
-      const smp = samples[i]!;
-      const T = smp.T;
+    for (let i = 0; i < n; i++) {
+      const T = colT[i]!;
       if (!(T >= from && T <= to)) continue;
-      const c = smp.cpR;
+      const c = colCp[i]!;
+      // Errors are |·| (≥ 0 or NaN), so `x < Infinity` is Number.isFinite(x); written so because
+      // `Number.isFinite(x) ? x : Infinity` made the optimised loop box x (~50 bytes per sample, measured).
       const cpR = a1 + T * (a2 + T * (a3 + T * (a4 + T * a5)));
       const hRT = a1 + T * (h2 + T * (h3 + T * (h4 + T * h5))) + a6 / T;
       const sR = a1 * lnT[i]! + T * (a2 + T * (s3 + T * (s4 + T * s5))) + a7;
       const xc = Math.abs(cpR - c);
-      const yc = Number.isFinite(xc) ? xc : Infinity;
+      const yc = xc < Infinity ? xc : Infinity;
       const qc = yc / Math.max(absC, perC * c);
       if (qc > rc || Number.isNaN(tc)) {
         rc = qc;
@@ -181,8 +229,8 @@ export function errorChecks(poly: Nasa7Polynomial, samples: readonly FitSample[]
         tc = T;
         cc = c;
       }
-      const xh = Math.abs(hRT - smp.hRT);
-      const yh = Number.isFinite(xh) ? xh : Infinity;
+      const xh = Math.abs(hRT - colH[i]!);
+      const yh = xh < Infinity ? xh : Infinity;
       const qh = yh / Math.max(absH, perH * c);
       if (qh > rh || Number.isNaN(th)) {
         rh = qh;
@@ -190,8 +238,8 @@ export function errorChecks(poly: Nasa7Polynomial, samples: readonly FitSample[]
         th = T;
         ch = c;
       }
-      const xs = Math.abs(sR - smp.sR);
-      const ys = Number.isFinite(xs) ? xs : Infinity;
+      const xs = Math.abs(sR - colS[i]!);
+      const ys = xs < Infinity ? xs : Infinity;
       const qs = ys / Math.max(absS, perS * c);
       if (qs > rs || Number.isNaN(ts)) {
         rs = qs;
@@ -271,7 +319,7 @@ function continuityChecks(result: FitResult, tol: FitTolerances, out: FitViolati
 }
 
 /** Temperatures of the reversals of v(T) under a hysteresis of amplitude delta (zigzag filter). */
-export function hysteresisReversals(ts: readonly number[], vs: readonly number[], delta: number): number[] {
+export function hysteresisReversals(ts: ArrayLike<number>, vs: ArrayLike<number>, delta: number): number[] {
   const reversals: number[] = [];
   let dir = 0;
   let hiV = -Infinity;
@@ -375,25 +423,105 @@ export function samplesInRange(poly: Nasa7Polynomial, samples: readonly FitSampl
   return { T: data.map((s) => s.T), cpR: data.map((s) => s.cpR), leastCp, maxCpError };
 }
 
+/**
+ * `checkTemperatures` written into the scratch column checkT (the same doubles in the same order, by the
+ * same steps: the even steps, then each of tLow, tMid, tHigh inserted at its first index ≥ it unless there);
+ * returns their count. Inputs that make `checkTemperatures` push and sort take that function itself.
+ * Exported for the same-doubles test (with `scratchView`).
+ */
+export function checkTemperaturesIntoScratch(from: number, to: number, n: number, poly: Nasa7Polynomial): number {
+  const extra0 = poly.tLow, extra1 = poly.tMid, extra2 = poly.tHigh; // prettier-ignore
+  // n is NaN when the span is not finite: then no even step, as in checkTemperatures' loop.
+  let ts = scratchColumn('checkT', (n >= 0 ? n : 0) + 4);
+  let ascending = Number.isFinite(extra0) && Number.isFinite(extra1) && Number.isFinite(extra2);
+  let count = 0;
+  for (let i = 0; i <= n; i++) {
+    const T = from + ((to - from) * i) / n;
+    ts[i] = T;
+    ascending &&= Number.isFinite(T) && (i === 0 || ts[i - 1]! <= T);
+    count++;
+  }
+  if (!ascending) {
+    const general = checkTemperatures(from, to, n, poly);
+    ts = scratchColumn('checkT', general.length);
+    for (let i = 0; i < general.length; i++) ts[i] = general[i]!;
+    return general.length;
+  }
+  for (let k = 0; k < 3; k++) {
+    const T = k === 0 ? extra0 : k === 1 ? extra1 : extra2;
+    let lo = 0;
+    let hi = count;
+    while (lo < hi) {
+      const mid = (lo + hi) >>> 1;
+      if (ts[mid]! < T) lo = mid + 1;
+      else hi = mid;
+    }
+    if (lo < count && ts[lo] === T) continue;
+    ts.copyWithin(lo + 1, lo, count);
+    ts[lo] = T;
+    count++;
+  }
+  return count;
+}
+
+/**
+ * `samplesInRange` with T and Cp/R written into the scratch columns dataT and dataCp (the same doubles in
+ * the same order); returns the count, least Cp/R and max Cp error. Samples not in ascending T take
+ * `samplesInRange` itself (its sort). Exported for the same-doubles test (with `scratchView`).
+ */
+export function samplesInRangeIntoScratch(poly: Nasa7Polynomial, samples: readonly FitSample[]): { count: number; leastCp: number; maxCpError: number } {
+  let T = scratchColumn('dataT', samples.length);
+  let cpR = scratchColumn('dataCp', samples.length);
+  let count = 0;
+  let leastCp = Infinity;
+  let sorted = true;
+  for (let i = 0; i < samples.length; i++) {
+    const smp = samples[i]!;
+    const t = smp.T;
+    const c = smp.cpR;
+    if (!(t >= poly.tLow && t <= poly.tHigh)) continue;
+    if (c < leastCp) leastCp = c;
+    if (count > 0 && !(T[count - 1]! <= t)) sorted = false;
+    T[count] = t;
+    cpR[count] = c;
+    count++;
+  }
+  if (!sorted) {
+    const general = samplesInRange(poly, samples);
+    T = scratchColumn('dataT', general.T.length);
+    cpR = scratchColumn('dataCp', general.T.length);
+    for (let i = 0; i < general.T.length; i++) {
+      T[i] = general.T[i]!;
+      cpR[i] = general.cpR[i]!;
+    }
+    return { count: general.T.length, leastCp: general.leastCp, maxCpError: general.maxCpError };
+  }
+  let maxCpError = 0;
+  for (let i = 0; i < count; i++) maxCpError = Math.max(maxCpError, Math.abs(cpAt(poly, T[i]!) - cpR[i]!));
+  return { count, leastCp, maxCpError };
+}
+
 /** Rules 3–5 (see the module comment). */
 export function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[], tol: FitTolerances, out: FitViolation[]): void {
   const from = Math.max(poly.tLow - tol.extrapolationBelow, 1);
   const to = poly.tHigh + tol.extrapolation;
   const n = Math.max(2, Math.ceil((to - from) / 5));
-  const ts = checkTemperatures(from, to, n, poly);
-  // Cp/R of the fit at every ts, evaluated once and reused by every check below.
-  const cps = new Float64Array(ts.length);
-  for (let i = 0; i < ts.length; i++) cps[i] = cpAt(poly, ts[i]!);
+  // The check temperatures and the fit's Cp/R at each, evaluated once and reused by every check below
+  // (scratch columns: this call writes them first and nothing it calls writes them).
+  const count = checkTemperaturesIntoScratch(from, to, n, poly);
+  const ts = scratch.checkT;
+  const cps = scratchColumn('checkCp', count);
+  for (let i = 0; i < count; i++) cps[i] = cpAt(poly, ts[i]!);
 
   let positive: FitViolation | undefined;
   let floor: FitViolation | undefined;
   // The samples in [tLow, tHigh] in ascending T (T and Cp/R), their least Cp/R (the first of equals), and
   // the fit's max |ΔCp/R| over them, in one pass.
-  const data = samplesInRange(poly, samples);
+  const data = samplesInRangeIntoScratch(poly, samples);
   const leastData = data.leastCp;
   const floorBase = Math.min(tol.cpFloor, leastData);
   const floorLimit = floorBase - limitAt({ absolute: tol.cp, perCp: tol.perCp.cp }, floorBase);
-  for (let i = 0; i < cps.length; i++) {
+  for (let i = 0; i < count; i++) {
     const cp = cps[i]!;
     const T = ts[i]!;
     if (!(cp > 0) && !positive) {
@@ -412,23 +540,25 @@ export function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[]
   if (positive) out.push(positive);
   else if (floor) out.push(floor);
 
-  const inside: number[] = [];
-  const insideCp: number[] = [];
-  for (let i = 0; i < ts.length; i++) {
+  const inside = scratchColumn('insideT', count);
+  const insideCp = scratchColumn('insideCp', count);
+  let insideCount = 0;
+  for (let i = 0; i < count; i++) {
     const T = ts[i]!;
     if (T >= poly.tLow && T <= poly.tHigh) {
-      inside.push(T);
-      insideCp.push(cps[i]!);
+      inside[insideCount] = T;
+      insideCp[insideCount] = cps[i]!;
+      insideCount++;
     }
   }
   const maxCpError = data.maxCpError;
   const delta = Math.max(tol.smoothness, 2 * maxCpError);
-  const dataRev = hysteresisReversals(data.T, data.cpR, delta);
+  const dataRev = hysteresisReversals(scratch.dataT.subarray(0, data.count), scratch.dataCp.subarray(0, data.count), delta);
   // A fit within ±E of the data can deepen a data reversal just below δ (not counted there) by up to 2E;
   // a fit reversal is therefore extra only beyond δ + 2E. (Found on minimax fits of O2 and HO2, whose
   // computed Cp/R has a 0.018-deep maximum near 5000–5500 K: the fit turned back by 0.044 with E = 0.013.)
   const fitDelta = delta + 2 * maxCpError;
-  const fitRev = hysteresisReversals(inside, insideCp, fitDelta);
+  const fitRev = hysteresisReversals(inside.subarray(0, insideCount), insideCp.subarray(0, insideCount), fitDelta);
   if (fitRev.length > dataRev.length) {
     const distance = (T: number) => (dataRev.length ? Math.min(...dataRev.map((d) => Math.abs(d - T))) : Infinity);
     const extra = [...fitRev].sort((a, b) => distance(b) - distance(a) || a - b).slice(0, fitRev.length - dataRev.length).sort((a, b) => a - b);
@@ -451,24 +581,31 @@ export function shapeChecks(poly: Nasa7Polynomial, samples: readonly FitSample[]
     const coeffs = end === 'low' ? poly.low : poly.high;
     // Direction of Cp/R when walking outward from the end (+1 rising, −1 falling, 0 flat → either way).
     const slope = outward * cpDerivative(coeffs, tEnd);
-    // Indices into ts (ts ascending and duplicate-free, so walking outward is a walk over indices).
-    const zone: number[] = [];
-    for (let i = 0; i < ts.length; i++) if (end === 'low' ? ts[i]! < tEnd && ts[i]! >= from : ts[i]! > tEnd && ts[i]! <= to) zone.push(i);
-    if (end === 'low') zone.reverse();
+    // Walking outward over ts (ascending and duplicate-free, so walking outward is a walk over indices):
+    // downward from the end below tLow, upward above tHigh.
     let best = cpOf(coeffs, tEnd);
     let bestT = tEnd;
-    let worst = { retreat: 0, T: tEnd, turn: tEnd };
-    for (const i of zone) {
+    let worstRetreat = 0;
+    let worstT = tEnd;
+    let worstTurn = tEnd;
+    const dir = slope >= 0 ? 1 : -1;
+    for (let k = 0; k < count; k++) {
+      const i = end === 'low' ? count - 1 - k : k;
       const T = ts[i]!;
+      if (!(end === 'low' ? T < tEnd && T >= from : T > tEnd && T <= to)) continue;
       const cp = cps[i]!;
-      const dir = slope >= 0 ? 1 : -1;
       if (dir * (cp - best) > 0) {
         best = cp;
         bestT = T;
       }
       const retreat = dir * (best - cp);
-      if (slope !== 0 && retreat > worst.retreat) worst = { retreat, T, turn: bestT };
+      if (slope !== 0 && retreat > worstRetreat) {
+        worstRetreat = retreat;
+        worstT = T;
+        worstTurn = bestT;
+      }
     }
+    const worst = { retreat: worstRetreat, T: worstT, turn: worstTurn };
     // Scaled like the error limits: a large molecule's fit may bend by more in absolute terms.
     const turnLimit = Math.max(tol.extrapolationSmoothness, tol.perCp.cp * cpOf(coeffs, tEnd));
     if (worst.retreat > turnLimit) {

@@ -45,7 +45,7 @@ export function d2cpBasis(tau: number): number[] {
 
 /** Coefficients of τ → coefficients of T (exact for a1..a6, one rounding in a7). */
 export function unscaleCoefficients(b: readonly number[]): Coefficients7 {
-  const [b1, b2, b3, b4, b5, b6, b7] = b as [number, number, number, number, number, number, number];
+  const b1 = b[0]!, b2 = b[1]!, b3 = b[2]!, b4 = b[3]!, b5 = b[4]!, b6 = b[5]!, b7 = b[6]!; // prettier-ignore
   return [
     b1,
     b2 / T_SCALE,

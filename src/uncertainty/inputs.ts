@@ -44,7 +44,9 @@ export function uncertainInputs(species: Species): PerturbableInput[] {
   };
 
   if (species.structure === 'linear' || species.structure === 'nonlinear') {
-    species.vibrations.forEach((v, i) => {
+    // Each loop below runs only when its uncertainty is declared: otherwise `add` would refuse every entry,
+    // and the names and closures it was handed (one per vibration) were garbage for every species.
+    if (u.vibrations !== undefined || u.vibrationsRelative !== undefined) species.vibrations.forEach((v, i) => {
       const sd = u.vibrations?.[i] ?? (u.vibrationsRelative !== undefined ? u.vibrationsRelative * v.wavenumber : undefined);
       add(`vibration[${i}]`, v.wavenumber, sd, 'cm-1', relativeInAllParts(v.wavenumber, (p) => {
         const x = p.vibrations[i];
@@ -54,17 +56,17 @@ export function uncertainInputs(species: Species): PerturbableInput[] {
     add('scale_factor', 1, u.scaleFactorRelative, '', (sp, d) => {
       for (const p of parts(sp as Polyatomic)) for (const x of p.vibrations) x.wavenumber *= 1 + d;
     });
-    species.rotationalConstants.forEach((b, j) => {
+    if (u.rotationalConstantsRelative !== undefined) species.rotationalConstants.forEach((b, j) => {
       add(`rotational_constant[${j}]`, b, u.rotationalConstantsRelative !== undefined ? u.rotationalConstantsRelative * b : undefined, 'cm-1',
         relativeInAllParts(b, (p) => (p.rotationalConstants[j] !== undefined ? { get: () => p.rotationalConstants[j]!, set: (w) => (p.rotationalConstants[j] = w) } : undefined)));
     });
-    (species.internalRotors ?? []).forEach((r, k) => {
+    if (u.barriersRelative !== undefined) (species.internalRotors ?? []).forEach((r, k) => {
       add(`barrier[${k}]`, r.barrier, u.barriersRelative !== undefined ? u.barriersRelative * r.barrier : undefined, 'cm-1', (sp, d) => {
         const rotor = (sp as Polyatomic).internalRotors![k]!;
         rotor.barrier = Math.max(0, rotor.barrier + d);
       });
     });
-    (species.anharmonicity?.x ?? []).forEach(([i, j, x], k) => {
+    if (u.anharmonicRelative !== undefined) (species.anharmonicity?.x ?? []).forEach(([i, j, x], k) => {
       add(`x[${i},${j}]`, x, u.anharmonicRelative !== undefined ? u.anharmonicRelative * Math.abs(x) : undefined, 'cm-1', (sp, d) => {
         (sp as Polyatomic).anharmonicity!.x[k]![2] += d;
       });
@@ -74,6 +76,7 @@ export function uncertainInputs(species: Species): PerturbableInput[] {
     // States that repeat the same constant (e.g. the two spin-orbit components of one term) share one
     // physical value: they move together, as one input named after all of them.
     const shared = (key: 'we' | 'Be' | 'wexe', rel: number | undefined, label: string) => {
+      if (rel === undefined) return; // `add` would refuse every group
       const groups = new Map<number, number[]>();
       species.electronicStates.forEach((st, m) => groups.set(st[key], [...(groups.get(st[key]) ?? []), m]));
       for (const [value, members] of groups) {
@@ -86,11 +89,11 @@ export function uncertainInputs(species: Species): PerturbableInput[] {
     shared('we', u.vibrationsRelative, 'we');
     shared('Be', u.rotationalConstantsRelative, 'Be');
     shared('wexe', u.anharmonicRelative, 'wexe');
-    species.electronicStates.forEach((st, m) => {
+    if (u.electronicEnergies !== undefined) species.electronicStates.forEach((st, m) => {
       if (st.energy > 0) add(`Te[${st.term}]`, st.energy, u.electronicEnergies, 'cm-1', (sp, d) => ((sp as typeof species).electronicStates[m]!.energy += d));
     });
   } else {
-    species.electronicLevels.forEach((l, k) => {
+    if (u.electronicEnergies !== undefined) species.electronicLevels.forEach((l, k) => {
       if (l.energy > 0) {
         add(`electronic_level[${k}]`, l.energy, u.electronicEnergies, 'cm-1', (sp, d) => {
           const level = (sp as Polyatomic).electronicLevels[k]!;

@@ -39,10 +39,19 @@ export function propagateUncertainty(species: Species, physics: Partial<PhysicsO
     }
     return point;
   };
+  // The band needs u(Cp°) alone: the same sum in the same order as pointAt's, without its contributor lists.
+  const cpAt = (k: number): number => {
+    let sum = 0;
+    for (let i = 0; i < inputs.length; i++) {
+      const contribution = Math.abs(values[i]![k]!.cp) * inputs[i]!.u;
+      sum = sum + contribution * contribution;
+    }
+    return Math.sqrt(sum);
+  };
   const result: SpeciesUncertainty = {
     inputs: inputs.map((inp, i) => ({ name: inp.name, value: inp.value, u: inp.u, unit: inp.unit, method: methods[i]! })),
     points: options.temperatures.map((T, k) => pointAt(k, T)),
-    cpBand: band.map((T, j) => ({ T, u: pointAt(options.temperatures.length + j, T).cp })),
+    cpBand: band.map((T, j) => ({ T, u: cpAt(options.temperatures.length + j) })),
   };
   if (options.monteCarlo && options.monteCarlo.samples > 1 && inputs.length > 0) {
     result.monteCarlo = monteCarlo(species, physics, inputs, options.temperatures, options.monteCarlo.samples, options.monteCarlo.seed);

@@ -3,8 +3,8 @@
  * (test/fixtures/nasa7/reference-forms.ts, the code as it stood before): the pipelined Householder solve
  * and the Lawson weight update of minimax.ts, the unrolled band sums of solve.ts, the bound of ls-rank.ts,
  * the remembered option keys of factor-cache.ts and logarithms of log-temperatures.ts, and the error and
- * shape checks of quality.ts. Equality is bit for bit (every double's IEEE-754 bit pattern, so −0 ≠ +0 and
- * NaN payloads aside every NaN equals NaN). Data: the seeded synthetic set of
+ * shape checks of quality.ts (their scratch-column forms included). Equality is bit for bit (every double's
+ * IEEE-754 bit pattern, so −0 ≠ +0 and NaN payloads aside every NaN equals NaN). Data: the seeded synthetic set of
  * test/fixtures/nasa7/synthetic-set.ts (our own generator) on closed-form rigid-rotor/harmonic data
  * (synthetic.ts), propane (Shimanouchi 1972, fundamentals from memory), a constructed n-hexadecane, and
  * seeded random matrices written here (mulberry32, bench/synthetic.ts).
@@ -21,7 +21,18 @@ import { boundAt } from '../../../src/nasa7/ls-rank.js';
 import { minimaxReduced, weightedSolve } from '../../../src/nasa7/minimax.js';
 import { normaliseFitOptions } from '../../../src/nasa7/options.js';
 import { prepareSamples, rangeLists, splitAt } from '../../../src/nasa7/prepared.js';
-import { checkTemperatures, DEFAULT_FIT_TOLERANCES, errorChecks, samplesInRange, shapeChecks, type FitTolerances, type FitViolation } from '../../../src/nasa7/quality.js';
+import {
+  checkTemperatures,
+  checkTemperaturesIntoScratch,
+  DEFAULT_FIT_TOLERANCES,
+  errorChecks,
+  samplesInRange,
+  samplesInRangeIntoScratch,
+  scratchView,
+  shapeChecks,
+  type FitTolerances,
+  type FitViolation,
+} from '../../../src/nasa7/quality.js';
 import { solveFactoredParts, type FactoredProblem } from '../../../src/nasa7/solve.js';
 import type { FitResult, FitSample, Nasa7Polynomial } from '../../../src/nasa7/types.js';
 import {
@@ -282,6 +293,9 @@ describe('quality.ts', () => {
       reference.sort((a, b) => a - b);
       const poly = { tLow, tMid, tHigh, low: [0, 0, 0, 0, 0, 0, 0], high: [0, 0, 0, 0, 0, 0, 0] } as unknown as Nasa7Polynomial;
       expect(bits(checkTemperatures(from, to, n, poly)), `${from} ${to} ${n} ${tLow} ${tMid} ${tHigh}`).toStrictEqual(bits(reference));
+      // The scratch-column form shapeChecks uses: the same doubles, written over whatever the last call left.
+      const count = checkTemperaturesIntoScratch(from, to, n, poly);
+      expect(bits(scratchView('checkT', count)), `scratch ${from} ${to} ${n} ${tLow} ${tMid} ${tHigh}`).toStrictEqual(bits(reference));
     }
   });
 
@@ -304,6 +318,9 @@ describe('quality.ts', () => {
       for (const s of sorted) maxCpError = Math.max(maxCpError, Math.abs(cpAt(s.T) - s.cpR));
       const got = samplesInRange(poly, list);
       expect(bitsDeep(got)).toStrictEqual(bitsDeep({ T: sorted.map((s) => s.T), cpR: sorted.map((s) => s.cpR), leastCp, maxCpError }));
+      const c = samplesInRangeIntoScratch(poly, list);
+      const scratchForm = { T: [...scratchView('dataT', c.count)], cpR: [...scratchView('dataCp', c.count)], leastCp: c.leastCp, maxCpError: c.maxCpError };
+      expect(bitsDeep(scratchForm)).toStrictEqual(bitsDeep({ T: sorted.map((s) => s.T), cpR: sorted.map((s) => s.cpR), leastCp, maxCpError }));
     }
   });
 

@@ -133,6 +133,16 @@ describe('propagation', () => {
     expect(u.cpBand).toEqual([{ T: 500, u: 0 }, { T: 1500, u: 0 }]);
   });
 
+  it('the u(Cp°) band is the u(Cp°) of the reported points, bit for bit (summed without contributor lists)', () => {
+    const temperatures = [T_REF, 450.5, 1000, 2000, 3333.3];
+    const u = propagateUncertainty(waterLike(), physics, { temperatures, bandTemperatures: temperatures });
+    expect(u.inputs.length).toBeGreaterThan(3);
+    const view = new DataView(new ArrayBuffer(8));
+    const bits = (x: number) => (view.setFloat64(0, x), view.getBigUint64(0));
+    expect(u.cpBand.map((b) => bits(b.u))).toEqual(u.points.map((p) => bits(p.cp)));
+    expect(u.cpBand.map((b) => b.T)).toEqual(temperatures);
+  });
+
   it('names the three largest contributors, largest first; u(H°) adds the formation enthalpy, u(H°−H°298) does not', () => {
     const u = propagateUncertainty(waterLike(), physics, { temperatures: [T_REF, 1000, 2000] });
     const p = u.points[1]!;

@@ -32,7 +32,8 @@ function entry(): URL {
 
 export class PreviousDigests {
   private readonly known = new Map<string, { digest: Digest; stamp: string }>();
-  private readonly inputs = new Map<string, { digest: Digest; stamp: string }>();
+  /** sha256 hex of each species file the helper hashed. */
+  private readonly inputs = new Map<string, string>();
   private inputsSent = false;
   private done = false;
   private stopped = false;
@@ -78,7 +79,7 @@ export class PreviousDigests {
     return k !== undefined && k.stamp === stamp ? k.digest : undefined;
   }
 
-  /** Hands the helper the species files (absolute paths) to hash before the OUT's files; once only. */
+  /** Hands the helper the species files (as the check names them) to hash before the OUT's files; once only. */
   hashInputs(files: readonly string[]): void {
     if (this.inputsSent || this.stopped) return;
     this.inputsSent = true;
@@ -98,7 +99,7 @@ export class PreviousDigests {
       this.drain();
       k = this.inputs.get(file);
     }
-    return k?.digest.hash;
+    return k;
   }
 
   private drain(): void {
@@ -109,9 +110,8 @@ export class PreviousDigests {
         this.done = true;
         return;
       }
-      const rows = Array.isArray(m.message) ? (m.message as DigestRow[]) : (m.message as InputRowsMessage).inputRows;
-      const into = Array.isArray(m.message) ? this.known : this.inputs;
-      for (const [file, hash, bytes, stamp] of rows) into.set(file, { digest: { hash, bytes }, stamp });
+      if (Array.isArray(m.message)) for (const [file, hash, bytes, stamp] of m.message as DigestRow[]) this.known.set(file, { digest: { hash, bytes }, stamp });
+      else for (const [file, hash] of (m.message as InputRowsMessage).inputRows) this.inputs.set(file, hash);
     }
   }
 

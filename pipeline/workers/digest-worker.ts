@@ -9,7 +9,7 @@
  * has found them) and hashes those, stamped by stat (species files may be links), so that a rebuild's check
  * finds each file's key ready; the previous OUT's files follow.
  */
-import { lstatSync, readdirSync, statSync } from 'node:fs';
+import { lstatSync, readdirSync, statSync, type StatSyncFn } from 'node:fs';
 import path from 'node:path';
 import { workerData, type MessagePort } from 'node:worker_threads';
 import { fileDigest, stampOf } from '../storage/atomic-write.js';
@@ -26,7 +26,7 @@ export interface DigestWorkerData {
   port: MessagePort;
 }
 
-/** The species files to hash first (absolute paths). */
+/** The species files to hash first (as the check names them). */
 export interface InputsMessage {
   inputs: string[];
 }
@@ -42,39 +42,35 @@ export type DigestRow = [string, string, number, string];
 const { root, first, folders, inputsFirst, port } = workerData as DigestWorkerData;
 const CHUNK = 64;
 let rows: DigestRow[] = [];
+/** While the species files are hashed: their rows go out as an `InputRowsMessage`. */
+let hashingInputs = false;
 
 const flush = () => {
-  if (rows.length > 0) port.postMessage(rows);
+  if (rows.length > 0) port.postMessage(hashingInputs ? ({ inputRows: rows } satisfies InputRowsMessage) : rows);
   rows = [];
 };
 
-function hashOne(file: string, into: DigestRow[] = rows, stat: typeof lstatSync = lstatSync): void {
+function hashOne(file: string, stat: StatSyncFn = lstatSync): void {
   try {
     const before = stat(file, { bigint: true });
     if (!before.isFile()) return;
     const d = fileDigest(file);
     const after = stat(file, { bigint: true });
-    if (stampOf(before) === stampOf(after) && after.size === BigInt(d.bytes)) into.push([file, d.hash, d.bytes, stampOf(after)]);
+    if (stampOf(before) === stampOf(after) && after.size === BigInt(d.bytes)) rows.push([file, d.hash, d.bytes, stampOf(after)]);
   } catch {
     // Gone or unreadable: the main thread finds no digest and looks for itself.
   }
 }
 
-function hashInputs(files: readonly string[]): void {
-  let inputRows: DigestRow[] = [];
-  for (const file of files) {
-    hashOne(file, inputRows, statSync as typeof lstatSync);
-    if (inputRows.length >= CHUNK) {
-      port.postMessage({ inputRows } satisfies InputRowsMessage);
-      inputRows = [];
-    }
-  }
-  if (inputRows.length > 0) port.postMessage({ inputRows } satisfies InputRowsMessage);
-}
-
 if (inputsFirst) {
   const inputs = await new Promise<string[]>((resolve) => port.once('message', (m: InputsMessage) => resolve(m.inputs)));
-  hashInputs(inputs);
+  hashingInputs = true;
+  for (const file of inputs) {
+    hashOne(file, statSync);
+    if (rows.length >= CHUNK) flush();
+  }
+  flush();
+  hashingInputs = false;
 }
 
 for (const rel of first) {

@@ -61,10 +61,7 @@ export class UsedKeys {
    * strings: a numeric sort, native copies and one hex encoding per kind).
    */
   listText(): Buffer {
-    if (this.other.length > 0 || [...this.byKind.values()].some((k) => k.count > MAX_SORTED_KEYS)) {
-      const body = [...new Set(this.names())].sort().join('\n');
-      return Buffer.from(body ? `${body}\n` : '');
-    }
+    if (this.other.length > 0 || [...this.byKind.values()].some((k) => k.count > MAX_SORTED_KEYS)) return sortedListText(this.names());
     const kinds = [...this.byKind.keys()].sort((a, b) => compareText(`${a}/`, `${b}/`));
     const parts: string[] = [];
     for (const kind of kinds) {
@@ -75,8 +72,7 @@ export class UsedKeys {
       let distinct = 0;
       for (let r = 0; r < count; r++) {
         const i = order[r]!;
-        const p = r > 0 ? order[r - 1]! : -1;
-        if (p >= 0 && bytes.readUInt32BE(i * 32) === bytes.readUInt32BE(p * 32) && bytes.compare(bytes, i * 32, i * 32 + 32, p * 32, p * 32 + 32) === 0) continue;
+        if (r > 0 && compareKeys(bytes, i, order[r - 1]!) === 0) continue;
         bytes.copy(sorted, distinct++ * 32, i * 32, i * 32 + 32);
       }
       const hex = sorted.toString('hex', 0, distinct * 32);
@@ -97,8 +93,18 @@ export class UsedKeys {
   }
 }
 
+/** The use-list body of `names` as strings: distinct, sorted, each on its own line. */
+function sortedListText(names: readonly string[]): Buffer {
+  // The default sort compares UTF-16 code units, as compareText does, without a call per comparison.
+  const text = [...new Set(names)].sort().join('\n');
+  return Buffer.from(text ? `${text}\n` : '');
+}
+
 /** Keys per kind that `sortedKeyOrder` can order (its index takes 20 bits of a double). */
 const MAX_SORTED_KEYS = 2 ** 20;
+
+/** Byte order of the a-th and b-th 32-byte keys of `bytes`. */
+const compareKeys = (bytes: Buffer, a: number, b: number) => bytes.compare(bytes, a * 32, a * 32 + 32, b * 32, b * 32 + 32);
 
 /**
  * Indices of the `count` 32-byte keys in `bytes` in ascending byte order. Each key's first four bytes and
@@ -112,10 +118,9 @@ function sortedKeyOrder(bytes: Buffer, count: number): Int32Array {
   packed.sort();
   const order = new Int32Array(count);
   for (let r = 0; r < count; r++) order[r] = packed[r]! % MAX_SORTED_KEYS;
-  const whole = (a: number, b: number) => bytes.compare(bytes, a * 32, a * 32 + 32, b * 32, b * 32 + 32);
   for (let r = 1; r < count; r++) {
     // Insertion within a run of equal first words (the run before r is already in order).
-    for (let q = r; q > 0 && Math.floor(packed[q - 1]! / MAX_SORTED_KEYS) === Math.floor(packed[r]! / MAX_SORTED_KEYS) && whole(order[q - 1]!, order[q]!) > 0; q--) {
+    for (let q = r; q > 0 && Math.floor(packed[q - 1]! / MAX_SORTED_KEYS) === Math.floor(packed[r]! / MAX_SORTED_KEYS) && compareKeys(bytes, order[q - 1]!, order[q]!) > 0; q--) {
       const t = order[q]!;
       order[q] = order[q - 1]!;
       order[q - 1] = t;
@@ -128,13 +133,7 @@ function sortedKeyOrder(bytes: Buffer, count: number): Int32Array {
 export async function recordCacheUse(cacheDir: string, databaseDir: string, keys: readonly string[] | UsedKeys): Promise<void> {
   const { id, real } = await databaseId(databaseDir);
   await mkdir(path.join(cacheDir, USES), { recursive: true });
-  let body: Buffer;
-  if (keys instanceof UsedKeys) body = keys.listText();
-  else {
-    // The default sort compares UTF-16 code units, as compareText does, without a call per comparison.
-    const text = [...new Set(keys)].sort().join('\n');
-    body = Buffer.from(text ? `${text}\n` : '');
-  }
+  const body = keys instanceof UsedKeys ? keys.listText() : sortedListText(keys);
   await writeFileAtomic(path.join(cacheDir, USES, id), Buffer.concat([Buffer.from(`${real}\n`), body]), { sync: false });
 }
 

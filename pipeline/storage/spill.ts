@@ -6,7 +6,7 @@
  * `close`.
  * Reads and writes are synchronous calls on the file's descriptor behind the asynchronous methods: a value
  * is a few KB in the page cache, and a thread-pool round trip per value cost more than the copy itself
- * (~6 % of the main thread's time of a cold build, two per species).
+ * (two per species; a few per cent of the main thread's time of a cold build in profiles on a loaded machine).
  */
 import { readSync, writeSync } from 'node:fs';
 import { mkdtemp, open, rm, type FileHandle } from 'node:fs/promises';

@@ -378,15 +378,11 @@ class PlainReader {
     const t = this.t;
     const at = this.pos;
     const c = t.charCodeAt(at);
-    let q: number;
     if (c === DOUBLE_QUOTE || c === SINGLE_QUOTE) {
       this.quoted();
-      q = this.pos;
-      while (t.charCodeAt(q) === SPACE) q++;
+      const q = this.spacesEnd(this.pos);
       this.pos = at;
-      if (t.charCodeAt(q) !== COLON) return false;
-      const next = t.charCodeAt(q + 1);
-      return next === SPACE || next === NEWLINE || q + 1 >= this.n;
+      return this.keyColonAt(q);
     }
     this.plain(false);
     this.pos = at;
@@ -404,8 +400,7 @@ class PlainReader {
     let key: string;
     if (c === DOUBLE_QUOTE || c === SINGLE_QUOTE) {
       key = this.quoted();
-      let q = this.pos;
-      while (t.charCodeAt(q) === SPACE) q++;
+      const q = this.spacesEnd(this.pos);
       if (t.charCodeAt(q) !== COLON) throw DECLINE;
       this.pos = q;
     } else {
@@ -415,11 +410,22 @@ class PlainReader {
       key = raw;
     }
     this.checkKey(key, start);
-    // this.pos is at the ':'; a space, the end of the line or of the text follows it.
-    const next = t.charCodeAt(this.pos + 1);
-    if (!(next === SPACE || next === NEWLINE || this.pos + 1 >= this.n)) throw DECLINE;
+    if (!this.keyColonAt(this.pos)) throw DECLINE;
     this.pos++;
     return key;
+  }
+
+  /** The first position at or after `from` that is not a space. */
+  private spacesEnd(from: number): number {
+    while (this.t.charCodeAt(from) === SPACE) from++;
+    return from;
+  }
+
+  /** Whether `at` holds a key's ':' — one followed by a space, the end of the line or of the text. */
+  private keyColonAt(at: number): boolean {
+    if (this.t.charCodeAt(at) !== COLON) return false;
+    const next = this.t.charCodeAt(at + 1);
+    return next === SPACE || next === NEWLINE || at + 1 >= this.n;
   }
 
   private checkKey(key: string, start: number): void {

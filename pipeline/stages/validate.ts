@@ -46,7 +46,7 @@ import {
 } from './validate-anharmonic.js';
 import { checkConformerSet } from './validate-conformers.js';
 import { checkElectron } from './validate-electron.js';
-import { compareText } from '../core/text.js';
+import { compareText, sortedKeys } from '../core/text.js';
 import { normaliseMolecularPart } from './validate-molecule.js';
 import { energy, fmt, isFiniteNumber, isObj, isPositiveInteger, rotational, type FindingExtra, type Obj, type Segment } from './validate-values.js';
 import { readUncertainties } from './uncertainty-input.js';
@@ -199,7 +199,7 @@ function sortKeysDeep(v: unknown): unknown {
   if (Array.isArray(v)) return v.map(sortKeysDeep);
   if (isObj(v)) {
     const out: Obj = {};
-    for (const k of Object.keys(v).sort()) if (v[k] !== undefined) out[k] = sortKeysDeep(v[k]);
+    for (const k of sortedKeys(v)) if (v[k] !== undefined) out[k] = sortKeysDeep(v[k]);
     return out;
   }
   return v;

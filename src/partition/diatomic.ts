@@ -121,11 +121,42 @@ export function higherOrderTermsOf(state: DiatomicState): string[] {
 /** Every bound level of every state, before any σ or nuclear-spin factor is applied. */
 interface EnumeratedLevels {
   /** cm⁻¹ above the ground-state potential minimum. */
-  energies: number[];
+  energies: Float64Array;
   /** g_el·(2J+1). */
-  weights: number[];
-  evenJ: boolean[];
+  weights: Float64Array;
+  /** 1 for even J, 0 for odd. */
+  evenJ: Uint8Array;
   states: DiatomicStateLevels[];
+}
+
+/**
+ * Typed columns that double when full: a diatomic has tens of thousands of levels, and pushing them onto
+ * plain arrays (three of them, one of booleans) made ~2 MB of garbage per molecule in copies and boxes.
+ */
+class LevelColumns {
+  count = 0;
+  energies = new Float64Array(1024);
+  weights = new Float64Array(1024);
+  evenJ = new Uint8Array(1024);
+
+  push(energy: number, weight: number, even: boolean): void {
+    if (this.count === this.energies.length) {
+      const size = 2 * this.count;
+      const e = new Float64Array(size);
+      e.set(this.energies);
+      const w = new Float64Array(size);
+      w.set(this.weights);
+      const p = new Uint8Array(size);
+      p.set(this.evenJ);
+      this.energies = e;
+      this.weights = w;
+      this.evenJ = p;
+    }
+    this.energies[this.count] = energy;
+    this.weights[this.count] = weight;
+    this.evenJ[this.count] = even ? 1 : 0;
+    this.count++;
+  }
 }
 
 /**
@@ -145,9 +176,7 @@ function enumerateLevels(input: DiatomicModelInput): EnumeratedLevels {
   const groundLowest = diatomicTermValue(ground, 0, 0);
   const commonLimit = groundLowest + input.dissociationEnergy;
 
-  const energies: number[] = [];
-  const weights: number[] = [];
-  const evenJ: boolean[] = [];
+  const levels = new LevelColumns();
   const summary: DiatomicStateLevels[] = [];
   const where = (s: DiatomicState) => `${input.name ?? 'diatomic'} state ${s.term}`;
   for (const state of states) {
@@ -203,20 +232,19 @@ function enumerateLevels(input: DiatomicModelInput): EnumeratedLevels {
           break;
         }
         previousE = E;
-        energies.push(E);
-        weights.push(g * (2 * J + 1));
-        evenJ.push(J % 2 === 0);
+        levels.push(E, g * (2 * J + 1), J % 2 === 0);
       }
       info.levels += J;
       if (J - 1 > info.maxJ) info.maxJ = J - 1;
       info.vibrationalLevels++;
-      if (energies.length > MAX_TOTAL_LEVELS) {
+      if (levels.count > MAX_TOTAL_LEVELS) {
         throw new LevelSumError(`${input.name ?? 'diatomic'}: more than ${MAX_TOTAL_LEVELS} bound levels`);
       }
     }
   }
-  if (energies.length === 0) throw new LevelSumError(`${input.name ?? 'diatomic'}: no bound levels below the dissociation limit`);
-  return { energies, weights, evenJ, states: summary };
+  const n = levels.count;
+  if (n === 0) throw new LevelSumError(`${input.name ?? 'diatomic'}: no bound levels below the dissociation limit`);
+  return { energies: levels.energies.subarray(0, n), weights: levels.weights.subarray(0, n), evenJ: levels.evenJ.subarray(0, n), states: summary };
 }
 
 /**
@@ -234,15 +262,17 @@ export function diatomicLevels(input: DiatomicModelInput): DiatomicLevels {
   const evenFactor = spin ? spin.even / spinTotal : 1 / input.symmetryNumber;
   const oddFactor = spin ? spin.odd / spinTotal : 1 / input.symmetryNumber;
   // Levels of a manifold with spin weight 0 do not exist; drop them rather than give them weight 0.
-  const e: number[] = [];
-  const w: number[] = [];
+  const e = new Float64Array(energies.length);
+  const w = new Float64Array(energies.length);
+  let kept = 0;
   for (let i = 0; i < energies.length; i++) {
     const f = evenJ[i] ? evenFactor : oddFactor;
     if (f === 0) continue;
-    e.push(energies[i]!);
-    w.push(weights[i]! * f);
+    e[kept] = energies[i]!;
+    w[kept] = weights[i]! * f;
+    kept++;
   }
-  return { levels: createLevelList(e, w, C2_CM_K), states };
+  return { levels: createLevelList(e.subarray(0, kept), w.subarray(0, kept), C2_CM_K), states };
 }
 
 /** The even-J and odd-J manifolds of a homonuclear diatomic as components of a frozen mixture. */
@@ -270,7 +300,7 @@ export function diatomicSpinManifolds(input: DiatomicModelInput): DiatomicSpinMa
     if (g === 0) continue;
     const m = { label, fraction: g / total, e: [] as number[], w: [] as number[], own: Infinity };
     for (let i = 0; i < energies.length; i++) {
-      if (evenJ[i] !== even) continue;
+      if ((evenJ[i] === 1) !== even) continue;
       m.e.push(energies[i]!);
       m.w.push(weights[i]!);
       if (energies[i]! < m.own) m.own = energies[i]!;

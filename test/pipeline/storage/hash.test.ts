@@ -5,6 +5,7 @@
  * external source): unsorted and nested keys, undefined members and array slots, -0, non-finite numbers.
  */
 import { describe, expect, it } from 'vitest';
+import { sortedKeys } from '../../../pipeline/core/text.js';
 import { canonicalCopy, canonicalJson } from '../../../pipeline/storage/hash.js';
 
 const VALUES: unknown[] = [
@@ -46,5 +47,44 @@ describe('canonical JSON', () => {
     expect(c.zeros).not.toBe(value.zeros);
     expect(Object.is(c.zeros[1], 0)).toBe(true);
     expect(Object.is(value.zeros[1], -0)).toBe(true);
+  });
+});
+
+describe('canonical copy of objects that are not plain, and key order', () => {
+  it('an object with another prototype is copied (keys in order), a null-prototype one kept when canonical', () => {
+    class Point {
+      constructor(
+        public x = 1,
+        public a = 2,
+      ) {}
+    }
+    const p = new Point();
+    const c = canonicalCopy({ p });
+    expect(c.p).not.toBe(p);
+    expect(Object.keys(c.p)).toEqual(['a', 'x']);
+    const bare = Object.assign(Object.create(null) as Record<string, number>, { a: 1, b: 2 });
+    expect(canonicalCopy({ bare }).bare).toBe(bare);
+  });
+  it('an in-order object is copied when a member is undefined, -0 or itself not canonical', () => {
+    for (const v of [{ a: 1, b: undefined }, { a: -0, b: 1 }, { a: { d: 1, c: 2 }, b: 1 }]) expect(canonicalCopy(v)).not.toBe(v);
+  });
+});
+
+describe('sortedKeys', () => {
+  // Keys made by this test from a seeded generator (no external source): short and long objects, digits,
+  // upper case, non-ASCII and astral characters, so both the insertion sort and the built-in sort are used.
+  it('gives the order of Array.prototype.sort on the keys, for small and large objects', () => {
+    let seed = 7;
+    const rnd = () => (seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648;
+    const alphabet = ['a', 'B', 'z', '_', '0', '9', 'é', 'Ω', '\u{1F600}', 'T', 'cpR'];
+    for (const size of [0, 1, 2, 5, 31, 32, 33, 80]) {
+      const obj: Record<string, number> = {};
+      while (Object.keys(obj).length < size) {
+        let k = '';
+        for (let n = 1 + Math.floor(rnd() * 4); n > 0; n--) k += alphabet[Math.floor(rnd() * alphabet.length)];
+        obj[k] = 1;
+      }
+      expect(sortedKeys(obj)).toEqual(Object.keys(obj).sort());
+    }
   });
 });

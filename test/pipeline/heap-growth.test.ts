@@ -3,8 +3,9 @@
  * user's own or QFORGE_HEAP_GROWTH says otherwise; the values below are written by hand. Whether the bound
  * lowers peak memory is measured by `npm run bench`, not here.
  */
+import { execFileSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
-import { HEAP_GROWING_PERCENT, heapGrowthSetting } from '../../pipeline/cli.js';
+import { HEAP_GROWING_PERCENT, heapGrowthSetting, pretenuringOff } from '../../pipeline/cli.js';
 import { runCli, tempWorkspace } from './helpers.js';
 
 describe('heapGrowthSetting', () => {
@@ -29,5 +30,30 @@ describe('heapGrowthSetting', () => {
     } finally {
       await ws.cleanup();
     }
+  });
+});
+
+describe('pretenuringOff', () => {
+  it('on by default, left alone when node was started with either form of the flag', () => {
+    expect(pretenuringOff([])).toBe(true);
+    expect(pretenuringOff(['--enable-source-maps'])).toBe(true);
+    expect(pretenuringOff(['--allocation-site-pretenuring'])).toBe(false);
+    expect(pretenuringOff(['--no-allocation-site-pretenuring'])).toBe(false);
+    expect(pretenuringOff(['--no_allocation_site_pretenuring'])).toBe(false);
+  });
+
+  it('set once node runs, the flag still stops V8 from pretenuring (this node version)', () => {
+    // A script written for this test: objects of one allocation site that survive young collections, which
+    // V8 pretenures; its pretenuring trace counts the sites it tenures.
+    const script = `
+      if (process.argv[1] === 'off') require('v8').setFlagsFromString('--no-allocation-site-pretenuring');
+      const keep = [];
+      const make = (i) => ({ a: i, b: [i, i + 1] });
+      for (let r = 0; r < 40; r++) { for (let i = 0; i < 50000; i++) keep.push(make(i)); if (keep.length > 400000) keep.splice(0, 200000); }
+    `;
+    const tenured = (mode: string) =>
+      (execFileSync(process.execPath, ['--trace-pretenuring-statistics', '-e', script, mode], { encoding: 'utf8' }).match(/=> tenure/g) ?? []).length;
+    expect(tenured('on')).toBeGreaterThan(0);
+    expect(tenured('off')).toBe(0);
   });
 });

@@ -196,16 +196,17 @@ export const HELP_WIDTH = 80;
 /**
  * V8's old-generation growth after each full collection, in percent (V8 flag --heap-growing-percent). By
  * default V8 lets the heap grow to 1.1–4× what survived, and a build's garbage (grids, fit scratch, texts
- * between stages) is what fills it: the resident memory of a build was mostly head-room. 20 % keeps each
- * thread's heap close to what it holds, at the price of more full collections. Measured (synthetic
- * species, cold --no-cache, 2 threads, V8's own growth → 20 %, alternating runs on the 2-core machine):
- * 2,000: peak RSS 340 → 232 MB, CPU 19.1–20.0 → 21.8–22.1 s; 10,000: 383 → 249 MB, wall 46.2 → 53.9 s.
- * The memory bound of the throughput issue (400 MB at 10,000, 500 MB at 50,000) is met only with it, so it
- * is the default; QFORGE_HEAP_GROWTH=0 buys the speed back. (Much of the price is V8's parallel collector
- * threads competing with the build's threads for the cores: node --single-threaded-gc bin/qforge.js …
- * measured 19.4–19.7 s CPU and 245 MB. That flag cannot be set once V8 runs, so it is the user's to give.)
+ * between stages) is what fills it: the resident memory of a build was mostly head-room. 50 % keeps each
+ * thread's heap within 1.5× what it holds, at the price of more full collections. Measured (synthetic
+ * species, cold --no-cache, 2 threads, with allocation-site pretenuring off (`pretenuringOff`), the
+ * 2-core machine, 2026-12-03): 10,000 species 21.1 s / 371 MB with V8's own growth, 24.0 s / 253 MB with
+ * 50 %, 26.4 s / 246 MB with 20 % (the earlier default); 50,000 species with 50 %: 357 MB (--no-cache) and
+ * 401 MB (into a fresh cache). The memory bound of the throughput issue (400 MB at 10,000, 500 MB at
+ * 50,000) is met with it, so it is the default; QFORGE_HEAP_GROWTH=0 buys the rest of the speed back.
+ * (Part of the price is V8's parallel collector threads competing with the build's threads for the cores:
+ * node --single-threaded-gc bin/qforge.js … That flag cannot be set once V8 runs, so it is the user's to give.)
  */
-export const HEAP_GROWING_PERCENT = 20;
+export const HEAP_GROWING_PERCENT = 50;
 const HEAP_GROWTH_ENV = 'QFORGE_HEAP_GROWTH';
 
 /**
@@ -230,9 +231,9 @@ export function heapGrowthSetting(env: NodeJS.ProcessEnv, execArgv: readonly str
  * Why: V8 moves an allocation site to the old generation once most of its objects survive a young
  * collection, and a species' samples, grids and fit scratch do survive one — they live for the few
  * milliseconds of their species — so hundreds of sites were pretenured (node --trace-pretenuring-statistics)
- * and their short-lived objects filled the old generation, which with the 20 % growth above meant a full
- * collection every ~90 ms. Measured (2,000 synthetic species, cold --no-cache, alternating runs on the 2-core
- * machine): 1 thread 73 → 43 full collections, CPU 10.0–10.4 → 9.5 s; 2 threads wall 7.1–7.3 → 6.8–6.9 s,
+ * and their short-lived objects filled the old generation, which with a 20 % growth meant a full collection
+ * every ~90 ms. Measured (2,000 synthetic species, cold --no-cache, alternating runs on the 2-core
+ * machine, 20 % growth): 1 thread 73 → 43 full collections, CPU 10.0–10.4 → 9.5 s; 2 threads wall 7.1–7.3 → 6.8–6.9 s,
  * CPU 12.0–12.3 → 11.4–11.6 s, peak RSS 218–222 → 224–229 MB. The flag is read when V8 judges its sites,
  * so setting it at start-up, before a build allocates, takes effect.
  */

@@ -15,6 +15,7 @@ import { GAS_CONSTANT, T_REF } from '../../src/constants.js';
 import type { ModelSummary, PhysicsOptions, Species, StandardProperties, ThermoEvaluator, ThermoGrid } from '../../src/model.js';
 import type { FitSample } from '../../src/nasa7/types.js';
 import { createThermoEvaluator } from '../../src/thermo/evaluator.js';
+import { declareCanonical } from '../storage/hash.js';
 import { standardPropertiesOf } from '../../src/thermo/properties.js';
 import { HINDERED_ROTOR_CEILING_TEMPERATURE } from '../../src/partition/hindered-rotor.js';
 import { DEFAULT_FIT_TOLERANCES } from '../../src/nasa7/quality.js';
@@ -138,6 +139,8 @@ export function computeSamples(
   const at298 = propertiesAt(ev, values, n);
   const extrapolationSamples: FitSample[] = new Array<FitSample>(zoneTemperatures.length);
   for (let j = 0; j < zoneTemperatures.length; j++) extrapolationSamples[j] = sampleAt(ev, values, n + 1 + j);
+  declareIfCanonical(samples);
+  declareIfCanonical(extrapolationSamples);
   if (recent.length >= MEMO_SIZE) recent.shift();
   const ascending = nonDecreasing(values.T, 0, n) && nonDecreasing(values.T, n + 1, values.T.length);
   recent.push({ species, standardPressure: physics.standardPressure, ev, values, samples: n, ascending });
@@ -150,6 +153,19 @@ export function computeSamples(
     enthalpyOfFormation298: ev.enthalpyOfFormation298,
     summary: ev.summary,
   };
+}
+
+/**
+ * Sample lists are canonical by construction — objects {T, cpR, hRT, sR} in key order, finite numbers
+ * (sampleAt checks) — unless a value is −0; T and cpR are positive, so only hRT and sR are looked at. Nothing
+ * changes a sample list once made (the runner replaces it, never edits it).
+ */
+function declareIfCanonical(samples: readonly FitSample[]): void {
+  for (let j = 0; j < samples.length; j++) {
+    const s = samples[j]!;
+    if (s.hRT === 0 || s.sR === 0) return;
+  }
+  declareCanonical(samples);
 }
 
 function nonDecreasing(T: Float64Array, from: number, to: number): boolean {

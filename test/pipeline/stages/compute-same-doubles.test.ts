@@ -15,6 +15,7 @@ import { planSpecies } from '../../../pipeline/core/plan.js';
 import { withDefaults } from '../../../pipeline/core/settings.js';
 import { computeSamples, computeTable } from '../../../pipeline/stages/compute.js';
 import { parseYamlText } from '../../../pipeline/stages/load.js';
+import { canonicalCopy } from '../../../pipeline/storage/hash.js';
 import { validateSpecies } from '../../../pipeline/stages/validate.js';
 import type { Species } from '../../../src/model.js';
 import { HYDROGEN_PEROXIDE } from '../../fixtures/hindered-rotor.js';
@@ -60,6 +61,22 @@ describe('compute stage: the same doubles as the per-point-object form', () => {
       expect(bitsDeep(pick(got)), name).toStrictEqual(bitsDeep(pick(ref)));
     }
     expect(diatomics).toBeGreaterThan(0);
+  });
+
+  it('sample lists it declares canonical are canonical: keys T, cpR, hRT, sR in order, finite, no −0', () => {
+    // What storage/hash.ts declareCanonical is promised; checked here element by element, not through the
+    // canonical copy (which trusts the declaration).
+    for (const [name, given] of cases) {
+      const plan = planSpecies(given, SETTINGS);
+      const got = computeSamples({ ...given }, physics, plan.sampleTemperatures, plan.zoneTemperatures);
+      for (const list of [got.samples, got.extrapolationSamples]) {
+        expect(canonicalCopy(list), name).toBe(list);
+        for (const sample of list) {
+          expect(Object.keys(sample)).toEqual(['T', 'cpR', 'hRT', 'sR']);
+          for (const v of Object.values(sample)) expect(Number.isFinite(v) && !Object.is(v, -0), `${name}: ${v}`).toBe(true);
+        }
+      }
+    }
   });
 
   it('table rows from the remembered grid (bisection) equal the Map form, on, off and beyond the sampling grid', () => {

@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { sortedKeys } from '../../../pipeline/core/text.js';
-import { canonicalCopy, canonicalJson } from '../../../pipeline/storage/hash.js';
+import { canonicalCopy, canonicalJson, declareCanonical } from '../../../pipeline/storage/hash.js';
 
 const VALUES: unknown[] = [
   { b: 1, a: { d: [3, { z: -0, y: undefined }], c: 'x' } },
@@ -86,5 +86,16 @@ describe('sortedKeys', () => {
       }
       expect(sortedKeys(obj)).toEqual(Object.keys(obj).sort());
     }
+  });
+});
+
+describe('declared canonical arrays', () => {
+  it('are returned as they are; an undeclared copy of one is checked (and copied when it is not canonical)', () => {
+    const list = [{ T: 200, cpR: 1, hRT: 2, sR: 3 }];
+    declareCanonical(list);
+    expect(canonicalCopy({ list }).list).toBe(list);
+    const other = [{ sR: 3, T: 200 }];
+    expect(canonicalCopy(other)).not.toBe(other);
+    expect(Object.keys(canonicalCopy(other)[0]!)).toEqual(['T', 'sR']);
   });
 });

@@ -21,6 +21,7 @@ import { recordCacheUse, UsedKeys } from './storage/cache-uses.js';
 import { decodeEntry, encodeEntry, readEntry, writeEntry, writeEntryText, type DocumentFacts, type FileFacts, type RenderedDigests, type RenderedSpecies, type StoredResult } from './storage/fast-entries.js';
 import { PACK_DIR, packFile, packIdentity, PackWriter, readPack, type LoadedPack, type PackIdentity } from './storage/build-pack.js';
 import { SpillFile, type SpillRef } from './storage/spill.js';
+import { decodeSampleEntry, encodeSampleEntry } from './storage/sample-columns.js';
 import { PositionInterner } from './core/intern.js';
 import { PreviousDigests } from './storage/previous-digests.js';
 import { shardLabel, shardOf, shardRecord, type Shard } from './core/shard.js';
@@ -69,6 +70,9 @@ const stagesModules = () =>
   ]).then(([compute, fit, plan, verify, uncertainty]) => ({ compute, fit, plan, verify, uncertainty })));
 let validateModule: Promise<typeof import('./stages/validate.js')> | undefined;
 const validation = () => (validateModule ??= import('./stages/validate.js'));
+
+/** The payload encoding of `samples` entries (sample lists as columns of doubles). */
+const SAMPLE_ENTRY_CODEC = { encode: encodeSampleEntry, decode: decodeSampleEntry };
 
 export type StageName = 'load' | 'validate' | 'compute' | 'fit' | 'verify' | 'emit';
 
@@ -727,7 +731,7 @@ export async function buildOneSpecies(
       // decimals (where -0 and 0 print alike; T itself is never ±0, the grid is clipped to the fitted range,
       // whose low end the settings schema keeps above 0): their canonical copy cannot change an output, and
       // with --no-cache it is skipped (~0.05 ms per species).
-      const r = await cached(cache, kind, key, run, { orderFree: kind === 'table' });
+      const r = await cached(cache, kind, key, run, kind === 'samples' ? { codec: SAMPLE_ENTRY_CODEC } : { orderFree: kind === 'table' });
       note(kind, r);
       out.timings[kind === 'samples' ? 'compute' : kind] = r.ms;
       return r.value;

@@ -148,6 +148,26 @@ function checkedPayload(bytes: Buffer, kind: CacheKind, key: string): Buffer | s
 }
 
 /**
+ * A payload encoding of its own for one kind of entry (storage/sample-columns.ts): `encode` takes the
+ * canonical value and gives the payload text, `decode` gives back the value JSON.parse would give of that
+ * value's canonical JSON (throwing on a malformed text).
+ */
+export interface EntryCodec {
+  encode(value: unknown): string;
+  decode<T>(text: string): T;
+}
+
+async function getDecoded<T>(cache: StageCache, kind: CacheKind, key: string, codec: EntryCodec): Promise<CacheLookup<T>> {
+  const r = await cache.getText(kind, key);
+  if (r.outcome !== 'hit') return r as CacheLookup<T>;
+  try {
+    return { outcome: 'hit', value: codec.decode<T>(r.value!) };
+  } catch {
+    return { outcome: 'corrupt', reason: 'not a valid entry' };
+  }
+}
+
+/**
  * Cached evaluation: returns the cached payload on a hit, otherwise computes, stores and returns the
  * value in canonical form (`canonicalCopy`: sorted keys, as a parsed entry has them) — a structural copy,
  * not a JSON text round trip. Stage results are plain JSON-safe data (finite numbers, arrays, plain
@@ -159,10 +179,10 @@ export async function cached<T>(
   kind: CacheKind,
   key: string,
   compute: () => T,
-  opts: { orderFree?: boolean } = {},
+  opts: { orderFree?: boolean; codec?: EntryCodec } = {},
 ): Promise<{ value: T; outcome: CacheOutcome; reason?: string; ms: number }> {
   const t0 = performance.now();
-  const found = await cache.get<T>(kind, key);
+  const found = opts.codec ? await getDecoded<T>(cache, kind, key, opts.codec) : await cache.get<T>(kind, key);
   if (found.outcome === 'hit') return { value: found.value as T, outcome: 'hit', ms: performance.now() - t0 };
   // `orderFree`: the caller promises that nothing it derives from the value depends on key order or the sign
   // of a zero; then, with nothing to store, the canonical copy can change nothing that is written.
@@ -174,7 +194,7 @@ export async function cached<T>(
     try {
       // `value` is canonical already, so its plain JSON is its canonical JSON (tested in hash.test.ts):
       // sorting a stage result's keys twice cost about 0.7 ms per species on a build into a cache.
-      await cache.putText(kind, key, JSON.stringify(value));
+      await cache.putText(kind, key, opts.codec ? opts.codec.encode(value) : JSON.stringify(value));
     } catch (err) {
       // A cache that cannot be written only costs time on the next build; the runner reports it once.
       cache.noteWriteFailure(err);

@@ -839,6 +839,8 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   try {
     return await buildChecked(opts, t0, notes, cacheDir, cache, spill, previous);
   } finally {
+    // What was computed before a failure still saves the next build its time.
+    cache.flushWrites();
     await previous?.stop();
     await spill?.close();
   }
@@ -1141,6 +1143,7 @@ async function buildChecked(
     }
     await previous?.stop();
     await pool.close();
+    cache.flushWrites();
     if (pool.cacheWriteProblem !== undefined) cache.writeProblem ??= pool.cacheWriteProblem;
     const stagesMs = performance.now() - tStages - emitMs;
 

@@ -33,6 +33,7 @@ parentPort!.on('message', (req: WorkRequest) => {
         const { file, bytes, keep } = req.check;
         if (init.testCrashOn !== undefined && file.endsWith(`${init.testCrashOn}.yaml`)) process.exit(70);
         const checked = await checkFileBytes(bytes, file, policy, keep);
+        cache.flushWrites();
         // v8.serialize gives each value an ArrayBuffer of its own: moved, not copied.
         const transfer = checked.kept.flatMap((k) => (k instanceof Uint8Array && k.byteOffset === 0 && k.buffer.byteLength === k.byteLength ? [k.buffer as ArrayBuffer] : []));
         parentPort!.postMessage({ id: req.id, checked } satisfies WorkerReply, transfer);
@@ -57,9 +58,12 @@ parentPort!.on('message', (req: WorkRequest) => {
         }
         outcomes.push(o);
       }
+      // Written before the answer: the pool may stop this thread right after the last one.
+      cache.flushWrites();
       reply = { id: req.id, outcomes };
       if (cache.writeProblem !== undefined) reply.cacheWriteProblem = cache.writeProblem;
     } catch (e) {
+      cache.flushWrites();
       reply = { id: req.id, error: errorText(e) };
     }
     parentPort!.postMessage(reply);

@@ -102,6 +102,7 @@ describe('cache entries', () => {
       expect((await cache.get('fit', key)).outcome).toBe('miss');
       await cache.put('fit', key, { a: [1, 2.5] });
       expect(await cache.get('fit', key)).toEqual({ outcome: 'hit', value: { a: [1, 2.5] } });
+      cache.flushWrites();
       expect((await cache.get('samples', key)).outcome).toBe('miss');
       // One header line (format, kind, key, sha256 of the payload bytes), then the payload as stored.
       const file = path.join(dir, 'fit', key.slice(0, 2), key);

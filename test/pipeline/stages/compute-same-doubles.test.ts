@@ -21,21 +21,10 @@ import type { Species } from '../../../src/model.js';
 import { HYDROGEN_PEROXIDE } from '../../fixtures/hindered-rotor.js';
 import { CARBON_DIOXIDE, NITROGEN } from '../../fixtures/physics-species.js';
 import { computeSamplesReference, computeTableReference } from '../../fixtures/pipeline/compute-reference.js';
+import { bitsDeep } from '../../fixtures/pipeline/bits.js';
 
 const SETTINGS = withDefaults({});
 const physics = { standardPressure: 1e5 };
-
-/** Every number replaced by its IEEE-754 bit pattern (hex), keys kept in their order. */
-function bitsDeep(value: unknown): unknown {
-  if (typeof value === 'number') {
-    const view = new DataView(new ArrayBuffer(8));
-    view.setFloat64(0, value);
-    return view.getBigUint64(0).toString(16);
-  }
-  if (Array.isArray(value)) return value.map(bitsDeep);
-  if (value && typeof value === 'object') return Object.entries(value).map(([k, v]) => [k, bitsDeep(v)]);
-  return value;
-}
 
 function syntheticSet(count: number): Array<[string, Species]> {
   const out: Array<[string, Species]> = [];

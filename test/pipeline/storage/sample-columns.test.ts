@@ -19,18 +19,7 @@ import { cached, StageCache } from '../../../pipeline/storage/cache.js';
 import { canonicalCopy } from '../../../pipeline/storage/hash.js';
 import { decodeSampleEntry, encodeSampleEntry } from '../../../pipeline/storage/sample-columns.js';
 import { deterministicOutputs, runCli, tempWorkspace } from '../helpers.js';
-
-/** Every number as its IEEE-754 bit pattern, keys kept in their order (so −0 ≠ +0 and order counts). */
-function bitsDeep(value: unknown): unknown {
-  if (typeof value === 'number') {
-    const view = new DataView(new ArrayBuffer(8));
-    view.setFloat64(0, value);
-    return view.getBigUint64(0).toString(16);
-  }
-  if (Array.isArray(value)) return value.map(bitsDeep);
-  if (value && typeof value === 'object') return Object.entries(value).map(([k, v]) => [k, bitsDeep(v)]);
-  return value;
-}
+import { bitsDeep } from '../../fixtures/pipeline/bits.js';
 
 const SETTINGS = withDefaults({});
 /** A cache key (any sha256 hex digest; this one written by hand). */

@@ -5,12 +5,13 @@
  */
 import { execFileSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
-import { HEAP_GROWING_PERCENT, heapGrowthSetting, pretenuringOff } from '../../pipeline/cli.js';
+import { HEAP_GROWING_PERCENT, heapGrowthForDatabase, heapGrowthSetting, LARGE_DATABASE_FILES, LARGE_DATABASE_HEAP_GROWING_PERCENT, pretenuringOff } from '../../pipeline/cli.js';
+import { runBuild } from '../../pipeline/runner.js';
 import { runCli, tempWorkspace } from './helpers.js';
 
 describe('heapGrowthSetting', () => {
   it('the default, the environment value, V8 own growth for 0, and node own flag winning', () => {
-    expect(heapGrowthSetting({}, [])).toEqual({ percent: HEAP_GROWING_PERCENT });
+    expect(heapGrowthSetting({}, [])).toEqual({ percent: HEAP_GROWING_PERCENT, byDefault: true });
     expect(heapGrowthSetting({ QFORGE_HEAP_GROWTH: '50' }, ['--enable-source-maps'])).toEqual({ percent: 50 });
     expect(heapGrowthSetting({ QFORGE_HEAP_GROWTH: '0' }, [])).toEqual({});
     expect(heapGrowthSetting({ QFORGE_HEAP_GROWTH: '50' }, ['--heap-growing-percent=5'])).toEqual({});
@@ -27,6 +28,23 @@ describe('heapGrowthSetting', () => {
       expect(r.code).toBe(2);
       expect(r.stderr).toContain('qforge: error: QFORGE_HEAP_GROWTH must be a whole number of percent from 0 to 1000');
       expect(r.stderr).toContain('got "lots"');
+    } finally {
+      await ws.cleanup();
+    }
+  });
+});
+
+describe('heap growth by database size', () => {
+  it('the default drops for databases above LARGE_DATABASE_FILES species files, and the build says how many it found', async () => {
+    expect(heapGrowthForDatabase(LARGE_DATABASE_FILES)).toBeUndefined();
+    expect(heapGrowthForDatabase(LARGE_DATABASE_FILES + 1)).toBe(LARGE_DATABASE_HEAP_GROWING_PERCENT);
+    expect(LARGE_DATABASE_HEAP_GROWING_PERCENT).toBeLessThan(HEAP_GROWING_PERCENT);
+    const ws = await tempWorkspace();
+    try {
+      const told: number[] = [];
+      await runBuild({ dir: ws.db, out: ws.out, cacheDir: null, jobs: 1, onDatabaseSize: (n) => told.push(n) });
+      // The fixture database holds five species files.
+      expect(told).toEqual([5]);
     } finally {
       await ws.cleanup();
     }

@@ -222,5 +222,20 @@ describe('grid building blocks against their direct forms', () => {
     const expected = e.map((_, i) => i).sort((a, b) => e[a]! - e[b]! || a - b);
     expect([...stableEnergyOrder(e)]).toEqual(expected);
     expect([...stableEnergyOrder([1, 2, 3])]).toEqual([0, 1, 2]);
+    // Seeded lists made by this test (no external source): sorted runs of random lengths, values drawn from
+    // few levels so that ties are common, and −0 beside 0 (equal energies: input order decides).
+    let seed = 11;
+    const rnd = () => (seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648;
+    for (let trial = 0; trial < 40; trial++) {
+      const list: number[] = [];
+      const n = 1 + Math.floor(rnd() * 400);
+      while (list.length < n) {
+        let v = Math.floor(rnd() * 30) - 5;
+        for (let r = Math.floor(rnd() * 20); r >= 0 && list.length < n; r--) list.push((v += Math.floor(rnd() * 3)) === 0 && rnd() < 0.5 ? -0 : v);
+      }
+      const want = list.map((_, i) => i).sort((x, y) => list[x]! - list[y]! || x - y);
+      expect([...stableEnergyOrder(list)]).toEqual(want);
+      expect([...stableEnergyOrder(Float64Array.from(list))]).toEqual(want);
+    }
   });
 });

@@ -3,12 +3,14 @@
  *   <cache dir>/<kind>/<key[0:2]>/<key>
  * holding one header line and the payload bytes:
  *   qforge-cache/2 <kind> <key> <sha256 of the payload bytes>\n<canonical JSON of the payload>
+ * (a `samples` payload keeps its sample lists as base64 columns of doubles inside that JSON, see
+ * sample-columns.ts).
  * The key is a sha256 of everything the stage result depends on (see plan.ts) plus the tool version and
  * the code fingerprint, so a stale entry is never addressed. An entry is trusted only when its header names
  * the format, kind and key asked for and the checksum of the stored payload bytes matches; otherwise it is
  * reported as corrupt, recomputed and overwritten. The checksum is taken over the bytes as stored — not
- * over a re-canonicalised parse — so a hit costs one hash and one JSON.parse. Writes go through a temp file
- * and a rename.
+ * over a re-canonicalised parse — so a hit costs one hash and one JSON.parse. Writes are queued and made in
+ * bursts (`putText`), each through a temp file and a rename.
  *
  * The no-change fast path adds two kinds keyed by the sha256 of a species file's bytes and the build context
  * (see runner.ts `fileContextHash`): 'file' (the load and validation findings of the file) and 'result'

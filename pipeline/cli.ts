@@ -202,8 +202,8 @@ export const HELP_WIDTH = 80;
  * 2-core machine, 2026-12-03): 10,000 species 21.1 s / 371 MB with V8's own growth, 24.0 s / 253 MB with
  * 50 %, 26.4 s / 246 MB with 20 % (the earlier default); 50,000 species with 50 %: 357 MB (--no-cache) and
  * 401–482 MB (into a fresh cache), which is why large databases drop to 20 % (`heapGrowthForDatabase`). The
- * memory bound of the throughput issue (400 MB at 10,000, 500 MB at
- * 50,000) is met with it, so it is the default; QFORGE_HEAP_GROWTH=0 buys the rest of the speed back.
+ * memory bound of the throughput issue (400 MB at 10,000, 500 MB at 50,000) is met with it, so it is the
+ * default; QFORGE_HEAP_GROWTH=0 buys the rest of the speed back.
  * (Part of the price is V8's parallel collector threads competing with the build's threads for the cores:
  * node --single-threaded-gc bin/qforge.js … That flag cannot be set once V8 runs, so it is the user's to give.)
  */

@@ -27,6 +27,7 @@ import { lstat, mkdir, open, readdir, readFile, rename, rm, stat, type FileHandl
 import path from 'node:path';
 import { compareText } from '../core/text.js';
 import type { Digest } from './hash.js';
+import { WriteBurst } from './write-burst.js';
 
 /** Marker file that identifies a folder as a qforge build output; it lists the files written (sorted). */
 export const BUILD_MARKER = '.qforge-build';
@@ -520,7 +521,7 @@ export interface KnownDigests {
   lookup(file: string, stamp: string): Digest | undefined;
 }
 
-/** New staged files created together (see OutputStaging `queued`). */
+/** New staged files created together (storage/write-burst.ts). */
 const WRITE_BURST = 32;
 
 /**
@@ -541,14 +542,8 @@ const WRITE_BURST = 32;
  */
 export class OutputStaging {
   private readonly files = new Set<string>();
-  /**
-   * New files not created yet, by staged path (see `flushWrites`): created WRITE_BURST at a time, because
-   * one file created between two species' work cost ~0.25 ms of kernel time on the 2-core machine (its
-   * inode tables and journal cold in the caches: a loop micro-benchmark with 32 MB of array work between
-   * creates measured 530 µs per create alone, 141 µs in bursts of 32), ~0.5 s of the main thread per 2,000
-   * tables.
-   */
-  private readonly queued = new Map<string, string | Uint8Array>();
+  /** New files not created yet, by staged path: created WRITE_BURST at a time (storage/write-burst.ts). */
+  private readonly newFiles = new WriteBurst<string | Uint8Array>(WRITE_BURST, (target, data) => writeFileSync(target, data, { flag: 'wx' }));
   /** Files that hold the previous OUT's bytes (linked, or still pending): no write and no fsync needed. */
   private readonly linked = new Set<string>();
   /** Checked previous files not linked yet, by destination path (a staged file or a scratch path). */
@@ -672,27 +667,14 @@ export class OutputStaging {
     this.linked.add(rel);
   }
 
-  async write(rel: string, data: string | Uint8Array): Promise<void> {
-    this.queueWrite(await this.target(rel), data);
-  }
-
   /**
-   * Queues a new staged file; the queue is written out once it holds WRITE_BURST files and before anything
-   * reads the staged files or publishes them. Synchronous writes: a small file costs less than the
-   * thread-pool round trips of open, write and close. A failure (a full disk) surfaces from the call that
-   * writes the queue, which fails the build as a failure of that file would.
+   * Stages a new file. It is queued (`newFiles`) and created with the next burst, and before anything reads
+   * the staged files or publishes them. Synchronous writes: a small file costs less than the thread-pool
+   * round trips of open, write and close. A failure (a full disk) surfaces from the call that creates the
+   * burst, which fails the build as a failure of that file would.
    */
-  private queueWrite(target: string, data: string | Uint8Array): void {
-    this.queued.set(target, data);
-    if (this.queued.size >= WRITE_BURST) this.flushWrites();
-  }
-
-  /** Creates every queued file (in the order queued). */
-  flushWrites(): void {
-    for (const [target, data] of this.queued) {
-      this.queued.delete(target);
-      writeFileSync(target, data, { flag: 'wx' });
-    }
+  async write(rel: string, data: string | Uint8Array): Promise<void> {
+    this.newFiles.add(await this.target(rel), data);
   }
 
   /**
@@ -715,7 +697,7 @@ export class OutputStaging {
     } catch {
       // No previous file, an unreadable one: write it.
     }
-    this.queueWrite(await this.target(rel), data);
+    this.newFiles.add(await this.target(rel), data);
   }
 
   /**
@@ -726,7 +708,7 @@ export class OutputStaging {
   async reuseIfSame(rel: string): Promise<void> {
     if (!this.files.has(rel) || this.linked.has(rel)) return;
     const target = safeJoin(this.dir, rel);
-    if (this.queued.has(target)) this.flushWrites();
+    if (this.newFiles.has(target)) this.newFiles.flush();
     const previous = this.previousPath(rel);
     try {
       const a = lstatSync(previous, { throwIfNoEntry: false });
@@ -750,8 +732,8 @@ export class OutputStaging {
   async remove(rel: string): Promise<void> {
     this.linked.delete(rel);
     if (!this.files.delete(rel)) return;
-    if (this.queued.delete(safeJoin(this.dir, rel))) return;
-    await this.dropLink(safeJoin(this.dir, rel));
+    const staged = safeJoin(this.dir, rel);
+    if (!this.newFiles.drop(staged)) await this.dropLink(staged);
   }
 
   async stream(rel: string): Promise<StagedStream> {
@@ -798,7 +780,7 @@ export class OutputStaging {
   async publish(hooks: PublishHooks = {}): Promise<{ replaced: boolean }> {
     const s = siblings(this.out);
     try {
-      this.flushWrites();
+      this.newFiles.flush();
       const single = await this.inPlaceFile(s);
       if (single !== undefined) {
         const staged = safeJoin(this.dir, single);
@@ -860,7 +842,7 @@ export class OutputStaging {
   /** Removes the staging folder (the build is not published). */
   async discard(): Promise<void> {
     this.pending.clear();
-    this.queued.clear();
+    this.newFiles.clear();
     await rm(this.dir, { recursive: true, force: true });
   }
 }

@@ -24,6 +24,7 @@ import { mkdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describeFsError, writeFileAtomicNoSync } from './atomic-write.js';
 import { canonicalCopy, canonicalJson, sha256Hex } from './hash.js';
+import { WriteBurst } from './write-burst.js';
 
 export const CACHE_FORMAT = 'qforge-cache/2';
 /** Name of the default cache folder, created inside the database folder (discovery skips dot-folders). */
@@ -46,7 +47,7 @@ export interface CacheLookup<T> {
 }
 
 const KEY = /^[0-9a-f]{64}$/;
-/** Cache entries written together (see StageCache `putText`). */
+/** Cache entries written together (storage/write-burst.ts). */
 const CACHE_WRITE_BURST = 64;
 const NEWLINE = 0x0a;
 
@@ -81,7 +82,7 @@ export class StageCache {
     let bytes: Buffer;
     try {
       // Synchronous: an entry is small, and a hit should cost a read, not thread-pool round trips.
-      bytes = this.queued.get(file) ?? readFileSync(file);
+      bytes = this.newEntries.get(file) ?? readFileSync(file);
     } catch {
       return { outcome: 'miss' };
     }
@@ -107,7 +108,7 @@ export class StageCache {
     let bytes: Buffer;
     try {
       const file = cacheEntryPath(this.dir, kind, key);
-      bytes = this.queued.get(file) ?? readFileSync(file);
+      bytes = this.newEntries.get(file) ?? readFileSync(file);
     } catch {
       return { outcome: 'miss' };
     }
@@ -118,21 +119,24 @@ export class StageCache {
 
   /**
    * Stores an entry whose payload is the given text (see `getText`). Entries are queued and written
-   * CACHE_WRITE_BURST at a time (`flushWrites`; a lookup finds a queued entry): one new file between two
-   * species' work cost ~0.25 ms of kernel time on the 2-core machine, its file-system structures cold in
-   * the caches (see OutputStaging `queued`), and a build writes three to five entries per species. A write
-   * that fails is noted (`writeProblem`), never thrown: a cache only saves time.
+   * CACHE_WRITE_BURST at a time (storage/write-burst.ts; a lookup finds a queued entry): a build writes
+   * three to five entries per species. A write that fails is noted (`writeProblem`), never thrown: a cache
+   * only saves time.
    */
   async putText(kind: CacheKind, key: string, text: string): Promise<void> {
     if (!this.dir) return;
-    const file = cacheEntryPath(this.dir, kind, key);
     const body = Buffer.from(text, 'utf8');
-    this.queued.set(file, Buffer.concat([Buffer.from(`${CACHE_FORMAT} ${kind} ${key} ${sha256Hex(body)}\n`, 'latin1'), body]));
-    if (this.queued.size >= CACHE_WRITE_BURST) this.flushWrites();
+    this.newEntries.add(cacheEntryPath(this.dir, kind, key), Buffer.concat([Buffer.from(`${CACHE_FORMAT} ${kind} ${key} ${sha256Hex(body)}\n`, 'latin1'), body]));
   }
 
   /** Entries stored and not written yet, by file. */
-  private readonly queued = new Map<string, Buffer>();
+  private readonly newEntries = new WriteBurst<Buffer>(CACHE_WRITE_BURST, (file, bytes) => {
+    try {
+      this.writeEntryFile(file, bytes);
+    } catch (err) {
+      this.noteWriteFailure(err);
+    }
+  });
 
   /**
    * Writes every queued entry (through a temporary file and a rename each). Called by the threads that
@@ -140,14 +144,7 @@ export class StageCache {
    * before it records its cache use), and whenever the queue is full.
    */
   flushWrites(): void {
-    for (const [file, bytes] of this.queued) {
-      this.queued.delete(file);
-      try {
-        this.writeEntryFile(file, bytes);
-      } catch (err) {
-        this.noteWriteFailure(err);
-      }
-    }
+    this.newEntries.flush();
   }
 
   private writeEntryFile(file: string, bytes: Buffer): void {

@@ -33,7 +33,6 @@ parentPort!.on('message', (req: WorkRequest) => {
         const { file, bytes, keep } = req.check;
         if (init.testCrashOn !== undefined && file.endsWith(`${init.testCrashOn}.yaml`)) process.exit(70);
         const checked = await checkFileBytes(bytes, file, policy, keep);
-        cache.flushWrites();
         // v8.serialize gives each value an ArrayBuffer of its own: moved, not copied.
         const transfer = checked.kept.flatMap((k) => (k instanceof Uint8Array && k.byteOffset === 0 && k.buffer.byteLength === k.byteLength ? [k.buffer as ArrayBuffer] : []));
         parentPort!.postMessage({ id: req.id, checked } satisfies WorkerReply, transfer);

@@ -16,6 +16,15 @@ const SAMPLE_LIST_KEYS = ['samples', 'extrapolationSamples'] as const;
 const LITTLE_ENDIAN = endianness() === 'LE';
 
 type Sample = { T: number; cpR: number; hRT: number; sR: number };
+/** The keys of a plain sample, in their canonical order. */
+const SAMPLE_KEYS = ['T', 'cpR', 'hRT', 'sR'] as const;
+
+/** Whether `s` has exactly the keys of a plain sample, in that order (for-in: no key array per sample). */
+function hasSampleKeys(s: object): boolean {
+  let i = 0;
+  for (const k in s) if (k !== SAMPLE_KEYS[i++]) return false;
+  return i === SAMPLE_KEYS.length;
+}
 
 const isPlainNumber = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v) && !Object.is(v, -0);
 
@@ -27,8 +36,7 @@ function columnsOf(list: unknown): Float64Array | undefined {
   for (let j = 0; j < n; j++) {
     const s: unknown = list[j];
     if (typeof s !== 'object' || s === null || Object.getPrototypeOf(s) !== Object.prototype) return undefined;
-    const keys = Object.keys(s);
-    if (keys.length !== 4 || keys[0] !== 'T' || keys[1] !== 'cpR' || keys[2] !== 'hRT' || keys[3] !== 'sR') return undefined;
+    if (!hasSampleKeys(s)) return undefined;
     const { T, cpR, hRT, sR } = s as Sample;
     if (!isPlainNumber(T) || !isPlainNumber(cpR) || !isPlainNumber(hRT) || !isPlainNumber(sR)) return undefined;
     columns[j] = T;

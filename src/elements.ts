@@ -5,7 +5,7 @@
  * weight from the IUPAC/CIAAW isotopic compositions and atomic masses (AME). The heavy hydrogen isotopes are
  * accepted as the pseudo-elements D (²H) and T (³H) with their isotopic masses. Electron mass: CODATA 2018.
  */
-import { elementsObject, isotopesObject } from 'chemical-elements';
+import { elementsObject, isotopesObject } from './libraries.js';
 import { ELECTRON_MASS_U } from './constants.js';
 
 interface ElementRecord {

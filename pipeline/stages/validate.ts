@@ -11,7 +11,7 @@
  *    molar mass from src/elements.ts, plus a canonical key-sorted JSON form for the cache hash.
  * Warnings flag legal but suspicious input and never stop a species.
  */
-import { elementsObject } from 'chemical-elements';
+import { elementsObject } from '../../src/libraries.js';
 import schema from '../../schemas/species.schema.json' with { type: 'json' };
 import { isKnownElement, molarMass } from '../../src/elements.js';
 import { centrifugalConstantOf, rotationalConstantOf, vibrationalTerm } from '../../src/partition/diatomic.js';

@@ -6,7 +6,7 @@
  * symbol means its most abundant isotope (¹H, ¹²C, ¹⁶O, ³²S, ...), the convention of spectroscopic
  * structures; an isotope is written with its mass number first (13C, 2H, 18O) and D, T stand for ²H, ³H.
  */
-import { elementsAndIsotopesObject } from 'chemical-elements';
+import { elementsAndIsotopesObject } from '../libraries.js';
 import { GeometryError } from './errors.js';
 
 interface IsotopeRecord {

@@ -1,5 +1,5 @@
 /** Principal moments and axes of inertia by symmetric eigendecomposition (ml-matrix). */
-import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
+import { EigenvalueDecomposition, Matrix } from '../libraries.js';
 import type { Matrix3, Vector3 } from './types.js';
 
 export interface PrincipalAxes {

@@ -15,7 +15,7 @@
  * once; `solveFactored` applies the factorisation to one right-hand side (y, d) with exactly the
  * arithmetic of a from-scratch solve, so cached and uncached results are bit-identical.
  */
-import { Matrix, SingularValueDecomposition } from 'ml-matrix';
+import { Matrix, SingularValueDecomposition } from '../libraries.js';
 import { FitError } from './errors.js';
 import { householderQr } from './householder.js';
 

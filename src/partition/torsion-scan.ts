@@ -1,7 +1,7 @@
 /**
  * A torsional potential from a scan: least-squares Fourier series in multiples of the rotor symmetry number.
  */
-import { Matrix, QrDecomposition } from 'ml-matrix';
+import { Matrix, QrDecomposition } from '../libraries.js';
 import type { FourierTerm } from '../model.js';
 import { fourierPotential } from './fourier-rotor.js';
 

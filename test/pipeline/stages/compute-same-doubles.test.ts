@@ -85,6 +85,18 @@ describe('compute stage: the same doubles as the per-point-object form', () => {
       }
     }
   });
+
+  it('a table asked for again (its memo entry used up) or after other species were computed has the same doubles', () => {
+    const some = cases.slice(0, 10);
+    const species = some.map(([, given]) => ({ ...given }));
+    const plans = some.map(([, given]) => planSpecies(given, SETTINGS));
+    // Samples of all ten first (more than the memo holds), then each table twice.
+    species.forEach((s, i) => computeSamples(s, physics, plans[i]!.sampleTemperatures, plans[i]!.zoneTemperatures));
+    species.forEach((s, i) => {
+      const ref = computeTableReference(s, physics, computeSamplesReference(s, physics, plans[i]!.sampleTemperatures, plans[i]!.zoneTemperatures), plans[i]!.tableTemperatures);
+      for (let round = 0; round < 2; round++) expect(bitsDeep(computeTable(s, physics, plans[i]!.tableTemperatures)), `${some[i]![0]} round ${round}`).toStrictEqual(bitsDeep(ref));
+    });
+  });
 });
 
 describe('sampling grid memo (pipeline/core/grid.ts)', () => {

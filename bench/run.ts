@@ -13,10 +13,12 @@
  *
  * Usage: node dist/bench/run.js [--sizes 1000,10000,50000] [--seed 1] [--jobs N] [--no-reference]
  *        [--no-nasa7] [--no-anharmonic] [--no-grid] [--grid-species N] [--json FILE] [--check-targets]
+ *        [--before OTHER_TREE/dist/bench/child.js [--rounds 3]]
  *   --sizes      comma-separated database sizes (default 1000,10000,50000; e.g. --sizes 200 for a quick run)
  *   --json       where the results go (default bench/results/latest.json; the folder is gitignored)
  *   --check-targets  exit 1 when a target of the throughput issue is missed (else the table only says so)
  *   --grid-species   species of the fit-node price table (bench/grid.ts; default 1000); --no-grid skips it
+ *   --before OTHER_TREE/dist/bench/child.js  that tree against this one, in --rounds alternating rounds (default 3)
  * The synthetic database uses the default settings (minimax fit, T_mid searched per species, size-scaled
  * limits): the speed must not come from a weaker fit. Every species of the mix builds with them (the
  * table's "built" column says so); a rejected species would cost less and flatter the numbers.
@@ -242,16 +244,18 @@ async function main(): Promise<number> {
     console.log(formatGridTable(rows, count));
     grid = { species: count, rows };
   }
-  // `--before OTHER_TREE/dist/bench/child.js`: no-change rebuild and peak RSS of that tree and this one,
-  // on the same files in this run (bench/runner.ts).
+  // `--before OTHER_TREE/dist/bench/child.js`: that tree and this one on the same files in this run, in
+  // alternating rounds (`--rounds`, default 3): cold without a cache, cold into an empty cache, no-change
+  // rebuild, peak RSS (bench/runner.ts).
   let rebuildBeforeAfter: unknown;
   const before = option(argv, '--before');
   if (before) {
-    const { benchRebuild, formatRebuildTable } = await import('./runner.js');
+    const { benchTrees, formatTreeTable, DEFAULT_ROUNDS } = await import('./runner.js');
     const own = path.join(here, 'child.js');
+    const rounds = Number(option(argv, '--rounds') ?? DEFAULT_ROUNDS);
     const rows = [];
-    for (const n of sizes) for (const c of [before, own]) rows.push(await benchRebuild(c, n, seed, jobs));
-    console.log(formatRebuildTable(rows));
+    for (const n of sizes) rows.push(...(await benchTrees([before, own], n, seed, jobs, rounds)));
+    console.log(formatTreeTable(rows));
     rebuildBeforeAfter = rows;
   }
   await mkdir(path.dirname(jsonFile), { recursive: true });

@@ -29,6 +29,7 @@ import { planSpecies } from '../pipeline/core/plan.js';
 import { computeSamples, type ComputedSpecies } from '../pipeline/stages/compute.js';
 import { fitOptionsFor, fitSpecies, fitSpeciesCounted, type FitStageOptions } from '../pipeline/stages/fit.js';
 import { checkDatabase } from '../pipeline/runner.js';
+import { option } from './common.js';
 import { writeSyntheticDatabase } from './synthetic.js';
 
 /** The candidates of the table, 'all' first (the reference of every ratio). */
@@ -213,10 +214,6 @@ export function formatGridTable(rows: readonly GridRow[], count: number): string
   ].join('\n');
 }
 
-function option(argv: readonly string[], name: string): string | undefined {
-  const i = argv.indexOf(name);
-  return i >= 0 ? argv[i + 1] : undefined;
-}
 
 const isMain = process.argv[1] !== undefined && path.resolve(process.argv[1]).endsWith(path.join('bench', 'grid.js'));
 if (isMain) {

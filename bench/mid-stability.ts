@@ -18,6 +18,7 @@ import { computeSamples } from '../pipeline/stages/compute.js';
 import { fitOptionsFor, fitSpecies } from '../pipeline/stages/fit.js';
 import { parseYamlText } from '../pipeline/stages/load.js';
 import { validateSpecies } from '../pipeline/stages/validate.js';
+import { option } from './common.js';
 import { seededRandom, syntheticSpecies } from './synthetic.js';
 
 export interface MidStabilityRow {
@@ -66,10 +67,6 @@ export function midStability(count: number, seed: number, epsilons: readonly num
   return rows;
 }
 
-function option(argv: readonly string[], name: string): string | undefined {
-  const i = argv.indexOf(name);
-  return i >= 0 ? argv[i + 1] : undefined;
-}
 
 if (process.argv[1] && fileURLToPath(import.meta.url) === path.resolve(process.argv[1])) {
   const argv = process.argv.slice(2);

@@ -6,12 +6,11 @@
  *
  * Usage: node dist/bench/report.js [--size 1000] [--seed 1]
  */
-import { spawnSync } from 'node:child_process';
-import { readFileSync } from 'node:fs';
 import { mkdtemp, readdir, readFile, rm, stat } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { folderBytes, runChild } from './common.js';
 import { writeSyntheticDatabase } from './synthetic.js';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
@@ -22,30 +21,14 @@ const arg = (name: string, fallback: number) => {
 const size = arg('--size', 1000);
 const seed = arg('--seed', 1);
 
-async function folderBytes(dir: string): Promise<number> {
-  let total = 0;
-  try {
-    for (const e of await readdir(dir, { withFileTypes: true })) {
-      const p = path.join(dir, e.name);
-      total += e.isDirectory() ? await folderBytes(p) : (await stat(p)).size;
-    }
-  } catch {
-    return 0;
-  }
-  return total;
-}
-
-function build(args: string[], reportFile: string): { wallMs: number; exitCode: number } {
-  spawnSync(process.execPath, [path.join(here, 'child.js'), reportFile, ...args], { stdio: 'ignore' });
-  return JSON.parse(readFileSync(reportFile, 'utf8')) as { wallMs: number; exitCode: number };
-}
+const build = (args: string[], reportFile: string) => runChild(path.join(here, 'child.js'), reportFile, args);
 
 const root = await mkdtemp(path.join(tmpdir(), 'qforge-bench-report-'));
 try {
   const db = path.join(root, 'db');
   await writeSyntheticDatabase(db, size, seed, 'tolerances: {cp: 2, h: 0.5, s: 0.5}');
-  const plain = build(['build', db, '--out', path.join(root, 'plain'), '--no-cache', '--quiet', '--keep-going'], path.join(root, 'plain.json'));
-  const withReport = build(['build', db, '--out', path.join(root, 'out'), '--no-cache', '--quiet', '--keep-going', '--report'], path.join(root, 'report.json'));
+  const plain = await build(['build', db, '--out', path.join(root, 'plain'), '--no-cache', '--quiet', '--keep-going'], path.join(root, 'plain.json'));
+  const withReport = await build(['build', db, '--out', path.join(root, 'out'), '--no-cache', '--quiet', '--keep-going', '--report'], path.join(root, 'report.json'));
   const main = (await stat(path.join(root, 'out', 'report.html'))).size;
   const pages = await folderBytes(path.join(root, 'out', 'report'));
   const count = (await readdir(path.join(root, 'out', 'report')).catch(() => [])).length;

@@ -23,11 +23,11 @@
  * limits): the speed must not come from a weaker fit. Every species of the mix builds with them (the
  * table's "built" column says so); a rejected species would cost less and flatter the numbers.
  */
-import { spawnSync } from 'node:child_process';
-import { mkdir, mkdtemp, readdir, readFile, rm, stat, writeFile } from 'node:fs/promises';
+import { mkdir, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { cpus, tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { folderBytes, option, runChild } from './common.js';
 import { runReference } from './reference.js';
 import { writeSyntheticDatabase } from './synthetic.js';
 
@@ -44,14 +44,6 @@ const TARGETS = {
   rss10kMb: 400,
   rss50kMb: 500,
 };
-
-interface ChildReport {
-  exitCode: number;
-  wallMs: number;
-  userMs: number;
-  systemMs: number;
-  maxRssKb: number;
-}
 
 interface BuildFigures {
   wallS: number;
@@ -82,23 +74,8 @@ interface SizeResult {
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 
-async function folderBytes(dir: string): Promise<number> {
-  let total = 0;
-  for (const e of await readdir(dir, { withFileTypes: true }).catch(() => [])) {
-    const p = path.join(dir, e.name);
-    total += e.isDirectory() ? await folderBytes(p) : (await stat(p)).size;
-  }
-  return total;
-}
-
 async function build(work: string, dir: string, out: string, args: string[], n: number): Promise<BuildFigures> {
-  const report = path.join(work, 'child-report.json');
-  const r = spawnSync(process.execPath, [path.join(here, 'child.js'), report, 'build', dir, '--out', out, '-q', '-k', ...args], {
-    stdio: ['ignore', 'ignore', 'pipe'],
-    maxBuffer: 1 << 30,
-  });
-  if (r.error) throw r.error;
-  const child = JSON.parse(await readFile(report, 'utf8')) as ChildReport;
+  const child = await runChild(path.join(here, 'child.js'), path.join(work, 'child-report.json'), ['build', dir, '--out', out, '-q', '-k', ...args]);
   const summary = JSON.parse(await readFile(path.join(out, 'summary.json'), 'utf8')) as {
     counts: { ok: number; cache_hits: number };
     species: Array<{ timings_ms: Record<string, number> }>;
@@ -189,10 +166,6 @@ function targets(results: readonly SizeResult[]): Array<{ what: string; value: n
   return out;
 }
 
-function option(argv: readonly string[], name: string): string | undefined {
-  const i = argv.indexOf(name);
-  return i >= 0 ? argv[i + 1] : undefined;
-}
 
 async function main(): Promise<number> {
   const argv = process.argv.slice(2);

@@ -14,11 +14,11 @@
  * Usage: node dist/bench/runner.js [--sizes 1000,2000,10000] [--seed 1] [--jobs N] [--rounds 3]
  *        [--child OTHER_TREE/dist/bench/child.js ...] [--json FILE]
  */
-import { spawnSync } from 'node:child_process';
-import { mkdtemp, readdir, readFile, rm, stat, writeFile } from 'node:fs/promises';
+import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { folderBytes, options, runChild } from './common.js';
 import { writeSyntheticDatabase } from './synthetic.js';
 
 /** The same settings as bench/run.ts: the defaults. */
@@ -42,27 +42,6 @@ export interface TreeFigures {
   rebuildPeakRssMb: number;
   cacheHits: number;
   cacheMb: number;
-}
-
-async function folderBytes(dir: string): Promise<number> {
-  let total = 0;
-  for (const e of await readdir(dir, { withFileTypes: true, recursive: true }).catch(() => [])) {
-    if (e.isFile()) total += (await stat(path.join(e.parentPath, e.name))).size;
-  }
-  return total;
-}
-
-interface ChildFigures {
-  wallMs: number;
-  userMs: number;
-  systemMs: number;
-  maxRssKb: number;
-}
-
-async function runChild(child: string, report: string, args: string[]): Promise<ChildFigures> {
-  const r = spawnSync(process.execPath, [child, report, ...args], { stdio: ['ignore', 'ignore', 'pipe'], maxBuffer: 1 << 30 });
-  if (r.error) throw r.error;
-  return JSON.parse(await readFile(report, 'utf8')) as ChildFigures;
 }
 
 export function median(values: readonly number[]): number {
@@ -149,12 +128,6 @@ export function formatTreeTable(rows: readonly TreeFigures[]): string {
     ].join(' '),
   );
   return [`rounds: ${rows[0]?.noCacheWallS.length ?? 0}, trees in alternating order`, head, ...lines].join('\n');
-}
-
-function options(argv: readonly string[], name: string): string[] {
-  const out: string[] = [];
-  for (let i = 0; i < argv.length; i++) if (argv[i] === name && argv[i + 1] !== undefined) out.push(argv[i + 1]!);
-  return out;
 }
 
 async function main(): Promise<void> {

@@ -1,0 +1,45 @@
+/**
+ * Pieces shared by the benchmark scripts: command-line values, the size of a folder, and one build in a
+ * child process (bench/child.ts) with the figures it reports about itself.
+ */
+import { spawnSync } from 'node:child_process';
+import { readdir, readFile, stat } from 'node:fs/promises';
+import path from 'node:path';
+
+/** The value after `name` in `argv`, or undefined. */
+export function option(argv: readonly string[], name: string): string | undefined {
+  const i = argv.indexOf(name);
+  return i >= 0 ? argv[i + 1] : undefined;
+}
+
+/** Every value after an occurrence of `name` in `argv` (a repeatable option), in order. */
+export function options(argv: readonly string[], name: string): string[] {
+  const out: string[] = [];
+  for (let i = 0; i < argv.length; i++) if (argv[i] === name && argv[i + 1] !== undefined) out.push(argv[i + 1]!);
+  return out;
+}
+
+/** Total bytes of the files below `dir` (0 when it does not exist). */
+export async function folderBytes(dir: string): Promise<number> {
+  let total = 0;
+  for (const e of await readdir(dir, { withFileTypes: true, recursive: true }).catch(() => [])) {
+    if (e.isFile()) total += (await stat(path.join(e.parentPath, e.name))).size;
+  }
+  return total;
+}
+
+/** What bench/child.ts writes about the command it ran. */
+export interface ChildReport {
+  exitCode: number;
+  wallMs: number;
+  userMs: number;
+  systemMs: number;
+  maxRssKb: number;
+}
+
+/** Runs `args` (a qforge command line) in a child process of `child` (a child.js) and returns its report. */
+export async function runChild(child: string, report: string, args: readonly string[]): Promise<ChildReport> {
+  const r = spawnSync(process.execPath, [child, report, ...args], { stdio: ['ignore', 'ignore', 'pipe'], maxBuffer: 1 << 30 });
+  if (r.error) throw r.error;
+  return JSON.parse(await readFile(report, 'utf8')) as ChildReport;
+}

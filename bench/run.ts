@@ -29,7 +29,8 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { folderBytes, option, runChild } from './common.js';
 import { runReference } from './reference.js';
-import { writeSyntheticDatabase } from './synthetic.js';
+import { costByKind, formatKindTable, type KindCost } from './kinds.js';
+import { SYNTHETIC_KIND_LABELS, syntheticKindLabel, syntheticSpecies, writeSyntheticDatabase } from './synthetic.js';
 
 const DEFAULT_SIZES = [1000, 10000, 50000];
 /** Extra settings of the synthetic database: none, the defaults. */
@@ -56,6 +57,8 @@ interface BuildFigures {
   cacheHits: number;
   /** species/s of each stage: N divided by the sum of that stage's per-species times. */
   stageSpeciesPerS: Record<string, number>;
+  /** Stage times by kind of species (bench/kinds.ts), for the build asked to report them. */
+  byKind?: KindCost[];
 }
 
 interface SizeResult {
@@ -74,11 +77,19 @@ interface SizeResult {
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 
-async function build(work: string, dir: string, out: string, args: string[], n: number): Promise<BuildFigures> {
+/** The cost-by-kind label of each synthetic species name SYN000000 … of a seeded set (bench/synthetic.ts). */
+function syntheticKinds(seed: number): (name: string) => string | undefined {
+  return (name) => {
+    const m = /^SYN(\d{6})$/.exec(name);
+    return m ? syntheticKindLabel(syntheticSpecies(seed, Number(m[1]))) : undefined;
+  };
+}
+
+async function build(work: string, dir: string, out: string, args: string[], n: number, kindOf?: (name: string) => string | undefined): Promise<BuildFigures> {
   const child = await runChild(path.join(here, 'child.js'), path.join(work, 'child-report.json'), ['build', dir, '--out', out, '-q', '-k', ...args]);
   const summary = JSON.parse(await readFile(path.join(out, 'summary.json'), 'utf8')) as {
     counts: { ok: number; cache_hits: number };
-    species: Array<{ timings_ms: Record<string, number> }>;
+    species: Array<{ name: string; timings_ms: Record<string, number> }>;
   };
   const stageMs: Record<string, number> = {};
   for (const s of summary.species) for (const [k, v] of Object.entries(s.timings_ms)) stageMs[k] = (stageMs[k] ?? 0) + v;
@@ -93,6 +104,7 @@ async function build(work: string, dir: string, out: string, args: string[], n: 
     built: summary.counts.ok,
     cacheHits: summary.counts.cache_hits,
     stageSpeciesPerS: Object.fromEntries(Object.entries(stageMs).map(([k, ms]) => [k, ms > 0 ? n / (ms / 1000) : Infinity])),
+    ...(kindOf ? { byKind: costByKind(summary.species, kindOf, SYNTHETIC_KIND_LABELS) } : {}),
   };
 }
 
@@ -101,7 +113,7 @@ async function benchSize(work: string, n: number, seed: number, jobs: string[], 
   const mix = await writeSyntheticDatabase(dir, n, seed, BENCH_SETTINGS);
   const out = path.join(work, `build-${n}`);
   const cache = path.join(work, `cache-${n}`);
-  const coldNoCache = await build(work, dir, out, ['--no-cache', ...jobs], n);
+  const coldNoCache = await build(work, dir, out, ['--no-cache', ...jobs], n, syntheticKinds(seed));
   const coldFreshCache = await build(work, dir, out, ['--cache-dir', cache, ...jobs], n);
   const rebuild = await build(work, dir, out, ['--cache-dir', cache, ...jobs], n);
   const cacheMb = (await folderBytes(cache)) / 2 ** 20;
@@ -190,6 +202,9 @@ async function main(): Promise<number> {
   }
   console.log(`qforge bench: seed ${seed}, ${cpus().length} cores, node ${process.version}${jobsValue ? `, --jobs ${jobsValue}` : ''}`);
   printTable(results);
+  for (const r of results) {
+    if (r.coldNoCache.byKind) console.log(formatKindTable(r.coldNoCache.byKind, `${r.size} species, cold --no-cache: per-species stage times by kind (each thread's first species carries its warm-up)`));
+  }
   const checks = targets(results);
   for (const t of checks) console.log(`${t.what.padEnd(44)} ${t.value.toFixed(2).padStart(10)}   target ${t.limit}   ${t.ok ? 'ok' : 'MISSED'}`);
 

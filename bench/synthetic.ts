@@ -171,6 +171,14 @@ export function syntheticSpecies(seed: number, i: number): SyntheticSpecies {
   return polyatomic(name, rnd);
 }
 
+/** Kinds of the bench's cost-by-kind table (bench/kinds.ts), in the order it prints them. */
+export const SYNTHETIC_KIND_LABELS = ['atom', 'diatomic', 'linear', 'nonlinear', 'nonlinear with rotors'] as const;
+
+/** The cost-by-kind label of a synthetic species: its kind, nonlinear split by whether it has hindered rotors. */
+export function syntheticKindLabel(s: Pick<SyntheticSpecies, 'kind' | 'rotors'>): string {
+  return s.kind === 'nonlinear' && s.rotors > 0 ? 'nonlinear with rotors' : s.kind;
+}
+
 /** Settings of the synthetic database: the demo defaults, with the fit settings the caller chooses. */
 export function syntheticSettings(extra = ''): string {
   return [

@@ -11,7 +11,7 @@
  */
 
 /** The stages whose times are summed (summary.json `timings_ms` keys that do the per-species work). */
-export const KIND_STAGES = ['load', 'validate', 'compute', 'fit', 'verify', 'table'] as const;
+export const KIND_STAGES = ['load', 'validate', 'compute', 'fit', 'verify', 'table', 'uncertainty'] as const;
 
 export interface SpeciesTimings {
   name: string;

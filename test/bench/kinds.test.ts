@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { costByKind, formatKindTable } from '../../bench/kinds.js';
 import { SYNTHETIC_KIND_LABELS, syntheticKindLabel, syntheticSpecies } from '../../bench/synthetic.js';
 
-const t = (compute: number, fit: number) => ({ load: 0, validate: 0, compute, fit, verify: 0, table: 0, emit: 99 });
+const t = (compute: number, fit: number) => ({ load: 0, validate: 0, compute, fit, verify: 0, table: 0, uncertainty: 0, emit: 99 });
 
 describe('bench cost by kind', () => {
   it('medians, means and shares per kind, in the given order, other stages ignored', () => {

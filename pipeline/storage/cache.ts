@@ -20,7 +20,7 @@
  * Which entries a database uses is recorded per database (cache-uses.ts), so `qforge cache prune` can drop
  * the entries no database sharing the folder still uses.
  */
-import { mkdirSync, readFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { describeFsError, writeFileAtomicNoSync } from './atomic-write.js';
 import { canonicalCopy, canonicalJson, sha256Hex } from './hash.js';
@@ -78,20 +78,39 @@ export class StageCache {
 
   async get<T>(kind: CacheKind, key: string): Promise<CacheLookup<T>> {
     if (!this.dir) return { outcome: 'off' };
-    const file = cacheEntryPath(this.dir, kind, key);
-    let bytes: Buffer;
-    try {
-      // Synchronous: an entry is small, and a hit should cost a read, not thread-pool round trips.
-      bytes = this.newEntries.get(file) ?? readFileSync(file);
-    } catch {
-      return { outcome: 'miss' };
-    }
+    const bytes = this.stored(cacheEntryPath(this.dir, kind, key));
+    if (bytes === undefined) return { outcome: 'miss' };
     const payload = checkedPayload(bytes, kind, key);
     if (typeof payload === 'string') return { outcome: 'corrupt', reason: payload };
     try {
       return { outcome: 'hit', value: JSON.parse(payload.toString('utf8')) as T };
     } catch {
       return { outcome: 'corrupt', reason: 'not valid JSON' };
+    }
+  }
+
+  /** Whether the last lookup that went to disk found nothing (see `stored`). */
+  private lastLookupMissed = false;
+
+  /**
+   * The bytes of the entry file `file` (a queued entry first), or undefined when there is none or it cannot
+   * be read. Synchronous: an entry is small, and a hit should cost a read, not thread-pool round trips.
+   * A read of a missing file throws, and node's error object (with its stack) made a miss cost ~5–30 µs
+   * against ~0.5 µs for a stat that is told not to throw — 10,000 misses per 2,000 species into a fresh
+   * cache. So after a miss the next lookup asks first whether the file exists; after a hit it reads at
+   * once (a no-change rebuild hits every time and pays no extra call). Either way the outcome is the same.
+   */
+  private stored(file: string): Buffer | undefined {
+    const queued = this.newEntries.get(file);
+    if (queued !== undefined) return queued;
+    try {
+      if (this.lastLookupMissed && statSync(file, { throwIfNoEntry: false }) === undefined) return undefined;
+      const bytes = readFileSync(file);
+      this.lastLookupMissed = false;
+      return bytes;
+    } catch {
+      this.lastLookupMissed = true;
+      return undefined;
     }
   }
 
@@ -105,13 +124,8 @@ export class StageCache {
    */
   async getText(kind: CacheKind, key: string): Promise<CacheLookup<string>> {
     if (!this.dir) return { outcome: 'off' };
-    let bytes: Buffer;
-    try {
-      const file = cacheEntryPath(this.dir, kind, key);
-      bytes = this.newEntries.get(file) ?? readFileSync(file);
-    } catch {
-      return { outcome: 'miss' };
-    }
+    const bytes = this.stored(cacheEntryPath(this.dir, kind, key));
+    if (bytes === undefined) return { outcome: 'miss' };
     const payload = checkedPayload(bytes, kind, key);
     if (typeof payload === 'string') return { outcome: 'corrupt', reason: payload };
     return { outcome: 'hit', value: payload.toString('utf8') };

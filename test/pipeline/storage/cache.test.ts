@@ -68,4 +68,32 @@ describe('stage cache entries', () => {
       await rm(dir, { recursive: true, force: true });
     }
   });
+  it('lookups after misses and after hits give the same outcomes: hit, miss, corrupt, and an entry another build wrote meanwhile', async () => {
+    const dir = await mkdtemp(path.join(tmpdir(), 'qforge-cache-'));
+    try {
+      const writer = new StageCache(dir);
+      await writer.putText('fit', KEY_A, '[1]');
+      writer.flushWrites();
+      const cache = new StageCache(dir);
+      // miss, then hit (the lookup after a miss asks whether the file exists first), then miss again
+      expect((await cache.getText('fit', KEY_B)).outcome).toBe('miss');
+      expect(await cache.get('fit', KEY_A)).toEqual({ outcome: 'hit', value: [1] });
+      expect((await cache.get('fit', KEY_B)).outcome).toBe('miss');
+      expect((await cache.get('table', KEY_A)).outcome).toBe('miss');
+      // written by another build after our misses: found at once
+      await writer.putText('fit', KEY_B, '[2]');
+      writer.flushWrites();
+      expect(await cache.getText('fit', KEY_B)).toEqual({ outcome: 'hit', value: '[2]' });
+      // a damaged entry right after a miss is still reported, not taken for a miss
+      expect((await cache.get('table', KEY_B)).outcome).toBe('miss');
+      await writeFile(cacheEntryPath(dir, 'fit', KEY_A), 'not an entry');
+      expect((await cache.get('fit', KEY_A)).outcome).toBe('corrupt');
+      // a kind folder that is a file: every lookup below it is a miss, whatever came before
+      await writeFile(path.join(dir, 'samples'), 'not a folder');
+      expect((await cache.get('samples', KEY_A)).outcome).toBe('miss');
+      expect((await cache.get('samples', KEY_B)).outcome).toBe('miss');
+    } finally {
+      await rm(dir, { recursive: true, force: true });
+    }
+  });
 });

@@ -106,13 +106,22 @@ export function formatNasa7Record(rec: Nasa7Record): string[] {
     formatFixed(p.tLow, 10, name, 'tLow') +
     formatFixed(p.tHigh, 10, name, 'tHigh') +
     formatFixed(p.tMid, 8, name, 'tMid');
-  const e = (c: Coefficients7, set: 'low' | 'high', i: number) => formatE15(c[i]!, name, `${set}.a${i + 1}`);
   const h = p.high;
   const l = p.low;
-  const line2 = [0, 1, 2, 3, 4].map((i) => e(h, 'high', i)).join('');
-  const line3 = e(h, 'high', 5) + e(h, 'high', 6) + [0, 1, 2].map((i) => e(l, 'low', i)).join('');
-  const line4 = [3, 4, 5, 6].map((i) => e(l, 'low', i)).join('');
+  const line2 = coefficientFields(h, 'high', name, 0, 5);
+  const line3 = coefficientFields(h, 'high', name, 5, 7) + coefficientFields(l, 'low', name, 0, 3);
+  const line4 = coefficientFields(l, 'low', name, 3, 7);
   return [withLineNumber(line1, 1), withLineNumber(line2, 2), withLineNumber(line3, 3), withLineNumber(line4, 4)];
+}
+
+/**
+ * Coefficients from … to − 1 of one set as E15 fields, one after the other. A module function rather than a
+ * closure per record: V8 compiled each record's closure anew (14 compilations per thread).
+ */
+function coefficientFields(c: Coefficients7, set: 'low' | 'high', name: string, from: number, to: number): string {
+  let out = '';
+  for (let i = from; i < to; i++) out += formatE15(c[i]!, name, `${set}.a${i + 1}`);
+  return out;
 }
 
 /** The whole file: THERMO, default ranges, records in the given order, END; '\n' after every line. */

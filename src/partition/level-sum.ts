@@ -24,10 +24,13 @@ export interface LevelList {
  * lowest is zero, scaled by `toKelvin` and sorted (ties keep input order, so the result is deterministic).
  */
 export function createLevelList(
-  energies: ArrayLike<number>,
+  energiesIn: ArrayLike<number>,
   weights: ArrayLike<number>,
   toKelvin: number,
 ): LevelList {
+  // One array type for the sort and the loops below (the same doubles): callers pass Float64Arrays and plain
+  // arrays, and each new kind deoptimised the sort's compiled code again (13 compilations per thread).
+  const energies = energiesIn instanceof Float64Array ? energiesIn : Float64Array.from(energiesIn);
   const n = energies.length;
   if (n === 0) throw new LevelSumError('level list is empty');
   if (weights.length !== n) throw new LevelSumError('energies and weights differ in length');

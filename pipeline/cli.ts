@@ -20,6 +20,7 @@ import type { Diagnostic } from './core/diagnostics.js';
 import type { CliIo } from './commands/io.js';
 import { displayPath } from './core/display-path.js';
 import { parseShard, type Shard } from './core/shard.js';
+import { SPECIES_PER_THREAD } from './workers/auto-threads.js';
 
 export type { CliIo } from './commands/io.js';
 
@@ -46,9 +47,9 @@ and with --report (or outputs.report in qforge.yaml) report.html
 inputs). The cache lives in .qforge-cache/ inside the database folder
 (--cache-dir to move it; qforge cache prune drops entries no species uses).
 --jobs N runs compute, fit and verify on N threads: this one and N-1 worker
-threads (default: the number of cores, at most one per 16 species to build,
-since a thread costs about a dozen small species to start); the outputs are
-the same bytes for every N.
+threads (default: the number of cores, at most one per ${SPECIES_PER_THREAD} species to build,
+since each thread compiles and warms up the code again, ~2 s of CPU); the
+outputs are the same bytes for every N.
 
 Sharding: --shard I/N builds only the species whose name hashes into shard I
 of N; qforge merge SHARD_DIR... --out OUT joins all N shard folders into the
@@ -309,7 +310,7 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('--no-cache', 'recompute and refit every species')
     .option('--cache-dir <dir>', 'cache folder (default: .qforge-cache inside the database folder)')
     .option('-k, --keep-going', 'write the species that succeeded even when others failed (exit code stays 1)')
-    .option('-j, --jobs <n>', 'threads for checking files and for compute, fit and verify, this one included (default: the cores, at most one per 16 species)', positiveInt)
+    .option('-j, --jobs <n>', `threads for checking files and for compute, fit and verify, this one included (default: the cores, at most one per ${SPECIES_PER_THREAD} species)`, positiveInt)
     .option('--shard <i/n>', 'build only shard I of N (by a stable hash of the species name); see qforge merge', shardArg)
     .option('-q, --quiet', 'no progress output')
     .option('--json', 'print the build summary as JSON on stdout')

@@ -1,6 +1,7 @@
 // The default thread count (no --jobs): our own rule, written by hand for this test (no external source).
 import { describe, expect, it } from 'vitest';
-import { autoThreads, SPECIES_PER_THREAD } from '../../../pipeline/runner.js';
+import { autoThreads, SPECIES_PER_THREAD } from '../../../pipeline/workers/auto-threads.js';
+import { runCli } from '../helpers.js';
 
 describe('default worker threads', () => {
   it('stays on the main thread for small databases and grows one thread per SPECIES_PER_THREAD species up to the cores', () => {
@@ -10,5 +11,12 @@ describe('default worker threads', () => {
     expect(autoThreads(2 * SPECIES_PER_THREAD, 2)).toBe(2);
     expect(autoThreads(10_000, 2)).toBe(2);
     expect(autoThreads(10_000, 1)).toBe(1);
+  });
+
+  it('build --help states the rule in force (the number comes from the rule itself)', async () => {
+    const r = await runCli(['build', '--help'], process.cwd());
+    const text = r.stdout.replace(/\s+/g, ' ');
+    expect(text).toContain(`at most one per ${SPECIES_PER_THREAD} species to build`);
+    expect(text).toContain(`at most one per ${SPECIES_PER_THREAD} species)`);
   });
 });

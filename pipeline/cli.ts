@@ -48,8 +48,8 @@ inputs). The cache lives in .qforge-cache/ inside the database folder
 (--cache-dir to move it; qforge cache prune drops entries no species uses).
 --jobs N runs compute, fit and verify on N threads: this one and N-1 worker
 threads (default: the number of cores, at most one per ${SPECIES_PER_THREAD} species to build,
-since each thread compiles and warms up the code again, ~2 s of CPU); the
-outputs are the same bytes for every N.
+since each thread compiles and warms up the code again, ~2 s of CPU; never
+more threads than species); the outputs are the same bytes for every N.
 
 Sharding: --shard I/N builds only the species whose name hashes into shard I
 of N; qforge merge SHARD_DIR... --out OUT joins all N shard folders into the

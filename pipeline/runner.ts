@@ -875,7 +875,9 @@ async function buildChecked(
     });
   };
   const wantsReport = (c: { settingsOk: boolean; settings: DatabaseSettings }) => Boolean(c.settingsOk && (opts.report || c.settings.outputs.report));
-  const threadsFor = (count: number) => (opts.jobs !== undefined ? Math.max(1, opts.jobs) : autoThreads(count, opts.maxThreads ?? 1));
+  // --jobs is a ceiling: a thread beyond one per file (check) or species (build) would have nothing to do and
+  // still start, compile and warm up (--jobs 40 on 22 species: 1.1 GB and 8.9 s instead of ~1 s).
+  const threadsFor = (count: number) => (opts.jobs !== undefined ? Math.max(1, Math.min(opts.jobs, count)) : autoThreads(count, opts.maxThreads ?? 1));
   // Set by checkDatabase, which always asks `checkOn` before checking any file.
   let checkContext: CheckContext | undefined;
   let check: CheckReport;

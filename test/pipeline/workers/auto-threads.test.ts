@@ -1,7 +1,9 @@
 // The default thread count (no --jobs): our own rule, written by hand for this test (no external source).
 import { describe, expect, it } from 'vitest';
 import { autoThreads, SPECIES_PER_THREAD } from '../../../pipeline/workers/auto-threads.js';
-import { runCli } from '../helpers.js';
+import { rm } from 'node:fs/promises';
+import path from 'node:path';
+import { runCli, tempWorkspace } from '../helpers.js';
 
 describe('default worker threads', () => {
   it('stays on the main thread for small databases and grows one thread per SPECIES_PER_THREAD species up to the cores', () => {
@@ -18,5 +20,17 @@ describe('default worker threads', () => {
     const text = r.stdout.replace(/\s+/g, ' ');
     expect(text).toContain(`at most one per ${SPECIES_PER_THREAD} species to build`);
     expect(text).toContain(`at most one per ${SPECIES_PER_THREAD} species)`);
+  });
+
+  it('--jobs is a ceiling: no more threads than species to build (2 species, --jobs 64: 2 threads)', async () => {
+    const ws = await tempWorkspace();
+    try {
+      for (const f of ['Ar.yaml', 'CO.yaml', 'H2O.yaml']) await rm(path.join(ws.db, f));
+      const r = await runCli(['build', 'db', '--out', 'out', '--no-cache', '--jobs', '64'], ws.root);
+      expect(r.code, r.stderr).toBe(0);
+      expect(r.stderr).toMatch(/compute, fit and verify per species \(2 threads\)/);
+    } finally {
+      await ws.cleanup();
+    }
   });
 });

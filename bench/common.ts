@@ -43,3 +43,20 @@ export async function runChild(child: string, report: string, args: readonly str
   if (r.error) throw r.error;
   return JSON.parse(await readFile(report, 'utf8')) as ChildReport;
 }
+
+/** Median of `values` (the mean of the two middle values for an even count; NaN for none). */
+export function median(values: readonly number[]): number {
+  if (values.length === 0) return NaN;
+  const v = [...values].sort((a, b) => a - b);
+  const mid = v.length >> 1;
+  return v.length % 2 ? v[mid]! : (v[mid - 1]! + v[mid]!) / 2;
+}
+
+/**
+ * The lines of a text table: each column padded to its widest cell, left-aligned where `left(column)` says
+ * so and right-aligned otherwise, two spaces between columns.
+ */
+export function alignColumns(rows: readonly (readonly string[])[], left: (column: number) => boolean): string[] {
+  const widths = rows[0]!.map((_, i) => Math.max(...rows.map((r) => r[i]!.length)));
+  return rows.map((r) => r.map((c, i) => (left(i) ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join('  '));
+}

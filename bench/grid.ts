@@ -29,7 +29,7 @@ import { planSpecies } from '../pipeline/core/plan.js';
 import { computeSamples, type ComputedSpecies } from '../pipeline/stages/compute.js';
 import { fitOptionsFor, fitSpecies, fitSpeciesCounted, type FitStageOptions } from '../pipeline/stages/fit.js';
 import { checkDatabase } from '../pipeline/runner.js';
-import { option } from './common.js';
+import { alignColumns, option } from './common.js';
 import { writeSyntheticDatabase } from './synthetic.js';
 
 /** The candidates of the table, 'all' first (the reference of every ratio). */
@@ -204,8 +204,7 @@ export function formatGridTable(rows: readonly GridRow[], count: number): string
     r.worstSpecies,
   ]);
   const all = [head, ...body];
-  const widths = head.map((_, i) => Math.max(...all.map((r) => r[i]!.length)));
-  const lines = all.map((r) => r.map((c, i) => (i === 0 || i === 7 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join('  '));
+  const lines = alignColumns(all, (i) => i === 0 || i === 7);
   const best = cheapestMeeting(rows);
   return [
     `fit node sets on ${count} synthetic species (ratio: worst limit-relative error on the 10 K check grid / that of the fit from all points; requirement ≤ ${REQUIRED_RATIO} for every species)`,

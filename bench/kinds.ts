@@ -9,6 +9,7 @@
  * (code not yet optimised, the fit's factorisations made cold: a few hundred ms), which a mean of a
  * small kind would carry.
  */
+import { alignColumns, median } from './common.js';
 
 /** The stages whose times are summed (summary.json `timings_ms` keys that do the per-species work). */
 export const KIND_STAGES = ['load', 'validate', 'compute', 'fit', 'verify', 'table', 'uncertainty'] as const;
@@ -27,13 +28,6 @@ export interface KindCost {
   meanMs: Record<string, number>;
   /** This kind's part of the stage time of every species (0 … 1). */
   share: number;
-}
-
-function medianOf(values: number[]): number {
-  if (values.length === 0) return NaN;
-  const v = [...values].sort((a, b) => a - b);
-  const mid = v.length >> 1;
-  return v.length % 2 ? v[mid]! : (v[mid - 1]! + v[mid]!) / 2;
 }
 
 /**
@@ -65,7 +59,7 @@ export function costByKind(species: readonly SpeciesTimings[], kindOf: (name: st
     const meanMs: Record<string, number> = {};
     for (const key of [...KIND_STAGES, 'total']) {
       const values = rows.map((r) => r[key]!);
-      medianMs[key] = medianOf(values);
+      medianMs[key] = median(values);
       meanMs[key] = values.reduce((a, b) => a + b, 0) / values.length;
     }
     const total = rows.reduce((a, r) => a + r.total!, 0);
@@ -80,6 +74,5 @@ export function formatKindTable(rows: readonly KindCost[], title: string): strin
   for (const r of rows) {
     lines.push([r.kind, String(r.count), ...KIND_STAGES.map((s) => f(r.medianMs[s]!)), f(r.medianMs.total!), f(r.meanMs.total!), f(100 * r.share, 1)]);
   }
-  const widths = lines[0]!.map((_, i) => Math.max(...lines.map((l) => l[i]!.length)));
-  return [title, ...lines.map((l) => l.map((c, i) => (i === 0 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join('  '))].join('\n');
+  return [title, ...alignColumns(lines, (i) => i === 0)].join('\n');
 }

@@ -27,7 +27,7 @@ import { mkdir, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { cpus, tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { folderBytes, option, runChild } from './common.js';
+import { alignColumns, folderBytes, option, runChild } from './common.js';
 import { runReference } from './reference.js';
 import { costByKind, formatKindTable, type KindCost } from './kinds.js';
 import { SYNTHETIC_KIND_LABELS, syntheticKindLabel, syntheticSpecies, writeSyntheticDatabase } from './synthetic.js';
@@ -155,8 +155,7 @@ function printTable(results: readonly SizeResult[]): void {
     rows.push([String(r.size), 'reference', f(r.reference.wallS, 2), f(r.reference.cpuS, 2), f((r.reference.cpuS * 1000) / r.size, 2), f(r.reference.speciesPerS, 0), '', '', '', '']);
     rows.push([String(r.size), `qforge/reference: wall ${f(r.ratio, 2)}, CPU ${f(r.cpuRatio, 2)}; cache ${f(r.cacheMb, 1)} MB`, '', '', '', '', '', '', '', '']);
   }
-  const widths = rows[0]!.map((_, i) => Math.max(...rows.map((r) => r[i]!.length)));
-  for (const r of rows) console.log(r.map((c, i) => (i < 2 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join('  '));
+  for (const line of alignColumns(rows, (i) => i < 2)) console.log(line);
 }
 
 function targets(results: readonly SizeResult[]): Array<{ what: string; value: number; limit: number; ok: boolean }> {

@@ -18,7 +18,7 @@ import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { folderBytes, options, runChild } from './common.js';
+import { folderBytes, median, options, runChild } from './common.js';
 import { writeSyntheticDatabase } from './synthetic.js';
 
 /** The same settings as bench/run.ts: the defaults. */
@@ -42,12 +42,6 @@ export interface TreeFigures {
   rebuildPeakRssMb: number;
   cacheHits: number;
   cacheMb: number;
-}
-
-export function median(values: readonly number[]): number {
-  const v = [...values].sort((a, b) => a - b);
-  const mid = v.length >> 1;
-  return v.length % 2 ? v[mid]! : (v[mid - 1]! + v[mid]!) / 2;
 }
 
 /** Round r's order of the trees: as given for even r, reversed for odd r. */

@@ -225,7 +225,6 @@ export interface CheckOptions {
   inputDigests?: { hashInputs(files: readonly string[]): void; inputDigest(file: string): string | undefined };
 }
 
-
 /** What a valid species' object is kept as until its turn: in memory, in the spill file, or not at all. */
 type Kept = { species: Species; normalisedInput: unknown } | SpillRef | undefined;
 

@@ -3,7 +3,8 @@
  * median it reports. Inputs written by hand here.
  */
 import { describe, expect, it } from 'vitest';
-import { median, roundOrder } from '../../bench/runner.js';
+import { median } from '../../bench/common.js';
+import { roundOrder } from '../../bench/runner.js';
 
 describe('bench tree comparison', () => {
   it('runs the trees in the given order in even rounds and reversed in odd ones, without changing the input', () => {

@@ -205,6 +205,8 @@ export const HELP_WIDTH = 80;
  * 401–482 MB (into a fresh cache), which is why large databases drop to 20 % (`heapGrowthForDatabase`). The
  * memory bound of the throughput issue (400 MB at 10,000, 500 MB at 50,000) is met with it, so it is the
  * default; QFORGE_HEAP_GROWTH=0 buys the rest of the speed back.
+ * With so little room the threads' small heaps started a full collection every ~250 ms whatever they
+ * promoted; pipeline/workers/heap.ts gives them a fixed amount of room instead (measured there).
  * (Part of the price is V8's parallel collector threads competing with the build's threads for the cores:
  * node --single-threaded-gc bin/qforge.js … That flag cannot be set once V8 runs, so it is the user's to give.)
  */

@@ -47,6 +47,7 @@ import { displayPath } from './core/display-path.js';
 import { compareText, errorText } from './core/text.js';
 import type { ReportRequest } from './report/build-report.js';
 import { autoThreads } from './workers/auto-threads.js';
+import { holdHeapReserve, RESERVE_MIN_FILES, type HeapReserve } from './workers/heap.js';
 
 /**
  * The per-species stages and validation, loaded on first use: a rebuild that takes every species from the
@@ -828,9 +829,12 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   // A rebuild into an existing OUT hashes the species files and the previous files beside the check
   // (storage/previous-digests.ts).
   const previous = cacheDir !== undefined && !opts.shard ? PreviousDigests.start(opts.out, ['thermo.json', 'nasa7.txt'], ['tables'], true) : undefined;
+  // Taken by the check once it knows the database is large (workers/heap.ts), dropped with the build.
+  const reserve: { held?: HeapReserve } = {};
   try {
-    return await buildChecked(opts, t0, notes, cacheDir, cache, spill, previous);
+    return await buildChecked(opts, t0, notes, cacheDir, cache, spill, previous, reserve);
   } finally {
+    reserve.held?.release();
     // What was computed before a failure still saves the next build its time.
     cache.flushWrites();
     await previous?.stop();
@@ -845,7 +849,8 @@ async function buildChecked(
   cacheDir: string | undefined,
   cache: StageCache,
   spill: SpillFile | undefined,
-  previous?: PreviousDigests,
+  previous: PreviousDigests | undefined,
+  reserve: { held?: HeapReserve },
 ): Promise<BuildReport> {
   const progress = opts.onProgress ?? (() => {});
   // The threads start with the check, which parses and validates the files on all of them; they build the
@@ -890,6 +895,7 @@ async function buildChecked(
       checkOn: (c) => {
         checkContext = c;
         opts.onDatabaseSize?.(c.files);
+        if (c.files >= RESERVE_MIN_FILES) reserve.held ??= holdHeapReserve();
         const jobs = threadsFor(c.files);
         if (jobs > 1) checkPool = poolFor(jobs, c);
         return checkPool;

@@ -20,6 +20,7 @@ import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { SpeciesOutcome, ValidSpecies } from '../runner.js';
 import type { FileCheck, KeepAs } from '../stages/check-file.js';
+import { sizeWorkerHeaps } from './heap.js';
 import type { WorkerInit, WorkerReply, WorkRequest } from './protocol.js';
 
 export interface SpeciesPool {
@@ -278,6 +279,7 @@ class ThreadPool implements SpeciesPool {
   }
 
   private spawn(): Slot {
+    sizeWorkerHeaps();
     const worker = new Worker(this.entry, { workerData: this.opts.init, resourceLimits: { maxYoungGenerationSizeMb: WORKER_YOUNG_GENERATION_MB } });
     const slot: Slot = { worker, jobs: [] };
     this.slots.add(slot);

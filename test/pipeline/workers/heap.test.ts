@@ -1,0 +1,67 @@
+/**
+ * Old-generation sizing of a build's threads (pipeline/workers/heap.ts). Holds no reference values (no
+ * source to name): the churn below is written by hand for this test, and the comparison is between two
+ * runs of our own code in fresh node processes (V8 flags are process-wide and cannot be unset).
+ */
+import { execFile } from 'node:child_process';
+import { promisify } from 'node:util';
+import { pathToFileURL } from 'node:url';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { holdHeapReserve, MAIN_THREAD_RESERVE_MB, RESERVE_MIN_FILES } from '../../../pipeline/workers/heap.js';
+import { HEAP_GROWING_PERCENT } from '../../../pipeline/cli.js';
+import { REPO } from '../helpers.js';
+
+const run = promisify(execFile);
+const HEAP_MODULE = pathToFileURL(path.join(REPO, 'dist/pipeline/workers/heap.js')).href;
+
+/**
+ * A worker that keeps ~3 MB of small objects alive in a rolling window (32 rounds of 1,000) while it
+ * allocates ~600 MB in all, so part of them live long enough to reach the old generation, and counts its
+ * full collections. Both runs use the CLI's heap growth (pipeline/cli.ts HEAP_GROWING_PERCENT, 50 %);
+ * `sized` calls sizeWorkerHeaps before the worker starts. Seen on the 2-core machine: 5 against 1.
+ */
+const script = (sized: boolean) => `
+import { Worker } from 'node:worker_threads';
+const { sizeWorkerHeaps } = await import(${JSON.stringify(HEAP_MODULE)});
+(await import('node:v8')).setFlagsFromString('--heap-growing-percent=${HEAP_GROWING_PERCENT}');
+if (${sized}) sizeWorkerHeaps();
+const body = \`
+  import { PerformanceObserver, constants } from 'node:perf_hooks';
+  import { parentPort } from 'node:worker_threads';
+  let major = 0;
+  new PerformanceObserver((list) => { for (const e of list.getEntries()) if (e.detail.kind === constants.NODE_PERFORMANCE_GC_MAJOR) major++; }).observe({ entryTypes: ['gc'] });
+  const window = [];
+  for (let round = 0; round < 6000; round++) {
+    const batch = [];
+    for (let i = 0; i < 1000; i++) batch.push({ t: round, i, v: [i, round] });
+    window.push(batch);
+    if (window.length > 32) window.shift();
+  }
+  setTimeout(() => parentPort.postMessage(major), 50);
+\`;
+const w = new Worker(body, { eval: true, resourceLimits: { maxYoungGenerationSizeMb: 16 } });
+w.on('message', (n) => { console.log(n); w.terminate(); });
+`;
+
+async function workerFullCollections(sized: boolean): Promise<number> {
+  const { stdout } = await run(process.execPath, ['--input-type=module', '-e', script(sized)], { cwd: REPO });
+  return Number(stdout.trim());
+}
+
+describe('heap sizing of the build threads', () => {
+  it('a worker started after sizeWorkerHeaps runs fewer full collections on the same churn', async () => {
+    const [plain, sized] = await Promise.all([workerFullCollections(false), workerFullCollections(true)]);
+    expect(plain).toBeGreaterThan(0);
+    expect(sized).toBeLessThan(plain);
+  }, 60_000);
+
+  it('the reserve holds its megabytes until released, and only large builds take one', () => {
+    const reserve = holdHeapReserve(2);
+    expect(reserve.megabytes).toBe(2);
+    reserve.release();
+    expect(reserve.megabytes).toBe(0);
+    expect(MAIN_THREAD_RESERVE_MB).toBeGreaterThan(0);
+    expect(RESERVE_MIN_FILES).toBeGreaterThan(100);
+  });
+});

@@ -15,6 +15,8 @@
  */
 import path from 'node:path';
 import { setFlagsFromString } from 'node:v8';
+import { LARGE_DATABASE_FILES } from './workers/heap.js';
+export { LARGE_DATABASE_FILES };
 import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import type { Diagnostic } from './core/diagnostics.js';
 import type { CliIo } from './commands/io.js';
@@ -220,7 +222,6 @@ export const HEAP_GROWING_PERCENT = 50;
  * cache, bench, 2026-12-03): 482 MB peak RSS with 50 %, 431 MB with 20 % (the previous session's bench);
  * 10,000 species keep the faster 50 %.
  */
-export const LARGE_DATABASE_FILES = 20_000;
 export const LARGE_DATABASE_HEAP_GROWING_PERCENT = 20;
 
 /** The growth for a database of `files` species files when the growth is qforge's default, else undefined. */

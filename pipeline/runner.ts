@@ -47,7 +47,7 @@ import { displayPath } from './core/display-path.js';
 import { compareText, errorText } from './core/text.js';
 import type { ReportRequest } from './report/build-report.js';
 import { autoThreads } from './workers/auto-threads.js';
-import { holdHeapReserve, RESERVE_MIN_FILES, type HeapReserve } from './workers/heap.js';
+import { heapPlanFor, holdHeapReserve, type HeapReserve } from './workers/heap.js';
 
 /**
  * The per-species stages and validation, loaded on first use: a rebuild that takes every species from the
@@ -213,6 +213,8 @@ export interface CheckOptions {
    * without it (or when it answers undefined) they run here. The findings are the same either way.
    */
   checkOn?: (c: CheckContext) => Pick<SpeciesPool, 'checkFile'> | undefined;
+  /** Told before each file that is parsed and validated afresh (not taken from the cache). */
+  onFreshCheck?: () => void;
   /**
    * The no-change fast path: with `context` (what besides the settings changes per-species outputs) the
    * file and result keys are computed; with `cache` too, file entries are looked up and stored.
@@ -391,6 +393,7 @@ export async function checkDatabase(opts: CheckOptions): Promise<CheckReport> {
     }
     const bytes = read.bytes!;
     const readMs = performance.now() - tl;
+    opts.onFreshCheck?.();
     const checked = checker ? await checker.checkFile(f, bytes, keepAs) : await checkFileBytes(bytes, f, policy, keepAs);
     const { facts } = checked;
     policy.markUsed(facts.settingsUsed);
@@ -874,6 +877,7 @@ async function buildChecked(
       inline: (v) => inlineBuild!(v),
       inlineCheck: (file, bytes, keep) => checkFileBytes(bytes, file, policy, keep),
       shareThisThread: true,
+      workerInitialOldGenerationMb: heapPlanFor(c.files).workerInitialOldGenerationMb,
       cheap: (batch) => allCached(cacheDir, batch, c.settings),
       crashed: (v, reason) => failedOutcome(v, `internal error: ${reason} while building this species' batch; it was not built`),
     });
@@ -882,6 +886,12 @@ async function buildChecked(
   // --jobs is a ceiling: a thread beyond one per file (check) or species (build) would have nothing to do and
   // still start, compile and warm up (--jobs 40 on 22 species: 1.1 GB and 8.9 s instead of ~1 s).
   const threadsFor = (count: number) => (opts.jobs !== undefined ? Math.max(1, Math.min(opts.jobs, count)) : autoThreads(count, opts.maxThreads ?? 1));
+  // This thread's heap reserve (workers/heap.ts), sized by the check's file count and taken only once there
+  // is work to do — a file to check afresh or a species to build — so a no-change rebuild holds none.
+  let reserveMb = 0;
+  const takeReserve = () => {
+    if (reserve.held === undefined && reserveMb > 0) reserve.held = holdHeapReserve(reserveMb);
+  };
   // Set by checkDatabase, which always asks `checkOn` before checking any file.
   let checkContext: CheckContext | undefined;
   let check: CheckReport;
@@ -892,10 +902,11 @@ async function buildChecked(
       ...(previous ? { inputDigests: previous } : {}),
       // A shard does not use the build pack (its outputs are merged, not rebuilt in place).
       ...(cacheDir !== undefined ? { fastPath: { context: buildContext(opts), cache, ...(opts.shard ? {} : { pack: packIdentity(opts.dir, opts.out) }) } } : {}),
+      onFreshCheck: takeReserve,
       checkOn: (c) => {
         checkContext = c;
         opts.onDatabaseSize?.(c.files);
-        if (c.files >= RESERVE_MIN_FILES) reserve.held ??= holdHeapReserve();
+        reserveMb = heapPlanFor(c.files).reserveMb;
         const jobs = threadsFor(c.files);
         if (jobs > 1) checkPool = poolFor(jobs, c);
         return checkPool;
@@ -1015,6 +1026,7 @@ async function buildChecked(
       }
     }
     if (todo.length > 0) {
+      takeReserve();
       const built = await pool.run(todo);
       built.forEach((o, k) => {
         const i = at[k]!;

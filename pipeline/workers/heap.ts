@@ -26,7 +26,8 @@
  * 10,000 species 25.05–25.17 → 22.14–22.79 s wall, 47.7–48.2 → 42.2–43.5 s CPU, peak RSS 238–240 →
  * 305–343 MB. Larger settings saved little more and cost more memory (initial old generation 128 MB and
  * a 32 MB reserve: 21.98–22.68 s at 10,000, RSS ~400 MB); smaller ones saved less (32 MB: 6.51–6.60 s at
- * 2,000). The cost is a fixed amount per thread, not per species.
+ * 2,000). The cost is a fixed amount per thread, not per species; above LARGE_DATABASE_FILES it is not
+ * paid (see there).
  */
 import { setFlagsFromString } from 'node:v8';
 
@@ -42,13 +43,37 @@ export const MAIN_THREAD_RESERVE_MB = 32;
  */
 export const RESERVE_MIN_FILES = 500;
 
-let workerHeapsSized = false;
+/**
+ * Above this many species files memory comes first: the CLI bounds the heap growth harder
+ * (cli.ts `heapGrowthForDatabase`), and a build holds no reserve and gives its workers V8's own initial old
+ * generation. Why: 50,000 synthetic species into a fresh cache peaked at 498 MB with both (bench,
+ * 2026-12-04), against the 500 MB bound of the throughput issue and ~415 MB without them; cold without a
+ * cache 351 MB. The main thread's live heap grows with such a database anyway, and with it the room.
+ */
+export const LARGE_DATABASE_FILES = 20_000;
 
-/** Sets the initial old generation of the worker threads started from now on (once per process). */
-export function sizeWorkerHeaps(): void {
-  if (workerHeapsSized) return;
-  workerHeapsSized = true;
-  setFlagsFromString(`--initial-old-space-size=${WORKER_INITIAL_OLD_GENERATION_MB}`);
+/** How a build of `files` species files sizes its threads' heaps (0: nothing held, V8's own initial size). */
+export interface HeapPlan {
+  reserveMb: number;
+  workerInitialOldGenerationMb: number;
+}
+
+export function heapPlanFor(files: number): HeapPlan {
+  if (files > LARGE_DATABASE_FILES) return { reserveMb: 0, workerInitialOldGenerationMb: 0 };
+  return { reserveMb: files >= RESERVE_MIN_FILES ? MAIN_THREAD_RESERVE_MB : 0, workerInitialOldGenerationMb: WORKER_INITIAL_OLD_GENERATION_MB };
+}
+
+/** The value last given to V8 (0: never set, V8's own). */
+let workerInitialOldMb = 0;
+
+/**
+ * Sets the initial old generation (MB; 0 = V8's own) of the worker threads started from now on. The flag is
+ * process-wide and stays set, so every build states its own value before it starts a worker.
+ */
+export function sizeWorkerHeaps(megabytes: number = WORKER_INITIAL_OLD_GENERATION_MB): void {
+  if (megabytes === workerInitialOldMb) return;
+  workerInitialOldMb = megabytes;
+  setFlagsFromString(`--initial-old-space-size=${megabytes}`);
 }
 
 /** A reserve held by this thread until `release`. */
@@ -59,7 +84,8 @@ export interface HeapReserve {
 }
 
 /** Holds a reserve of `megabytes` of old generation on this thread until released. */
-export function holdHeapReserve(megabytes: number = MAIN_THREAD_RESERVE_MB): HeapReserve {
+export function holdHeapReserve(megabytes: number = MAIN_THREAD_RESERVE_MB): HeapReserve | undefined {
+  if (!(megabytes > 0)) return undefined;
   // fill() makes it a packed array of doubles: a flat block of numbers, never scanned for pointers.
   let held: number[] | undefined = new Array<number>(Math.max(0, Math.floor((megabytes * 1024 * 1024) / 8))).fill(0.5);
   return {

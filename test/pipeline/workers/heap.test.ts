@@ -8,7 +8,7 @@ import { promisify } from 'node:util';
 import { pathToFileURL } from 'node:url';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { holdHeapReserve, MAIN_THREAD_RESERVE_MB, RESERVE_MIN_FILES } from '../../../pipeline/workers/heap.js';
+import { heapPlanFor, holdHeapReserve, LARGE_DATABASE_FILES, MAIN_THREAD_RESERVE_MB, RESERVE_MIN_FILES, WORKER_INITIAL_OLD_GENERATION_MB } from '../../../pipeline/workers/heap.js';
 import { HEAP_GROWING_PERCENT } from '../../../pipeline/cli.js';
 import { REPO } from '../helpers.js';
 
@@ -21,11 +21,12 @@ const HEAP_MODULE = pathToFileURL(path.join(REPO, 'dist/pipeline/workers/heap.js
  * full collections. Both runs use the CLI's heap growth (pipeline/cli.ts HEAP_GROWING_PERCENT, 50 %);
  * `sized` calls sizeWorkerHeaps before the worker starts. Seen on the 2-core machine: 5 against 1.
  */
-const script = (sized: boolean) => `
+const script = (sized: boolean, thenReset = false) => `
 import { Worker } from 'node:worker_threads';
 const { sizeWorkerHeaps } = await import(${JSON.stringify(HEAP_MODULE)});
 (await import('node:v8')).setFlagsFromString('--heap-growing-percent=${HEAP_GROWING_PERCENT}');
 if (${sized}) sizeWorkerHeaps();
+if (${thenReset}) sizeWorkerHeaps(0);
 const body = \`
   import { PerformanceObserver, constants } from 'node:perf_hooks';
   import { parentPort } from 'node:worker_threads';
@@ -44,24 +45,32 @@ const w = new Worker(body, { eval: true, resourceLimits: { maxYoungGenerationSiz
 w.on('message', (n) => { console.log(n); w.terminate(); });
 `;
 
-async function workerFullCollections(sized: boolean): Promise<number> {
-  const { stdout } = await run(process.execPath, ['--input-type=module', '-e', script(sized)], { cwd: REPO });
+async function workerFullCollections(sized: boolean, thenReset = false): Promise<number> {
+  const { stdout } = await run(process.execPath, ['--input-type=module', '-e', script(sized, thenReset)], { cwd: REPO });
   return Number(stdout.trim());
 }
 
 describe('heap sizing of the build threads', () => {
   it('a worker started after sizeWorkerHeaps runs fewer full collections on the same churn', async () => {
-    const [plain, sized] = await Promise.all([workerFullCollections(false), workerFullCollections(true)]);
+    const [plain, sized, reset] = await Promise.all([workerFullCollections(false), workerFullCollections(true), workerFullCollections(true, true)]);
     expect(plain).toBeGreaterThan(0);
     expect(sized).toBeLessThan(plain);
+    // 0 gives the next workers V8's own initial size again (a large database after a smaller one).
+    expect(reset).toBeGreaterThan(sized);
   }, 60_000);
 
-  it('the reserve holds its megabytes until released, and only large builds take one', () => {
-    const reserve = holdHeapReserve(2);
+  it('the reserve holds its megabytes until released; none for 0', () => {
+    const reserve = holdHeapReserve(2)!;
     expect(reserve.megabytes).toBe(2);
     reserve.release();
     expect(reserve.megabytes).toBe(0);
-    expect(MAIN_THREAD_RESERVE_MB).toBeGreaterThan(0);
-    expect(RESERVE_MIN_FILES).toBeGreaterThan(100);
+    expect(holdHeapReserve(0)).toBeUndefined();
+  });
+
+  it('the plan: no reserve for small builds, nothing extra for very large ones', () => {
+    expect(heapPlanFor(RESERVE_MIN_FILES - 1)).toEqual({ reserveMb: 0, workerInitialOldGenerationMb: WORKER_INITIAL_OLD_GENERATION_MB });
+    expect(heapPlanFor(RESERVE_MIN_FILES)).toEqual({ reserveMb: MAIN_THREAD_RESERVE_MB, workerInitialOldGenerationMb: WORKER_INITIAL_OLD_GENERATION_MB });
+    expect(heapPlanFor(LARGE_DATABASE_FILES)).toEqual({ reserveMb: MAIN_THREAD_RESERVE_MB, workerInitialOldGenerationMb: WORKER_INITIAL_OLD_GENERATION_MB });
+    expect(heapPlanFor(LARGE_DATABASE_FILES + 1)).toEqual({ reserveMb: 0, workerInitialOldGenerationMb: 0 });
   });
 });

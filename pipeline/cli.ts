@@ -573,6 +573,9 @@ async function buildCommand(
         : {}),
       onProgress: (e) => reporter.onProgress(e),
       ...(onDatabaseSize ? { onDatabaseSize } : {}),
+      // TEST-ONLY (test/pipeline/workers/pool.test.ts): with QFORGE_TEST=1, QFORGE_TEST_CHECK_ON_THREADS=1
+      // checks a small database's files on the worker threads, as a large database's are.
+      ...(io.env.QFORGE_TEST === '1' && io.env.QFORGE_TEST_CHECK_ON_THREADS === '1' ? { checkOnThreads: true } : {}),
       hooks: {
         beforeSwap: () => waitForTestPause(io, 'before-swap'),
         midSwap: () => waitForTestPause(io, 'mid-swap'),

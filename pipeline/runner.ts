@@ -46,7 +46,7 @@ import { CONSTANTS_EDITION, TOOL_NAME, TOOL_VERSION } from './core/version.js';
 import { displayPath } from './core/display-path.js';
 import { compareText, errorText } from './core/text.js';
 import type { ReportRequest } from './report/build-report.js';
-import { autoThreads } from './workers/auto-threads.js';
+import { autoThreads, checkOnThreads } from './workers/auto-threads.js';
 import { heapPlanFor, holdHeapReserve, type HeapReserve } from './workers/heap.js';
 
 /**
@@ -104,6 +104,11 @@ export interface BuildOptions extends CheckOptions {
   maxThreads?: number;
   /** Told the number of species files once they are found, before they are checked (the CLI tunes V8 by it). */
   onDatabaseSize?: (files: number) => void;
+  /**
+   * Check the files on the build's threads (true) or on this one (false) whatever their number; by default
+   * by `checkOnThreads` (workers/auto-threads.ts). The findings are the same either way.
+   */
+  checkOnThreads?: boolean;
 }
 
 /** One species document that passed validation. */
@@ -908,7 +913,7 @@ async function buildChecked(
         opts.onDatabaseSize?.(c.files);
         reserveMb = heapPlanFor(c.files).reserveMb;
         const jobs = threadsFor(c.files);
-        if (jobs > 1) checkPool = poolFor(jobs, c);
+        if (opts.checkOnThreads ?? checkOnThreads(c.files, jobs)) checkPool = jobs > 1 ? poolFor(jobs, c) : undefined;
         return checkPool;
       },
     });

@@ -1,6 +1,6 @@
 // The default thread count (no --jobs): our own rule, written by hand for this test (no external source).
 import { describe, expect, it } from 'vitest';
-import { autoThreads, SPECIES_PER_THREAD } from '../../../pipeline/workers/auto-threads.js';
+import { autoThreads, CHECK_FILES_PER_WORKER, checkOnThreads, SPECIES_PER_THREAD } from '../../../pipeline/workers/auto-threads.js';
 import { rm } from 'node:fs/promises';
 import path from 'node:path';
 import { runCli, tempWorkspace } from '../helpers.js';
@@ -13,6 +13,14 @@ describe('default worker threads', () => {
     expect(autoThreads(2 * SPECIES_PER_THREAD, 2)).toBe(2);
     expect(autoThreads(10_000, 2)).toBe(2);
     expect(autoThreads(10_000, 1)).toBe(1);
+  });
+
+  it('the files are checked on the threads only for large databases, sooner with more workers', () => {
+    expect(checkOnThreads(1_000_000, 1)).toBe(false);
+    expect(checkOnThreads(CHECK_FILES_PER_WORKER - 1, 2)).toBe(false);
+    expect(checkOnThreads(CHECK_FILES_PER_WORKER, 2)).toBe(true);
+    expect(checkOnThreads(CHECK_FILES_PER_WORKER / 4, 5)).toBe(true);
+    expect(checkOnThreads(CHECK_FILES_PER_WORKER / 4 - 1, 5)).toBe(false);
   });
 
   it('build --help states the rule in force (the number comes from the rule itself)', async () => {

@@ -198,7 +198,9 @@ describe('worker pool', () => {
     await writeFile(path.join(db, 'again.yaml'), atom('Xtwo'));
     const runs = [];
     for (const jobs of ['1', '2', '3']) {
-      const r = await runCli(['build', 'mixed', '--out', `mixed-${jobs}`, '--no-cache', '--keep-going', '--json', '--jobs', jobs], root);
+      // A database this small is checked on the main thread by default (workers/auto-threads.ts
+      // checkOnThreads): the test hook sends its files to the workers as a large database's are.
+      const r = await runCli(['build', 'mixed', '--out', `mixed-${jobs}`, '--no-cache', '--keep-going', '--json', '--jobs', jobs], root, { QFORGE_TEST: '1', QFORGE_TEST_CHECK_ON_THREADS: '1' });
       expect(r.code, r.stderr).toBe(1);
       const summary = JSON.parse(r.stdout);
       delete summary.timings_ms;

@@ -22,7 +22,7 @@ import type { Diagnostic } from './core/diagnostics.js';
 import type { CliIo } from './commands/io.js';
 import { displayPath } from './core/display-path.js';
 import { parseShard, type Shard } from './core/shard.js';
-import { SPECIES_PER_THREAD } from './workers/auto-threads.js';
+import { CHECK_FILES_PER_WORKER, SPECIES_PER_THREAD } from './workers/auto-threads.js';
 
 export type { CliIo } from './commands/io.js';
 
@@ -313,7 +313,7 @@ export async function main(argv: string[], ioIn?: Partial<CliIo>): Promise<numbe
     .option('--no-cache', 'recompute and refit every species')
     .option('--cache-dir <dir>', 'cache folder (default: .qforge-cache inside the database folder)')
     .option('-k, --keep-going', 'write the species that succeeded even when others failed (exit code stays 1)')
-    .option('-j, --jobs <n>', `threads for checking files and for compute, fit and verify, this one included (default: the cores, at most one per ${SPECIES_PER_THREAD} species)`, positiveInt)
+    .option('-j, --jobs <n>', `threads for compute, fit and verify, and for checking the files of large databases (${CHECK_FILES_PER_WORKER} files per worker and more), this one included (default: the cores, at most one per ${SPECIES_PER_THREAD} species)`, positiveInt)
     .option('--shard <i/n>', 'build only shard I of N (by a stable hash of the species name); see qforge merge', shardArg)
     .option('-q, --quiet', 'no progress output')
     .option('--json', 'print the build summary as JSON on stdout')

@@ -837,7 +837,7 @@ async function runLockedBuild(opts: BuildOptions): Promise<BuildReport> {
   // A rebuild into an existing OUT hashes the species files and the previous files beside the check
   // (storage/previous-digests.ts).
   const previous = cacheDir !== undefined && !opts.shard ? PreviousDigests.start(opts.out, ['thermo.json', 'nasa7.txt'], ['tables'], true) : undefined;
-  // Taken by the check once it knows the database is large (workers/heap.ts), dropped with the build.
+  // This thread's heap reserve (workers/heap.ts): taken once there is work, dropped with the build.
   const reserve: { held?: HeapReserve } = {};
   try {
     return await buildChecked(opts, t0, notes, cacheDir, cache, spill, previous, reserve);
@@ -861,8 +861,9 @@ async function buildChecked(
   reserve: { held?: HeapReserve },
 ): Promise<BuildReport> {
   const progress = opts.onProgress ?? (() => {});
-  // The threads start with the check, which parses and validates the files on all of them; they build the
-  // species afterwards, unless the species to build call for another number of threads (see below).
+  // For a large database the threads start with the check, which then parses and validates the files on all
+  // of them (workers/auto-threads.ts checkOnThreads); they build the species afterwards, unless the species to
+  // build call for another number of threads (see below).
   let checkPool: SpeciesPool | undefined;
   // Bound after the check: this thread's builds quote where the settings set the limits (`check`).
   let inlineBuild: ((v: ValidSpecies) => Promise<SpeciesOutcome>) | undefined;
@@ -891,14 +892,13 @@ async function buildChecked(
   // --jobs is a ceiling: a thread beyond one per file (check) or species (build) would have nothing to do and
   // still start, compile and warm up (--jobs 40 on 22 species: 1.1 GB and 8.9 s instead of ~1 s).
   const threadsFor = (count: number) => (opts.jobs !== undefined ? Math.max(1, Math.min(opts.jobs, count)) : autoThreads(count, opts.maxThreads ?? 1));
-  // This thread's heap reserve (workers/heap.ts), sized by the check's file count and taken only once there
-  // is work to do — a file to check afresh or a species to build — so a no-change rebuild holds none.
-  let reserveMb = 0;
-  const takeReserve = () => {
-    if (reserve.held === undefined && reserveMb > 0) reserve.held = holdHeapReserve(reserveMb);
-  };
   // Set by checkDatabase, which always asks `checkOn` before checking any file.
   let checkContext: CheckContext | undefined;
+  // This thread's heap reserve, sized by the check's file count (heapPlanFor) and taken only once there is
+  // work to do — a file to check afresh or a species to build — so a no-change rebuild holds none.
+  const takeReserve = () => {
+    if (reserve.held === undefined && checkContext !== undefined) reserve.held = holdHeapReserve(heapPlanFor(checkContext.files).reserveMb);
+  };
   let check: CheckReport;
   try {
     check = await checkDatabase({
@@ -911,7 +911,6 @@ async function buildChecked(
       checkOn: (c) => {
         checkContext = c;
         opts.onDatabaseSize?.(c.files);
-        reserveMb = heapPlanFor(c.files).reserveMb;
         const jobs = threadsFor(c.files);
         if (opts.checkOnThreads ?? checkOnThreads(c.files, jobs)) checkPool = jobs > 1 ? poolFor(jobs, c) : undefined;
         return checkPool;

@@ -13,7 +13,7 @@
  * What is done about it, without changing any output:
  * - Worker threads start with an initial old generation of WORKER_INITIAL_OLD_GENERATION_MB (V8's
  *   `--initial-old-space-size`, which `resourceLimits` cannot set: it is set with `v8.setFlagsFromString`
- *   before the first worker starts and applies to the isolates created after that). Worker full
+ *   before a build starts a worker and applies to the isolates created after that). Worker full
  *   collections: 16 → 3 at 2,000 species.
  * - This thread's isolate exists already, so its heap cannot be configured: instead a large build holds a
  *   reserve, one array of doubles of MAIN_THREAD_RESERVE_MB that counts as live old generation. The limit
@@ -87,7 +87,7 @@ export interface HeapReserve {
 export function holdHeapReserve(megabytes: number = MAIN_THREAD_RESERVE_MB): HeapReserve | undefined {
   if (!(megabytes > 0)) return undefined;
   // fill() makes it a packed array of doubles: a flat block of numbers, never scanned for pointers.
-  let held: number[] | undefined = new Array<number>(Math.max(0, Math.floor((megabytes * 1024 * 1024) / 8))).fill(0.5);
+  let held: number[] | undefined = new Array<number>(Math.floor((megabytes * 1024 * 1024) / 8)).fill(0.5);
   return {
     get megabytes() {
       return held === undefined ? 0 : (held.length * 8) / (1024 * 1024);

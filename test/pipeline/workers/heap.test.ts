@@ -1,7 +1,7 @@
 /**
  * Old-generation sizing of a build's threads (pipeline/workers/heap.ts). Holds no reference values (no
- * source to name): the churn below is written by hand for this test, and the comparison is between two
- * runs of our own code in fresh node processes (V8 flags are process-wide and cannot be unset).
+ * source to name): the churn below is written by hand for this test, and the comparison is between runs
+ * of our own code in fresh node processes (V8 flags are process-wide and cannot be unset).
  */
 import { execFile } from 'node:child_process';
 import { promisify } from 'node:util';

@@ -68,6 +68,7 @@ describe('stage cache entries', () => {
       await rm(dir, { recursive: true, force: true });
     }
   });
+
   it('lookups after misses and after hits give the same outcomes: hit, miss, corrupt, and an entry another build wrote meanwhile', async () => {
     const dir = await mkdtemp(path.join(tmpdir(), 'qforge-cache-'));
     try {

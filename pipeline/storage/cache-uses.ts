@@ -11,7 +11,7 @@
 import { readdir, readFile, realpath, rm, stat, mkdir } from 'node:fs/promises';
 import path from 'node:path';
 import { writeFileAtomic } from './atomic-write.js';
-import { CACHE_KINDS, type CacheKind } from './cache.js';
+import { CACHE_KINDS, entryFolderOf, type CacheKind } from './cache.js';
 import { sha256Hex } from './hash.js';
 import { PACK_DIR, packHeader } from './build-pack.js';
 import { compareText } from '../core/text.js';
@@ -178,7 +178,8 @@ export async function pruneCache(cacheDir: string, databaseDir: string, keys: re
     for (const sub of subs.sort(compareText)) {
       const subDir = path.join(kindDir, sub);
       for (const entry of (await readdir(subDir).catch(() => [] as string[])).sort(compareText)) {
-        if (used.has(`${kind as CacheKind}/${entry}`)) {
+        // An entry outside its key's folder (a cache of an earlier layout) is never looked up again.
+        if (used.has(`${kind as CacheKind}/${entry}`) && sub === entryFolderOf(entry)) {
           result.kept++;
           continue;
         }

@@ -9,7 +9,7 @@ import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import settingsSchema from '../../schemas/settings.schema.json' with { type: 'json' };
 import { OutputFolderError, publishDirectory, safeJoin } from '../../pipeline/storage/atomic-write.js';
-import { StageCache } from '../../pipeline/storage/cache.js';
+import { cacheEntryPath, StageCache } from '../../pipeline/storage/cache.js';
 import { recordElements, speciesFileStem, tableFileNames } from '../../pipeline/stages/emit.js';
 import { sha256Hex } from '../../pipeline/storage/hash.js';
 import { temperatureGrid } from '../../pipeline/core/grid.js';
@@ -105,7 +105,7 @@ describe('cache entries', () => {
       cache.flushWrites();
       expect((await cache.get('samples', key)).outcome).toBe('miss');
       // One header line (format, kind, key, sha256 of the payload bytes), then the payload as stored.
-      const file = path.join(dir, 'fit', key.slice(0, 2), key);
+      const file = cacheEntryPath(dir, 'fit', key);
       const entry = await readFile(file, 'utf8');
       expect(entry).toBe(`qforge-cache/2 fit ${key} ${sha256Hex('{"a":[1,2.5]}')}\n{"a":[1,2.5]}`);
       await writeFile(file, entry.replace(' fit ', ' table '));

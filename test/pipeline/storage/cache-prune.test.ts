@@ -4,7 +4,7 @@
  * and reports count and bytes; two databases sharing one --cache-dir keep each other's entries. Our own
  * builds compared with each other; the changed constant below is invented for the test.
  */
-import { cp, mkdtemp, readdir, readFile, rm, stat, writeFile } from 'node:fs/promises';
+import { cp, mkdir, mkdtemp, readdir, readFile, rm, stat, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
@@ -82,6 +82,27 @@ describe('cache location and prune', () => {
     expect(r2.removed).toBeGreaterThan(0);
     expect(r2.stale_use_lists).toBe(1);
   }, 180_000);
+
+  it('entries are in 16 folders per kind (first hex digit of the key); prune drops a used key kept elsewhere', async () => {
+    expect((await runCli(['build', 'a', '--out', 'out-a', '--quiet'], root)).code).toBe(0);
+    const cacheDir = path.join(root, 'a', '.qforge-cache');
+    for (const kind of CACHE_KINDS) {
+      for (const sub of await readdir(path.join(cacheDir, kind)).catch(() => [] as string[])) {
+        expect(sub).toMatch(/^[0-9a-f]$/);
+        for (const f of await readdir(path.join(cacheDir, kind, sub))) expect(f.startsWith(sub)).toBe(true);
+      }
+    }
+    // An entry of a used key moved to a two-digit folder (the layout before 2026-12-05): no lookup finds it there.
+    const [kind, key] = (await entries(cacheDir))[0]!.split('/') as [string, string];
+    const placed = path.join(cacheDir, kind, key.slice(0, 1), key);
+    const misplaced = path.join(cacheDir, kind, key.slice(0, 2), key);
+    await mkdir(path.dirname(misplaced), { recursive: true });
+    await writeFile(misplaced, await readFile(placed));
+    const r = JSON.parse((await runCli(['cache', 'prune', 'a', '--json'], root)).stdout);
+    expect(r.removed).toBe(1);
+    await expect(stat(misplaced)).rejects.toThrow();
+    expect((await stat(placed)).isFile()).toBe(true);
+  }, 120_000);
 });
 
 describe('UsedKeys', () => {

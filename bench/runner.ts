@@ -1,8 +1,9 @@
 /**
  * Tree-against-tree measurement of `npm run bench` (also runnable alone): for seeded synthetic databases of
  * N species (bench/synthetic.ts), each qforge tree's cold build into an empty cache, then — in alternating
- * rounds — its cold build without a cache and its no-change rebuild (the nightly case), with peak RSS, each
- * build in a child process (bench/child.ts). `--child` points at the child.js of another qforge tree, so a
+ * rounds — its cold build without a cache, its cold build into a cache emptied for the round, and its
+ * no-change rebuild (the nightly case), with peak RSS, each build in a child process (bench/child.ts, which
+ * flushes earlier runs' files to disk first: bench/common.ts `runChild`). `--child` points at the child.js of another qforge tree, so a
  * "before" figure is measured on the same machine, in the same run and on the same files as the "after"
  * one (e.g. a build of main in a temporary clone).
  *
@@ -30,9 +31,16 @@ export const DEFAULT_ROUNDS = 3;
 export interface TreeFigures {
   tree: string;
   n: number;
-  /** Cold build into an empty cache (once, before the rounds). */
+  /** Cold build into an empty cache (once, before the rounds: the cache the rebuilds use). */
   coldWallS: number;
   coldPeakRssMb: number;
+  /**
+   * Per round: a cold build into a cache emptied for it. Measured in every round, not only once: the
+   * creation of its ~5 entry files per species is the part of a build that varies most with the machine's
+   * state (DEVELOPERS.md "Folders of a fresh cache").
+   */
+  freshWallS: number[];
+  freshPeakRssMb: number;
   /** Per round, in round order: cold build without a cache (wall, CPU of all threads) and no-change rebuild. */
   noCacheWallS: number[];
   noCacheCpuS: number[];
@@ -51,8 +59,8 @@ export function roundOrder<T>(items: readonly T[], round: number): T[] {
 
 /**
  * Every tree's figures on one synthetic database of n species: a cold build into its own empty cache,
- * then `rounds` alternating rounds of a build without a cache and a no-change rebuild (see the file
- * comment).
+ * then `rounds` alternating rounds of a build without a cache, a build into an emptied cache and a
+ * no-change rebuild (see the file comment).
  */
 export async function benchTrees(children: readonly string[], n: number, seed: number, jobs: string[], rounds = DEFAULT_ROUNDS): Promise<TreeFigures[]> {
   const work = await mkdtemp(path.join(tmpdir(), 'qforge-bench-runner-'));
@@ -69,6 +77,8 @@ export async function benchTrees(children: readonly string[], n: number, seed: n
         n,
         coldWallS: cold.wallMs / 1000,
         coldPeakRssMb: cold.maxRssKb / 1024,
+        freshWallS: [],
+        freshPeakRssMb: cold.maxRssKb / 1024,
         noCacheWallS: [],
         noCacheCpuS: [],
         rebuildWallS: [],
@@ -85,6 +95,11 @@ export async function benchTrees(children: readonly string[], n: number, seed: n
         f.noCacheWallS.push(plain.wallMs / 1000);
         f.noCacheCpuS.push((plain.userMs + plain.systemMs) / 1000);
         f.noCachePeakRssMb = Math.max(f.noCachePeakRssMb, plain.maxRssKb / 1024);
+        const freshCache = path.join(work, 'fresh-cache');
+        await rm(freshCache, { recursive: true, force: true });
+        const fresh = await runChild(t.child, report, ['build', dir, '--out', path.join(work, 'fresh'), '-q', '-k', '--cache-dir', freshCache, ...jobs]);
+        f.freshWallS.push(fresh.wallMs / 1000);
+        f.freshPeakRssMb = Math.max(f.freshPeakRssMb, fresh.maxRssKb / 1024);
         const warm = await runChild(t.child, report, ['build', dir, '--out', t.out, '-q', '-k', '--cache-dir', t.cache, ...jobs]);
         f.rebuildWallS.push(warm.wallMs / 1000);
         f.rebuildPeakRssMb = Math.max(f.rebuildPeakRssMb, warm.maxRssKb / 1024);
@@ -105,7 +120,7 @@ function spread(values: readonly number[], digits: number): string {
 
 export function formatTreeTable(rows: readonly TreeFigures[]): string {
   const head =
-    'tree                                 N  no-cache wall s, median (range)  CPU s  RSS MB  fresh-cache s  RSS MB  rebuild s, median (range)  RSS MB   hits  cache MB';
+    'tree                                 N  no-cache wall s, median (range)  CPU s  RSS MB  fresh-cache s, median (range)  RSS MB  rebuild s, median (range)  RSS MB   hits  cache MB';
   const lines = rows.map((r) =>
     [
       r.tree.slice(-30).padEnd(30),
@@ -113,8 +128,8 @@ export function formatTreeTable(rows: readonly TreeFigures[]): string {
       spread(r.noCacheWallS, 2).padStart(32),
       median(r.noCacheCpuS).toFixed(2).padStart(6),
       r.noCachePeakRssMb.toFixed(0).padStart(7),
-      r.coldWallS.toFixed(2).padStart(14),
-      r.coldPeakRssMb.toFixed(0).padStart(7),
+      spread(r.freshWallS, 2).padStart(30),
+      r.freshPeakRssMb.toFixed(0).padStart(7),
       spread(r.rebuildWallS, 2).padStart(26),
       r.rebuildPeakRssMb.toFixed(0).padStart(7),
       String(r.cacheHits).padStart(6),

@@ -2,10 +2,10 @@
  * Tree-against-tree measurement of `npm run bench` (also runnable alone): for seeded synthetic databases of
  * N species (bench/synthetic.ts), each qforge tree's cold build into an empty cache, then — in alternating
  * rounds — its cold build without a cache, its cold build into a cache emptied for the round, and its
- * no-change rebuild (the nightly case), with peak RSS, each build in a child process (bench/child.ts, which
- * flushes earlier runs' files to disk first: bench/common.ts `runChild`). `--child` points at the child.js of another qforge tree, so a
- * "before" figure is measured on the same machine, in the same run and on the same files as the "after"
- * one (e.g. a build of main in a temporary clone).
+ * no-change rebuild (the nightly case), with peak RSS, each build in a child process (bench/child.ts),
+ * started once earlier runs' files are flushed to disk (bench/common.ts `runChild`). `--child` points at
+ * the child.js of another qforge tree, so a "before" figure is measured on the same machine, in the same
+ * run and on the same files as the "after" one (e.g. a build of main in a temporary clone).
  *
  * Why rounds in alternating order: the 2-core machine's speed drifts by 10–30 % within minutes (a loop
  * micro-benchmark ran 640 and 1,000 ms back to back), so trees measured one after the other compared the

@@ -55,8 +55,9 @@ const NEWLINE = 0x0a;
  * The folder of an entry within its kind's folder: the key's first hex digit, so 16 folders per kind.
  * Why 16, not 256: a fresh cache creates every folder as its first entry lands, and on the 2-core machine
  * a folder cost ~0.3 ms of kernel time while the build runs (1,280 folders: ~0.38 s of a 2,000-species
- * build into a fresh cache, its main thread's CPU profile); 16 folders of a 50,000-species cache hold
- * ~3,100 entries each, which ext4's hashed directories look up as fast as 200.
+ * build into a fresh cache, its main thread's CPU profile). Fuller folders cost nothing per file: 50,000
+ * files created in 16 folders (~3,100 each, as a kind's folders hold for 50,000 species) took no longer
+ * per file than in 256 (a loop micro-benchmark; DEVELOPERS.md "Folders of a fresh cache").
  */
 export function entryFolderOf(key: string): string {
   return key.slice(0, 1);

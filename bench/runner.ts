@@ -95,9 +95,13 @@ export async function benchTrees(children: readonly string[], n: number, seed: n
         f.noCacheWallS.push(plain.wallMs / 1000);
         f.noCacheCpuS.push((plain.userMs + plain.systemMs) / 1000);
         f.noCachePeakRssMb = Math.max(f.noCachePeakRssMb, plain.maxRssKb / 1024);
+        // Cache and output folder both emptied, as for the first cold build: a build into an existing OUT
+        // would also hash the previous outputs while it checks.
         const freshCache = path.join(work, 'fresh-cache');
+        const freshOut = path.join(work, 'fresh');
         await rm(freshCache, { recursive: true, force: true });
-        const fresh = await runChild(t.child, report, ['build', dir, '--out', path.join(work, 'fresh'), '-q', '-k', '--cache-dir', freshCache, ...jobs]);
+        await rm(freshOut, { recursive: true, force: true });
+        const fresh = await runChild(t.child, report, ['build', dir, '--out', freshOut, '-q', '-k', '--cache-dir', freshCache, ...jobs]);
         f.freshWallS.push(fresh.wallMs / 1000);
         f.freshPeakRssMb = Math.max(f.freshPeakRssMb, fresh.maxRssKb / 1024);
         const warm = await runChild(t.child, report, ['build', dir, '--out', t.out, '-q', '-k', '--cache-dir', t.cache, ...jobs]);

@@ -15,14 +15,13 @@
  */
 import path from 'node:path';
 import { setFlagsFromString } from 'node:v8';
-import { LARGE_DATABASE_FILES } from './workers/heap.js';
-export { LARGE_DATABASE_FILES };
 import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import type { Diagnostic } from './core/diagnostics.js';
 import type { CliIo } from './commands/io.js';
 import { displayPath } from './core/display-path.js';
 import { parseShard, type Shard } from './core/shard.js';
 import { CHECK_FILES_PER_WORKER, SPECIES_PER_THREAD } from './workers/auto-threads.js';
+import { LARGE_DATABASE_FILES } from './workers/heap.js';
 
 export type { CliIo } from './commands/io.js';
 
@@ -209,8 +208,9 @@ export const HELP_WIDTH = 80;
  * default; QFORGE_HEAP_GROWTH=0 buys the rest of the speed back.
  * With so little room the threads' small heaps started a full collection every ~250 ms whatever they
  * promoted; pipeline/workers/heap.ts gives them a fixed amount of room instead (measured there).
- * (Part of the price is V8's parallel collector threads competing with the build's threads for the cores:
- * node --single-threaded-gc bin/qforge.js … That flag cannot be set once V8 runs, so it is the user's to give.)
+ * (V8's parallel collector threads competing with the build's threads for the cores were part of the price:
+ * node --single-threaded-gc bin/qforge.js … saved ~5 % at 10,000 species before heap.ts, nothing since —
+ * 18.6 and 20.5 s against 18.9 and 18.9 s, alternating, 2026-12-05. The flag cannot be set once V8 runs.)
  */
 export const HEAP_GROWING_PERCENT = 50;
 

@@ -20,7 +20,7 @@ import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { SpeciesOutcome, ValidSpecies } from '../runner.js';
 import type { FileCheck, KeepAs } from '../stages/check-file.js';
-import { sizeWorkerHeaps, WORKER_INITIAL_OLD_GENERATION_MB } from './heap.js';
+import { sizeWorkerHeaps } from './heap.js';
 import type { WorkerInit, WorkerReply, WorkRequest } from './protocol.js';
 
 export interface SpeciesPool {
@@ -58,7 +58,7 @@ export interface PoolOptions {
    * built here are not copied to and from a worker.
    */
   shareThisThread?: boolean;
-  /** Initial old generation of the workers' heaps, MB (workers/heap.ts; 0: V8's own). */
+  /** Initial old generation of the workers' heaps, MB (workers/heap.ts; 0: V8's own; unset: heap.ts's default). */
   workerInitialOldGenerationMb?: number;
 }
 
@@ -281,7 +281,7 @@ class ThreadPool implements SpeciesPool {
   }
 
   private spawn(): Slot {
-    sizeWorkerHeaps(this.opts.workerInitialOldGenerationMb ?? WORKER_INITIAL_OLD_GENERATION_MB);
+    sizeWorkerHeaps(this.opts.workerInitialOldGenerationMb);
     const worker = new Worker(this.entry, { workerData: this.opts.init, resourceLimits: { maxYoungGenerationSizeMb: WORKER_YOUNG_GENERATION_MB } });
     const slot: Slot = { worker, jobs: [] };
     this.slots.add(slot);

@@ -5,7 +5,8 @@
  */
 import { execFileSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
-import { HEAP_GROWING_PERCENT, heapGrowthForDatabase, heapGrowthSetting, LARGE_DATABASE_FILES, LARGE_DATABASE_HEAP_GROWING_PERCENT, pretenuringOff } from '../../pipeline/cli.js';
+import { HEAP_GROWING_PERCENT, heapGrowthForDatabase, heapGrowthSetting, LARGE_DATABASE_HEAP_GROWING_PERCENT, pretenuringOff } from '../../pipeline/cli.js';
+import { LARGE_DATABASE_FILES } from '../../pipeline/workers/heap.js';
 import { runBuild } from '../../pipeline/runner.js';
 import { runCli, tempWorkspace } from './helpers.js';
 
